@@ -1,0 +1,50 @@
+import { basename, extname, join, resolve } from 'node:path';
+import { readSpecFile } from '../../io/read-spec.ts';
+import { OutputIsInputError } from '../../io/atomic-write.ts';
+import { resultJson, writeOutputs } from '../../io/write-outputs.ts';
+import { checkSpecification } from '../../src/check.ts';
+import { prepareSpec } from '../../src/spec/prepare.ts';
+import { EXIT, type Console } from '../console.ts';
+import { formatIssues } from '../format-issues.ts';
+import { summary } from '../summary.ts';
+import { loadData } from '../load-data.ts';
+
+export interface CheckOptions {
+  out?: string;
+  json: boolean;
+}
+
+export async function checkCommand(file: string, opts: CheckOptions, con: Console): Promise<number> {
+  const data = loadData(con);
+  if (!data) return EXIT.badInput;
+  const input = resolve(con.cwd, file);
+  const read = readSpecFile(input);
+  if (!read.ok) {
+    con.err(formatIssues(file, read.issues));
+    return EXIT.badInput;
+  }
+  const prepared = prepareSpec(read.raw, data);
+  if (!prepared.ok) {
+    con.err(formatIssues(file, prepared.issues, read.locate));
+    return EXIT.badInput;
+  }
+  const result = checkSpecification(prepared.spec, prepared.entries, data);
+  const dir = resolve(con.cwd, opts.out ?? join('axletree-out', basename(file, extname(file))));
+  let written: string[];
+  try {
+    written = await writeOutputs(result, dir, input);
+  } catch (e) {
+    if (e instanceof OutputIsInputError) {
+      con.err(`axletree: ${e.message}; choose another --out directory.\n`);
+      return EXIT.badInput;
+    }
+    throw e;
+  }
+  if (opts.json) {
+    con.out(resultJson(result));
+    con.err(summary(result, written));
+  } else {
+    con.out(summary(result, written));
+  }
+  return result.verdict === 'fail' ? EXIT.failed : EXIT.ok;
+}

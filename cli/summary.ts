@@ -1,0 +1,17 @@
+import type { CheckResult } from '../src/result/check-result.ts';
+import { SEVERITIES } from '../src/findings/finding.ts';
+import { SHORT_CAUTION } from '../src/cautions.ts';
+
+/** The terminal summary: verdict, counts, the worst findings, where files went. */
+export function summary(result: CheckResult, written: string[], show = 6): string {
+  const counts = SEVERITIES.map((s) => `${result.findings.filter((f) => f.severity === s).length} ${s}`).join(', ');
+  const worst = result.findings.filter((f) => f.severity !== 'pass').slice(0, show);
+  const lines = [
+    `${result.spec_name}`,
+    `verdict: ${result.verdict.toUpperCase()}  (${counts})`,
+    ...worst.map((f) => `  ${f.severity.padEnd(7)} ${f.rule}  ${f.message}`),
+    ...(written.length ? ['written:', ...written.map((w) => `  ${w}`)] : []),
+    SHORT_CAUTION,
+  ];
+  return lines.join('\n') + '\n';
+}

@@ -1,0 +1,68 @@
+import { readFileSync, statSync } from 'node:fs';
+import { extname } from 'node:path';
+import { LineCounter, parseDocument, isNode, type Document } from 'yaml';
+import { issue, type InputIssue, type KeyPath } from '../src/spec/input-issue.ts';
+
+export interface Located {
+  line: number;
+  column: number;
+}
+
+export type ReadSpec =
+  | { ok: true; raw: unknown; locate: (path: KeyPath) => Located | undefined }
+  | { ok: false; issues: (InputIssue & { at?: Located })[] };
+
+const KINDS: Record<string, string> = { '.yaml': 'YAML', '.yml': 'YAML', '.json': 'JSON' };
+
+/** Read a YAML or JSON specification, keeping positions for error messages. */
+export function readSpecFile(path: string): ReadSpec {
+  const fail = (...args: Parameters<typeof issue>) => ({ ok: false as const, issues: [issue(...args)] });
+  let stat;
+  try {
+    stat = statSync(path);
+  } catch {
+    return fail([], 'fileMissing', { path });
+  }
+  if (stat.isDirectory()) return fail([], 'fileIsDirectory', { path });
+  const format = KINDS[extname(path).toLowerCase()];
+  if (!format) return fail([], 'fileKind', { path });
+  let text: string;
+  try {
+    text = readFileSync(path, 'utf8');
+  } catch (e) {
+    return fail([], 'fileUnreadable', { path, reason: (e as Error).message });
+  }
+  return parseSpecText(text, format, path);
+}
+
+export function parseSpecText(text: string, format: string, path = 'input'): ReadSpec {
+  if (text.trim() === '') return { ok: false, issues: [issue([], 'fileEmpty', { path })] };
+  const lines = new LineCounter();
+  // JSON is read by the YAML parser too: one reader, positions for both.
+  const doc = parseDocument(text, { lineCounter: lines, uniqueKeys: true, prettyErrors: false });
+  if (doc.errors.length) {
+    return {
+      ok: false,
+      issues: doc.errors.map((e) => {
+        const pos = e.linePos?.[0];
+        return { ...issue([], 'syntax', { format, reason: e.message.split('\n')[0] }), at: pos ? { line: pos.line, column: pos.col } : undefined };
+      }),
+    };
+  }
+  const raw = doc.toJS({ maxAliasCount: 100 });
+  if (raw === null || raw === undefined) return { ok: false, issues: [issue([], 'fileEmpty', { path })] };
+  return { ok: true, raw, locate: (p) => locate(doc, lines, p) };
+}
+
+// The node at the path, or the nearest enclosing one that exists (a missing
+// key is reported at its parent).
+function locate(doc: Document, lines: LineCounter, path: KeyPath): Located | undefined {
+  for (let n = path.length; n >= 0; n--) {
+    const node = doc.getIn(path.slice(0, n), true);
+    if (isNode(node) && node.range) {
+      const pos = lines.linePos(node.range[0]);
+      return { line: pos.line, column: pos.col };
+    }
+  }
+  return undefined;
+}

@@ -1,0 +1,63 @@
+import markdownit from 'markdown-it';
+import type { MarkdownIt, StateCore, Token } from 'markdown-it';
+import type { CheckResult } from '../../src/result/check-result.ts';
+import { renderMarkdown } from './report-md.ts';
+import { REPORT_CSS } from './report-style.ts';
+import { severityOfMarkText } from './severity-mark.ts';
+import { SECTIONS, startsNewPage, VERDICT_PREFIX } from './report-sections.ts';
+
+/** The check report as one self-contained HTML file: inline CSS, no external assets. */
+export function renderHtml(result: CheckResult): string {
+  const md = reportMarkdownIt();
+  const body = md.render(renderMarkdown(result));
+  const title = md.utils.escapeHtml(`Design-rule check: ${result.spec_name}`);
+  return `<!doctype html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<meta name="viewport" content="width=device-width, initial-scale=1">
+<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'">
+<title>${title}</title>
+<style>${REPORT_CSS}</style>
+</head>
+<body>
+<main>
+${body}</main>
+</body>
+</html>
+`;
+}
+
+function reportMarkdownIt(): MarkdownIt {
+  // html: false turns any raw HTML in the text into visible, escaped text.
+  const md = markdownit('default', { html: false, linkify: false, typographer: false });
+  md.core.ruler.push('axletree_report_classes', (state: StateCore) => {
+    markHeadings(state.tokens);
+    for (const token of state.tokens) {
+      if (token.type === 'inline' && token.children) markBadges(token.children);
+    }
+  });
+  return md;
+}
+
+/** Classes on our own h2 headings: the verdict, the cautions, and sections that start a printed page. */
+function markHeadings(tokens: Token[]): void {
+  tokens.forEach((token, i) => {
+    if (token.type !== 'heading_open' || token.tag !== 'h2') return;
+    const text = tokens[i + 1]?.content ?? '';
+    if (text.startsWith(VERDICT_PREFIX)) token.attrJoin('class', 'verdict');
+    if (text === SECTIONS.cautions.title) token.attrJoin('class', 'cautions');
+    if (startsNewPage(text)) token.attrJoin('class', 'new-page');
+  });
+}
+
+/** A bold severity word becomes a badge that keeps the word. */
+function markBadges(children: Token[]): void {
+  children.forEach((token, i) => {
+    const text = children[i + 1];
+    const close = children[i + 2];
+    if (token.type !== 'strong_open' || text?.type !== 'text' || close?.type !== 'strong_close') return;
+    const severity = severityOfMarkText(text.content);
+    if (severity) token.attrJoin('class', `badge badge-${severity}`);
+  });
+}

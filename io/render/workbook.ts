@@ -1,0 +1,21 @@
+import ExcelJS from 'exceljs';
+import type { CheckResult } from '../../src/result/check-result.ts';
+import { addSummarySheet } from './sheets/summary-sheet.ts';
+import { addFindingsSheet } from './sheets/findings-sheet.ts';
+import { addMassBalanceSheet } from './sheets/mass-balance-sheet.ts';
+import { addSpecSheet } from './sheets/spec-sheet.ts';
+import { addSourcesSheet } from './sheets/sources-sheet.ts';
+
+/** The check result as an .xlsx workbook, returned as bytes; the caller writes it. */
+export async function renderWorkbook(result: CheckResult): Promise<Buffer> {
+  const wb = new ExcelJS.Workbook();
+  wb.creator = `${result.tool.name} ${result.tool.version}`;
+  wb.title = `Design-rule check: ${result.spec_name}`;
+  addSummarySheet(wb, result);
+  addFindingsSheet(wb, result);
+  addMassBalanceSheet(wb, result);
+  addSpecSheet(wb, result);
+  addSourcesSheet(wb, result);
+  const bytes = await wb.xlsx.writeBuffer();
+  return Buffer.from(bytes as ArrayBuffer);
+}

@@ -1,0 +1,28 @@
+import { mkdir } from 'node:fs/promises';
+import { join } from 'node:path';
+import type { CheckResult } from '../src/result/check-result.ts';
+import { ensureNotSame, writeFileAtomic } from './atomic-write.ts';
+import { renderHtml } from './render/report-html.ts';
+import { renderMarkdown } from './render/report-md.ts';
+import { renderWorkbook } from './render/workbook.ts';
+
+export const OUTPUT_FILES = { workbook: 'result.xlsx', markdown: 'report.md', html: 'report.html', json: 'result.json' } as const;
+
+export function resultJson(result: CheckResult): string {
+  return JSON.stringify(result, null, 2) + '\n';
+}
+
+/** Render everything first, then write each file atomically; returns the paths written. */
+export async function writeOutputs(result: CheckResult, dir: string, inputPath: string): Promise<string[]> {
+  const files: [string, string | Uint8Array][] = [
+    [OUTPUT_FILES.workbook, await renderWorkbook(result)],
+    [OUTPUT_FILES.markdown, renderMarkdown(result)],
+    [OUTPUT_FILES.html, renderHtml(result)],
+    [OUTPUT_FILES.json, resultJson(result)],
+  ];
+  const paths = files.map(([name]) => join(dir, name));
+  for (const p of paths) ensureNotSame(inputPath, p);
+  await mkdir(dir, { recursive: true });
+  for (const [i, [, data]] of files.entries()) await writeFileAtomic(paths[i], data);
+  return paths;
+}

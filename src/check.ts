@@ -1,0 +1,32 @@
+import pkg from '../package.json' with { type: 'json' };
+import { CAUTIONS } from './cautions.ts';
+import type { RulesData } from './data/rules-data.ts';
+import { Analysis } from './engine/analysis.ts';
+import { RULES } from './engine/registry.ts';
+import type { Rule } from './engine/rule.ts';
+import { runRules } from './engine/run-rules.ts';
+import { figures } from './figures.ts';
+import { severityRank, worstSeverity } from './findings/finding.ts';
+import type { CheckResult, SpecEntry } from './result/check-result.ts';
+import type { CheckedSpecification } from './spec/spec.types.ts';
+import { usedSources } from './sources.ts';
+
+/** The whole check of a prepared specification: pure, no I/O. */
+export function checkSpecification(spec: CheckedSpecification, entries: SpecEntry[], data: RulesData, rules: readonly Rule[] = RULES): CheckResult {
+  const analysis = new Analysis(spec, data);
+  const findings = runRules(rules, spec, data, analysis);
+  // Worst first, keeping rule order within a severity.
+  const ordered = findings.map((f, i) => ({ f, i })).sort((a, b) => severityRank(b.f.severity) - severityRank(a.f.severity) || a.i - b.i).map((x) => x.f);
+  return {
+    tool: { name: pkg.name, version: pkg.version },
+    spec_name: spec.name,
+    verdict: worstSeverity(findings.map((f) => f.severity)),
+    figures: figures(analysis),
+    findings: ordered,
+    mass: { parts: analysis.mass.parts, rolling_mass_kg: analysis.mass.rolling.mass_kg, yoke_mass_kg: analysis.mass.yoke.mass_kg, total_mass_kg: analysis.mass.total.mass_kg },
+    balance: { cases: analysis.loadCases },
+    spec_as_checked: entries,
+    sources: usedSources(spec, data, findings),
+    cautions: [...CAUTIONS],
+  };
+}

@@ -1,0 +1,61 @@
+// Every message the tool can say, each with a stable code, in one table, so
+// wording is reviewed in one place and codes never change meaning.
+// 1xxx: the specification as read; 2xxx: findings of the rules.
+
+export const MESSAGES = {
+  // Reading and schema
+  fileMissing: { code: 1001, text: 'No file at {path}.' },
+  fileIsDirectory: { code: 1002, text: '{path} is a directory; give the specification file inside it.' },
+  fileEmpty: { code: 1003, text: '{path} is empty; a specification needs at least spec_version, name, box, axle, wheels, pole, yoke, floor_straps, crew, team and operation.' },
+  fileUnreadable: { code: 1004, text: 'Cannot read {path}: {reason}.' },
+  fileKind: { code: 1005, text: '{path}: a specification is a .yaml, .yml or .json file.' },
+  syntax: { code: 1010, text: 'The file is not valid {format}: {reason}.' },
+  notAnObject: { code: 1011, text: 'The specification must be a mapping of keys to values at the top level.' },
+  unitString: { code: 1020, text: '{reason}; allowed: a number in {unit}, or a string such as "{example}".' },
+  notFinite: { code: 1021, text: 'the value is {value}; allowed: a finite number.' },
+  required: { code: 1030, text: 'the required key {key} is missing.' },
+  unknownKey: { code: 1031, text: 'unknown key {key}; allowed keys here: {allowed}.' },
+  wrongType: { code: 1032, text: 'the value {value} is of the wrong type; allowed: {allowed}.' },
+  outOfRange: { code: 1033, text: 'the value {value} is out of range; allowed: {allowed}.' },
+  notInList: { code: 1034, text: 'the value {value} is not allowed; allowed: {allowed}.' },
+  badText: { code: 1035, text: 'the value {value} is not allowed; {allowed}.' },
+  tooMany: { code: 1036, text: 'the list has the wrong number of entries; allowed: {allowed}.' },
+  // Cross-field checks
+  unknownSpecies: { code: 1101, text: 'unknown species "{value}"; known species: {allowed}.' },
+  unknownLeather: { code: 1102, text: 'unknown material "{value}"; known materials: {allowed}.' },
+  unknownGround: { code: 1103, text: 'unknown ground "{value}"; known grounds: {allowed}.' },
+  axleOutsideFloor: { code: 1110, text: 'the axle at x = {value} mm is outside the floor; allowed: 0 to {max} mm (the floor depth).' },
+  crewOffFloor: { code: 1111, text: '{who} at {axis} = {value} mm stands off the floor; allowed: {min} to {max} mm.' },
+  yokeBehindBox: { code: 1112, text: 'the yoke at x = {value} mm is not ahead of the box; allowed: more than {min} mm (the front of the floor).' },
+  poleOrder: { code: 1113, text: 'the pole must run rear_x_mm <= root_x_mm < yoke_x_mm; here {rear} mm, {root} mm, {yoke} mm.' },
+  trackNarrow: { code: 1114, text: 'the track {value} mm is not wider than the axle bearing span {min} mm plus the nave length {nave} mm; the naves would run into the box.' },
+  boreTooBig: { code: 1115, text: 'the bore {value} mm is not smaller than the nave diameter {max} mm.' },
+  axleShort: { code: 1116, text: 'the axle {value} mm is shorter than the track plus one nave length ({min} mm); the naves would not be carried.' },
+  duplicateRole: { code: 1117, text: 'the crew role "{value}" appears more than once; each role must be unique.' },
+  duplicateJoint: { code: 1118, text: 'the joint "{value}" is lashed twice; list each joint once.' },
+  floorTooLow: { code: 1119, text: 'the floor top at {value} mm is below the stack under it ({min} mm: wheel radius + half the axle + pole + frame).' },
+  poleBendTight: { code: 1120, text: 'the yoke point lies inside the pole\'s bend circle: a bend of radius {value} mm cannot rise from the root to the yoke; allowed: a radius below {max} mm.' },
+  wheelTooSmall: { code: 1121, text: 'the wheel has no room for spokes: radius {radius} mm less felloe depth {felloe} mm is not more than the nave radius {nave} mm.' },
+  frameCornerTight: { code: 1122, text: 'the frame corner radius {value} mm is too large for the frame; allowed: at most {max} mm (half the shorter side, on the rail centre line).' },
+  strapPitch: { code: 1124, text: 'the strap pitch {value} mm is less than the strap width {min} mm; the straps would overlap.' },
+  marginTooWide: { code: 1125, text: 'the usable margin {value} mm leaves no usable floor; allowed: less than {max} mm (half the floor depth and width).' },
+  poleRootOutsideBox: { code: 1126, text: 'the pole {key} at {value} mm is not under the box; allowed: {min} to {max} mm.' },
+  loadOffVehicle: { code: 1123, text: 'the load "{value}" at x = {x} mm is not on the chariot; allowed: {min} to {max} mm.' },
+  // Findings (2xxx); rules fill the parameters.
+  yokeLifts: { code: 2001, text: 'The yoke lifts off the horses in the case "{case}": the pole pulls up with {value} N.' },
+  yokePresses: { code: 2002, text: 'The yoke presses down in every load case; least pole load {value} N ({case}).' },
+  horseLoadOver: { code: 2011, text: 'Each horse carries {value} N on the yoke in "{case}", {pct} % of its body weight; the {level} limit is {limitPct} %.' },
+  horseLoadWithin: { code: 2012, text: 'Each horse carries at most {value} N on the yoke ({case}), {pct} % of its body weight, within the advisory {limitPct} %.' },
+  balanceNote: { code: 2021, text: 'The loaded centre of mass stands {value} mm {side} of the axle; moving the axle 50 mm forward changes the static pole load by {fwd} N, 50 mm back by {back} N.' },
+} as const;
+
+export type MessageKey = keyof typeof MESSAGES;
+
+/** Fill a message's {placeholders}; an unfilled one is a bug and shows as such. */
+export function say(key: MessageKey, params: Record<string, string | number> = {}): { code: number; text: string } {
+  const m = MESSAGES[key];
+  const text = m.text.replace(/\{(\w+)\}/g, (_, name: string) =>
+    name in params ? String(params[name]) : `{${name}?}`,
+  );
+  return { code: m.code, text };
+}

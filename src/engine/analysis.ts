@@ -1,0 +1,21 @@
+import type { RulesData } from '../data/rules-data.ts';
+import type { LoadCaseResult } from '../result/check-result.ts';
+import type { CheckedSpecification } from '../spec/spec.types.ts';
+import { loadCases } from '../model/load-cases.ts';
+import { massModel, type MassModel } from '../model/mass-model.ts';
+
+/** Models computed at most once per check, on first use by any rule. */
+export class Analysis {
+  #mass?: MassModel;
+  #cases?: LoadCaseResult[];
+  constructor(
+    readonly spec: CheckedSpecification,
+    readonly data: RulesData,
+  ) {}
+  get mass(): MassModel {
+    return (this.#mass ??= massModel(this.spec, this.data));
+  }
+  get loadCases(): LoadCaseResult[] {
+    return (this.#cases ??= loadCases(this.spec, this.data));
+  }
+}

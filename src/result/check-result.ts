@@ -1,0 +1,55 @@
+import type { Finding, Severity } from '../findings/finding.ts';
+
+export interface Figure {
+  value: number;
+  unit: string;
+}
+
+export interface PartMass {
+  part: string;
+  /** rolling: stands on wheels and pole; yoke: rests on the horses; crew; load. */
+  group: 'rolling' | 'yoke';
+  mass_kg: number;
+  x_mm: number;
+  y_mm: number;
+  z_mm: number;
+  /** True where the specification gave a measured mass. */
+  measured: boolean;
+  /** How the mass was found, with numbers. */
+  basis: string;
+}
+
+export interface LoadCaseResult {
+  id: string;
+  title: string;
+  crew_position: 'as placed' | 'forward' | 'aft';
+  accel_g: number;
+  pole_load_N: number;
+  yoke_load_N: number;
+  per_horse_N: number;
+  axle_load_N: number;
+  working: string;
+}
+
+export interface SpecEntry {
+  path: string;
+  value: unknown;
+  unit: string;
+  /** True where the value came from a default, not from the user. */
+  defaulted: boolean;
+  note?: string;
+}
+
+export interface CheckResult {
+  tool: { name: string; version: string };
+  spec_name: string;
+  verdict: Severity;
+  figures: Record<string, Figure>;
+  findings: Finding[];
+  mass: { parts: PartMass[]; rolling_mass_kg: number; yoke_mass_kg: number; total_mass_kg: number };
+  balance: { cases: LoadCaseResult[] };
+  spec_as_checked: SpecEntry[];
+  /** Every source cited by a limit, material value or finding. */
+  sources: string[];
+  cautions: string[];
+}

@@ -1,0 +1,35 @@
+import { parseQuantity } from '../units/parse-quantity.ts';
+import { unitOfKey, type UnitDef } from '../units/units.ts';
+import { issue, type InputIssue, type KeyPath } from './input-issue.ts';
+
+const EXAMPLES: Record<string, string> = { mm: '65 in', m: '40 ft', kg: '180 lb', 'km/h': '12 mph', N: '30 lbf', '%': '12 percent', g: '2 m/s^2', '°': '0.5 rad' };
+
+/**
+ * Convert unit strings in place to numbers in the unit of their key, and
+ * report non-finite numbers (YAML can write .nan and .inf) anywhere.
+ */
+export function convertUnitStrings(data: unknown): InputIssue[] {
+  const issues: InputIssue[] = [];
+  walk(data, [], undefined, issues);
+  return issues;
+}
+
+function walk(node: unknown, path: KeyPath, unit: UnitDef | undefined, issues: InputIssue[]): unknown {
+  if (typeof node === 'number' && !Number.isFinite(node)) {
+    issues.push(issue(path, 'notFinite', { value: String(node) }));
+    return node;
+  }
+  if (typeof node === 'string' && unit) {
+    const parsed = parseQuantity(node, unit);
+    if (parsed.ok) return parsed.value;
+    issues.push(issue(path, 'unitString', { reason: parsed.reason, unit: unit.symbol, example: EXAMPLES[unit.symbol] ?? '' }));
+    return node;
+  }
+  if (Array.isArray(node)) {
+    node.forEach((v, i) => (node[i] = walk(v, [...path, i], unit, issues)));
+  } else if (typeof node === 'object' && node !== null) {
+    const obj = node as Record<string, unknown>;
+    for (const key of Object.keys(obj)) obj[key] = walk(obj[key], [...path, key], unitOfKey(key), issues);
+  }
+  return node;
+}

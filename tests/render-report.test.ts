@@ -1,0 +1,167 @@
+import { describe, expect, it } from 'vitest';
+import { renderMarkdown } from '../io/render/report-md.ts';
+import { renderHtml } from '../io/render/report-html.ts';
+import { sampleResult } from './fixtures/sample-result.ts';
+import type { CheckResult } from '../src/result/check-result.ts';
+
+/** The body lines of every fenced block in a Markdown text. */
+function fencedBlocks(md: string): string[] {
+  return [...md.matchAll(/^(`{3,})text\n([\s\S]*?)\n\1$/gm)].map((m) => m[2]);
+}
+
+/** Data rows of the first Markdown table after a heading. */
+function tableAfter(md: string, heading: string): string[] {
+  const start = md.indexOf(`\n${heading}\n`);
+  const lines = md.slice(start).split('\n');
+  const first = lines.findIndex((l) => l.startsWith('|'));
+  const rows: string[] = [];
+  for (let i = first + 2; i < lines.length && lines[i].startsWith('|'); i++) rows.push(lines[i]);
+  return rows;
+}
+
+function withHostileText(): CheckResult {
+  const result = sampleResult();
+  result.spec_name = 'Mine <script>alert("x")</script> ![p](http://example.com/p.png)';
+  result.spec_as_checked.push({
+    path: 'box.<img src="http://example.com/x.png" onerror="alert(1)">',
+    value: '<b>bold</b>',
+    unit: '',
+    defaulted: false,
+  });
+  result.findings[1].message = '- not a list, <i>not</i> italic';
+  result.sources.push('12. not an ordered item');
+  return result;
+}
+
+describe('renderMarkdown', () => {
+  const result = sampleResult();
+  const md = renderMarkdown(result);
+
+  it('opens with the title, the verdict and every caution before the findings table', () => {
+    const tableStart = md.indexOf('| # | Severity');
+    expect(tableStart).toBeGreaterThan(0);
+    expect(md.startsWith(`# Design-rule check: ${result.spec_name}`)).toBe(true);
+    expect(md.indexOf('Verdict: **FAIL**')).toBeLessThan(tableStart);
+    for (const caution of result.cautions) {
+      const at = md.indexOf(caution);
+      expect(at, caution).toBeGreaterThan(0);
+      expect(at).toBeLessThan(tableStart);
+    }
+  });
+
+  it('lists findings worst first', () => {
+    const rows = tableAfter(md, '## Findings');
+    expect(rows.map((r) => r.split('|')[2].trim())).toEqual(['**FAIL**', '**WARNING**', '**ADVICE**', '**PASS**']);
+  });
+
+  it('shows the working of every flagged finding in a fenced block, and not of passes', () => {
+    const blocks = fencedBlocks(md);
+    const workingStart = md.indexOf('## Working of flagged findings');
+    for (const f of result.findings) {
+      const heading = md.indexOf(`**${f.severity.toUpperCase()}** ${f.rule}: ${f.subject}`, workingStart);
+      if (f.severity === 'pass') {
+        expect(heading, f.rule).toBe(-1);
+        expect(blocks).not.toContain(f.working);
+      } else {
+        expect(heading, f.rule).toBeGreaterThan(workingStart);
+        const fence = md.indexOf('```text\n', heading);
+        expect(md.slice(fence + '```text\n'.length).startsWith(f.working)).toBe(true);
+        expect(md.indexOf(f.fix, heading)).toBeGreaterThan(heading);
+      }
+    }
+  });
+
+  it('tables parts, load cases and the spec with defaults marked', () => {
+    const parts = tableAfter(md, '### Parts');
+    expect(parts).toHaveLength(result.mass.parts.length + 3);
+    expect(parts[0]).toContain(result.mass.parts[0].mass_kg.toFixed(3));
+    const cases = tableAfter(md, '### Load cases');
+    expect(cases).toHaveLength(result.balance.cases.length);
+    result.balance.cases.forEach((c, i) => expect(cases[i]).toContain(c.pole_load_N.toFixed(1)));
+    const spec = tableAfter(md, '## Spec as checked');
+    result.spec_as_checked.forEach((e, i) => expect(spec[i].includes('*default*')).toBe(e.defaulted));
+  });
+
+  it('escapes pipes inside table cells', () => {
+    const spec = tableAfter(md, '## Spec as checked');
+    const row = spec.find((r) => r.includes('axle.x\\_mm'))!;
+    expect(row).toContain('measured \\| estimated');
+    // Five cells: six unescaped pipes.
+    expect(row.match(/(?<!\\)\|/g)).toHaveLength(6);
+  });
+
+  it('numbers the sources', () => {
+    result.sources.forEach((s, i) => expect(md).toContain(`\n${i + 1}. ${s.replace(/_/g, '\\_')}`));
+  });
+
+  it('keeps a working fence closed even when the working holds backticks', () => {
+    const r = sampleResult();
+    r.findings[1].working = 'step 1\n```\nnot the end';
+    const blocks = fencedBlocks(renderMarkdown(r));
+    expect(blocks).toContain(r.findings[1].working);
+  });
+});
+
+describe('renderHtml', () => {
+  const result = sampleResult();
+  const html = renderHtml(result);
+
+  it('is one self-contained file', () => {
+    expect(html).toMatch(/^<!doctype html>/);
+    expect(html).toContain('<style>');
+    expect(html).not.toContain('<link');
+    expect(html).not.toMatch(/src="http/);
+    expect(html).not.toMatch(/<script/i);
+    expect(html).not.toMatch(/url\(/);
+  });
+
+  it('puts the verdict and the cautions before the first table', () => {
+    const firstTable = html.indexOf('<table');
+    expect(firstTable).toBeGreaterThan(0);
+    expect(html.indexOf('Verdict:')).toBeLessThan(firstTable);
+    for (const caution of result.cautions) {
+      const escaped = caution.replace(/"/g, '&quot;');
+      const at = html.indexOf(escaped);
+      expect(at, caution).toBeGreaterThan(0);
+      expect(at).toBeLessThan(firstTable);
+    }
+  });
+
+  it('shows severity as a coloured badge with the word', () => {
+    expect(html).toContain('<h2 class="verdict">Verdict: <strong class="badge badge-fail">FAIL</strong></h2>');
+    for (const s of ['fail', 'warning', 'advice', 'pass']) {
+      expect(html).toContain(`<strong class="badge badge-${s}">${s.toUpperCase()}</strong>`);
+      expect(html).toMatch(new RegExp(`\\.badge-${s} \\{ background: #[0-9A-F]{6}`));
+    }
+  });
+
+  it('prints on A4 with big sections on new pages', () => {
+    expect(html).toContain('size: A4');
+    expect(html).toContain('@media print');
+    expect(html).toContain('<h2 class="new-page">Working of flagged findings</h2>');
+    expect(html).toContain('<h2 class="new-page">Sources</h2>');
+    expect(html).toContain('<h2 class="cautions">Cautions</h2>');
+  });
+
+  it('escapes HTML and Markdown in user text', () => {
+    const hostile = renderHtml(withHostileText());
+    expect(hostile).not.toMatch(/<script/i);
+    expect(hostile).not.toContain('<img');
+    expect(hostile).not.toContain('<b>');
+    expect(hostile).not.toMatch(/src="http/);
+    expect(hostile).toContain('&lt;script&gt;alert(&quot;x&quot;)&lt;/script&gt;');
+    expect(hostile).toContain('<title>Design-rule check: Mine &lt;script&gt;');
+    expect(hostile).toContain('![p](http://example.com/p.png)');
+    expect(hostile).toContain('&lt;b&gt;bold&lt;/b&gt;');
+    expect(hostile).toContain('<p>- not a list, &lt;i&gt;not&lt;/i&gt; italic</p>');
+    expect(hostile).toContain('<li>12. not an ordered item</li>');
+  });
+
+  it('renders an escaped pipe as a literal pipe inside its cell', () => {
+    expect(html).toContain('<td>measured | estimated from drawing</td>');
+  });
+
+  it('refuses a result without cautions', () => {
+    expect(() => renderHtml({ ...result, cautions: ['  '] })).toThrow(/cautions/);
+  });
+});

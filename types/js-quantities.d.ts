@@ -1,0 +1,16 @@
+// The package ships no declarations; only what we use is declared.
+declare module 'js-quantities' {
+  interface Qty {
+    scalar: number;
+    units(): string;
+    to(unit: string): Qty;
+    add(other: Qty): Qty;
+    isCompatible(other: Qty | string): boolean;
+  }
+  interface QtyStatic {
+    (value: string): Qty;
+    parse(value: string): Qty | null;
+  }
+  const Qty: QtyStatic;
+  export default Qty;
+}
