@@ -44,7 +44,8 @@ export function parseSpecText(text: string, format: string, path = 'input'): Rea
     return {
       ok: false,
       issues: doc.errors.map((e) => {
-        const pos = e.linePos?.[0];
+        // linePos is only filled when prettyErrors is on; the offset always is.
+        const pos = e.linePos?.[0] ?? lines.linePos(e.pos[0]);
         return { ...issue([], 'syntax', { format, reason: e.message.split('\n')[0] }), at: pos ? { line: pos.line, column: pos.col } : undefined };
       }),
     };

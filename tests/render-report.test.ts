@@ -3,6 +3,7 @@ import { renderMarkdown } from '../io/render/report-md.ts';
 import { renderHtml } from '../io/render/report-html.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 import type { CheckResult } from '../src/result/check-result.ts';
+import { SHORT_CAUTION } from '../src/cautions.ts';
 
 /** The body lines of every fenced block in a Markdown text. */
 function fencedBlocks(md: string): string[] {
@@ -47,6 +48,10 @@ describe('renderMarkdown', () => {
       expect(at, caution).toBeGreaterThan(0);
       expect(at).toBeLessThan(tableStart);
     }
+  });
+
+  it('ends with the one-line caution', () => {
+    expect(md.trimEnd().endsWith(`*${SHORT_CAUTION}*`)).toBe(true);
   });
 
   it('lists findings worst first', () => {

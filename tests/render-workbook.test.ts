@@ -4,6 +4,7 @@ import { renderWorkbook } from '../io/render/workbook.ts';
 import { SEVERITY_COLOURS, toArgb } from '../io/render/severity-palette.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 import type { CheckResult } from '../src/result/check-result.ts';
+import { SHORT_CAUTION } from '../src/cautions.ts';
 
 async function readBack(result: CheckResult): Promise<ExcelJS.Workbook> {
   const wb = new ExcelJS.Workbook();
@@ -51,7 +52,7 @@ describe('renderWorkbook', () => {
   it('puts the one-line caution at the top of every sheet', async () => {
     const wb = await readBack(result);
     for (const ws of wb.worksheets) {
-      expect(ws.getCell('A1').value, ws.name).toBe(result.cautions[0]);
+      expect(ws.getCell('A1').value, ws.name).toBe(SHORT_CAUTION);
     }
   });
 

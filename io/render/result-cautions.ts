@@ -1,4 +1,5 @@
 import type { CheckResult } from '../../src/result/check-result.ts';
+import { SHORT_CAUTION } from '../../src/cautions.ts';
 
 /**
  * The cautions the core supplied. A report without them must not go out, so
@@ -12,7 +13,11 @@ export function requireCautions(result: CheckResult): string[] {
   return cautions;
 }
 
-/** The one-line caution repeated on every sheet and page: the core lists it first. */
+/**
+ * The core's one-line caution, repeated on every sheet and at the end of the
+ * report beside the full cautions of the result (which must be present).
+ */
 export function headlineCaution(result: CheckResult): string {
-  return requireCautions(result)[0];
+  requireCautions(result);
+  return SHORT_CAUTION;
 }

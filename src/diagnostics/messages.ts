@@ -46,7 +46,7 @@ export const MESSAGES = {
   yokePresses: { code: 2002, text: 'The yoke presses down in every load case; least pole load {value} N ({case}).' },
   horseLoadOver: { code: 2011, text: 'Each horse carries {value} N on the yoke in "{case}", {pct} % of its body weight; the {level} limit is {limitPct} %.' },
   horseLoadWithin: { code: 2012, text: 'Each horse carries at most {value} N on the yoke ({case}), {pct} % of its body weight, within the advisory {limitPct} %.' },
-  balanceNote: { code: 2021, text: 'The loaded centre of mass stands {value} mm {side} of the axle; moving the axle 50 mm forward changes the static pole load by {fwd} N, 50 mm back by {back} N.' },
+  balanceNote: { code: 2021, text: 'The loaded centre of mass stands {value} mm {side} the axle; moving the axle 50 mm forward changes the static pole load by {fwd} N, 50 mm back by {back} N.' },
 } as const;
 
 export type MessageKey = keyof typeof MESSAGES;

@@ -17,6 +17,8 @@ export interface Rule {
   title: string;
   /** What it checks, in a sentence a teacher can read out. */
   checks: string;
+  /** A check can fail; a note only informs (advice), never fails. */
+  kind: 'check' | 'note';
   /** Names of the limits it reads from rules/limits under its id. */
   limits: readonly string[];
   run(ctx: RuleContext): Finding[];

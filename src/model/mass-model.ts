@@ -1,7 +1,7 @@
 import type { RulesData } from '../data/rules-data.ts';
 import type { PartMass } from '../result/check-result.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
-import { densityAt } from './density.ts';
+import { densityFromSG, specificGravityAt } from './density.ts';
 import { layout, type Layout } from './layout.ts';
 import { jointPlace, lashingLength } from './lashing-geometry.ts';
 
@@ -35,7 +35,10 @@ export function totals(parts: readonly PartMass[]): Totals {
 export function massModel(spec: CheckedSpecification, data: RulesData): MassModel {
   const lay = layout(spec);
   const M = spec.moisture_content_pct;
-  const rho = (species: string) => densityAt(data.species[species].specific_gravity.green.value, M);
+  const rho = (species: string) => {
+    const sg = data.species[species].specific_gravity;
+    return densityFromSG(specificGravityAt(sg.green.value, sg.dry12.value, M), M);
+  };
   const timber = (part: string, species: string, volMm3: number, at: { x: number; y: number; z: number }, group: PartMass['group'], shape: string): PartMass => {
     const density = rho(species);
     const mass = volMm3 * M3_PER_MM3 * density;
@@ -97,7 +100,7 @@ function boxParts(spec: CheckedSpecification, data: RulesData, lay: Layout, timb
   const runs = strapRuns(spec);
   const strapLength = runs.reduce((sum, r) => sum + r.count * (r.span + 2 * wrap), 0);
   const leather = data.leathers[s.material].density_kg_per_m3.value;
-  parts.push({ part: 'floor straps', group: 'rolling', mass_kg: strapLength * s.width_mm * s.thickness_mm * M3_PER_MM3 * leather, ...centre, x_mm: centre.x, y_mm: 0, z_mm: lay.floorTopZ, measured: false, basis: `${runs.map((r) => `${r.count} × (${r.span} + 2 × ${wrap}) mm`).join(' + ')} = ${fmt(strapLength, 0)} mm × ${s.width_mm} × ${s.thickness_mm} mm × ${leather} kg/m³ (${s.material})` });
+  parts.push({ part: 'floor straps', group: 'rolling', mass_kg: strapLength * s.width_mm * s.thickness_mm * M3_PER_MM3 * leather, x_mm: centre.x, y_mm: 0, z_mm: lay.floorTopZ, measured: false, basis: `${runs.map((r) => `${r.count} × (${r.span} + 2 × ${wrap}) mm`).join(' + ')} = ${fmt(strapLength, 0)} mm × ${s.width_mm} × ${s.thickness_mm} mm × ${leather} kg/m³ (${s.material})` });
   if (spec.box.siding_mass_kg > 0) {
     parts.push({ part: 'siding', group: 'rolling', mass_kg: spec.box.siding_mass_kg, x_mm: centre.x, y_mm: 0, z_mm: lay.floorTopZ + spec.box.siding_height_mm, measured: true, basis: `given ${spec.box.siding_mass_kg} kg, ${spec.box.siding_height_mm} mm above the floor` });
   }

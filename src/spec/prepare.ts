@@ -20,7 +20,10 @@ export function prepareSpec(raw: unknown, data: RulesData): Prepared {
   const work = structuredClone(raw) as Record<string, unknown>;
   const unitIssues = convertUnitStrings(work);
   const given = structuredClone(work);
-  const schemaIssues = validateSchema(work);
+  // A value the unit step rejected (NaN, Infinity, an unreadable string) is
+  // reported once, by that step: the schema would add "null is of the wrong type".
+  const rejected = new Set(unitIssues.map((i) => pathText(i.path)));
+  const schemaIssues = validateSchema(work).filter((i) => !rejected.has(pathText(i.path)));
   if (unitIssues.length || schemaIssues.length) return { ok: false, issues: [...unitIssues, ...schemaIssues] };
   const spec = work as unknown as CheckedSpecification;
   const computed = new Set<string>();

@@ -6,6 +6,7 @@ export const axlePosition: Rule = {
   id: 'balance.axle-position',
   title: 'Balance note: the centre of mass and the axle',
   checks: 'How far forward of the axle the loaded centre of mass stands, and what moving the axle forward or back by a trial step would do to the load on the horses.',
+  kind: 'note',
   limits: ['step_mm'],
   run(ctx) {
     const { spec, data } = ctx;
@@ -25,7 +26,7 @@ export const axlePosition: Rule = {
         unit: 'mm',
         limit: null,
         message: 'balanceNote',
-        params: { value: Math.abs(d).toFixed(0), side: d >= 0 ? 'forward' : 'behind', fwd: signed(fwd - here), back: signed(back - here) },
+        params: { value: Math.abs(d).toFixed(0), side: d >= 0 ? 'forward of' : 'behind', fwd: signed(fwd - here), back: signed(back - here) },
         fix: 'Move the axle towards the floor centre to take weight off the horses, towards the rear edge to put weight on them.',
         source: step.source,
         working: [

@@ -7,6 +7,7 @@ export const horseLoad: Rule = {
   id: 'balance.horse-load',
   title: 'Load on each horse',
   checks: "The yoke load each horse carries, standing with the crew as placed and in the worst load case, as a fraction of the lightest horse's body weight.",
+  kind: 'check',
   limits: ['advisory_fraction', 'hard_fraction'],
   run(ctx) {
     const { team } = ctx.spec;

@@ -5,6 +5,7 @@ export const yokeLift: Rule = {
   id: 'balance.yoke-lift',
   title: 'The yoke stays down on the horses',
   checks: 'In every load case (crew anywhere on the usable floor; standing, accelerating, braking) the pole presses down on the yoke.',
+  kind: 'check',
   limits: ['lift_N', 'light_N'],
   run(ctx) {
     const cases = ctx.analysis.loadCases;

@@ -1,0 +1,40 @@
+// Speed and memory targets live here, never in unit tests.
+// Target: each demo specification checks (validate, compute, render every
+// output) in under one second on an ordinary laptop.
+import { readFileSync, readdirSync } from 'node:fs';
+import { performance } from 'node:perf_hooks';
+import { parse } from 'yaml';
+import { defaultRulesDir, loadRulesData } from '../io/load-rules-data.ts';
+import { renderHtml } from '../io/render/report-html.ts';
+import { renderMarkdown } from '../io/render/report-md.ts';
+import { renderWorkbook } from '../io/render/workbook.ts';
+import { checkSpecification } from '../src/check.ts';
+import { prepareSpec } from '../src/spec/prepare.ts';
+
+const TARGET_MS = 1000;
+const RUNS = 10;
+const data = loadRulesData(defaultRulesDir());
+const specs = new URL('../specs/', import.meta.url);
+let missed = 0;
+
+for (const file of readdirSync(specs).filter((f) => f.endsWith('.yaml'))) {
+  const raw = parse(readFileSync(new URL(file, specs), 'utf8'));
+  const times: number[] = [];
+  for (let i = 0; i < RUNS; i++) {
+    const t0 = performance.now();
+    const p = prepareSpec(raw, data);
+    if (!p.ok) throw new Error(`${file} does not validate`);
+    const result = checkSpecification(p.spec, p.entries, data);
+    renderMarkdown(result);
+    renderHtml(result);
+    await renderWorkbook(result);
+    times.push(performance.now() - t0);
+  }
+  times.sort((a, b) => a - b);
+  const median = times[Math.floor(RUNS / 2)];
+  const ok = median < TARGET_MS;
+  if (!ok) missed++;
+  console.log(`${file.padEnd(24)} median ${median.toFixed(1)} ms (first ${times[0].toFixed(1)}, worst ${times[RUNS - 1].toFixed(1)})  target < ${TARGET_MS} ms  ${ok ? 'met' : 'MISSED'}`);
+}
+console.log(`heap used ${(process.memoryUsage().heapUsed / 2 ** 20).toFixed(1)} MiB`);
+process.exitCode = missed ? 1 : 0;
