@@ -1,13 +1,23 @@
-import { pathText, type InputIssue, type KeyPath } from '../src/spec/input-issue.ts';
-import type { Located } from '../io/read-spec.ts';
+import { pathText, type InputIssue } from '../src/spec/input-issue.ts';
+import type { Located, Locator } from '../io/read-spec.ts';
+import { MESSAGES } from '../src/diagnostics/messages.ts';
 
 /** Input problems as text: key path, line and column, message, code. */
-export function formatIssues(file: string, issues: (InputIssue & { at?: Located })[], locate?: (p: KeyPath) => Located | undefined): string {
+export function formatIssues(file: string, issues: (InputIssue & { at?: Located })[], locate?: Locator): string {
   const lines = issues.map((i) => {
-    const at = i.at ?? (i.path.length ? locate?.(i.path) : undefined);
-    const where = [i.path.length ? pathText(i.path) : '', at ? `(line ${at.line}, column ${at.column})` : ''].filter(Boolean).join(' ');
-    return `  ${where ? `${where}: ` : ''}${i.message} [${i.code}]`;
+    const at = i.at ?? (i.path.length ? placeOf(i, locate) : undefined);
+    const label = [i.path.length ? pathText(i.path) : '', at ? `(line ${at.line}, column ${at.column})` : ''].filter(Boolean).join(' ');
+    return `  ${label ? `${label}: ` : ''}${i.message} [${i.code}]`;
   });
   const n = issues.length;
   return `axletree: ${file} cannot be checked: ${n} problem${n === 1 ? '' : 's'}; nothing was written.\n${lines.join('\n')}\n`;
+}
+
+// A missing key is shown at the mapping that lacks it, an unknown key at
+// itself; every other problem at its value.
+function placeOf(i: InputIssue, locate?: Locator): Located | undefined {
+  if (!locate) return undefined;
+  if (i.code === MESSAGES.required.code) return i.path.length > 1 ? locate(i.path.slice(0, -1), true) : locate([]);
+  if (i.code === MESSAGES.unknownKey.code) return locate(i.path, true);
+  return locate(i.path);
 }

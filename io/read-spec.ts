@@ -1,6 +1,6 @@
 import { readFileSync, statSync } from 'node:fs';
 import { extname } from 'node:path';
-import { LineCounter, parseDocument, isNode, type Document } from 'yaml';
+import { LineCounter, parseDocument, isMap, isNode, isScalar, type Document } from 'yaml';
 import { issue, type InputIssue, type KeyPath } from '../src/spec/input-issue.ts';
 
 export interface Located {
@@ -8,8 +8,11 @@ export interface Located {
   column: number;
 }
 
+/** Where a key path sits; `key` asks for the key itself rather than its value. */
+export type Locator = (path: KeyPath, key?: boolean) => Located | undefined;
+
 export type ReadSpec =
-  | { ok: true; raw: unknown; locate: (path: KeyPath) => Located | undefined }
+  | { ok: true; raw: unknown; locate: Locator }
   | { ok: false; issues: (InputIssue & { at?: Located })[] };
 
 const KINDS: Record<string, string> = { '.yaml': 'YAML', '.yml': 'YAML', '.json': 'JSON' };
@@ -38,6 +41,11 @@ export function readSpecFile(path: string): ReadSpec {
 export function parseSpecText(text: string, format: string, path = 'input'): ReadSpec {
   if (text.trim() === '') return { ok: false, issues: [issue([], 'fileEmpty', { path })] };
   const lines = new LineCounter();
+  if (format === 'JSON') {
+    // The YAML parser would accept comments and trailing commas; JSON must not.
+    const strict = strictJson(text, lines);
+    if (strict) return { ok: false, issues: [strict] };
+  }
   // JSON is read by the YAML parser too: one reader, positions for both.
   const doc = parseDocument(text, { lineCounter: lines, uniqueKeys: true, prettyErrors: false });
   if (doc.errors.length) {
@@ -52,12 +60,37 @@ export function parseSpecText(text: string, format: string, path = 'input'): Rea
   }
   const raw = doc.toJS({ maxAliasCount: 100 });
   if (raw === null || raw === undefined) return { ok: false, issues: [issue([], 'fileEmpty', { path })] };
-  return { ok: true, raw, locate: (p) => locate(doc, lines, p) };
+  return { ok: true, raw, locate: (p, key) => locate(doc, lines, p, key) };
 }
 
-// The node at the path, or the nearest enclosing one that exists (a missing
-// key is reported at its parent).
-function locate(doc: Document, lines: LineCounter, path: KeyPath): Located | undefined {
+function strictJson(text: string, lines: LineCounter): (InputIssue & { at?: Located }) | undefined {
+  try {
+    JSON.parse(text);
+    return undefined;
+  } catch (e) {
+    const message = (e as Error).message;
+    const offset = /position (\d+)/.exec(message)?.[1];
+    parseDocument(text, { lineCounter: lines }); // fills the line table
+    const pos = offset !== undefined ? lines.linePos(Number(offset)) : undefined;
+    return { ...issue([], 'syntax', { format: 'JSON', reason: message.replace(/ in JSON at position \d+.*$/, '') }), at: pos ? { line: pos.line, column: pos.col } : undefined };
+  }
+}
+
+// The node at the path, or the nearest enclosing one that exists. With
+// `key`, the key of the last step (an unknown key), or for a key that is not
+// there, the key of the mapping that lacks it.
+function locate(doc: Document, lines: LineCounter, path: KeyPath, key = false): Located | undefined {
+  if (key) {
+    for (let n = path.length; n > 0; n--) {
+      const parent = n === 1 ? doc.contents : doc.getIn(path.slice(0, n - 1), true);
+      if (!isMap(parent)) continue;
+      const pair = parent.items.find((it) => isScalar(it.key) && it.key.value === path[n - 1]);
+      if (pair && isNode(pair.key) && pair.key.range) {
+        const pos = lines.linePos(pair.key.range[0]);
+        return { line: pos.line, column: pos.col };
+      }
+    }
+  }
   for (let n = path.length; n >= 0; n--) {
     const node = doc.getIn(path.slice(0, n), true);
     if (isNode(node) && node.range) {

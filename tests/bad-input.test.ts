@@ -106,10 +106,10 @@ const CASES: Case[] = [
     ],
   },
   {
-    // A missing key is reported where its parent mapping starts.
+    // A missing key is reported at the key of the mapping that lacks it.
     name: 'a required key missing',
     text: edited(['  x_mm: 280\n  species: rock-elm\n', '  x_mm: 280\n']),
-    issues: [{ path: 'axle.species', at: ['axle:\n  x_mm: 280', 'x_mm'], says: ['required key species is missing'] }],
+    issues: [{ path: 'axle.species', at: ['axle:\n  x_mm: 280', 'axle'], says: ['required key species is missing'] }],
   },
   {
     name: 'NaN for a length',
@@ -132,12 +132,12 @@ const CASES: Case[] = [
     issues: [{ path: 'crew[1].role', at: ['role: driver   ', 'driver'], says: ['"driver"', 'more than once', 'must be unique'] }],
   },
   {
-    // Positions are those of the nodes: the mapping under the typo, and the
-    // top-level mapping where the real key is missing.
+    // The unknown key is shown at itself; the missing top-level key where the
+    // top-level mapping starts.
     name: 'an unknown key (a typo)',
     text: edited(['wheels:\n', 'whels:\n']),
     issues: [
-      { path: 'whels', at: ['whels:\n  diameter_mm', 'diameter_mm'], says: ['unknown key whels', 'allowed keys here:', 'wheels'] },
+      { path: 'whels', at: ['whels:\n  diameter_mm', 'whels'], says: ['unknown key whels', 'allowed keys here:', 'wheels'] },
       { path: 'wheels', at: ['spec_version: 1', 'spec_version'], says: ['required key wheels is missing'] },
     ],
   },
@@ -160,7 +160,7 @@ const CASES: Case[] = [
       { path: 'yoke.length_mm', at: ['yoke:\n  species: white-oak\n  length_mm: 0', '0'], says: ['out of range'] },
       { path: 'axle.x_mm', at: ['x_mm: "twelve inches"', '"twelve'], says: ['"twelve inches"'] },
       { path: 'wheels.diameter_mm', at: ['diameter_mm: .nan', '.nan'], says: ['allowed: a finite number'] },
-      { path: 'pole.species', at: ['pole:\n  width_mm', 'width_mm'], says: ['required key species is missing'] },
+      { path: 'pole.species', at: ['pole:\n  width_mm', 'pole'], says: ['required key species is missing'] },
     ],
   },
   {
@@ -177,7 +177,14 @@ const CASES: Case[] = [
     name: 'a JSON spec with a doubled comma',
     file: 'spec.json',
     text: replaceOnce(changed(() => {}, 'json'), '"spokes": 6,', '"spokes": 6,,'),
-    issues: [{ path: '', at: ['"spokes": 6,,\n', ',\n'], says: ['not valid JSON', 'Unexpected ,'] }],
+    issues: [{ path: '', at: ['"spokes": 6,,\n', ',\n'], says: ['not valid JSON'] }],
+  },
+  {
+    // The YAML reader would let this through; a .json file is held to JSON.
+    name: 'a JSON spec with a trailing comma',
+    file: 'spec.json',
+    text: replaceOnce(changed(() => {}, 'json'), '"ground": "turf"', '"ground": "turf",'),
+    issues: [{ path: '', at: ['"ground": "turf",\n  }', '}'], says: ['not valid JSON', 'property name'] }],
   },
   {
     name: 'a JSON spec with text in a number field',
