@@ -82,15 +82,16 @@ export function massModel(spec: CheckedSpecification, data: RulesData): MassMode
 
 type TimberFn = (part: string, species: string, volMm3: number, at: { x: number; y: number; z: number }, group: PartMass['group'], shape: string) => PartMass;
 
-// The box: frame rails on a rectangle (rounded where steam-bent), the strap
-// floor, and the siding; a measured box mass replaces all three.
+// The box: frame rails on a rectangle whose two front corners are rounded
+// where the front rail is steam-bent, the strap floor, and the siding; a
+// measured box mass replaces all three.
 function boxParts(spec: CheckedSpecification, data: RulesData, lay: Layout, timber: TimberFn): PartMass[] {
   const floor = spec.box.floor;
   const f = floor.frame;
   const a = floor.depth_mm + f.width_mm;
   const b = floor.width_mm + f.width_mm;
   const rc = f.bend_radius_mm ?? 0;
-  const railLength = 2 * (a + b) - (8 - 2 * Math.PI) * rc;
+  const railLength = 2 * (a + b) - (4 - Math.PI) * rc; // two quarter-circle corners replace 2 x 2rc of straight rail
   const centre = { x: floor.depth_mm / 2, y: 0 };
   const parts: PartMass[] = [
     timber('floor frame', f.species, railLength * f.width_mm * f.thickness_mm, { ...centre, z: lay.frameZ }, 'rolling', `${fmt(railLength, 0)} mm of rail × ${f.width_mm} × ${f.thickness_mm} mm`),

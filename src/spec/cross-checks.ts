@@ -64,7 +64,7 @@ function geometry(spec: CheckedSpecification, out: InputIssue[]): void {
   if (w.track_mm - w.nave.length_mm <= spec.axle.bearing_span_mm) out.push(issue(['wheels', 'track_mm'], 'trackNarrow', { value: w.track_mm, min: spec.axle.bearing_span_mm, nave: w.nave.length_mm }));
   if (w.nave.bore_mm >= w.nave.diameter_mm) out.push(issue(['wheels', 'nave', 'bore_mm'], 'boreTooBig', { value: w.nave.bore_mm, max: w.nave.diameter_mm }));
   if (spec.axle.length_mm < w.track_mm + w.nave.length_mm) out.push(issue(['axle', 'length_mm'], 'axleShort', { value: spec.axle.length_mm, min: w.track_mm + w.nave.length_mm }));
-  const maxCorner = Math.min(depth + fw, width + fw) / 2;
+  const maxCorner = Math.min(depth + fw, (width + fw) / 2); // two front corners: each fits the depth, both the width
   if ((floor.frame.bend_radius_mm ?? 0) > maxCorner) out.push(issue(['box', 'floor', 'frame', 'bend_radius_mm'], 'frameCornerTight', { value: floor.frame.bend_radius_mm!, max: maxCorner }));
   if (spec.floor_straps.pitch_mm < spec.floor_straps.width_mm) out.push(issue(['floor_straps', 'pitch_mm'], 'strapPitch', { value: spec.floor_straps.pitch_mm, min: spec.floor_straps.width_mm }));
   const margin = floor.usable_margin_mm;

@@ -59,7 +59,7 @@ export interface BuildSpecification {
          */
         thickness_mm: number | string;
         /**
-         * Corner radius of a steam-bent frame, on the rail's centre line; omit for jointed corners.
+         * Radius, on the rail's centre line, of the two front corners of a frame whose front rail is steam-bent round them; the rear corners are jointed. Omit for a frame with four jointed corners.
          */
         bend_radius_mm?: number | string;
       };
@@ -438,7 +438,7 @@ export interface CheckedSpecification {
          */
         thickness_mm: number;
         /**
-         * Corner radius of a steam-bent frame, on the rail's centre line; omit for jointed corners.
+         * Radius, on the rail's centre line, of the two front corners of a frame whose front rail is steam-bent round them; the rear corners are jointed. Omit for a frame with four jointed corners.
          */
         bend_radius_mm?: number;
       };
