@@ -1,6 +1,7 @@
 import type { Analysis } from './engine/analysis.ts';
 import type { Figure } from './result/check-result.ts';
-import { G } from './units/units.ts';
+import { G, UNITS } from './units/units.ts';
+import { tightestYokeRadius } from './model/turn.ts';
 
 /** The named figures of a check; later families add theirs here. */
 export function figures(a: Analysis): Record<string, Figure> {
@@ -20,5 +21,22 @@ export function figures(a: Analysis): Record<string, Figure> {
     axle_load: { value: stat.axle_load_N, unit: 'N' },
     yoke_mass: { value: a.mass.yoke.mass_kg, unit: 'kg' },
     total_weight: { value: total.mass_kg * G, unit: 'N' },
+    ...turnFigures(a),
+  };
+}
+
+// Rollover figures use the rolling assembly with the crew as placed. Where no
+// steady turn exists, the path radii are reported as 0 (turn.pole-reach says why).
+function turnFigures(a: Analysis): Record<string, Figure> {
+  const t = a.turn;
+  const advisory = a.data.limits['turn.rollover']?.advisory_fraction?.value ?? 1;
+  return {
+    ssf: { value: t.ssf, unit: '1' },
+    rollover_accel: { value: t.rolloverAccel, unit: 'm/s²' },
+    axle_path_radius: { value: t.axleRadius, unit: 'm' },
+    inner_wheel_path_radius: { value: t.steady ? t.innerRadius : 0, unit: 'm' },
+    lateral_accel_design: { value: t.lateralAccel, unit: 'm/s²' },
+    rollover_speed_at_turn: { value: t.steady ? t.rolloverSpeed / UNITS.kmh.si : 0, unit: 'km/h' },
+    min_turn_radius_at_speed: { value: tightestYokeRadius(t.speed, advisory * t.rolloverAccel, t.reach), unit: 'm' },
   };
 }

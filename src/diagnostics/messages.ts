@@ -47,6 +47,22 @@ export const MESSAGES = {
   horseLoadOver: { code: 2011, text: 'Each horse carries {value} N on the yoke in "{case}", {pct} % of its body weight; the {level} limit is {limitPct} %.' },
   horseLoadWithin: { code: 2012, text: 'Each horse carries at most {value} N on the yoke ({case}), {pct} % of its body weight, within the advisory {limitPct} %.' },
   balanceNote: { code: 2021, text: 'The loaded centre of mass stands {value} mm {side} the axle; moving the axle 50 mm forward changes the static pole load by {fwd} N, 50 mm back by {back} N.' },
+  // Turning (26xx)
+  turnTooTight: { code: 2601, text: 'The planned turn of {radius} m is too tight: the yoke path must be wider than the pole reach of {reach} m, or the chariot cannot follow it.' },
+  turnReachOk: { code: 2602, text: 'The planned turn of {radius} m is wider than the pole reach of {reach} m.' },
+  innerWheelBackward: { code: 2611, text: 'In the planned turn the inner wheel runs backwards (path radius {inner} m; outer {outer} m; speed ratio {ratio}): it scrubs sideways instead of rolling.' },
+  innerWheelForward: { code: 2612, text: 'In the planned turn both wheels roll forward: inner path {inner} m, outer {outer} m, speed ratio {ratio}.' },
+  rolloverOver: { code: 2621, text: 'The design turn needs {value} m/s² of lateral acceleration, {pct} % of the rollover threshold; the {level} limit is {limitPct} %. The tightest turn at this speed is {tightest} m; this turn is within the advisory limit up to {speed} km/h.' },
+  rolloverWithin: { code: 2622, text: 'The design turn needs {value} m/s² of lateral acceleration, {pct} % of the rollover threshold, within the advisory {limitPct} %. The tightest turn at this speed is {tightest} m; this turn stays within the advisory limit up to {speed} km/h.' },
+  slideOver: { code: 2631, text: 'The design turn needs {value} m/s² sideways on {ground} (mu = {mu}), above the {level} limit of {limit} m/s²; {order}.' },
+  slideWithin: { code: 2632, text: 'The design turn needs {value} m/s² sideways on {ground} (mu = {mu}), within the advisory limit of {limit} m/s²; {order}.' },
+  innerWheelLight: { code: 2641, text: 'In the design turn the inner wheel keeps only {share} % of its static load ({inner} N; outer {outer} N): it is close to lifting.' },
+  innerWheelLifts: { code: 2643, text: 'In the design turn the inner wheel lifts: the load transfer leaves it {inner} N ({share} % of static; outer {outer} N).' },
+  wheelLoads: { code: 2642, text: 'In the design turn the outer wheel carries {outer} N and the inner {inner} N ({share} % of static); lateral forces {outerLat} N and {innerLat} N.' },
+  // Strap floor (22xx)
+  // Timber members (23xx)
+  // Steam bends (24xx)
+  // Lashings (25xx)
 } as const;
 
 export type MessageKey = keyof typeof MESSAGES;

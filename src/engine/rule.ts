@@ -19,6 +19,8 @@ export interface Rule {
   checks: string;
   /** A check can fail; a note only informs (advice), never fails. */
   kind: 'check' | 'note';
+  /** The most severe finding it can give, where that is not 'fail' (a check that only warns). */
+  worst?: 'warning';
   /** Names of the limits it reads from rules/limits under its id. */
   limits: readonly string[];
   run(ctx: RuleContext): Finding[];

@@ -1,0 +1,30 @@
+import { describe, expect, it } from 'vitest';
+import { G } from '../../src/units/units.ts';
+import { deepMerge, findingsOf, fractionHitting, readDemo, rulesData } from '../support/fixtures.ts';
+
+const RULE = 'turn.sliding';
+
+describe(RULE, () => {
+  it('passes at 20 km/h on a 15 m turn on turf', async () => {
+    const [f] = await findingsOf(RULE, readDemo('demo-two-crew'));
+    expect(f.severity).toBe('pass');
+    expect(f.limit).toBeCloseTo(0.7 * rulesData.grounds.turf.lateral_friction.value * G, 9);
+  });
+
+  it('fails when the turn needs more than the ground gives', async () => {
+    const [f] = await findingsOf(RULE, readDemo('teaching-flawed'));
+    expect(f.severity).toBe('fail');
+    expect(f.message).toContain('slides before it tips');
+  });
+
+  it('boundary: equal to the hard limit is within it', async () => {
+    const raw = deepMerge(readDemo('demo-two-crew'), { operation: { ground: 'packed-earth' } });
+    const [probe] = await findingsOf(RULE, raw);
+    const slide = rulesData.grounds['packed-earth'].lateral_friction.value * G;
+    const frac = fractionHitting(probe.value!, slide);
+    const [f] = await findingsOf(RULE, raw, { advisory_fraction: frac, hard_fraction: frac });
+    expect(f.severity).toBe('pass');
+    const [g] = await findingsOf(RULE, raw, { advisory_fraction: frac * 0.99, hard_fraction: frac * 0.99 });
+    expect(g.severity).toBe('fail');
+  });
+});

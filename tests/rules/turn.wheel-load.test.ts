@@ -1,0 +1,29 @@
+import { describe, expect, it } from 'vitest';
+import { findingsOf, readDemo } from '../support/fixtures.ts';
+
+const RULE = 'turn.wheel-load';
+
+describe(RULE, () => {
+  it('notes the wheel loads of the design turn', async () => {
+    const [f] = await findingsOf(RULE, readDemo('demo-two-crew'));
+    expect(f.severity).toBe('advice');
+    expect(f.value!).toBeGreaterThan(0.1);
+    expect(f.value!).toBeLessThan(1);
+  });
+
+  it('warns when the inner wheel lifts', async () => {
+    const [f] = await findingsOf(RULE, readDemo('teaching-flawed'));
+    expect(f.severity).toBe('warning');
+    expect(f.value!).toBeLessThan(0);
+    expect(f.message).toContain('lifts');
+  });
+
+  it('boundary: an inner share equal to the limit is a note, not a warning', async () => {
+    const raw = readDemo('demo-two-crew');
+    const [probe] = await findingsOf(RULE, raw);
+    const [f] = await findingsOf(RULE, raw, { least_inner_share: probe.value! });
+    expect(f.severity).toBe('advice');
+    const [g] = await findingsOf(RULE, raw, { least_inner_share: probe.value! + 1e-9 });
+    expect(g.severity).toBe('warning');
+  });
+});
