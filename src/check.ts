@@ -6,6 +6,7 @@ import { RULES } from './engine/registry.ts';
 import type { Rule } from './engine/rule.ts';
 import { runRules } from './engine/run-rules.ts';
 import { figures } from './figures.ts';
+import { collectLoads } from './loads/collect-loads.ts';
 import { severityRank, worstSeverity } from './findings/finding.ts';
 import type { CheckResult, SpecEntry } from './result/check-result.ts';
 import type { CheckedSpecification } from './spec/spec.types.ts';
@@ -25,6 +26,7 @@ export function checkSpecification(spec: CheckedSpecification, entries: SpecEntr
     findings: ordered,
     mass: { parts: analysis.mass.parts, rolling_mass_kg: analysis.mass.rolling.mass_kg, yoke_mass_kg: analysis.mass.yoke.mass_kg, total_mass_kg: analysis.mass.total.mass_kg },
     balance: { cases: analysis.loadCases },
+    loads: collectLoads(analysis),
     spec_as_checked: entries,
     sources: usedSources(spec, data, findings),
     cautions: [...CAUTIONS],

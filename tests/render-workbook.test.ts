@@ -42,11 +42,19 @@ function dataRows(ws: ExcelJS.Worksheet): ExcelJS.Row[] {
 describe('renderWorkbook', () => {
   const result = sampleResult();
 
-  it('writes the five sheets in order', async () => {
+  it('writes the six sheets in order', async () => {
     const wb = await readBack(result);
     expect(wb.worksheets.map((ws) => ws.name)).toEqual([
-      'Summary', 'Findings', 'Mass and balance', 'Spec as checked', 'Sources',
+      'Summary', 'Findings', 'Mass and balance', 'Loads', 'Spec as checked', 'Sources',
     ]);
+  });
+
+  it('lists every load on the Loads sheet', async () => {
+    const ws = sheet(await readBack(result), 'Loads');
+    const rows = dataRows(ws);
+    expect(rows).toHaveLength(result.loads.length);
+    expect(rows[0].getCell(5).value).toBe(result.loads[0].value);
+    expect(rows[0].getCell(3).value).toBe(result.loads[0].case);
   });
 
   it('puts the one-line caution at the top of every sheet', async () => {

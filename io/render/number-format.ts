@@ -15,6 +15,8 @@ const DECIMALS_BY_UNIT: Record<string, number> = {
   'km/h': 1,
   'm/s': 2,
   'm/s^2': 2,
+  'm/s²': 2,
+  'N/mm': 1,
   MPa: 2,
   kPa: 0,
   Pa: 0,

@@ -30,6 +30,8 @@ export function renderMarkdown(result: CheckResult): string {
     '### Load cases',
     loadCasesTable(result.balance.cases),
     ...result.balance.cases.flatMap(loadCaseWorking),
+    '## Loads',
+    loadsTable(result),
     `## ${SECTIONS.spec.title}`,
     specTable(result.spec_as_checked),
     `## ${SECTIONS.sources.title}`,
@@ -89,6 +91,12 @@ function figuresTable(result: CheckResult): string {
   ]);
   if (rows.length === 0) return 'No figures.';
   return table(['Figure', 'Value', 'Unit'], rows, ['l', 'r', 'l']);
+}
+
+function loadsTable(result: CheckResult): string {
+  if (result.loads.length === 0) return 'No loads.';
+  const rows = result.loads.map((l) => [esc(l.group), esc(l.item), esc(l.case), esc(l.quantity), formatNumber(l.value, l.unit)]);
+  return table(['Model', 'Part', 'Load case', 'Quantity', 'Value'], rows, ['l', 'l', 'l', 'l', 'r']);
 }
 
 function partsTable(result: CheckResult): string {

@@ -3,6 +3,7 @@ import type { CheckResult } from '../../src/result/check-result.ts';
 import { addSummarySheet } from './sheets/summary-sheet.ts';
 import { addFindingsSheet } from './sheets/findings-sheet.ts';
 import { addMassBalanceSheet } from './sheets/mass-balance-sheet.ts';
+import { addLoadsSheet } from './sheets/loads-sheet.ts';
 import { addSpecSheet } from './sheets/spec-sheet.ts';
 import { addSourcesSheet } from './sheets/sources-sheet.ts';
 
@@ -14,6 +15,7 @@ export async function renderWorkbook(result: CheckResult): Promise<Buffer> {
   addSummarySheet(wb, result);
   addFindingsSheet(wb, result);
   addMassBalanceSheet(wb, result);
+  addLoadsSheet(wb, result);
   addSpecSheet(wb, result);
   addSourcesSheet(wb, result);
   const bytes = await wb.xlsx.writeBuffer();

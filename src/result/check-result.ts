@@ -31,6 +31,19 @@ export interface LoadCaseResult {
   working: string;
 }
 
+/** One load the models computed, for the Loads sheet: what carries it, in which case. */
+export interface LoadEntry {
+  /** Family of the model: balance, turn, floor, member, lashing. */
+  group: string;
+  /** What carries the load, e.g. "outer wheel", "pole at the root". */
+  item: string;
+  /** Load case, e.g. "static", "bump", "design turn". */
+  case: string;
+  quantity: string;
+  value: number;
+  unit: string;
+}
+
 export interface SpecEntry {
   path: string;
   value: unknown;
@@ -48,6 +61,8 @@ export interface CheckResult {
   findings: Finding[];
   mass: { parts: PartMass[]; rolling_mass_kg: number; yoke_mass_kg: number; total_mass_kg: number };
   balance: { cases: LoadCaseResult[] };
+  /** Loads from every model, by part and case. */
+  loads: LoadEntry[];
   spec_as_checked: SpecEntry[];
   /** Every source cited by a limit, material value or finding. */
   sources: string[];

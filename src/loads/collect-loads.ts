@@ -1,0 +1,11 @@
+import type { Analysis } from '../engine/analysis.ts';
+import type { LoadEntry } from '../result/check-result.ts';
+import { balanceLoads } from './balance-loads.ts';
+import { turnLoads } from './turn-loads.ts';
+
+/** Each model family lists the loads it computed; the Loads sheet shows them all. */
+const SOURCES: ((a: Analysis) => LoadEntry[])[] = [balanceLoads, turnLoads];
+
+export function collectLoads(a: Analysis): LoadEntry[] {
+  return SOURCES.flatMap((f) => f(a));
+}
