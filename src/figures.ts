@@ -2,6 +2,8 @@ import type { Analysis } from './engine/analysis.ts';
 import type { Figure } from './result/check-result.ts';
 import { G, UNITS } from './units/units.ts';
 import { tightestYokeRadius } from './model/turn.ts';
+import { memberFigures } from './model/members/member-figures.ts';
+import { floorFigures } from './model/cable-net/floor-figures.ts';
 
 /** The named figures of a check; later families add theirs here. */
 export function figures(a: Analysis): Record<string, Figure> {
@@ -22,6 +24,8 @@ export function figures(a: Analysis): Record<string, Figure> {
     yoke_mass: { value: a.mass.yoke.mass_kg, unit: 'kg' },
     total_weight: { value: total.mass_kg * G, unit: 'N' },
     ...turnFigures(a),
+    ...memberFigures(a),
+    ...floorFigures(a),
   };
 }
 

@@ -68,7 +68,7 @@ const CASES: Case[] = [
   },
   {
     name: 'an unknown leather material',
-    text: edited(['material: rawhide\n  width_mm: 24', 'material: vinyl\n  width_mm: 24']),
+    text: edited(['material: rawhide\n  width_mm: 30', 'material: vinyl\n  width_mm: 30']),
     issues: [{ path: 'floor_straps.material', at: ['material: vinyl', 'vinyl'], says: ['unknown material "vinyl"', 'known materials:', 'rawhide'] }],
   },
   {
@@ -194,8 +194,8 @@ const CASES: Case[] = [
   },
   {
     name: 'a re-serialised YAML spec with a negative frame width',
-    text: changed((s) => (s.box.floor.frame.width_mm = -42), 'yaml'),
-    issues: [{ path: 'box.floor.frame.width_mm', at: ['width_mm: -42', '-42'], says: ['out of range', 'allowed: more than 0'] }],
+    text: changed((s) => (s.box.floor.frame.width_mm = -80), 'yaml'),
+    issues: [{ path: 'box.floor.frame.width_mm', at: ['width_mm: -80', '-80'], says: ['out of range', 'allowed: more than 0'] }],
   },
 ];
 

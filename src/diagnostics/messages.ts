@@ -60,9 +60,36 @@ export const MESSAGES = {
   innerWheelLifts: { code: 2643, text: 'In the design turn the inner wheel lifts: the load transfer leaves it {inner} N ({share} % of static; outer {outer} N).' },
   wheelLoads: { code: 2642, text: 'In the design turn the outer wheel carries {outer} N and the inner {inner} N ({share} % of static); lateral forces {outerLat} N and {innerLat} N.' },
   // Strap floor (22xx)
+  floorTensionOver: { code: 2201, text: 'The largest strap tension in "{case}" is {tension} N, a stress of {value} MPa at {where}: {pct} % of the design strength {strength} MPa; the {level} limit is {limitPct} %.' },
+  floorTensionWithin: { code: 2202, text: 'The largest strap tension in "{case}" is {tension} N, a stress of {value} MPa at {where}: {pct} % of the design strength {strength} MPa.' },
+  floorNotSolved: { code: 2203, text: 'The floor model did not settle in "{case}" ({reason}), so its tensions and sags cannot be trusted; see floor.convergence.' },
+  floorSagOver: { code: 2211, text: '{role} sags the floor {value} mm standing, more than the advisory {limit} mm.' },
+  floorSagWithin: { code: 2212, text: '{role} sags the floor {value} mm standing, within the advisory {limit} mm.' },
+  floorStrikes: { code: 2213, text: 'The floor sags {value} mm over the {part} in "{case}" and reaches it: the {part}\'s top is {limit} mm below the floor top.' },
+  floorClears: { code: 2214, text: 'The floor sags at most {value} mm over the {part} ({case}), clear of its top {limit} mm below the floor top.' },
+  floorConverged: { code: 2221, text: 'The floor model settled in "{case}" in {iterations} Newton steps: largest out-of-balance force {value} N, tolerance {limit} N.' },
+  floorNotConverged: { code: 2222, text: 'The floor model did not settle in "{case}": after {iterations} Newton steps the largest out-of-balance force is {value} N against the tolerance {limit} N ({reason}).' },
+  floorStiffnessNote: { code: 2231, text: 'Under {role} ({load} N standing) the floor sags {sag} mm: secant stiffness {value} N/mm, tangent stiffness {tangent} N/mm.' },
   // Timber members (23xx)
+  memberWithin: { code: 2301, text: '{part}, {mode}: {value} {unit}, within the design capacity {limit} {unit}; governing case "{case}" ({basis}), utilisation {util}.' },
+  memberOver: { code: 2302, text: '{part}, {mode}: {value} {unit} exceeds the design capacity {limit} {unit} in "{case}" ({basis}); utilisation {util}.' },
+  memberNotChecked: { code: 2303, text: '{part}: not checked: {reason}.' },
   // Steam bends (24xx)
+  bendWithin: { code: 2401, text: '{part}: bend radius over thickness {value} ({radius} mm / {thickness} mm) is not below the {species} limit {limit} {strap}.' },
+  bendTight: { code: 2402, text: '{part}: bend radius over thickness {value} ({radius} mm / {thickness} mm) is below the {species} limit {limit} {strap}: expect the outer face to break or the inner face to buckle.' },
+  bendNoData: { code: 2403, text: '{part}: no steam-bending figure is held for {species} {strap}; the ratio {value} ({radius} mm / {thickness} mm) cannot be confirmed.' },
   // Lashings (25xx)
+  lashingTensionWithin: { code: 2501, text: 'The {joint} lashing carries at most {value} N ({case}); its tensile capacity at the {state} strength is {limit} N.' },
+  lashingTensionOver: { code: 2502, text: 'The {joint} lashing would carry {value} N ({case}), more than its tensile capacity of {limit} N at the {state} strength with a safety factor of {sf}.' },
+  lashingDemandUnknown: { code: 2503, text: 'The force on the {joint} lashing could not be found: {why}. It is not checked.' },
+  lashingSlipWithin: { code: 2511, text: 'The {joint} lashing clamps with {limit} N of friction against at most {value} N of sliding force ({case}), with the builder\'s estimated pretension of {pre} N per wrap.' },
+  lashingSlipOver: { code: 2512, text: 'The {joint} joint may slip: {value} N of sliding force ({case}) against the {level} limit of {limit} N of clamp friction, with the builder\'s estimated pretension of {pre} N per wrap.' },
+  anchorageWithin: { code: 2521, text: 'Each end of the {joint} lashing needs {value} full turns round a member before it is tucked; {limit} are given.' },
+  anchorageShort: { code: 2522, text: 'Each end of the {joint} lashing needs {value} full turns round a member before it is tucked to hold the strap\'s breaking pull; only {limit} are given.' },
+  anchorageNote: { code: 2523, text: 'Each end of the {joint} lashing needs at least {value} full turns round a member before it is tucked to hold the strap\'s breaking pull of {pull} N; give anchor_turns to have it checked.' },
+  lashingPresent: { code: 2531, text: 'The {joint} joint is lashed: {wraps} wraps of {material}, {size} mm.' },
+  lashingMissing: { code: 2532, text: 'The {joint} joint is not lashed, but {why}; it must pass {value} ({case}).' },
+  lashingAdvised: { code: 2533, text: 'No lashing is given for the {joint} joint; {why}. Whatever holds it, lashing or joinery, must pass {value} ({case}); this check cannot see joinery.' },
 } as const;
 
 export type MessageKey = keyof typeof MESSAGES;

@@ -7,6 +7,21 @@ import { poleReach } from '../rules/turn/pole-reach.ts';
 import { rollover } from '../rules/turn/rollover.ts';
 import { sliding } from '../rules/turn/sliding.ts';
 import { wheelLoad } from '../rules/turn/wheel-load.ts';
+import { floorConvergence } from '../rules/floor/convergence.ts';
+import { floorSag } from '../rules/floor/sag.ts';
+import { floorStiffness } from '../rules/floor/stiffness.ts';
+import { strapTension } from '../rules/floor/strap-tension.ts';
+import { axleMember } from '../rules/member/axle.ts';
+import { poleMember } from '../rules/member/pole.ts';
+import { yokeMember } from '../rules/member/yoke.ts';
+import { spokeMember } from '../rules/member/spoke.ts';
+import { felloeMember } from '../rules/member/felloe.ts';
+import { frameRailMember } from '../rules/member/frame-rail.ts';
+import { bendRadius } from '../rules/bend/radius.ts';
+import { lashingTension } from '../rules/lashing/tension.ts';
+import { lashingSlip } from '../rules/lashing/slip.ts';
+import { lashingAnchorage } from '../rules/lashing/anchorage.ts';
+import { lashingMissing } from '../rules/lashing/missing.ts';
 
 /** Every rule, in the order findings are reported. */
 export const RULES: readonly Rule[] = [
@@ -18,4 +33,19 @@ export const RULES: readonly Rule[] = [
   rollover,
   sliding,
   wheelLoad,
+  floorConvergence,
+  strapTension,
+  floorSag,
+  floorStiffness,
+  axleMember,
+  poleMember,
+  yokeMember,
+  spokeMember,
+  felloeMember,
+  frameRailMember,
+  bendRadius,
+  lashingMissing,
+  lashingTension,
+  lashingSlip,
+  lashingAnchorage,
 ];

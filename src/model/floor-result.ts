@@ -21,6 +21,8 @@ export interface RailPull {
   lineLoad_N_per_mm: number;
   /** Sum of the strap pulls on this rail, N. */
   total_N: number;
+  /** Each strap end's pull, at its distance along the rail from the rail's first corner, mm and N. */
+  pulls: { at_mm: number; force_N: number }[];
 }
 
 export interface FloorResult {

@@ -6,6 +6,10 @@
  */
 export type Species = string;
 /**
+ * Grade of the stock for this part: selected (hand-selected, straight-grained, riven or clear) or sawn (sawn with small defects). Default: stock.grade.
+ */
+export type Grade = 'selected' | 'sawn';
+/**
  * A leather or rawhide id from rules/materials/leathers.yaml.
  */
 export type Leather = string;
@@ -48,6 +52,19 @@ export interface BuildSpecification {
        * How close to the frame a crew member's centre of mass can stand; sets the crew envelope. Default 150 (design note, section 3).
        */
       usable_margin_mm?: number | string;
+      /**
+       * The rectangle, centred on each crew member, over which their weight bears on the straps (both feet and the stance between them).
+       */
+      foot_patch?: {
+        /**
+         * Front to back. Default 300 (mechanics note, section 5).
+         */
+        length_mm?: number | string;
+        /**
+         * Side to side. Default 350 (mechanics note, section 5).
+         */
+        width_mm?: number | string;
+      };
       frame: {
         species: Species;
         /**
@@ -62,6 +79,15 @@ export interface BuildSpecification {
          * Radius, on the rail's centre line, of the two front corners of a frame whose front rail is steam-bent round them; the rear corners are jointed. Omit for a frame with four jointed corners.
          */
         bend_radius_mm?: number | string;
+        grade?: Grade;
+        /**
+         * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+         */
+        grain_slope_deg?: number | string;
+        /**
+         * True when the front rail is bent against a supporting strap (a steel strap along the outer face, with end stops); selects which of the species’ two steam-bending limits applies. Default true.
+         */
+        bend_strap?: boolean;
       };
     };
     /**
@@ -103,6 +129,11 @@ export interface BuildSpecification {
      * Measured mass of the axle; overrides the computed mass.
      */
     mass_kg?: number | string;
+    grade?: Grade;
+    /**
+     * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+     */
+    grain_slope_deg?: number | string;
   };
   wheels: {
     /**
@@ -139,6 +170,11 @@ export interface BuildSpecification {
        * A length in the unit of its key; a string with another unit is converted.
        */
       thickness_mm: number | string;
+      grade?: Grade;
+      /**
+       * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+       */
+      grain_slope_deg?: number | string;
     };
     felloe: {
       species: Species;
@@ -155,6 +191,15 @@ export interface BuildSpecification {
        * Inner radius of a steam-bent felloe; omit for sawn segments.
        */
       bend_radius_mm?: number | string;
+      grade?: Grade;
+      /**
+       * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+       */
+      grain_slope_deg?: number | string;
+      /**
+       * True when a felloe is bent against a supporting strap (a steel strap along the outer face, with end stops); selects which of the species’ two steam-bending limits applies. Default true.
+       */
+      bend_strap?: boolean;
     };
     tyre?: {
       material: Leather;
@@ -206,6 +251,15 @@ export interface BuildSpecification {
      * Measured mass of the pole; overrides the computed mass.
      */
     mass_kg?: number | string;
+    grade?: Grade;
+    /**
+     * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+     */
+    grain_slope_deg?: number | string;
+    /**
+     * True when the pole is bent against a supporting strap (a steel strap along the outer face, with end stops); selects which of the species’ two steam-bending limits applies. Default true.
+     */
+    bend_strap?: boolean;
   };
   yoke: {
     species: Species;
@@ -229,6 +283,11 @@ export interface BuildSpecification {
      * Measured mass of the yoke; overrides the computed mass.
      */
     mass_kg?: number | string;
+    grade?: Grade;
+    /**
+     * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+     */
+    grain_slope_deg?: number | string;
   };
   floor_straps: {
     material: Leather;
@@ -269,6 +328,10 @@ export interface BuildSpecification {
      * Pull on each wrap as laid; the builder's estimate. Default 100 (from memory).
      */
     pretension_N?: number | string;
+    /**
+     * Full turns each end of the strap makes round a member before it is tucked; checked against the capstan equation. Omit to be told how many are needed.
+     */
+    anchor_turns?: number;
   }[];
   /**
    * @minItems 1
@@ -338,8 +401,16 @@ export interface BuildSpecification {
      * Ground type from rules/grounds.yaml; sets rolling resistance and friction. Default turf.
      */
     ground?: string;
+    /**
+     * True when the chariot may be driven wet (rain, fords, wet grass): the lashings are checked at the leather's wet strength. Default false.
+     */
+    wet?: boolean;
   };
   stock?: {
+    /**
+     * Grade of the stock for this part: selected (hand-selected, straight-grained, riven or clear) or sawn (sawn with small defects). Default: stock.grade.
+     */
+    grade?: 'selected' | 'sawn';
     /**
      * A coordinate in the unit of its key; a string with another unit is converted.
      */
@@ -385,6 +456,10 @@ export interface BuildSpecification {
  */
 export type CheckedSpecies = string;
 /**
+ * Grade of the stock for this part: selected (hand-selected, straight-grained, riven or clear) or sawn (sawn with small defects). Default: stock.grade.
+ */
+export type CheckedGrade = 'selected' | 'sawn';
+/**
  * A leather or rawhide id from rules/materials/leathers.yaml.
  */
 export type CheckedLeather = string;
@@ -427,6 +502,19 @@ export interface CheckedSpecification {
        * How close to the frame a crew member's centre of mass can stand; sets the crew envelope. Default 150 (design note, section 3).
        */
       usable_margin_mm: number;
+      /**
+       * The rectangle, centred on each crew member, over which their weight bears on the straps (both feet and the stance between them).
+       */
+      foot_patch: {
+        /**
+         * Front to back. Default 300 (mechanics note, section 5).
+         */
+        length_mm: number;
+        /**
+         * Side to side. Default 350 (mechanics note, section 5).
+         */
+        width_mm: number;
+      };
       frame: {
         species: CheckedSpecies;
         /**
@@ -441,6 +529,15 @@ export interface CheckedSpecification {
          * Radius, on the rail's centre line, of the two front corners of a frame whose front rail is steam-bent round them; the rear corners are jointed. Omit for a frame with four jointed corners.
          */
         bend_radius_mm?: number;
+        grade?: CheckedGrade;
+        /**
+         * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+         */
+        grain_slope_deg: number;
+        /**
+         * True when the front rail is bent against a supporting strap (a steel strap along the outer face, with end stops); selects which of the species’ two steam-bending limits applies. Default true.
+         */
+        bend_strap: boolean;
       };
     };
     /**
@@ -482,6 +579,11 @@ export interface CheckedSpecification {
      * Measured mass of the axle; overrides the computed mass.
      */
     mass_kg?: number;
+    grade?: CheckedGrade;
+    /**
+     * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+     */
+    grain_slope_deg: number;
   };
   wheels: {
     /**
@@ -518,6 +620,11 @@ export interface CheckedSpecification {
        * A length in the unit of its key; a string with another unit is converted.
        */
       thickness_mm: number;
+      grade?: CheckedGrade;
+      /**
+       * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+       */
+      grain_slope_deg: number;
     };
     felloe: {
       species: CheckedSpecies;
@@ -534,6 +641,15 @@ export interface CheckedSpecification {
        * Inner radius of a steam-bent felloe; omit for sawn segments.
        */
       bend_radius_mm?: number;
+      grade?: CheckedGrade;
+      /**
+       * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+       */
+      grain_slope_deg: number;
+      /**
+       * True when a felloe is bent against a supporting strap (a steel strap along the outer face, with end stops); selects which of the species’ two steam-bending limits applies. Default true.
+       */
+      bend_strap: boolean;
     };
     tyre?: {
       material: CheckedLeather;
@@ -585,6 +701,15 @@ export interface CheckedSpecification {
      * Measured mass of the pole; overrides the computed mass.
      */
     mass_kg?: number;
+    grade?: CheckedGrade;
+    /**
+     * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+     */
+    grain_slope_deg: number;
+    /**
+     * True when the pole is bent against a supporting strap (a steel strap along the outer face, with end stops); selects which of the species’ two steam-bending limits applies. Default true.
+     */
+    bend_strap: boolean;
   };
   yoke: {
     species: CheckedSpecies;
@@ -608,6 +733,11 @@ export interface CheckedSpecification {
      * Measured mass of the yoke; overrides the computed mass.
      */
     mass_kg?: number;
+    grade?: CheckedGrade;
+    /**
+     * Slope of grain: the angle between the grain and the length of the part, in degrees (a slope of 1 in 10 is 5.7). Reduces strength and stiffness by Hankinson’s formula. Default 0 (straight grain).
+     */
+    grain_slope_deg: number;
   };
   floor_straps: {
     material: CheckedLeather;
@@ -648,6 +778,10 @@ export interface CheckedSpecification {
      * Pull on each wrap as laid; the builder's estimate. Default 100 (from memory).
      */
     pretension_N: number;
+    /**
+     * Full turns each end of the strap makes round a member before it is tucked; checked against the capstan equation. Omit to be told how many are needed.
+     */
+    anchor_turns?: number;
   }[];
   /**
    * @minItems 1
@@ -717,8 +851,16 @@ export interface CheckedSpecification {
      * Ground type from rules/grounds.yaml; sets rolling resistance and friction. Default turf.
      */
     ground: string;
+    /**
+     * True when the chariot may be driven wet (rain, fords, wet grass): the lashings are checked at the leather's wet strength. Default false.
+     */
+    wet: boolean;
   };
   stock: {
+    /**
+     * Grade of the stock for this part: selected (hand-selected, straight-grained, riven or clear) or sawn (sawn with small defects). Default: stock.grade.
+     */
+    grade: 'selected' | 'sawn';
     /**
      * A coordinate in the unit of its key; a string with another unit is converted.
      */

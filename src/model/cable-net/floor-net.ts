@@ -1,0 +1,65 @@
+import type { RulesData } from '../../data/rules-data.ts';
+import type { CheckedSpecification } from '../../spec/spec.types.ts';
+import { buildNet, type CableNet, type StrapLine } from './net.ts';
+import { FloorOutline } from './outline.ts';
+
+// The strap floor of a specification as a cable net. Straps lie at the pitch,
+// centred in the frame, as many as fit (the same count the mass model uses).
+// A two-way weave has a node at every crossing; a one-way weave has nodes
+// along each strap where the crossing straps would be (the virtual
+// cross-spacing), so both weaves share one layout.
+
+export interface FloorNet {
+  net: CableNet;
+  outline: FloorOutline;
+  /** Axial stiffness of one strap, N. */
+  EA: number;
+  pretension: number;
+  pitch: number;
+  /** Positions of the front-to-back straps (y) and side-to-side straps (x), real or virtual, mm. */
+  fbY: number[];
+  ssX: number[];
+}
+
+/** Positions of `floor(span / pitch)` lines at the pitch, centred on the span. */
+export function strapPositions(span: number, pitch: number, from = 0): number[] {
+  const n = Math.floor(span / pitch);
+  return Array.from({ length: n }, (_, i) => from + span / 2 + (i - (n - 1) / 2) * pitch);
+}
+
+/** Nodes the net will have, before building it (crossings, less none for rounded corners). */
+export function floorNodeCount(spec: CheckedSpecification, refine = 1): number {
+  const { depth_mm, width_mm } = spec.box.floor;
+  const p = spec.floor_straps.pitch_mm;
+  const grid = Math.floor(width_mm / p) * Math.floor(depth_mm / p);
+  return grid * (spec.floor_straps.weave === 'two-way' ? 2 * refine - 1 : refine);
+}
+
+export function floorNet(spec: CheckedSpecification, data: RulesData, refine = 1): FloorNet {
+  const { floor } = spec.box;
+  const s = spec.floor_straps;
+  const outline = new FloorOutline(floor.depth_mm, floor.width_mm, floor.frame.bend_radius_mm ?? 0, floor.frame.width_mm);
+  const EA = data.leathers[s.material].modulus_MPa.value * s.width_mm * s.thickness_mm;
+  const fbY = strapPositions(floor.width_mm, s.pitch_mm, -floor.width_mm / 2);
+  const ssX = strapPositions(floor.depth_mm, s.pitch_mm);
+  const woven = s.weave === 'two-way';
+  const key = (i: number, j: number) => (woven ? `${i},${j}` : undefined);
+  const common = { EA, pretension: s.pretension_N, refine };
+  const lines: StrapLine[] = [];
+  if (s.weave !== 'side-to-side') {
+    fbY.forEach((y, j) => {
+      const end = outline.frontAt(y);
+      const stations = ssX.flatMap((x, i) => (outline.inside(x, y) ? [{ s: x, key: key(i, j) }] : []));
+      lines.push({ ...common, family: 'front-to-back', number: j + 1, of: fbY.length, cross: y, start: 0, end, rails: ['rear', 'front'], stations });
+    });
+  }
+  if (s.weave !== 'front-to-back') {
+    ssX.forEach((x, i) => {
+      const h = outline.halfWidthAt(x);
+      const stations = fbY.flatMap((y, j) => (outline.inside(x, y) ? [{ s: y, key: key(i, j) }] : []));
+      // An end on a rounded front corner still pulls sideways: it counts with the side rail it pulls towards.
+      lines.push({ ...common, family: 'side-to-side', number: i + 1, of: ssX.length, cross: x, start: -h, end: h, rails: ['right', 'left'], stations });
+    });
+  }
+  return { net: buildNet(lines), outline, EA, pretension: s.pretension_N, pitch: s.pitch_mm, fbY, ssX };
+}

@@ -1,0 +1,51 @@
+import type { RulesData } from '../../data/rules-data.ts';
+import { characteristicValue, type CharacteristicValue, type TimberProperty } from './characteristic.ts';
+import { kMod, type Duration } from './load-duration.ts';
+import { strengthFactor } from './strength-factors.ts';
+import type { TimberPart } from './timber-part.ts';
+
+// Design strength of one part in one property (mechanics note, section 1):
+//   f_d = f_k · k_select · k_mod / gamma_M
+// The characteristic part is found once; k_mod follows each load case.
+
+export interface DesignValue {
+  duration: Duration;
+  kMod: number;
+  kModSource: string;
+  /** MPa. */
+  value: number;
+  line: string;
+}
+
+export interface TimberStrength {
+  characteristic: CharacteristicValue;
+  working: string[];
+  sources: string[];
+  design(d: Duration): DesignValue;
+}
+
+const f = (v: number, d = 2) => v.toFixed(d);
+
+/** Strength of a part; `extraGrainDeg` adds grain run-out the part's shape makes (a sawn felloe). */
+export function timberStrength(data: RulesData, part: TimberPart, property: TimberProperty, moisturePct: number, extraGrainDeg = 0): TimberStrength {
+  const grain = Math.min(90, part.grainSlopeDeg + extraGrainDeg);
+  const ch = characteristicValue(data, part.species, property, moisturePct, grain);
+  const sel = strengthFactor(data, part.grade === 'selected' ? 'k_select_selected' : 'k_select_sawn');
+  const gamma = strengthFactor(data, 'gamma_M');
+  const sources = [...ch.sources, sel.source, gamma.source];
+  return {
+    characteristic: ch,
+    working: [...ch.working, `grade ${part.grade} (${part.gradeFrom}): k_select = ${sel.value}; γ_M = ${gamma.value}`],
+    sources,
+    design(d) {
+      const k = kMod(data, d);
+      const value = (ch.fk * sel.value * k.value) / gamma.value;
+      return { duration: d, kMod: k.value, kModSource: k.source, value, line: `f_d = f_k·k_select·k_mod/γ_M = ${f(ch.fk)} × ${sel.value} × ${k.value} / ${gamma.value} = ${f(value)} MPa` };
+    },
+  };
+}
+
+/** 5th-percentile modulus of elasticity at the moisture content and grain angle, MPa (for buckling). */
+export function stiffness05(data: RulesData, part: TimberPart, moisturePct: number): CharacteristicValue {
+  return characteristicValue(data, part.species, 'stiffness', moisturePct, Math.min(90, part.grainSlopeDeg));
+}

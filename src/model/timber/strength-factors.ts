@@ -1,0 +1,39 @@
+import type { Limit, RulesData } from '../../data/rules-data.ts';
+
+// The design-strength factors shared by every member rule, from the
+// `timber-strength` block of rules/limits/member.yaml (not a rule of its own).
+
+export type StrengthFactorName =
+  | 'fifth_percentile_z'
+  | 'cov_mor'
+  | 'cov_moe'
+  | 'cov_compression_parallel'
+  | 'cov_shear'
+  | 'k_select_selected'
+  | 'k_select_sawn'
+  | 'k_mod_permanent'
+  | 'k_mod_long'
+  | 'k_mod_medium'
+  | 'k_mod_short'
+  | 'k_mod_instantaneous'
+  | 'gamma_M'
+  | 'intersection_moisture_pct'
+  | 'min_moisture_credit_pct'
+  | 'hankinson_n_bending'
+  | 'hankinson_ratio_bending'
+  | 'hankinson_n_compression'
+  | 'hankinson_n_modulus'
+  | 'hankinson_ratio_modulus';
+
+const BLOCK = 'timber-strength';
+
+export function strengthFactor(data: RulesData, name: StrengthFactorName): Limit {
+  const f = data.limits[BLOCK]?.[name];
+  if (!f) throw new Error(`rules data has no ${BLOCK}.${name}; add it to rules/limits/member.yaml`);
+  return f;
+}
+
+/** M_p for a species: its own entry where the data holds one, else the general value. */
+export function intersectionMoisture(data: RulesData, species: string): Limit {
+  return data.limits[BLOCK]?.[`intersection_moisture_pct_${species}`] ?? strengthFactor(data, 'intersection_moisture_pct');
+}

@@ -1,0 +1,37 @@
+import { describe, expect, it } from 'vitest';
+import { Analysis } from '../../src/engine/analysis.ts';
+import { deepMerge, findingsOf, prepared, readDemo, rulesData } from '../support/fixtures.ts';
+
+const RULE = 'floor.stiffness';
+
+describe(RULE, () => {
+  it('notes the secant and tangent stiffness under each crew member standing', async () => {
+    for (const demo of ['demo-two-crew', 'demo-rear-axle', 'teaching-flawed']) {
+      const r = readDemo(demo);
+      const found = await findingsOf(RULE, r);
+      const m = new Analysis(prepared(r), rulesData).floorStatic;
+      expect(found.map((f) => f.severity)).toEqual(m.crew.map(() => 'advice'));
+      found.forEach((f, i) => {
+        const c = m.crew[i];
+        expect(f.value).toBe(c.secantStiffness_N_per_mm);
+        expect(f.value).toBeCloseTo(c.load_N / c.sag_mm, 12);
+        expect(f.message).toContain(`tangent stiffness ${c.tangentStiffness_N_per_mm.toFixed(1)} N/mm`);
+        // A cable net stiffens as it sags: the tangent is above the secant.
+        expect(c.tangentStiffness_N_per_mm).toBeGreaterThan(c.secantStiffness_N_per_mm);
+      });
+    }
+  });
+
+  it('a stiffer floor (thicker straps) is stiffer under the same person', async () => {
+    // 24 mm rawhide straps at 34 mm pitch and 160 N, 4 mm thick against 8 mm (demo data).
+    const straps = (thickness_mm: number) => deepMerge(readDemo('demo-two-crew'), { floor_straps: { width_mm: 24, thickness_mm, pitch_mm: 34, pretension_N: 160 } });
+    const thin = (await findingsOf(RULE, straps(4)))[0].value!;
+    const thick = (await findingsOf(RULE, straps(8)))[0].value!;
+    expect(thick).toBeGreaterThan(thin);
+  });
+
+  it('says so, as advice, when the floor was not solved', async () => {
+    const found = await findingsOf(RULE, deepMerge(readDemo('demo-two-crew'), { floor_straps: { width_mm: 4, thickness_mm: 1, pitch_mm: 5 } }));
+    expect(found.map((f) => [f.severity, f.code])).toEqual([['advice', 2203]]);
+  });
+});

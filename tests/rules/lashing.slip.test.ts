@@ -1,0 +1,51 @@
+import { describe, expect, it } from 'vitest';
+import { deepMerge, findingsOf, fractionHitting, readDemo } from '../support/fixtures.ts';
+
+const RULE = 'lashing.slip';
+const demo = readDemo('demo-two-crew');
+const axleToFloor = (wraps: number, pretension_N: number) => ({ lashings: [{ joint: 'axle-to-floor', material: 'rawhide', width_mm: 12, thickness_mm: 3, wraps, pretension_N }] });
+
+describe(RULE, () => {
+  it('passes with enough wraps, tight enough', async () => {
+    const [f] = await findingsOf(RULE, deepMerge(demo, axleToFloor(20, 150)));
+    // 0.36 × 2 × 20 × 150 = 2160 N of clamp friction (hand calculation); the advisory limit 0.8 of it, 1728 N
+    expect(f.limit).toBeCloseTo(1728, 9);
+    expect(f.message).toContain('2160 N of friction');
+    expect(f.severity).toBe('pass');
+    expect(f.message).toContain("builder's estimated pretension of 150 N");
+  });
+
+  it('fails where the box and crew can slide on the bearings in a hard stop', async () => {
+    const [f] = await findingsOf(RULE, deepMerge(demo, axleToFloor(8, 100)));
+    // 0.36 × 2 × 8 × 100 = 576 N against the box's braking with the stopping shock, about 1000 N
+    expect(f.limit).toBeCloseTo(576, 9);
+    expect(f.severity).toBe('fail');
+    expect(f.working).toContain('braking');
+  });
+
+  it('warns between the advisory fraction and the whole slip capacity', async () => {
+    const [f] = await findingsOf(RULE, deepMerge(demo, axleToFloor(8, 100)));
+    const mu = f.value! / (0.9 * 2 * 8 * 100); // the force is then 0.9 of the capacity
+    const [w] = await findingsOf(RULE, deepMerge(demo, axleToFloor(8, 100)), { friction_wood_on_wood: mu });
+    expect(w.severity).toBe('warning');
+  });
+
+  it('boundary: a force equal to the slip capacity, or to the advisory limit, is within it', async () => {
+    const raw = deepMerge(demo, axleToFloor(8, 100));
+    const [f] = await findingsOf(RULE, raw);
+    const mu = fractionHitting(f.value!, 2 * 8 * 100);
+    const [at] = await findingsOf(RULE, raw, { friction_wood_on_wood: mu, advisory_fraction: 1 });
+    expect(at.limit).toBe(at.value);
+    expect(at.severity).toBe('pass');
+    const [over] = await findingsOf(RULE, raw, { friction_wood_on_wood: mu * 0.999999, advisory_fraction: 1 });
+    expect(over.severity).toBe('fail');
+
+    const big = 2; // a clamp twice the force: then the advisory fraction decides
+    const [ok] = await findingsOf(RULE, raw, { friction_wood_on_wood: big });
+    const adv = fractionHitting(ok.value!, big * 2 * 8 * 100);
+    const [atAdv] = await findingsOf(RULE, raw, { friction_wood_on_wood: big, advisory_fraction: adv });
+    expect(atAdv.severity).toBe('pass');
+    const [overAdv] = await findingsOf(RULE, raw, { friction_wood_on_wood: big, advisory_fraction: adv * 0.999999 });
+    expect(overAdv.severity).toBe('warning');
+  });
+});
