@@ -57,7 +57,7 @@ describe(RULE, () => {
     // The uniform load of the same total, w = ΣP/L = 18 600 / 1020 N/mm, for comparison:
     // w·L²/8 = 18 600 × 1020 / 8 = 2 371 500 N·mm.
     expect(f.working).toContain('strap pretension alone [permanent]: each strap end pulls T_0 = 600 N on its rail (pitch 32 mm)');
-    expect(f.working).toContain('front rail: 31 strap ends, ΣP = 18600 N (largest 600.0 N); M_max = max over x of [R_A·x − Σ P_i·(x − a_i)] = 2439.0 N·m at 510 mm (uniform-load bound w·L²/8 with w = ΣP/L: 2371.5 N·m)');
+    expect(f.working).toContain('front rail: 31 strap ends, ΣP = 18600 N (largest 600.0 N); M_max = max over x of [R_A·x − Σ P_i·(x − a_i)] = 2439.0 N·m at 510 mm (for comparison, a uniform load w = ΣP/L gives w·L²/8 = 2371.5 N·m)');
   });
 
   it('fails slender rails', async () => {

@@ -45,7 +45,7 @@ export const frameRailMember: Rule = {
         const total = pulls.reduce((sum, p) => sum + p.force_N, 0);
         const peak = pulls.reduce((m, p) => Math.max(m, p.force_N), 0);
         const { M, at } = pointLoadsMaxMoment(rail.span_mm, pulls.map((p) => ({ at: p.at_mm, P: p.force_N })));
-        checks.push({ memberCase: c.info, mode: `${rail.rail} rail`, demand: M / S.W, capacity: fm.value, basis: kModBasis(fm.kMod, c.info.duration), sources: [fm.kModSource], line: `${pulls.length} strap ends, ΣP = ${f(total, 0)} N (largest ${f(peak, 1)} N); M_max = max over x of [R_A·x − Σ P_i·(x − a_i)] = ${f(M / 1000, 1)} N·m at ${f(at, 0)} mm (uniform-load bound w·L²/8 with w = ΣP/L: ${f((total * rail.span_mm) / 8 / 1000, 1)} N·m); σ = M/W = ${f(M / S.W)} MPa; ${fm.line}` });
+        checks.push({ memberCase: c.info, mode: `${rail.rail} rail`, demand: M / S.W, capacity: fm.value, basis: kModBasis(fm.kMod, c.info.duration), sources: [fm.kModSource], line: `${pulls.length} strap ends, ΣP = ${f(total, 0)} N (largest ${f(peak, 1)} N); M_max = max over x of [R_A·x − Σ P_i·(x − a_i)] = ${f(M / 1000, 1)} N·m at ${f(at, 0)} mm (for comparison, a uniform load w = ΣP/L gives w·L²/8 = ${f((total * rail.span_mm) / 8 / 1000, 1)} N·m); σ = M/W = ${f(M / S.W)} MPa; ${fm.line}` });
       }
     }
     if (checks.length === 0) return [];
