@@ -1,6 +1,7 @@
 import { parseArgs } from 'node:util';
 import { checkCommand } from './commands/check.ts';
 import { rulesCommand } from './commands/rules.ts';
+import { stockCommand } from './commands/stock.ts';
 import { EXIT, type Console } from './console.ts';
 
 const USAGE = `axletree: design-rule checks for replica chariots
@@ -11,6 +12,9 @@ usage:
       HTML) and result.json into DIR (default axletree-out/<spec name>/)
   axletree rules [--json]
       list the rules with their limits and sources
+  axletree stock <instance.json> [--json]
+      plan the cutting of stock lengths into pieces with saw kerf, least
+      cost (or fewest stock pieces where no price is given)
   axletree help
 `;
 
@@ -43,8 +47,14 @@ export async function run(argv: string[], con: Console): Promise<number> {
       return checkCommand(rest[0], { out: values.out, json: values.json }, con);
     case 'rules':
       return rulesCommand({ json: values.json }, con);
+    case 'stock':
+      if (rest.length !== 1) {
+        con.err(`axletree stock: give exactly one instance file (got ${rest.length}).\n\n${USAGE}`);
+        return EXIT.badInput;
+      }
+      return stockCommand(rest[0], { json: values.json }, con);
     default:
-      con.err(`axletree: unknown command "${command}"; commands: check, rules, help.\n\n${USAGE}`);
+      con.err(`axletree: unknown command "${command}"; commands: check, rules, stock, help.\n\n${USAGE}`);
       return EXIT.badInput;
   }
 }

@@ -5,8 +5,16 @@ import { ensureNotSame, writeFileAtomic } from './atomic-write.ts';
 import { renderHtml } from './render/report-html.ts';
 import { renderMarkdown } from './render/report-md.ts';
 import { renderWorkbook } from './render/workbook.ts';
+import { SETTING_OUT_SVG_FILE } from './render/report-figures.ts';
 
-export const OUTPUT_FILES = { workbook: 'result.xlsx', markdown: 'report.md', html: 'report.html', json: 'result.json' } as const;
+export const OUTPUT_FILES = {
+  workbook: 'result.xlsx',
+  markdown: 'report.md',
+  html: 'report.html',
+  json: 'result.json',
+  /** The wheel setting-out drawing that report.md links to; report.html holds it inline. */
+  settingOut: SETTING_OUT_SVG_FILE,
+} as const;
 
 export function resultJson(result: CheckResult): string {
   return JSON.stringify(result, null, 2) + '\n';
@@ -19,6 +27,7 @@ export async function writeOutputs(result: CheckResult, dir: string, inputPath: 
     [OUTPUT_FILES.markdown, renderMarkdown(result)],
     [OUTPUT_FILES.html, renderHtml(result)],
     [OUTPUT_FILES.json, resultJson(result)],
+    [OUTPUT_FILES.settingOut, `${result.cutting.setting_out.svg.trim()}\n`],
   ];
   const paths = files.map(([name]) => join(dir, name));
   for (const p of paths) ensureNotSame(inputPath, p);

@@ -10,11 +10,16 @@ import { collectLoads } from './loads/collect-loads.ts';
 import { severityRank, worstSeverity } from './findings/finding.ts';
 import type { CheckResult, SpecEntry } from './result/check-result.ts';
 import type { CheckedSpecification } from './spec/spec.types.ts';
+import type { LpSolver } from './stock/cutting-types.ts';
 import { usedSources } from './sources.ts';
 
-/** The whole check of a prepared specification: pure, no I/O. */
-export function checkSpecification(spec: CheckedSpecification, entries: SpecEntry[], data: RulesData, rules: readonly Rule[] = RULES): CheckResult {
-  const analysis = new Analysis(spec, data);
+/**
+ * The whole check of a prepared specification: pure, no I/O. The LP solver is
+ * loaded at the edge and handed in; without it the stock plan is first-fit
+ * decreasing.
+ */
+export function checkSpecification(spec: CheckedSpecification, entries: SpecEntry[], data: RulesData, rules: readonly Rule[] = RULES, lp?: LpSolver): CheckResult {
+  const analysis = new Analysis(spec, data, lp);
   const findings = runRules(rules, spec, data, analysis);
   // Worst first, keeping rule order within a severity.
   const ordered = findings.map((f, i) => ({ f, i })).sort((a, b) => severityRank(b.f.severity) - severityRank(a.f.severity) || a.i - b.i).map((x) => x.f);
@@ -27,6 +32,7 @@ export function checkSpecification(spec: CheckedSpecification, entries: SpecEntr
     mass: { parts: analysis.mass.parts, rolling_mass_kg: analysis.mass.rolling.mass_kg, yoke_mass_kg: analysis.mass.yoke.mass_kg, total_mass_kg: analysis.mass.total.mass_kg },
     balance: { cases: analysis.loadCases },
     loads: collectLoads(analysis),
+    cutting: analysis.cutting,
     spec_as_checked: entries,
     sources: usedSources(spec, data, findings),
     cautions: [...CAUTIONS],

@@ -26,6 +26,21 @@ export function figures(a: Analysis): Record<string, Figure> {
     ...turnFigures(a),
     ...memberFigures(a),
     ...floorFigures(a),
+    ...cuttingFigures(a),
+  };
+}
+
+// Timber volume is rough (as bought and cut), spares included. The stock cost is
+// in the currency of stock.lumber's prices; it is 0 where no stock has a price
+// (the plan then minimises the count of pieces instead).
+function cuttingFigures(a: Analysis): Record<string, Figure> {
+  const { cut_list, stock_plan } = a.cutting;
+  const volume = cut_list.reduce((sum, c) => sum + c.volume_m3 * (c.quantity + c.spares), 0);
+  return {
+    timber_volume: { value: volume, unit: 'm³' },
+    stock_pieces: { value: stock_plan.pieces, unit: 'count' },
+    stock_cost: { value: stock_plan.cost ?? 0, unit: 'currency' },
+    stock_waste_pct: { value: stock_plan.waste_pct, unit: '%' },
   };
 }
 

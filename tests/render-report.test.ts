@@ -4,6 +4,9 @@ import { renderHtml } from '../io/render/report-html.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 import type { CheckResult } from '../src/result/check-result.ts';
 import { SHORT_CAUTION } from '../src/cautions.ts';
+import { formatNumber, formatPercent } from '../io/render/number-format.ts';
+import { sectionText } from '../io/render/cutting-text.ts';
+import { DRAWING_SCOPE } from '../io/render/inline-svg.ts';
 
 /** The body lines of every fenced block in a Markdown text. */
 function fencedBlocks(md: string): string[] {
@@ -168,5 +171,83 @@ describe('renderHtml', () => {
 
   it('refuses a result without cautions', () => {
     expect(() => renderHtml({ ...result, cautions: ['  '] })).toThrow(/cautions/);
+  });
+});
+
+describe('report, cutting sections', () => {
+  const result = sampleResult();
+  const md = renderMarkdown(result);
+  const html = renderHtml(result);
+  const { cut_list, leather, setting_out, stock_plan } = result.cutting;
+
+  it('has the cut list, leather, setting-out and stock plan sections in order, before the spec', () => {
+    const at = ['## Cut list', '## Leather and rawhide', '## Wheel setting-out', '## Stock plan', '## Spec as checked'].map((h) => md.indexOf(`\n${h}\n`));
+    expect(at.every((i) => i > 0)).toBe(true);
+    expect([...at].sort((a, b) => a - b)).toEqual(at);
+    expect(html).toContain('<h2 class="new-page">Stock plan</h2>');
+  });
+
+  it('tables every part with its rough size, and every strap and hide', () => {
+    const rows = tableAfter(md, '## Cut list');
+    expect(rows).toHaveLength(cut_list.length);
+    const axle = cut_list.find((c) => c.part === 'axle')!;
+    expect(rows.find((r) => r.startsWith('| axle |'))).toContain(`${axle.rough.length_mm.toFixed(1)} x ${axle.rough.width_mm.toFixed(1)} x ${axle.rough.thickness_mm.toFixed(1)}`);
+    expect(tableAfter(md, '### Straps and lashings')).toHaveLength(leather.items.length);
+    expect(tableAfter(md, '### Hides to buy')[0]).toContain(`| ${leather.hides[0].hides} |`);
+  });
+
+  it('links the setting-out drawing in Markdown and puts it inline in HTML', () => {
+    expect(md).toContain('![Wheel setting-out drawing](wheel-setting-out.svg)');
+    expect(html).toContain(`<span class="setting-out">${setting_out.svg.replace('<svg ', `<svg class="${DRAWING_SCOPE}" `)}</span>`);
+    expect(html).not.toContain('<img');
+    expect(tableAfter(md, '## Wheel setting-out').find((r) => r.includes('between shoulders'))).toContain(setting_out.spoke_length_shoulders_mm.toFixed(1));
+  });
+
+  it('does not inline a drawing that holds a script or an outside link', () => {
+    for (const svg of ['<svg><script>alert(1)</script></svg>', '<svg><image href="http://example.com/x.png"/></svg>', '<svg onload="alert(1)"></svg>', 'not svg']) {
+      const r = sampleResult();
+      r.cutting.setting_out.svg = svg;
+      const out = renderHtml(r);
+      expect(out, svg).not.toContain(svg);
+      expect(out).toContain('could not be placed inline');
+    }
+  });
+
+  it('shows each group with its bound and gap, and each pattern as a text bar in Markdown', () => {
+    const groups = tableAfter(md, '## Stock plan');
+    expect(groups).toHaveLength(stock_plan.groups.length);
+    stock_plan.groups.forEach((g, i) => {
+      expect(groups[i]).toContain(formatNumber(g.plan.lower_bound, 'currency'));
+      expect(groups[i]).toContain(formatPercent(g.plan.gap));
+      expect(tableAfter(md, `### Group ${i + 1}: ${g.species}, ${sectionText(g.section)} mm`)).toHaveLength(g.plan.patterns.length);
+    });
+    const bars = [...md.matchAll(/^```stock-bars (\d+)\n([\s\S]*?)\n```$/gm)];
+    expect(bars.map((m) => Number(m[1]))).toEqual(stock_plan.groups.map((_g, i) => i));
+    // One bar line per pattern, with as many part runs as cuts.
+    const first = stock_plan.groups[0].plan.patterns;
+    const lines = bars[0][2].split('\n').filter((l) => /^\d+\.\d+ /.test(l));
+    expect(lines).toHaveLength(first.length);
+    lines.forEach((l, k) => expect(l.split('|').length - 2).toBe(first[k].cuts.length));
+    expect(tableAfter(md, '### Parts no listed stock serves')[0]).toContain(stock_plan.unserved[0].part);
+  });
+
+  it('draws each pattern as an inline SVG bar in HTML, one rectangle per cut and one for the offcut', () => {
+    const svgs = [...html.matchAll(/<svg [^>]*class="stock-bar"[\s\S]*?<\/svg>/g)].map((m) => m[0]);
+    const patterns = stock_plan.groups.flatMap((g) => g.plan.patterns);
+    expect(svgs).toHaveLength(patterns.length);
+    svgs.forEach((svg, i) => {
+      const p = patterns[i];
+      expect(svg.match(/<rect /g)).toHaveLength(p.cuts.length + (p.offcut_mm > 0 ? 1 : 0));
+      expect(svg).toContain(`<title>offcut: ${formatNumber(p.offcut_mm, 'mm')} mm</title>`);
+    });
+    expect(html).not.toContain('```stock-bars');
+  });
+
+  it('escapes part labels inside the SVG bars', () => {
+    const r = sampleResult();
+    r.cutting.stock_plan.groups[0].plan.patterns[0].cuts[0].label = '<script>x</script> & "q"';
+    const out = renderHtml(r);
+    expect(out).not.toMatch(/<script/i);
+    expect(out).toContain('&#60;script&#62;x&#60;/script&#62; &#38; &#34;q&#34;');
   });
 });

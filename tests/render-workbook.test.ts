@@ -5,6 +5,9 @@ import { SEVERITY_COLOURS, toArgb } from '../io/render/severity-palette.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 import type { CheckResult } from '../src/result/check-result.ts';
 import { SHORT_CAUTION } from '../src/cautions.ts';
+import { BAR_FIRST_COLUMN } from '../io/render/sheets/stock-plan-sheet.ts';
+import { partLabels } from '../io/render/stock-bar.ts';
+import { OFFCUT_FILL, partFill } from '../io/render/stock-palette.ts';
 
 async function readBack(result: CheckResult): Promise<ExcelJS.Workbook> {
   const wb = new ExcelJS.Workbook();
@@ -42,10 +45,10 @@ function dataRows(ws: ExcelJS.Worksheet): ExcelJS.Row[] {
 describe('renderWorkbook', () => {
   const result = sampleResult();
 
-  it('writes the six sheets in order', async () => {
+  it('writes the ten sheets in order', async () => {
     const wb = await readBack(result);
     expect(wb.worksheets.map((ws) => ws.name)).toEqual([
-      'Summary', 'Findings', 'Mass and balance', 'Loads', 'Spec as checked', 'Sources',
+      'Summary', 'Findings', 'Mass and balance', 'Loads', 'Cut list', 'Leather', 'Wheel setting-out', 'Stock plan', 'Spec as checked', 'Sources',
     ]);
   });
 
@@ -166,5 +169,94 @@ describe('renderWorkbook', () => {
 
   it('refuses a result without cautions', async () => {
     await expect(renderWorkbook({ ...result, cautions: [] })).rejects.toThrow(/cautions/);
+  });
+});
+
+describe('renderWorkbook, cutting sheets', () => {
+  const result = sampleResult();
+  const { cut_list, leather, setting_out, stock_plan } = result.cutting;
+
+  /** The first row whose first cell holds this value. */
+  function rowWith(ws: ExcelJS.Worksheet, first: unknown): ExcelJS.Row {
+    let found: ExcelJS.Row | undefined;
+    ws.eachRow((row) => {
+      if (!found && row.getCell(1).value === first) found = row;
+    });
+    if (!found) throw new Error(`no row starting ${String(first)} on ${ws.name}`);
+    return found;
+  }
+
+  it('lists every part on the cut list with its sizes as numbers, and totals the rough volume with spares', async () => {
+    const ws = sheet(await readBack(result), 'Cut list');
+    const spoke = cut_list.find((c) => c.part === 'spoke')!;
+    expect(rowWith(ws, 'spoke').values).toEqual([
+      undefined,
+      spoke.part, spoke.quantity, spoke.spares, spoke.species,
+      spoke.finished.length_mm, spoke.finished.width_mm, spoke.finished.thickness_mm,
+      spoke.rough.length_mm, spoke.rough.width_mm, spoke.rough.thickness_mm,
+      spoke.grain, 'no', spoke.volume_m3, spoke.mass_kg, spoke.basis,
+    ]);
+    expect(dataRows(ws)).toHaveLength(cut_list.length + 1);
+    const total = dataRows(ws).at(-1)!;
+    expect(total.getCell(13).value).toBeCloseTo(result.figures.timber_volume.value, 12);
+    expect(rowWith(ws, 'pole').getCell(12).value).toBe('yes');
+  });
+
+  it('lists the straps, lashings and hides', async () => {
+    const ws = sheet(await readBack(result), 'Leather');
+    for (const i of leather.items) expect(rowWith(ws, i.item).getCell(7).value).toBe(i.area_m2);
+    const hides = rowWith(ws, leather.hides[0].material);
+    // The items table lists the material in column 2, the hides table in column 1.
+    expect(hides.getCell(5).value).toBe(leather.hides[0].hides);
+  });
+
+  it('gives every setting-out dimension with its unit and says where the drawing is', async () => {
+    const ws = sheet(await readBack(result), 'Wheel setting-out');
+    expect(rowWith(ws, 'Spoke length between shoulders').values).toEqual([undefined, 'Spoke length between shoulders', setting_out.spoke_length_shoulders_mm, 'mm']);
+    expect(rowWith(ws, 'Felloe piece chord').getCell(2).value).toBe(setting_out.felloe_chord_mm);
+    setting_out.mortise_positions_deg.forEach((deg, i) => expect(rowWith(ws, `Mortise ${i + 1}, from the first`).getCell(2).value).toBe(deg));
+    for (const line of setting_out.basis) expect(texts(ws)).toContain(line);
+    expect(texts(ws).some((t) => t.includes('wheel-setting-out.svg'))).toBe(true);
+  });
+
+  it('tables each group and draws each pattern as a bar of fills, one colour per part and pale grey offcut', async () => {
+    const ws = sheet(await readBack(result), 'Stock plan');
+    const group = stock_plan.groups[0];
+    const groupRow = rowWith(ws, 1);
+    expect(groupRow.getCell(2).value).toBe(group.species);
+    expect(groupRow.getCell(6).value).toBe(group.plan.pieces_used);
+    expect(rowWith(ws, 'All groups').getCell(6).value).toBe(stock_plan.pieces);
+
+    // The scale is printed in the bar header; read it back rather than assume it.
+    const head = texts(ws).find((t) => t.startsWith('Bar: one column = '))!;
+    const scale = Number(/= (\d+) mm/.exec(head)![1]);
+    const pattern = group.plan.patterns.find((p) => new Set(p.cuts.map((c) => c.label)).size > 1)!;
+    const id = `1.${group.plan.patterns.indexOf(pattern) + 1}`;
+    const row = rowWith(ws, id);
+    expect([row.getCell(2).value, row.getCell(3).value, row.getCell(5).value]).toEqual([pattern.stock_length_mm, pattern.count, pattern.offcut_mm]);
+
+    const cells = Math.ceil(pattern.stock_length_mm / scale);
+    const fills = Array.from({ length: cells }, (_, i) => fillOf(row.getCell(BAR_FIRST_COLUMN + i)));
+    const labels = partLabels(stock_plan);
+    // Walk the cuts along the stock: the cell under the middle of each cut has that part's colour.
+    let at = 0;
+    const kerf = (pattern.stock_length_mm - pattern.offcut_mm - pattern.cuts.reduce((s, c) => s + c.length_mm, 0)) / (pattern.cuts.length - 1);
+    for (const c of pattern.cuts) {
+      expect(fills[Math.floor((at + c.length_mm / 2) / scale)], c.label).toBe(toArgb(partFill(labels, c.label)));
+      at += c.length_mm + kerf;
+    }
+    expect(fills.at(-1)).toBe(toArgb(OFFCUT_FILL));
+    expect(row.getCell(BAR_FIRST_COLUMN).value).toBe(pattern.cuts[0].label);
+    expect(row.getCell(BAR_FIRST_COLUMN + cells).fill).toBeUndefined();
+    // Distinct parts, distinct colours.
+    expect(new Set(fills).size).toBe(new Set(pattern.cuts.map((c) => c.label)).size + 1);
+  });
+
+  it('lists the parts that no listed stock serves, with what to buy', async () => {
+    const ws = sheet(await readBack(result), 'Stock plan');
+    const u = stock_plan.unserved[0];
+    const row = rowWith(ws, u.part);
+    expect(row.getCell(4).value).toBe(u.reason);
+    expect(row.getCell(5).value).toBe(u.buy);
   });
 });

@@ -3,6 +3,8 @@ import { readSpecFile } from '../../io/read-spec.ts';
 import { OutputIsInputError } from '../../io/atomic-write.ts';
 import { resultJson, writeOutputs } from '../../io/write-outputs.ts';
 import { checkSpecification } from '../../src/check.ts';
+import { RULES } from '../../src/engine/registry.ts';
+import { loadLpSolver } from '../../io/load-lp-solver.ts';
 import { prepareSpec } from '../../src/spec/prepare.ts';
 import { EXIT, type Console } from '../console.ts';
 import { formatIssues } from '../format-issues.ts';
@@ -28,7 +30,8 @@ export async function checkCommand(file: string, opts: CheckOptions, con: Consol
     con.err(formatIssues(file, prepared.issues, read.locate));
     return EXIT.badInput;
   }
-  const result = checkSpecification(prepared.spec, prepared.entries, data);
+  // The solver is loaded only once the spec is known to be good.
+  const result = checkSpecification(prepared.spec, prepared.entries, data, RULES, await loadLpSolver());
   const dir = resolve(con.cwd, opts.out ?? join('axletree-out', basename(file, extname(file))));
   let written: string[];
   try {

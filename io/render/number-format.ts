@@ -23,6 +23,12 @@ const DECIMALS_BY_UNIT: Record<string, number> = {
   'N m': 1,
   'N·m': 1,
   'kg/m^3': 1,
+  // A spoke blank is under a thousandth of a cubic metre.
+  'm³': 5,
+  'm²': 3,
+  count: 0,
+  /** Prices are in whatever currency the specification's stock prices are in. */
+  currency: 2,
 };
 
 /** Decimals for units not listed: enough for ratios and factors. */

@@ -5,10 +5,14 @@ import { renderMarkdown } from './report-md.ts';
 import { REPORT_CSS } from './report-style.ts';
 import { severityOfMarkText } from './severity-mark.ts';
 import { SECTIONS, startsNewPage, VERDICT_PREFIX } from './report-sections.ts';
+import { SETTING_OUT_SVG_FILE, STOCK_BARS_INFO } from './report-figures.ts';
+import { inlineSvg } from './inline-svg.ts';
+import { stockBarSvg } from './stock-bar-svg.ts';
+import { partLabels } from './stock-bar.ts';
 
 /** The check report as one self-contained HTML file: inline CSS, no external assets. */
 export function renderHtml(result: CheckResult): string {
-  const md = reportMarkdownIt();
+  const md = reportMarkdownIt(result);
   const body = md.render(renderMarkdown(result));
   const title = md.utils.escapeHtml(`Design-rule check: ${result.spec_name}`);
   return `<!doctype html>
@@ -28,9 +32,10 @@ ${body}</main>
 `;
 }
 
-function reportMarkdownIt(): MarkdownIt {
+function reportMarkdownIt(result: CheckResult): MarkdownIt {
   // html: false turns any raw HTML in the text into visible, escaped text.
   const md = markdownit('default', { html: false, linkify: false, typographer: false });
+  drawFigures(md, result);
   md.core.ruler.push('axletree_report_classes', (state: StateCore) => {
     markHeadings(state.tokens);
     for (const token of state.tokens) {
@@ -38,6 +43,35 @@ function reportMarkdownIt(): MarkdownIt {
     }
   });
   return md;
+}
+
+/**
+ * Our own drawings go inline: the setting-out image link becomes its SVG, and
+ * each stock group's text bars become one SVG bar per pattern. The SVG comes
+ * from the result, never from the Markdown text.
+ */
+function drawFigures(md: MarkdownIt, result: CheckResult): void {
+  const image = md.renderer.rules.image!;
+  md.renderer.rules.image = (tokens, idx, options, env, self) => {
+    if (tokens[idx].attrGet('src') !== SETTING_OUT_SVG_FILE) return image(tokens, idx, options, env, self);
+    const svg = inlineSvg(result.cutting.setting_out.svg);
+    return svg === null
+      ? `<em>The drawing could not be placed inline; see ${SETTING_OUT_SVG_FILE} beside report.md.</em>`
+      : `<span class="setting-out">${svg}</span>`;
+  };
+  const fence = md.renderer.rules.fence!;
+  const labels = partLabels(result.cutting.stock_plan);
+  md.renderer.rules.fence = (tokens, idx, options, env, self) => {
+    const m = new RegExp(`^${STOCK_BARS_INFO} (\\d+)$`).exec(tokens[idx].info.trim());
+    const group = m ? result.cutting.stock_plan.groups[Number(m[1])] : undefined;
+    if (!group) return fence(tokens, idx, options, env, self);
+    const longest = Math.max(...group.plan.patterns.map((p) => p.stock_length_mm));
+    const bars = group.plan.patterns.map((p, k) => {
+      const caption = `${Number(m![1]) + 1}.${k + 1}: ${p.stock_length_mm} mm x ${p.count}`;
+      return `<figure><figcaption>${md.utils.escapeHtml(caption)}</figcaption>${stockBarSvg(p, longest, labels, caption)}</figure>`;
+    });
+    return `<div class="stock-bars">\n${bars.join('\n')}\n</div>\n`;
+  };
 }
 
 /** Classes on our own h2 headings: the verdict, the cautions, and sections that start a printed page. */

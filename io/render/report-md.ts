@@ -7,6 +7,8 @@ import { formatNumber, formatPercent, UNIT_SPACE } from './number-format.ts';
 import { specValueText } from './spec-value.ts';
 import { headlineCaution, requireCautions } from './result-cautions.ts';
 import { SECTIONS, VERDICT_PREFIX } from './report-sections.ts';
+import { cutListSections } from './report-cutting-md.ts';
+import { stockPlanSections } from './report-stock-plan-md.ts';
 
 /** The check report as Markdown: verdict and cautions first, then the evidence. */
 export function renderMarkdown(result: CheckResult): string {
@@ -32,6 +34,8 @@ export function renderMarkdown(result: CheckResult): string {
     ...result.balance.cases.flatMap(loadCaseWorking),
     '## Loads',
     loadsTable(result),
+    ...cutListSections(result),
+    ...stockPlanSections(result),
     `## ${SECTIONS.spec.title}`,
     specTable(result.spec_as_checked),
     `## ${SECTIONS.sources.title}`,

@@ -71,6 +71,13 @@ code { font-family: Consolas, "DejaVu Sans Mono", monospace; }
   print-color-adjust: exact;
 }
 ${badgeRules}
+/* Drawings: the setting-out scales down to the page; stock bars keep their
+   lengths to one scale per group, caption at the left. */
+.setting-out svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; }
+.stock-bars { margin: 0.3em 0 1em; }
+.stock-bars figure { display: flex; align-items: center; gap: 0.6em; margin: 0.15em 0; }
+.stock-bars figcaption { flex: 0 0 10em; font-size: 0.85em; white-space: nowrap; }
+.stock-bars svg { max-width: calc(100% - 11em); height: auto; -webkit-print-color-adjust: exact; print-color-adjust: exact; }
 hr { border: none; border-top: 1px solid #999; margin: 2em 0 0.5em; }
 
 @page { size: A4; margin: 15mm 12mm; }
@@ -80,7 +87,7 @@ hr { border: none; border-top: 1px solid #999; margin: 2em 0 0.5em; }
   h2, h3, h4 { break-after: avoid; }
   table { font-size: 8pt; }
   thead { display: table-header-group; }
-  tr, pre { break-inside: avoid; }
+  tr, pre, figure { break-inside: avoid; }
   pre { font-size: 7.5pt; }
 }
 `;

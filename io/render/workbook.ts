@@ -4,6 +4,10 @@ import { addSummarySheet } from './sheets/summary-sheet.ts';
 import { addFindingsSheet } from './sheets/findings-sheet.ts';
 import { addMassBalanceSheet } from './sheets/mass-balance-sheet.ts';
 import { addLoadsSheet } from './sheets/loads-sheet.ts';
+import { addCutListSheet } from './sheets/cut-list-sheet.ts';
+import { addLeatherSheet } from './sheets/leather-sheet.ts';
+import { addSettingOutSheet } from './sheets/setting-out-sheet.ts';
+import { addStockPlanSheet } from './sheets/stock-plan-sheet.ts';
 import { addSpecSheet } from './sheets/spec-sheet.ts';
 import { addSourcesSheet } from './sheets/sources-sheet.ts';
 
@@ -16,6 +20,10 @@ export async function renderWorkbook(result: CheckResult): Promise<Buffer> {
   addFindingsSheet(wb, result);
   addMassBalanceSheet(wb, result);
   addLoadsSheet(wb, result);
+  addCutListSheet(wb, result);
+  addLeatherSheet(wb, result);
+  addSettingOutSheet(wb, result);
+  addStockPlanSheet(wb, result);
   addSpecSheet(wb, result);
   addSourcesSheet(wb, result);
   const bytes = await wb.xlsx.writeBuffer();

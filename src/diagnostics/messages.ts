@@ -41,6 +41,15 @@ export const MESSAGES = {
   marginTooWide: { code: 1125, text: 'the usable margin {value} mm leaves no usable floor; allowed: less than {max} mm (half the floor depth and width).' },
   poleRootOutsideBox: { code: 1126, text: 'the pole {key} at {value} mm is not under the box; allowed: {min} to {max} mm.' },
   loadOffVehicle: { code: 1123, text: 'the load "{value}" at x = {x} mm is not on the chariot; allowed: {min} to {max} mm.' },
+  // Stock instances for `axletree stock` (12xx)
+  stockInstanceEmpty: { code: 1200, text: '{path} is empty; a stock instance needs kerf_mm, stock and pieces.' },
+  stockLengthTwice: { code: 1201, text: 'the stock length {value} mm is listed twice (also at {other}); list each length once.' },
+  stockCostMissing: { code: 1202, text: 'this stock has no cost, but {other} has one; give a cost for every stock length or for none.' },
+  pieceTooLong: { code: 1203, text: 'the piece of {value} mm is longer than every stock length (the longest is {max} mm); list longer stock or join the piece from shorter ones.' },
+  pieceNoStockLeft: { code: 1204, text: 'the piece of {value} mm fits only stock of {lengths} mm, and none of it is available.' },
+  stockShortLength: { code: 1205, text: 'not enough stock available: the {count} pieces of {value} mm or longer need {need} mm of stock with their kerfs, but the available stock that holds them totals {have} mm.' },
+  stockShortCount: { code: 1206, text: 'not enough stock available: there are {count} pieces of {value} mm or longer, but the available stock that holds them can yield at most {have} of them.' },
+  stockShortPlan: { code: 1207, text: 'not enough stock available: {reason}.' },
   // Findings (2xxx); rules fill the parameters.
   yokeLifts: { code: 2001, text: 'The yoke lifts off the horses in the case "{case}": the pole pulls up with {value} N.' },
   yokePresses: { code: 2002, text: 'The yoke presses down in every load case; least pole load {value} N ({case}).' },
@@ -90,6 +99,15 @@ export const MESSAGES = {
   lashingPresent: { code: 2531, text: 'The {joint} joint is lashed: {wraps} wraps of {material}, {size} mm.' },
   lashingMissing: { code: 2532, text: 'The {joint} joint is not lashed, but {why}; it must pass {value} ({case}).' },
   lashingAdvised: { code: 2533, text: 'No lashing is given for the {joint} joint; {why}. Whatever holds it, lashing or joinery, must pass {value} ({case}); this check cannot see joinery.' },
+  // Stock and cutting (27xx)
+  stockNoSpecies: { code: 2701, text: 'No {species} stock is listed, so {parts} cannot be planned: buy {buy}.' },
+  stockNoSection: { code: 2702, text: '{part}: {reason}; buy {buy}.' },
+  stockTooLong: { code: 2703, text: '{part}: {reason}; buy {buy}.' },
+  stockAllServed: { code: 2704, text: 'Every part of the cut list is cut from the listed stock ({groups} groups by species and section).' },
+  stockPlanGroup: { code: 2711, text: '{species} {section} mm: buy {bought}{cost}; {cuts} cut, {waste} % waste; {proof}.{note}' },
+  bentBlanks: { code: 2721, text: '{part}: cut {blanks} blank{plural} ({quantity} + {spares} spare at {good} % good bends), {size} mm rough, from straight-grained {species} free of knots and run-out.' },
+  sidingNotListed: { code: 2731, text: 'The siding is given only as a mass ({mass} kg), so its parts are not in the cut list or the stock plan.' },
+  sidingExtraParts: { code: 2732, text: 'The siding is given as a mass ({mass} kg); the {parts} under stock.extra_parts {are} in the cut list and the stock plan.' },
 } as const;
 
 export type MessageKey = keyof typeof MESSAGES;

@@ -8,6 +8,9 @@ import { turnModel, type TurnModel } from '../model/turn.ts';
 import { lashingDemands, type Joint, type JointDemand } from '../model/lashing-demand.ts';
 import { floorModel, type FloorModel } from '../model/cable-net/floor-model.ts';
 import { loadFactor } from '../model/load-factors.ts';
+import type { LpSolver } from '../stock/cutting-types.ts';
+import type { CuttingResult } from '../cutlist/cutting-result.ts';
+import { cuttingResult } from '../cutlist/cutting-model.ts';
 
 /** Models computed at most once per check, on first use by any rule. */
 export class Analysis {
@@ -18,9 +21,12 @@ export class Analysis {
   #floorStatic?: FloorModel;
   #floorBump?: FloorModel;
   #memberCases?: MemberCase[];
+  #cutting?: CuttingResult;
   constructor(
     readonly spec: CheckedSpecification,
     readonly data: RulesData,
+    /** The LP solver for the stock plan, loaded at the edge; without it the plan is first-fit decreasing. */
+    readonly lp?: LpSolver,
   ) {}
   get mass(): MassModel {
     return (this.#mass ??= massModel(this.spec, this.data));
@@ -48,6 +54,10 @@ export class Analysis {
   /** The load cases the timber members are checked in, with their load-duration classes. */
   get memberCases(): MemberCase[] {
     return (this.#memberCases ??= memberCases(this.spec, this.data, this.mass, this.loadCases, this.turn));
+  }
+  /** Cut list, leather list, wheel setting-out and stock plan. */
+  get cutting(): CuttingResult {
+    return (this.#cutting ??= cuttingResult(this.spec, this.data, this.mass.layout, this.lp));
   }
   /** The force each lashed joint must pass, case by case. */
   get lashingDemands(): Record<Joint, JointDemand> {

@@ -22,6 +22,10 @@ import { lashingTension } from '../rules/lashing/tension.ts';
 import { lashingSlip } from '../rules/lashing/slip.ts';
 import { lashingAnchorage } from '../rules/lashing/anchorage.ts';
 import { lashingMissing } from '../rules/lashing/missing.ts';
+import { stockUnserved } from '../rules/stock/unserved.ts';
+import { stockPlanNote } from '../rules/stock/plan.ts';
+import { bentBlanks } from '../rules/stock/bent-blanks.ts';
+import { sidingParts } from '../rules/stock/siding.ts';
 
 /** Every rule, in the order findings are reported. */
 export const RULES: readonly Rule[] = [
@@ -48,4 +52,8 @@ export const RULES: readonly Rule[] = [
   lashingTension,
   lashingSlip,
   lashingAnchorage,
+  stockUnserved,
+  stockPlanNote,
+  bentBlanks,
+  sidingParts,
 ];

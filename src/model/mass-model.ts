@@ -1,7 +1,8 @@
 import type { RulesData } from '../data/rules-data.ts';
 import type { PartMass } from '../result/check-result.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
-import { densityFromSG, specificGravityAt } from './density.ts';
+import { speciesDensity } from './species-density.ts';
+import { strapRuns } from './strap-runs.ts';
 import { layout, type Layout } from './layout.ts';
 import { jointPlace, lashingLength } from './lashing-geometry.ts';
 
@@ -35,10 +36,7 @@ export function totals(parts: readonly PartMass[]): Totals {
 export function massModel(spec: CheckedSpecification, data: RulesData): MassModel {
   const lay = layout(spec);
   const M = spec.moisture_content_pct;
-  const rho = (species: string) => {
-    const sg = data.species[species].specific_gravity;
-    return densityFromSG(specificGravityAt(sg.green.value, sg.dry12.value, M), M);
-  };
+  const rho = (species: string) => speciesDensity(data, species, M);
   const timber = (part: string, species: string, volMm3: number, at: { x: number; y: number; z: number }, group: PartMass['group'], shape: string): PartMass => {
     const density = rho(species);
     const mass = volMm3 * M3_PER_MM3 * density;
@@ -97,27 +95,16 @@ function boxParts(spec: CheckedSpecification, data: RulesData, lay: Layout, timb
     timber('floor frame', f.species, railLength * f.width_mm * f.thickness_mm, { ...centre, z: lay.frameZ }, 'rolling', `${fmt(railLength, 0)} mm of rail × ${f.width_mm} × ${f.thickness_mm} mm`),
   ];
   const s = spec.floor_straps;
-  const wrap = 2 * (f.width_mm + f.thickness_mm);
   const runs = strapRuns(spec);
-  const strapLength = runs.reduce((sum, r) => sum + r.count * (r.span + 2 * wrap), 0);
+  const strapLength = runs.reduce((sum, r) => sum + r.count * r.length, 0);
   const leather = data.leathers[s.material].density_kg_per_m3.value;
-  parts.push({ part: 'floor straps', group: 'rolling', mass_kg: strapLength * s.width_mm * s.thickness_mm * M3_PER_MM3 * leather, x_mm: centre.x, y_mm: 0, z_mm: lay.floorTopZ, measured: false, basis: `${runs.map((r) => `${r.count} × (${r.span} + 2 × ${wrap}) mm`).join(' + ')} = ${fmt(strapLength, 0)} mm × ${s.width_mm} × ${s.thickness_mm} mm × ${leather} kg/m³ (${s.material})` });
+  parts.push({ part: 'floor straps', group: 'rolling', mass_kg: strapLength * s.width_mm * s.thickness_mm * M3_PER_MM3 * leather, x_mm: centre.x, y_mm: 0, z_mm: lay.floorTopZ, measured: false, basis: `${runs.map((r) => `${r.count} × (${r.span} + 2 × ${r.wrap}) mm`).join(' + ')} = ${fmt(strapLength, 0)} mm × ${s.width_mm} × ${s.thickness_mm} mm × ${leather} kg/m³ (${s.material})` });
   if (spec.box.siding_mass_kg > 0) {
     parts.push({ part: 'siding', group: 'rolling', mass_kg: spec.box.siding_mass_kg, x_mm: centre.x, y_mm: 0, z_mm: lay.floorTopZ + spec.box.siding_height_mm, measured: true, basis: `given ${spec.box.siding_mass_kg} kg, ${spec.box.siding_height_mm} mm above the floor` });
   }
   if (spec.box.mass_kg === undefined) return parts;
   const t = totals(parts);
   return [{ part: 'box', group: 'rolling', mass_kg: spec.box.mass_kg, x_mm: t.x_mm, y_mm: t.y_mm, z_mm: t.z_mm, measured: true, basis: `measured ${spec.box.mass_kg} kg (computed: ${fmt(t.mass_kg)} kg); centre of mass from the computed parts` }];
-}
-
-/** The straps of the weave: how many run each way and their clear span, mm. */
-export function strapRuns(spec: CheckedSpecification): { direction: 'front-to-back' | 'side-to-side'; count: number; span: number }[] {
-  const { depth_mm, width_mm } = spec.box.floor;
-  const p = spec.floor_straps.pitch_mm;
-  const fb = { direction: 'front-to-back' as const, count: Math.floor(width_mm / p), span: depth_mm };
-  const ss = { direction: 'side-to-side' as const, count: Math.floor(depth_mm / p), span: width_mm };
-  const weave = spec.floor_straps.weave;
-  return weave === 'two-way' ? [fb, ss] : weave === 'front-to-back' ? [fb] : [ss];
 }
 
 // One wheel: nave (cylinder less the bore), spokes, felloe ring, tyre.

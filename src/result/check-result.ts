@@ -1,4 +1,5 @@
 import type { Finding, Severity } from '../findings/finding.ts';
+import type { CuttingResult } from '../cutlist/cutting-result.ts';
 
 export interface Figure {
   value: number;
@@ -63,6 +64,8 @@ export interface CheckResult {
   balance: { cases: LoadCaseResult[] };
   /** Loads from every model, by part and case. */
   loads: LoadEntry[];
+  /** Cut list, leather list, wheel setting-out and stock plan. */
+  cutting: CuttingResult;
   spec_as_checked: SpecEntry[];
   /** Every source cited by a limit, material value or finding. */
   sources: string[];

@@ -27,6 +27,7 @@ function knownNames(spec: CheckedSpecification, data: RulesData, out: InputIssue
     [['pole', 'species'], spec.pole.species],
     [['yoke', 'species'], spec.yoke.species],
     ...spec.stock.lumber.map((l, i): [KeyPath, string] => [['stock', 'lumber', i, 'species'], l.species]),
+    ...spec.stock.extra_parts.map((x, i): [KeyPath, string] => [['stock', 'extra_parts', i, 'species'], x.species]),
   ];
   for (const [path, value] of wantSpecies) {
     if (!(value in data.species)) out.push(issue(path, 'unknownSpecies', { value, allowed: species.join(', ') }));

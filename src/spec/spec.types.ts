@@ -429,6 +429,10 @@ export interface BuildSpecification {
      * True when parts are cut green and dry after.
      */
     green?: boolean;
+    /**
+     * How the growth rings lie in the parts' cross-section, for green sizing: flat-sawn (the width face is tangential to the rings, the thickness radial) or quarter-sawn (the width face radial, the thickness tangential). Omit where unknown: every cross dimension is then sized by the larger, tangential shrinkage (mechanics note, section 9). Turned parts (naves, linchpins) always take the tangential figure.
+     */
+    orientation?: 'flat-sawn' | 'quarter-sawn';
     lumber?: {
       species: Species;
       /**
@@ -446,6 +450,33 @@ export interface BuildSpecification {
        */
       lengths_mm: (number | string)[];
       price_per_m3?: number;
+    }[];
+    /**
+     * Further timber parts to cut (siding rails, hand-holds, spares), listed for the cut list and stock plan only: their mass is not in the mass model (give it under loads or in box.siding_mass_kg).
+     *
+     * @maxItems 50
+     */
+    extra_parts?: {
+      name: string;
+      species: Species;
+      /**
+       * A length in the unit of its key; a string with another unit is converted.
+       */
+      length_mm: number | string;
+      /**
+       * A length in the unit of its key; a string with another unit is converted.
+       */
+      width_mm: number | string;
+      /**
+       * A length in the unit of its key; a string with another unit is converted.
+       */
+      thickness_mm: number | string;
+      quantity?: number;
+      grade?: Grade;
+      /**
+       * As stock.orientation, for this part; default: stock.orientation.
+       */
+      orientation?: 'flat-sawn' | 'quarter-sawn';
     }[];
   };
 }
@@ -879,6 +910,10 @@ export interface CheckedSpecification {
      * True when parts are cut green and dry after.
      */
     green: boolean;
+    /**
+     * How the growth rings lie in the parts' cross-section, for green sizing: flat-sawn (the width face is tangential to the rings, the thickness radial) or quarter-sawn (the width face radial, the thickness tangential). Omit where unknown: every cross dimension is then sized by the larger, tangential shrinkage (mechanics note, section 9). Turned parts (naves, linchpins) always take the tangential figure.
+     */
+    orientation?: 'flat-sawn' | 'quarter-sawn';
     lumber: {
       species: CheckedSpecies;
       /**
@@ -896,6 +931,33 @@ export interface CheckedSpecification {
        */
       lengths_mm: number[];
       price_per_m3?: number;
+    }[];
+    /**
+     * Further timber parts to cut (siding rails, hand-holds, spares), listed for the cut list and stock plan only: their mass is not in the mass model (give it under loads or in box.siding_mass_kg).
+     *
+     * @maxItems 50
+     */
+    extra_parts: {
+      name: string;
+      species: CheckedSpecies;
+      /**
+       * A length in the unit of its key; a string with another unit is converted.
+       */
+      length_mm: number;
+      /**
+       * A length in the unit of its key; a string with another unit is converted.
+       */
+      width_mm: number;
+      /**
+       * A length in the unit of its key; a string with another unit is converted.
+       */
+      thickness_mm: number;
+      quantity: number;
+      grade?: CheckedGrade;
+      /**
+       * As stock.orientation, for this part; default: stock.orientation.
+       */
+      orientation?: 'flat-sawn' | 'quarter-sawn';
     }[];
   };
 }

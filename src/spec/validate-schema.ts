@@ -13,7 +13,14 @@ export const SPEC_SCHEMA = schema;
 /** Validate against the schema, filling defaults in place; every error at once. */
 export function validateSchema(data: unknown): InputIssue[] {
   if (validate(data)) return [];
-  return dedupe((validate.errors ?? []).map(toIssue));
+  return schemaIssues(validate.errors ?? [], schema);
+}
+
+type Schema = Record<string, unknown>;
+
+/** Ajv errors as input issues, worded from the schema they were raised against. */
+export function schemaIssues(errors: ErrorObject[], root: object): InputIssue[] {
+  return dedupe(errors.map((e) => toIssue(e, root as Schema)));
 }
 
 function pointerToPath(pointer: string): KeyPath {
@@ -29,7 +36,7 @@ function show(v: unknown): string {
   return typeof v === 'string' ? `"${v}"` : JSON.stringify(v);
 }
 
-function toIssue(e: ErrorObject): InputIssue {
+function toIssue(e: ErrorObject, root: Schema): InputIssue {
   const path = pointerToPath(e.instancePath);
   const p = e.params as Record<string, unknown>;
   const value = show(e.data);
@@ -46,7 +53,7 @@ function toIssue(e: ErrorObject): InputIssue {
     case 'maximum':
     case 'exclusiveMinimum':
     case 'exclusiveMaximum':
-      return issue(path, 'outOfRange', { value, allowed: describeRange(withDef(schemaAt(path)), unitAt(path)) });
+      return issue(path, 'outOfRange', { value, allowed: describeRange(withDef(schemaAt(path, root), root), unitAt(path)) });
     case 'enum':
       return issue(path, 'notInList', { value, allowed: (p.allowedValues as unknown[]).map(show).join(', ') });
     case 'const':
@@ -66,8 +73,8 @@ function toIssue(e: ErrorObject): InputIssue {
 
 // The schema of the property at a key path (an error raised inside a shared
 // definition only carries that definition, not the property's own bounds).
-function schemaAt(path: KeyPath): Record<string, unknown> {
-  let node: Record<string, unknown> = schema as Record<string, unknown>;
+function schemaAt(path: KeyPath, root: Schema): Schema {
+  let node: Schema = root;
   for (const key of path) {
     const next = typeof key === 'number' ? node.items : (node.properties as Record<string, unknown> | undefined)?.[key];
     if (!next) return node;
@@ -77,9 +84,9 @@ function schemaAt(path: KeyPath): Record<string, unknown> {
 }
 
 // A property's bounds may sit partly in a shared definition it refers to.
-function withDef(s: Record<string, unknown>): Record<string, number> {
+function withDef(s: Schema, root: Schema): Record<string, number> {
   const ref = typeof s.$ref === 'string' ? s.$ref.replace('#/$defs/', '') : undefined;
-  const def = ref ? (schema.$defs as Record<string, object>)[ref] : {};
+  const def = ref ? (root.$defs as Record<string, object>)[ref] : {};
   return { ...def, ...s } as Record<string, number>;
 }
 

@@ -1,0 +1,66 @@
+import { resolve } from 'node:path';
+import { loadLpSolver } from '../../io/load-lp-solver.ts';
+import { readSpecFile } from '../../io/read-spec.ts';
+import { baselineText, boughtText, BOUND_NOTE, cutsText, gapText } from '../../io/render/cutting-text.ts';
+import { formatNumber } from '../../io/render/number-format.ts';
+import { MESSAGES } from '../../src/diagnostics/messages.ts';
+import { issue } from '../../src/spec/input-issue.ts';
+import { checkCuttingInstance } from '../../src/stock/check-instance.ts';
+import { CuttingInputError } from '../../src/stock/cutting-problem.ts';
+import type { CuttingPlan } from '../../src/stock/cutting-types.ts';
+import { planCutting } from '../../src/stock/plan-cutting.ts';
+import { StockShortfallError } from '../../src/stock/stock-shortfall.ts';
+import { EXIT, type Console } from '../console.ts';
+import { formatIssues } from '../format-issues.ts';
+
+/** `axletree stock <instance.json> [--json]`: the stock plan of one plain cutting instance. */
+export async function stockCommand(file: string, opts: { json: boolean }, con: Console): Promise<number> {
+  const read = readSpecFile(resolve(con.cwd, file));
+  if (!read.ok) {
+    // The reader's empty-file message speaks of specifications.
+    const issues = read.issues.map((i) => (i.code === MESSAGES.fileEmpty.code ? issue([], 'stockInstanceEmpty', { path: file }) : i));
+    con.err(formatIssues(file, issues));
+    return EXIT.badInput;
+  }
+  const checked = checkCuttingInstance(read.raw);
+  if (!checked.ok) {
+    con.err(formatIssues(file, checked.issues, read.locate));
+    return EXIT.badInput;
+  }
+  let plan: CuttingPlan;
+  try {
+    plan = planCutting(checked.instance, await loadLpSolver());
+  } catch (e) {
+    // Shortages the instance checks cannot see come back from the planner.
+    if (e instanceof StockShortfallError) {
+      con.err(formatIssues(file, [issue(['stock'], 'stockShortPlan', { reason: e.message })], read.locate));
+      return EXIT.badInput;
+    }
+    if (e instanceof CuttingInputError) {
+      con.err(formatIssues(file, [{ path: e.path, code: MESSAGES.stockShortPlan.code, message: e.message }], read.locate));
+      return EXIT.badInput;
+    }
+    throw e;
+  }
+  con.out(opts.json ? JSON.stringify(plan, null, 2) + '\n' : planTable(plan));
+  return EXIT.ok;
+}
+
+function planTable(plan: CuttingPlan): string {
+  const rows = plan.patterns.map((p) => [String(p.count), formatNumber(p.stock_length_mm, 'mm'), formatNumber(p.offcut_mm, 'mm'), cutsText(p)]);
+  const head = ['count', 'stock mm', 'offcut mm', 'cuts, in cutting order'];
+  const width = head.map((h, c) => Math.max(h.length, ...rows.map((r) => r[c].length)));
+  const line = (r: string[]) => r.map((v, c) => (c === r.length - 1 ? v : v.padStart(width[c]))).join('  ');
+  const cost = plan.cost === null ? '' : `, cost ${formatNumber(plan.cost, 'currency')}`;
+  return [
+    `stock plan: ${plan.pieces_used} stock piece${plan.pieces_used === 1 ? '' : 's'}${cost}; ${plan.optimal ? 'optimal' : 'not proven optimal'}`,
+    `buy: ${boughtText(plan)}`,
+    `LP lower bound ${formatNumber(plan.lower_bound, 'currency')}, gap ${gapText(plan)}; waste ${formatNumber(plan.waste_mm, 'mm')} mm (${formatNumber(plan.waste_pct, '%')} %, kerfs and offcuts)`,
+    `method: ${plan.method}; first-fit decreasing alone: ${baselineText(plan)}`,
+    '',
+    line(head),
+    ...rows.map(line),
+    '',
+    BOUND_NOTE,
+  ].join('\n') + '\n';
+}

@@ -1,0 +1,10 @@
+import loadHighs from 'highs';
+import type { LpSolver } from '../src/stock/cutting-types.ts';
+
+// HiGHS (WebAssembly) compiles once per process; every caller shares it.
+let solver: Promise<LpSolver> | undefined;
+
+export function loadLpSolver(): Promise<LpSolver> {
+  solver ??= loadHighs();
+  return solver;
+}

@@ -1,0 +1,37 @@
+import { describe, expect, it } from 'vitest';
+import { deepMerge, findingsOf, readDemo } from '../support/fixtures.ts';
+
+const RULE = 'stock.plan';
+
+describe(RULE, () => {
+  it('advises one plan per species and section of the central-axle demo', async () => {
+    const found = await findingsOf(RULE, readDemo('demo-two-crew'));
+    expect(found.map((f) => [f.subject, f.severity])).toEqual([
+      ['rock-elm 100 × 100 mm', 'advice'],
+      ['white-ash 75 × 75 mm', 'advice'],
+      ['white-oak 75 × 75 mm', 'advice'],
+    ]);
+    // Steam-bent blanks (the pole and the felloe pieces) are cut from the white ash.
+    expect(found[1].message).toContain('Steam-bent blanks (pole, felloe piece)');
+    expect(found[0].message).not.toContain('Steam-bent');
+  });
+
+  it('costs the stock at price per m³ × section × length', async () => {
+    // The yoke alone in white oak 75 × 75 at 1600 per m³: one 1800 mm length = 1600 × 0.075² × 1.8 = 16.2.
+    const found = await findingsOf(RULE, readDemo('demo-two-crew'));
+    const oak = found.find((f) => f.subject.startsWith('white-oak'))!;
+    expect(oak.message).toContain('buy 1 × 1800 mm for 16.2; 1 piece cut');
+    expect(oak.value).toBe(1);
+  });
+
+  it('counts pieces where no price is listed, and says how far the plan is from its bound', async () => {
+    const raw = deepMerge(readDemo('demo-two-crew'), { stock: { lumber: [{ species: 'white-ash', width_mm: 75, thickness_mm: 75, lengths_mm: [2400, 3600] }] } });
+    const ash = (await findingsOf(RULE, raw))[0];
+    expect(ash.message).not.toMatch(/ mm for \d/);
+    expect(ash.message).toMatch(/proven least|above the lower bound of [\d.]+ stock pieces/);
+  });
+
+  it('boundary: no listed stock, no plan to note', async () => {
+    expect(await findingsOf(RULE, readDemo('demo-rear-axle'))).toEqual([]);
+  });
+});

@@ -1,0 +1,50 @@
+import { describe, expect, it } from 'vitest';
+import { deepMerge, findingsOf, readDemo } from '../support/fixtures.ts';
+
+const RULE = 'stock.unserved';
+
+describe(RULE, () => {
+  it('advises on the central-axle demo: frame rails and naves are larger than the listed sections', async () => {
+    const found = await findingsOf(RULE, readDemo('demo-two-crew'));
+    expect(found.map((f) => [f.subject, f.severity, f.code])).toEqual([
+      ['floor frame front rail, bent, with the sides', 'advice', 2702],
+      ['floor frame rear rail', 'advice', 2702],
+      ['nave', 'advice', 2702],
+    ]);
+    // Rail 80 × 45 + 3 mm a face = 86 × 51 against the 75 × 75 listed.
+    expect(found[1].message).toContain('no listed white-ash section holds 86 × 51 mm (listed: 75 × 75 mm)');
+    expect(found[0].message).toContain('straight-grained and free of knots and run-out for steam bending');
+  });
+
+  it('gives one note per species with no stock listed (the rear-axle demo lists none)', async () => {
+    const found = await findingsOf(RULE, readDemo('demo-rear-axle'));
+    expect(found.map((f) => f.subject)).toEqual(['white-ash stock', 'shagbark-hickory stock', 'white-oak stock', 'rock-elm stock']);
+    expect(found.every((f) => f.severity === 'advice' && f.code === 2701)).toBe(true);
+    expect(found[1].message).toContain('for the axle, at least 78 × 78 mm in section and 2108 mm long, 1 piece');
+  });
+
+  it('passes once every part has stock', async () => {
+    const raw = deepMerge(readDemo('demo-two-crew'), {
+      stock: {
+        lumber: [
+          { species: 'white-ash', width_mm: 100, thickness_mm: 75, lengths_mm: [2400, 3600], price_per_m3: 1350 },
+          { species: 'rock-elm', width_mm: 175, thickness_mm: 175, lengths_mm: [2400], price_per_m3: 1500 },
+          { species: 'white-oak', width_mm: 75, thickness_mm: 75, lengths_mm: [1800], price_per_m3: 1600 },
+        ],
+      },
+    });
+    const found = await findingsOf(RULE, raw);
+    expect(found.map((f) => [f.severity, f.code])).toEqual([['pass', 2704]]);
+  });
+
+  it('boundary: a part as long as the longest listed length is served, a millimetre longer is not', async () => {
+    // The yoke is 1150 mm finished, 1200 mm rough (25 mm an end): white oak 75 × 75 listed in 1200 mm, then 1199 mm.
+    const withOak = (length: number) => deepMerge(readDemo('demo-two-crew'), { stock: { lumber: [{ species: 'white-oak', width_mm: 75, thickness_mm: 75, lengths_mm: [length] }] } });
+    const yoke = async (length: number) => (await findingsOf(RULE, withOak(length))).find((f) => f.subject === 'yoke');
+    expect(await yoke(1200)).toBeUndefined();
+    const over = (await yoke(1199))!;
+    expect(over.code).toBe(2703);
+    expect(over.value).toBe(1200);
+    expect(over.limit).toBe(1199);
+  });
+});

@@ -1,0 +1,55 @@
+// The textbook cutting-stock example: Gilmore & Gomory, Operations Research 9
+// (1961), as the standard example in the GAMS model library (CUTSTOCK), named
+// in ../shared/design/reference-figures.md "Cutting stock": roll width 100;
+// pieces 45, 36, 31, 14 with demands 97, 610, 395, 211; LP bound 452.25
+// rolls, integer optimum 453.
+import { beforeAll, describe, expect, it } from 'vitest';
+import { loadLpSolver } from '../../io/load-lp-solver.ts';
+import type { CuttingInstance, LpSolver } from '../../src/stock/cutting-types.ts';
+import { planCutting, type CuttingMethod } from '../../src/stock/plan-cutting.ts';
+import { planProblems } from '../../src/stock/validate-plan.ts';
+
+const CUTSTOCK: CuttingInstance = {
+  kerf_mm: 0,
+  stock: [{ length_mm: 100 }],
+  pieces: [
+    { length_mm: 45, quantity: 97 },
+    { length_mm: 36, quantity: 610 },
+    { length_mm: 31, quantity: 395 },
+    { length_mm: 14, quantity: 211 },
+  ],
+};
+const LP_BOUND = 452.25; // GAMS CUTSTOCK (Gilmore & Gomory 1961)
+const OPTIMUM = 453; // GAMS CUTSTOCK (Gilmore & Gomory 1961)
+
+let lp: LpSolver;
+beforeAll(async () => {
+  lp = await loadLpSolver();
+});
+
+describe.each<CuttingMethod>(['column generation', 'arc flow'])('CUTSTOCK by %s', (method) => {
+  it('finds the published LP bound and integer optimum, proved, with a valid plan', () => {
+    const plan = planCutting(CUTSTOCK, lp, { method });
+    expect(plan.lower_bound).toBeCloseTo(LP_BOUND, 6);
+    expect(plan.pieces_used).toBe(OPTIMUM);
+    expect(plan.optimal).toBe(true);
+    expect(plan.gap).toBeCloseTo((OPTIMUM - LP_BOUND) / LP_BOUND, 6);
+    expect(plan.cost).toBeNull();
+    expect(plan.bought).toEqual([{ length_mm: 100, count: OPTIMUM, cost: null }]);
+    expect(planProblems(CUTSTOCK, plan)).toEqual([]);
+    // Waste: stock bought less the pieces cut (no kerf here).
+    const pieces = CUTSTOCK.pieces.reduce((s, p) => s + p.length_mm * p.quantity, 0);
+    expect(plan.waste_mm).toBeCloseTo(OPTIMUM * 100 - pieces, 6);
+    expect(plan.waste_pct).toBeCloseTo((100 * (OPTIMUM * 100 - pieces)) / (OPTIMUM * 100), 4);
+  });
+});
+
+it('first-fit decreasing alone does worse, and says it is not proved', () => {
+  const plan = planCutting(CUTSTOCK, undefined);
+  expect(plan.method).toBe('first-fit decreasing');
+  expect(plan.pieces_used).toBeGreaterThan(OPTIMUM);
+  expect(plan.optimal).toBe(false);
+  expect(planProblems(CUTSTOCK, plan)).toEqual([]);
+  // With the solver, the baseline reported beside the plan is this same plan.
+  expect(planCutting(CUTSTOCK, lp).baseline.pieces_used).toBe(plan.pieces_used);
+});
