@@ -41,15 +41,15 @@ export function arcFlow(p: CuttingProblem, lp: LpSolver, deadline: number, start
   }
 }
 
-/** The flow of a set of bins, each a path longest piece first, for a MIP start. */
-function startFlow(p: CuttingProblem, g: ArcFlowGraph, bins: Bin[]): number[] {
+/** The flow of a set of bins, each a path longest piece first, for a MIP start (none if a bin has no path). */
+function startFlow(p: CuttingProblem, g: ArcFlowGraph, bins: Bin[]): number[] | undefined {
   const index = new Map(g.arcs.map((a, k) => [`${a.from}:${a.type}`, k]));
   const x = [...g.arcs.map(() => 0), ...p.stocks.map(() => 0)];
   for (const b of bins) {
     let at = 0;
     for (const i of [...b.items].sort((u, v) => u - v)) {
       const k = index.get(`${at}:${i}`);
-      if (k === undefined) return [];
+      if (k === undefined) return undefined;
       x[k]++;
       at += p.types[i].size;
     }

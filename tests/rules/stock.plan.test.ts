@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { deepMerge, findingsOf, readDemo } from '../support/fixtures.ts';
+import { THREE_STOCKS } from '../support/three-stocks.ts';
 
 const RULE = 'stock.plan';
 
 describe(RULE, () => {
   it('advises one plan per species and section of the central-axle demo', async () => {
-    const found = await findingsOf(RULE, readDemo('demo-two-crew'));
+    const found = await findingsOf(RULE, deepMerge(readDemo('demo-two-crew'), THREE_STOCKS));
     expect(found.map((f) => [f.subject, f.severity])).toEqual([
       ['rock-elm 100 × 100 mm', 'advice'],
       ['white-ash 75 × 75 mm', 'advice'],
@@ -18,7 +19,7 @@ describe(RULE, () => {
 
   it('costs the stock at price per m³ × section × length', async () => {
     // The yoke alone in white oak 75 × 75 at 1600 per m³: one 1800 mm length = 1600 × 0.075² × 1.8 = 16.2.
-    const found = await findingsOf(RULE, readDemo('demo-two-crew'));
+    const found = await findingsOf(RULE, deepMerge(readDemo('demo-two-crew'), THREE_STOCKS));
     const oak = found.find((f) => f.subject.startsWith('white-oak'))!;
     expect(oak.message).toContain('buy 1 × 1800 mm for 16.2; 1 piece cut');
     expect(oak.value).toBe(1);

@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { deepMerge, findingsOf, readDemo } from '../support/fixtures.ts';
+import { THREE_STOCKS } from '../support/three-stocks.ts';
 
 const RULE = 'stock.unserved';
 
 describe(RULE, () => {
   it('advises on the central-axle demo: frame rails and naves are larger than the listed sections', async () => {
-    const found = await findingsOf(RULE, readDemo('demo-two-crew'));
+    const found = await findingsOf(RULE, deepMerge(readDemo('demo-two-crew'), THREE_STOCKS));
     expect(found.map((f) => [f.subject, f.severity, f.code])).toEqual([
       ['floor frame front rail, bent, with the sides', 'advice', 2702],
       ['floor frame rear rail', 'advice', 2702],
