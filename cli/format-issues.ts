@@ -6,7 +6,8 @@ import { MESSAGES } from '../src/diagnostics/messages.ts';
 export function formatIssues(file: string, issues: (InputIssue & { at?: Located })[], locate?: Locator): string {
   const lines = issues.map((i) => {
     const at = i.at ?? (i.path.length ? placeOf(i, locate) : undefined);
-    const label = [i.path.length ? pathText(i.path) : '', at ? `(line ${at.line}, column ${at.column})` : ''].filter(Boolean).join(' ');
+    const where = at?.cell ?? (at ? `line ${at.line}, column ${at.column}` : '');
+    const label = [i.path.length ? pathText(i.path) : '', where ? `(${where})` : ''].filter(Boolean).join(' ');
     return `  ${label ? `${label}: ` : ''}${i.message} [${i.code}]`;
   });
   const n = issues.length;
@@ -17,6 +18,9 @@ export function formatIssues(file: string, issues: (InputIssue & { at?: Located 
 // itself; every other problem at its value.
 function placeOf(i: InputIssue, locate?: Locator): Located | undefined {
   if (!locate) return undefined;
+  // A workbook has a cell for every key, filled or not: point at the key's own cell.
+  const own = locate(i.path);
+  if (own?.cell) return own;
   if (i.code === MESSAGES.required.code) return i.path.length > 1 ? locate(i.path.slice(0, -1), true) : locate([]);
   if (i.code === MESSAGES.unknownKey.code) return locate(i.path, true);
   return locate(i.path);

@@ -2,10 +2,13 @@ import { readFileSync, statSync } from 'node:fs';
 import { extname } from 'node:path';
 import { LineCounter, parseDocument, isMap, isNode, isScalar, type Document } from 'yaml';
 import { issue, type InputIssue, type KeyPath } from '../src/spec/input-issue.ts';
+import { readSpecWorkbook } from './read-spec-workbook.ts';
 
 export interface Located {
   line: number;
   column: number;
+  /** In a workbook: the sheet and cell, `Axle!C4` (line and column are then its row and column). */
+  cell?: string;
 }
 
 /** Where a key path sits; `key` asks for the key itself rather than its value. */
@@ -16,6 +19,12 @@ export type ReadSpec =
   | { ok: false; issues: (InputIssue & { at?: Located })[] };
 
 const KINDS: Record<string, string> = { '.yaml': 'YAML', '.yml': 'YAML', '.json': 'JSON' };
+
+/** Read a specification from YAML, JSON or a fill-in workbook (.xlsx), by the file's extension. */
+export async function readSpec(path: string): Promise<ReadSpec> {
+  if (extname(path).toLowerCase() === '.xlsx') return readSpecWorkbook(path);
+  return readSpecFile(path);
+}
 
 /** Read a YAML or JSON specification, keeping positions for error messages. */
 export function readSpecFile(path: string): ReadSpec {

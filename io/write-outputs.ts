@@ -1,11 +1,10 @@
-import { mkdir } from 'node:fs/promises';
-import { join } from 'node:path';
 import type { CheckResult } from '../src/result/check-result.ts';
-import { ensureNotSame, writeFileAtomic } from './atomic-write.ts';
+import { writeFileSet } from './write-file-set.ts';
 import { renderHtml } from './render/report-html.ts';
 import { renderMarkdown } from './render/report-md.ts';
 import { renderWorkbook } from './render/workbook.ts';
 import { SETTING_OUT_SVG_FILE } from './render/report-figures.ts';
+import { ridePlotOutputs } from './render/report-ride-md.ts';
 
 export const OUTPUT_FILES = {
   workbook: 'result.xlsx',
@@ -28,10 +27,8 @@ export async function writeOutputs(result: CheckResult, dir: string, inputPath: 
     [OUTPUT_FILES.html, renderHtml(result)],
     [OUTPUT_FILES.json, resultJson(result)],
     [OUTPUT_FILES.settingOut, `${result.cutting.setting_out.svg.trim()}\n`],
+    // The ride plots report.md links (ride-<case>-<plot>.svg); report.html holds them inline.
+    ...ridePlotOutputs(result),
   ];
-  const paths = files.map(([name]) => join(dir, name));
-  for (const p of paths) ensureNotSame(inputPath, p);
-  await mkdir(dir, { recursive: true });
-  for (const [i, [, data]] of files.entries()) await writeFileAtomic(paths[i], data);
-  return paths;
+  return writeFileSet(dir, files, inputPath);
 }

@@ -12,6 +12,9 @@ import type { CheckResult, SpecEntry } from './result/check-result.ts';
 import type { CheckedSpecification } from './spec/spec.types.ts';
 import type { LpSolver } from './stock/cutting-types.ts';
 import { usedSources } from './sources.ts';
+import { rideSummary } from './result/ride-summary.ts';
+import { floorDampingOf } from './ride/ride-build.ts';
+import { rideInput } from './ride/ride-model.ts';
 
 /**
  * The whole check of a prepared specification: pure, no I/O. The LP solver is
@@ -33,6 +36,7 @@ export function checkSpecification(spec: CheckedSpecification, entries: SpecEntr
     balance: { cases: analysis.loadCases },
     loads: collectLoads(analysis),
     cutting: analysis.cutting,
+    ...(spec.crew.length > 0 ? { ride: rideSummary(analysis.ride, analysis.floorDampingNeeded.ratio, floorDampingOf(rideInput(analysis)), analysis.floorDampingNeeded.working) } : {}),
     spec_as_checked: entries,
     sources: usedSources(spec, data, findings),
     cautions: [...CAUTIONS],

@@ -299,7 +299,7 @@ describe('axletree check on something that is not a specification file', () => {
     await writeFile(join(dir, 'spec.txt'), DEMO_TEXT);
     const r = await runCli(['check', 'spec.txt'], dir);
     expect(r.code).toBe(2);
-    expect(r.err).toContain('a specification is a .yaml, .yml or .json file');
+    expect(r.err).toContain('a specification is a .yaml, .yml, .json or .xlsx (fill-in workbook) file');
     expectNoStackTrace(r);
     expect(await readdir(dir)).toEqual(['spec.txt']);
   });

@@ -1,5 +1,5 @@
 import { basename, extname, join, resolve } from 'node:path';
-import { readSpecFile } from '../../io/read-spec.ts';
+import { readSpec } from '../../io/read-spec.ts';
 import { OutputIsInputError } from '../../io/atomic-write.ts';
 import { resultJson, writeOutputs } from '../../io/write-outputs.ts';
 import { checkSpecification } from '../../src/check.ts';
@@ -20,7 +20,7 @@ export async function checkCommand(file: string, opts: CheckOptions, con: Consol
   const data = loadData(con);
   if (!data) return EXIT.badInput;
   const input = resolve(con.cwd, file);
-  const read = readSpecFile(input);
+  const read = await readSpec(input);
   if (!read.ok) {
     con.err(formatIssues(file, read.issues));
     return EXIT.badInput;
@@ -32,6 +32,7 @@ export async function checkCommand(file: string, opts: CheckOptions, con: Consol
   }
   // The solver is loaded only once the spec is known to be good.
   const result = checkSpecification(prepared.spec, prepared.entries, data, RULES, await loadLpSolver());
+  result.input = read.raw;
   const dir = resolve(con.cwd, opts.out ?? join('axletree-out', basename(file, extname(file))));
   let written: string[];
   try {

@@ -27,6 +27,9 @@ const DECIMALS_BY_UNIT: Record<string, number> = {
   'm³': 5,
   'm²': 3,
   count: 0,
+  ms: 1,
+  /** Oscillation cycles, as the ride model counts them (may be fractional). */
+  cycles: 1,
   /** Prices are in whatever currency the specification's stock prices are in. */
   currency: 2,
 };

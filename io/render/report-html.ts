@@ -9,6 +9,7 @@ import { SETTING_OUT_SVG_FILE, STOCK_BARS_INFO } from './report-figures.ts';
 import { inlineSvg } from './inline-svg.ts';
 import { stockBarSvg } from './stock-bar-svg.ts';
 import { partLabels } from './stock-bar.ts';
+import { parseRidePlotFile, ridePlotSvg } from './ride-plots.ts';
 
 /** The check report as one self-contained HTML file: inline CSS, no external assets. */
 export function renderHtml(result: CheckResult): string {
@@ -53,7 +54,10 @@ function reportMarkdownIt(result: CheckResult): MarkdownIt {
 function drawFigures(md: MarkdownIt, result: CheckResult): void {
   const image = md.renderer.rules.image!;
   md.renderer.rules.image = (tokens, idx, options, env, self) => {
-    if (tokens[idx].attrGet('src') !== SETTING_OUT_SVG_FILE) return image(tokens, idx, options, env, self);
+    const src = String(tokens[idx].attrGet('src') ?? '');
+    const ride = parseRidePlotFile(src);
+    if (ride) return ridePlotHtml(result, ride, src);
+    if (src !== SETTING_OUT_SVG_FILE) return image(tokens, idx, options, env, self);
     const svg = inlineSvg(result.cutting.setting_out.svg);
     return svg === null
       ? `<em>The drawing could not be placed inline; see ${SETTING_OUT_SVG_FILE} beside report.md.</em>`
@@ -72,6 +76,14 @@ function drawFigures(md: MarkdownIt, result: CheckResult): void {
     });
     return `<div class="stock-bars">\n${bars.join('\n')}\n</div>\n`;
   };
+}
+
+/** A ride plot drawn from the result's thinned series; the Markdown names only the file. */
+function ridePlotHtml(result: CheckResult, plot: NonNullable<ReturnType<typeof parseRidePlotFile>>, file: string): string {
+  const c = result.ride?.cases.find((r) => r.case === plot.case);
+  const svg = c ? ridePlotSvg(c.title, c.plot, plot.kind) : null;
+  const inline = svg === null ? null : inlineSvg(svg);
+  return inline === null ? `<em>The plot could not be placed inline; see ${file} beside report.md.</em>` : `<span class="ride-plot">${inline}</span>`;
 }
 
 /** Classes on our own h2 headings: the verdict, the cautions, and sections that start a printed page. */

@@ -9,6 +9,7 @@ import { headlineCaution, requireCautions } from './result-cautions.ts';
 import { SECTIONS, VERDICT_PREFIX } from './report-sections.ts';
 import { cutListSections } from './report-cutting-md.ts';
 import { stockPlanSections } from './report-stock-plan-md.ts';
+import { rideSections } from './report-ride-md.ts';
 
 /** The check report as Markdown: verdict and cautions first, then the evidence. */
 export function renderMarkdown(result: CheckResult): string {
@@ -34,6 +35,7 @@ export function renderMarkdown(result: CheckResult): string {
     ...result.balance.cases.flatMap(loadCaseWorking),
     '## Loads',
     loadsTable(result),
+    ...rideSections(result),
     ...cutListSections(result),
     ...stockPlanSections(result),
     `## ${SECTIONS.spec.title}`,

@@ -9,6 +9,7 @@ export const SECTIONS = {
   working: { title: 'Working of flagged findings', newPage: true },
   figures: { title: 'Key figures', newPage: false },
   massBalance: { title: 'Mass and balance', newPage: true },
+  ride: { title: 'Ride', newPage: true },
   cutList: { title: 'Cut list', newPage: true },
   leather: { title: 'Leather and rawhide', newPage: false },
   settingOut: { title: 'Wheel setting-out', newPage: true },

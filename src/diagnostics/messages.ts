@@ -8,7 +8,7 @@ export const MESSAGES = {
   fileIsDirectory: { code: 1002, text: '{path} is a directory; give the specification file inside it.' },
   fileEmpty: { code: 1003, text: '{path} is empty; a specification needs at least spec_version, name, box, axle, wheels, pole, yoke, floor_straps, crew, team and operation.' },
   fileUnreadable: { code: 1004, text: 'Cannot read {path}: {reason}.' },
-  fileKind: { code: 1005, text: '{path}: a specification is a .yaml, .yml or .json file.' },
+  fileKind: { code: 1005, text: '{path}: a specification is a .yaml, .yml, .json or .xlsx (fill-in workbook) file.' },
   syntax: { code: 1010, text: 'The file is not valid {format}: {reason}.' },
   notAnObject: { code: 1011, text: 'The specification must be a mapping of keys to values at the top level.' },
   unitString: { code: 1020, text: '{reason}; allowed: a number in {unit}, or a string such as "{example}".' },
@@ -20,6 +20,12 @@ export const MESSAGES = {
   notInList: { code: 1034, text: 'the value {value} is not allowed; allowed: {allowed}.' },
   badText: { code: 1035, text: 'the value {value} is not allowed; {allowed}.' },
   tooMany: { code: 1036, text: 'the list has the wrong number of entries; allowed: {allowed}.' },
+  // Reading a specification workbook (104x)
+  sheetMissing: { code: 1040, text: 'the workbook has no sheet "{sheet}" ({what}); every section sheet must be there, left blank where a section is not used.' },
+  sheetExtra: { code: 1041, text: 'the sheet "{sheet}" is not part of a specification workbook; allowed sheets: {allowed}. Remove it, or give a renamed section sheet its name back.' },
+  rowUnknown: { code: 1042, text: 'the key column holds "{key}", which is not a key of this sheet; allowed keys here: {allowed}.' },
+  rowTwice: { code: 1043, text: 'the key "{key}" has two rows (also at {other}); keep one.' },
+  notAWorkbook: { code: 1044, text: 'Cannot read {path} as an .xlsx workbook: {reason}.' },
   // Cross-field checks
   unknownSpecies: { code: 1101, text: 'unknown species "{value}"; known species: {allowed}.' },
   unknownLeather: { code: 1102, text: 'unknown material "{value}"; known materials: {allowed}.' },
@@ -108,6 +114,18 @@ export const MESSAGES = {
   bentBlanks: { code: 2721, text: '{part}: cut {blanks} blank{plural} ({quantity} + {spares} spare at {good} % good bends), {size} mm rough, from straight-grained {species} free of knots and run-out.' },
   sidingNotListed: { code: 2731, text: 'The siding is given only as a mass ({mass} kg), so its parts are not in the cut list or the stock plan.' },
   sidingExtraParts: { code: 2732, text: 'The siding is given as a mass ({mass} kg); the {parts} under stock.extra_parts {are} in the cut list and the stock plan.' },
+  // Floor test (29xx): `axletree floor-test`, the record as read and the estimate.
+  floorCsvEmpty: { code: 2901, text: '{path} holds no header row; a floor-test record starts with a header naming time_s and displacement_mm, then one row per sample.' },
+  floorCsvColumn: { code: 2902, text: 'the header has no column {column}; found: {found}.' },
+  floorCsvTwice: { code: 2903, text: 'the header names {column} twice; name each column once.' },
+  floorCsvFields: { code: 2904, text: 'the row has {count} fields but the header has {expected}.' },
+  floorCsvNumber: { code: 2905, text: '{column} is "{value}"; allowed: a finite number.' },
+  floorCsvTime: { code: 2906, text: 'time_s {value} s does not come after {previous} s on line {previousLine}; times must increase.' },
+  floorCsvShort: { code: 2907, text: '{path} holds {count} samples; a floor test needs at least {min}.' },
+  floorTestMass: { code: 2911, text: '--mass-kg must be a positive number of kilograms, the mass dropped on the floor (got {value}).' },
+  floorTestStill: { code: 2912, text: 'the record does not move above its noise ({noise} mm); no drop is seen.' },
+  floorTestFewCycles: { code: 2913, text: 'after the first peak at {time} s the record holds {count} half-cycles above the noise ({noise} mm); at least {min} are needed for a damping estimate; record for longer or with less noise.' },
+  floorTestFit: { code: 2914, text: 'the damped-sine fit did not settle ({reason}); the record may not be a free vibration (a bounce, or a floor far from linear).' },
 } as const;
 
 export type MessageKey = keyof typeof MESSAGES;

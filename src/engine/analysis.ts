@@ -11,6 +11,18 @@ import { loadFactor } from '../model/load-factors.ts';
 import type { LpSolver } from '../stock/cutting-types.ts';
 import type { CuttingResult } from '../cutlist/cutting-result.ts';
 import { cuttingResult } from '../cutlist/cutting-model.ts';
+import type { RideCase, RideResult } from '../ride/ride-types.ts';
+import { rideCases, rideInput } from '../ride/ride-model.ts';
+import { floorDampingNeeded, type DampingNeeded } from '../ride/damping-tuner.ts';
+import { crewFloorFactor, wheelFactor, yokeIncrease, type DynamicFactor } from '../ride/dynamic-factors.ts';
+
+/** The bump case's factors: the crew's for the floor and lashings, the wheels' for the members. */
+export interface BumpFactors {
+  crew: DynamicFactor;
+  wheel: DynamicFactor;
+  /** The ride model's largest yoke force above the standing one, N; null without a ride. */
+  yokeIncrease_N: number | null;
+}
 
 /** Models computed at most once per check, on first use by any rule. */
 export class Analysis {
@@ -22,6 +34,9 @@ export class Analysis {
   #floorBump?: FloorModel;
   #memberCases?: MemberCase[];
   #cutting?: CuttingResult;
+  #ride?: Record<RideCase, RideResult>;
+  #dampingNeeded?: DampingNeeded;
+  #bumpFactors?: BumpFactors;
   constructor(
     readonly spec: CheckedSpecification,
     readonly data: RulesData,
@@ -46,14 +61,28 @@ export class Analysis {
   get floorStatic(): FloorModel {
     return (this.#floorStatic ??= floorModel(this.spec, this.data, { value: 1, source: 'the crew standing, no dynamic factor' }));
   }
-  /** The strap floor under the crew's weight times the bump dynamic factor. */
+  /** The strap floor under the crew's weight times the bump factor (the ride model's crew floor factor). */
   get floorBump(): FloorModel {
-    const f = loadFactor(this.data, 'bump_dynamic_factor');
-    return (this.#floorBump ??= floorModel(this.spec, this.data, { value: f.value, source: `bump_dynamic_factor, rules/limits/load-cases.yaml: ${f.source}` }));
+    return (this.#floorBump ??= floorModel(this.spec, this.data, this.bumpFactors.crew));
+  }
+  /** The ride model's three cases (ridge, one wheel, drop test), run once. */
+  get ride(): Record<RideCase, RideResult> {
+    return (this.#ride ??= rideCases(rideInput(this)));
+  }
+  /** The least floor damping ratio that meets the ride rules (the tuner). */
+  get floorDampingNeeded(): DampingNeeded {
+    return (this.#dampingNeeded ??= floorDampingNeeded(rideInput(this)));
+  }
+  /** The bump case's dynamic factors from the ride model, with where they came from. */
+  get bumpFactors(): BumpFactors {
+    if (this.#bumpFactors) return this.#bumpFactors;
+    const placeholder = loadFactor(this.data, 'bump_dynamic_factor');
+    const rides = this.spec.crew.length > 0 ? this.ride : null;
+    return (this.#bumpFactors = { crew: crewFloorFactor(rides, placeholder), wheel: wheelFactor(rides, placeholder), yokeIncrease_N: yokeIncrease(rides)?.value ?? null });
   }
   /** The load cases the timber members are checked in, with their load-duration classes. */
   get memberCases(): MemberCase[] {
-    return (this.#memberCases ??= memberCases(this.spec, this.data, this.mass, this.loadCases, this.turn));
+    return (this.#memberCases ??= memberCases(this.spec, this.data, this.mass, this.loadCases, this.turn, { factor: this.bumpFactors.wheel, yokeIncrease_N: this.bumpFactors.yokeIncrease_N }));
   }
   /** Cut list, leather list, wheel setting-out and stock plan. */
   get cutting(): CuttingResult {
@@ -61,6 +90,6 @@ export class Analysis {
   }
   /** The force each lashed joint must pass, case by case. */
   get lashingDemands(): Record<Joint, JointDemand> {
-    return (this.#lashingDemands ??= lashingDemands({ spec: this.spec, data: this.data, mass: this.mass, cases: this.loadCases, turn: this.turn, floorBump: this.floorBump }));
+    return (this.#lashingDemands ??= lashingDemands({ spec: this.spec, data: this.data, mass: this.mass, cases: this.loadCases, turn: this.turn, floorBump: this.floorBump, bump: this.bumpFactors.crew }));
   }
 }

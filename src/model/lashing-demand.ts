@@ -37,6 +37,8 @@ export interface DemandInput {
   turn: TurnModel;
   /** The strap floor under the bump factor; undefined where no floor model ran. */
   floorBump: FloorResult | undefined;
+  /** The bump factor and its source (the ride model's crew floor factor); without it, the placeholder. */
+  bump?: { value: number; source: string };
 }
 
 // Parts of the rolling assembly that are not carried by the box: the running
@@ -50,12 +52,12 @@ const f1 = (v: number) => v.toFixed(1);
 const f3 = (v: number) => v.toFixed(3);
 
 interface Factors {
-  bump: Limit;
+  bump: { value: number; source: string };
   shock: Limit;
 }
 
 export function lashingDemands(i: DemandInput): Record<Joint, JointDemand> {
-  const k: Factors = { bump: loadFactor(i.data, 'bump_dynamic_factor'), shock: loadFactor(i.data, 'stopping_shock_factor') };
+  const k: Factors = { bump: i.bump ?? placeholderBump(i.data), shock: loadFactor(i.data, 'stopping_shock_factor') };
   const boxParts = i.mass.parts.filter((p) => p.group === 'rolling' && !RUNNING_GEAR.has(p.part));
   const corners = cornerDemand(i.spec, i.floorBump);
   const siding = i.spec.box.siding_mass_kg;
@@ -133,8 +135,8 @@ function poleCases(joint: 'pole-to-axle' | 'pole-to-yoke', i: DemandInput, k: Fa
   ]));
 
   const stat = worst(standing.map(asVertical));
-  out.push(jointForce('bump', `bump, standing load × ${k.bump.value}`, { normal: k.bump.value * vertical(stat) }, [
-    `normal = k_bump × ${vText(stat)}: ${k.bump.value} × ${f1(vertical(stat))} = ${f1(k.bump.value * vertical(stat))} N`,
+  out.push(jointForce('bump', `bump, standing load × ${k.bump.value.toFixed(2)}`, { normal: k.bump.value * vertical(stat) }, [
+    `normal = k_bump × ${vText(stat)}: ${k.bump.value.toFixed(3)} × ${f1(vertical(stat))} = ${f1(k.bump.value * vertical(stat))} N`,
   ]));
 
   if (turn.steady && turn.lateralAccel > 0) {
@@ -168,9 +170,9 @@ function carriedCases(c: Carried, i: DemandInput, k: Factors): JointForce[] {
   const out: JointForce[] = [
     jointForce('draught', `draught, accelerating at ${spec.operation.acceleration_g} g`, { along: c.kg * A, normal: W, apart: 0 }, [c.basis, `along = m·a = ${f1(c.kg)} kg × ${f3(A)} m/s² = ${f1(c.kg * A)} N`, ...seated]),
     jointForce('braking', `braking at ${spec.operation.braking_g} g with the stopping shock`, { along: c.kg * B * k.shock.value, normal: W, apart: 0 }, [c.basis, `along = m·b·k_stop = ${f1(c.kg)} kg × ${f3(B)} m/s² × ${k.shock.value} = ${f1(c.kg * B * k.shock.value)} N`, ...seated]),
-    jointForce('bump', `bump, weight × ${kb}`, { normal: kb * W, apart: Math.max(0, kb - 1) * W }, [
+    jointForce('bump', `bump, weight × ${kb.toFixed(2)}`, { normal: kb * W, apart: Math.max(0, kb - 1) * W }, [
       c.basis,
-      `normal = k_bump·m·g = ${kb} × ${f1(c.kg)} kg × ${G} = ${f1(kb * W)} N, pressing the seat`,
+      `normal = k_bump·m·g = ${kb.toFixed(3)} × ${f1(c.kg)} kg × ${G} = ${f1(kb * W)} N, pressing the seat`,
       `apart = (k_bump − 1)·m·g = ${f1(Math.max(0, kb - 1))} × ${f1(W)} = ${f1(Math.max(0, kb - 1) * W)} N (the rebound, the weight not counted off)`,
     ]),
   ];
@@ -180,7 +182,12 @@ function carriedCases(c: Carried, i: DemandInput, k: Factors): JointForce[] {
   return out;
 }
 
+function placeholderBump(data: RulesData): { value: number; source: string } {
+  const f = loadFactor(data, 'bump_dynamic_factor');
+  return { value: f.value, source: `placeholder bump_dynamic_factor ${f.value}: ${f.source}` };
+}
+
 /** The sources of the load factors the demands use, for a finding's source line. */
-export function demandSources(data: RulesData): string {
-  return `bump factor: ${loadFactor(data, 'bump_dynamic_factor').source}; stopping shock: ${loadFactor(data, 'stopping_shock_factor').source}`;
+export function demandSources(data: RulesData, bump: { value: number; source: string } = placeholderBump(data)): string {
+  return `bump factor ${bump.value.toFixed(2)}: ${bump.source}; stopping shock: ${loadFactor(data, 'stopping_shock_factor').source}`;
 }

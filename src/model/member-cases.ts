@@ -53,9 +53,18 @@ function envelope(list: readonly { title: string; axle_N: number; pole_N: number
   };
 }
 
+const standingPole = (cases: readonly LoadCaseResult[]) => envelope(asLoads(cases.filter((c) => c.accel_g === 0))).pole_N;
+
 const asLoads = (cases: readonly LoadCaseResult[]) => cases.map((c) => ({ title: c.title, axle_N: c.axle_load_N, pole_N: c.pole_load_N }));
 
-export function memberCases(spec: CheckedSpecification, data: RulesData, mass: MassModel, cases: readonly LoadCaseResult[], turn: TurnModel): MemberCase[] {
+/** The bump case's factor and where it came from; without one, the placeholder bump_dynamic_factor. */
+export interface BumpInput {
+  factor: { value: number; source: string };
+  /** The ride model's largest yoke force above the standing one, N: added to the worst standing pole load when that gives more. */
+  yokeIncrease_N: number | null;
+}
+
+export function memberCases(spec: CheckedSpecification, data: RulesData, mass: MassModel, cases: readonly LoadCaseResult[], turn: TurnModel, bumpIn?: BumpInput): MemberCase[] {
   const m = mass.rolling.mass_kg;
   const Crr = data.grounds[spec.operation.ground].rolling_resistance.value;
   const standingCases = cases.filter((c) => c.accel_g === 0);
@@ -65,14 +74,20 @@ export function memberCases(spec: CheckedSpecification, data: RulesData, mass: M
   const noCrew = { ...spec, crew: [] };
   const dead = staticPoleLoad(noCrew, data, massModel(noCrew, data));
   const standing = envelope(asLoads(standingCases));
-  const bump = loadFactor(data, 'bump_dynamic_factor');
+  const placeholder = loadFactor(data, 'bump_dynamic_factor');
+  const bump = bumpIn?.factor ?? { value: placeholder.value, source: `placeholder bump_dynamic_factor ${placeholder.value}: ${placeholder.source}` };
+  // The pole: the factor on the worst standing load, or that load plus the ride's yoke increase, whichever is more.
+  const poleByFactor = standingPole(cases) * bump.value;
+  const poleByRide = bumpIn?.yokeIncrease_N != null ? standingPole(cases) + bumpIn.yokeIncrease_N : -Infinity;
+  const bumpPole = Math.max(poleByFactor, poleByRide);
+  const poleText = poleByRide > poleByFactor ? `|R_pole| = standing ${f(standingPole(cases))} + ride model's yoke increase ${f(bumpIn!.yokeIncrease_N!)} = ${f(bumpPole)} N` : `|R_pole| = ${f(bumpPole)} N`;
   const shock = loadFactor(data, 'stopping_shock_factor');
   const asPlaced = cases.find((c) => c.id === 'static')!;
 
   const out: MemberCase[] = [
     { id: 'dead', title: 'dead load alone (no crew)', duration: 'permanent', wheel_N: dead.axle_N / 2, wheelLateral_N: 0, pole_N: Math.abs(dead.pole_N), poleAxial_N: 0, gravityFactor: 1, sources: [], working: `the chariot without its crew: N_w = ${f(dead.axle_N)} / 2 = ${f(dead.axle_N / 2)} N; |R_pole| = ${f(Math.abs(dead.pole_N))} N` },
     { id: 'standing', title: 'standing with the crew (worst crew position)', duration: 'short', wheel_N: standing.wheel_N, wheelLateral_N: 0, pole_N: standing.pole_N, poleAxial_N: 0, gravityFactor: 1, sources: [], working: standing.working },
-    { id: 'bump', title: `bump (standing × ${bump.value})`, duration: 'instantaneous', wheel_N: standing.wheel_N * bump.value, wheelLateral_N: 0, pole_N: standing.pole_N * bump.value, poleAxial_N: 0, gravityFactor: bump.value, sources: [bump.source], working: `standing loads × bump_dynamic_factor ${bump.value}: N_w = ${f(standing.wheel_N * bump.value)} N; |R_pole| = ${f(standing.pole_N * bump.value)} N` },
+    { id: 'bump', title: `bump (standing × ${bump.value.toFixed(2)})`, duration: 'instantaneous', wheel_N: standing.wheel_N * bump.value, wheelLateral_N: 0, pole_N: bumpPole, poleAxial_N: 0, gravityFactor: bump.value, sources: [bump.source], working: `standing loads × bump factor ${bump.value.toFixed(2)} (${bump.source}): N_w = ${f(standing.wheel_N * bump.value)} N; ${poleText}` },
     {
       id: 'turn',
       title: `outer wheel in the design turn (${spec.operation.turn_radius_m} m at ${spec.operation.speed_kmh} km/h)`,

@@ -1,5 +1,6 @@
 import type { Finding, Severity } from '../findings/finding.ts';
 import type { CuttingResult } from '../cutlist/cutting-result.ts';
+import type { RideSummary } from './ride-summary.ts';
 
 export interface Figure {
   value: number;
@@ -66,7 +67,11 @@ export interface CheckResult {
   loads: LoadEntry[];
   /** Cut list, leather list, wheel setting-out and stock plan. */
   cutting: CuttingResult;
+  /** The ride model's cases (results without the full series, plus thinned series to plot) and the floor-damping tuner; absent where the model was not run. */
+  ride?: RideSummary;
   spec_as_checked: SpecEntry[];
+  /** The specification as read, before conversion and defaults; the result workbook starts with it. */
+  input?: unknown;
   /** Every source cited by a limit, material value or finding. */
   sources: string[];
   cautions: string[];

@@ -22,6 +22,10 @@ export interface CrewRide {
   airborne_ms: number;
   /** Peak floor force over the static force. */
   floor_dlf: number;
+  /** Largest height of the person above the floor beneath them while off it, mm (0 if never off). */
+  lift_mm: number;
+  /** Cycles until this person's motion falls below 10 % of its first amplitude; null if it never does in the run. */
+  decay_cycles: number | null;
 }
 
 export interface WheelRide {
@@ -38,10 +42,15 @@ export interface RideResult {
   wheels: WheelRide[];
   yokeForceMin_N: number;
   yokeForceMax_N: number;
+  /** The yoke force standing (the balance model's pole load), N. */
+  yokeForceStatic_N: number;
   /** Cycles until the crew's motion falls below 10 % of its first amplitude; null if it never does in the run. */
   decayCycles: number | null;
   /** Integration method and step, for the working. */
   method: string;
   steps: number;
   series: RideSeries;
+  /** The model's parameters with their working, and the sources of its data. */
+  working: string[];
+  sources: string[];
 }

@@ -308,6 +308,23 @@ export interface BuildSpecification {
      * Tension in each strap before loading; the builder's estimate. Default 150 (from memory).
      */
     pretension_N?: number | string;
+    /**
+     * A floor sample of this build measured by a drop test (`axletree floor-test`). When given, the ride model uses its damping ratio for the floor under the crew instead of the default from the rules data.
+     */
+    measured?: {
+      /**
+       * Damping ratio of the floor (fraction of critical) from the test: the fitted value `axletree floor-test` reports as damping_ratio.
+       */
+      damping_ratio: number;
+      /**
+       * Stiffness k = M (2 pi f_n)^2 from the test, for the record and for comparison with the strap-floor model; the ride model keeps the floor stiffness the cable-net solver computes for the crew's own load.
+       */
+      stiffness_N_per_mm?: number | string;
+      /**
+       * Where the numbers come from: the test's date, the sample, the mass and the drop height, or the report file.
+       */
+      source: string;
+    };
   };
   /**
    * @maxItems 20
@@ -397,6 +414,14 @@ export interface BuildSpecification {
      * A coordinate in the unit of its key; a string with another unit is converted.
      */
     bump_height_mm?: number | string;
+    /**
+     * Length along the track of the design bump (a raised-cosine ridge or stone) for the ride model. Default 200 (from memory: a stone or a rut edge).
+     */
+    bump_length_mm?: number | string;
+    /**
+     * Height the ride model's drop test releases the chariot from, every point above its standing position. Default 500 (from memory).
+     */
+    drop_height_mm?: number | string;
     /**
      * Ground type from rules/grounds.yaml; sets rolling resistance and friction. Default turf.
      */
@@ -789,6 +814,23 @@ export interface CheckedSpecification {
      * Tension in each strap before loading; the builder's estimate. Default 150 (from memory).
      */
     pretension_N: number;
+    /**
+     * A floor sample of this build measured by a drop test (`axletree floor-test`). When given, the ride model uses its damping ratio for the floor under the crew instead of the default from the rules data.
+     */
+    measured?: {
+      /**
+       * Damping ratio of the floor (fraction of critical) from the test: the fitted value `axletree floor-test` reports as damping_ratio.
+       */
+      damping_ratio: number;
+      /**
+       * Stiffness k = M (2 pi f_n)^2 from the test, for the record and for comparison with the strap-floor model; the ride model keeps the floor stiffness the cable-net solver computes for the crew's own load.
+       */
+      stiffness_N_per_mm?: number;
+      /**
+       * Where the numbers come from: the test's date, the sample, the mass and the drop height, or the report file.
+       */
+      source: string;
+    };
   };
   /**
    * @maxItems 20
@@ -878,6 +920,14 @@ export interface CheckedSpecification {
      * A coordinate in the unit of its key; a string with another unit is converted.
      */
     bump_height_mm: number;
+    /**
+     * Length along the track of the design bump (a raised-cosine ridge or stone) for the ride model. Default 200 (from memory: a stone or a rut edge).
+     */
+    bump_length_mm: number;
+    /**
+     * Height the ride model's drop test releases the chariot from, every point above its standing position. Default 500 (from memory).
+     */
+    drop_height_mm: number;
     /**
      * Ground type from rules/grounds.yaml; sets rolling resistance and friction. Default turf.
      */

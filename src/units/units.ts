@@ -19,6 +19,8 @@ export const UNITS = {
   deg: { suffix: '_deg', symbol: '°', qty: 'degree', si: Math.PI / 180, siSymbol: 'rad' },
   kmh: { suffix: '_kmh', symbol: 'km/h', qty: 'km/h', si: 1 / 3.6, siSymbol: 'm/s' },
   N: { suffix: '_N', symbol: 'N', qty: 'N', si: 1, siSymbol: 'N' },
+  // A stiffness; its key also ends in _mm, so the longest-suffix rule matters.
+  N_per_mm: { suffix: '_N_per_mm', symbol: 'N/mm', qty: 'N/mm', si: 1000, siSymbol: 'N/m' },
   pct: { suffix: '_pct', symbol: '%', qty: 'percent', si: 0.01, siSymbol: '1' },
   // Standard gravity; js-quantities calls it "gee" ("g" would be grams).
   g: { suffix: '_g', symbol: 'g', qty: 'gee', si: 9.80665, siSymbol: 'm/s²' },

@@ -37,7 +37,7 @@ export const lashingMissing: Rule = {
           : severity === 'fail'
             ? `Lash the ${joint} joint and list it under lashings, so that its strength is checked.`
             : `Lash the ${joint} joint and list it under lashings, or make sure its joinery holds the force shown.`,
-        source: `mechanics note, section 7; ${demandSources(ctx.data)}`,
+        source: `mechanics note, section 7; ${demandSources(ctx.data, ctx.analysis.bumpFactors.crew)}`,
         working: [
           `${joint}: ${d.where}`,
           `needed: ${need.level} (${need.why})`,

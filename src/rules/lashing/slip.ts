@@ -37,7 +37,7 @@ export const lashingSlip: Rule = {
         fix: severity === 'pass'
           ? 'None needed; the clamp relies on the pretension: retighten leather that has stretched.'
           : 'Add wraps or lay them tighter (rawhide laid wet shrinks tight as it dries), notch or peg the joint so it cannot slide, or measure the friction of your own timber.',
-        source: `${mu.source}; ${adv.source}; ${demandSources(ctx.data)}`,
+        source: `${mu.source}; ${adv.source}; ${demandSources(ctx.data, ctx.analysis.bumpFactors.crew)}`,
         working: [
           `${l.joint}: ${d.where}; ${l.wraps} wraps of ${l.material} ${lashingSize(l)} mm at an estimated ${l.pretension_N} N each`,
           ...(gov ? [gov.working, caseList(d, 'shear_N')] : ['no load reaches this joint']),

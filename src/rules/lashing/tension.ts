@@ -40,7 +40,7 @@ export const lashingTension: Rule = {
         fix: severity === 'pass'
           ? 'None needed; test strips of your own hide to confirm the strength.'
           : `Add wraps, use a wider or thicker strap or a stronger leather${wet ? ', or keep the lashing dry' : ''}; ${byPretension ? 'or lay the wraps less tight' : 'or take part of the load with a peg or notch'}.`,
-        source: `${sf.source}; strength: ${leather.tensile_strength_MPa.source}${wet ? `; wet: ${leather.wet_strength_factor.source}` : ''}; ${demandSources(ctx.data)}`,
+        source: `${sf.source}; strength: ${leather.tensile_strength_MPa.source}${wet ? `; wet: ${leather.wet_strength_factor.source}` : ''}; ${demandSources(ctx.data, ctx.analysis.bumpFactors.crew)}`,
         working: [
           `${l.joint}: ${d.where}; ${l.wraps} wraps of ${l.material} ${lashingSize(l)} mm`,
           ...(gov ? [gov.working, caseList(d, 'held_N')] : ['no load reaches this joint']),

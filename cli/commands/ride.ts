@@ -1,0 +1,92 @@
+import { basename, extname, join, resolve } from 'node:path';
+import { OutputIsInputError } from '../../io/atomic-write.ts';
+import { readSpecFile } from '../../io/read-spec.ts';
+import { rideCsv } from '../../io/render/ride-csv.ts';
+import { ridePlotFiles } from '../../io/render/ride-plots.ts';
+import { rideMarkdown } from '../../io/render/ride-report-md.ts';
+import { writeFileSet } from '../../io/write-file-set.ts';
+import { CAUTIONS } from '../../src/cautions.ts';
+import { Analysis } from '../../src/engine/analysis.ts';
+import { floorDampingOf } from '../../src/ride/ride-build.ts';
+import { RIDE_CASES, rideCase, rideInput } from '../../src/ride/ride-model.ts';
+import type { RideCase, RideResult } from '../../src/ride/ride-types.ts';
+import { prepareSpec } from '../../src/spec/prepare.ts';
+import { EXIT, type Console } from '../console.ts';
+import { formatIssues } from '../format-issues.ts';
+import { loadData } from '../load-data.ts';
+
+export interface RideOptions {
+  case?: string;
+  out?: string;
+  json: boolean;
+}
+
+export const RIDE_REPORT_FILE = 'ride.md';
+export const rideCsvFile = (c: RideCase) => `ride-${c}.csv`;
+
+/** `axletree ride <spec> [--case ridge|one-wheel|drop] [--out DIR] [--json]`: the ride model's time series, plots and report. */
+export async function rideCommand(file: string, opts: RideOptions, con: Console): Promise<number> {
+  if (opts.case !== undefined && !(RIDE_CASES as readonly string[]).includes(opts.case)) {
+    con.err(`axletree ride: unknown case "${opts.case}"; cases: ${RIDE_CASES.join(', ')}.\n`);
+    return EXIT.badInput;
+  }
+  const data = loadData(con);
+  if (!data) return EXIT.badInput;
+  const input = resolve(con.cwd, file);
+  const read = readSpecFile(input);
+  if (!read.ok) {
+    con.err(formatIssues(file, read.issues));
+    return EXIT.badInput;
+  }
+  const prepared = prepareSpec(read.raw, data);
+  if (!prepared.ok) {
+    con.err(formatIssues(file, prepared.issues, read.locate));
+    return EXIT.badInput;
+  }
+  const analysis = new Analysis(prepared.spec, data);
+  const cases = opts.case ? [opts.case as RideCase] : [...RIDE_CASES];
+  const results = cases.map((c) => rideCase(analysis, c));
+  const plots = new Map(results.map((r) => [r.case, ridePlotFiles(r.case, r.title, r.series)]));
+  const report = rideMarkdown({
+    specName: prepared.spec.name,
+    cases: results,
+    floorDampingUsed: floorDampingOf(rideInput(analysis)),
+    plots: (c) => (plots.get(c) ?? []).map(([name]) => name),
+    csv: rideCsvFile,
+    cautions: CAUTIONS,
+  });
+  const files: [string, string][] = [
+    [RIDE_REPORT_FILE, report],
+    ...results.flatMap((r): [string, string][] => [[rideCsvFile(r.case), rideCsv(r.series)], ...(plots.get(r.case) ?? [])]),
+  ];
+  const dir = resolve(con.cwd, opts.out ?? join('axletree-out', basename(file, extname(file)), 'ride'));
+  let written: string[];
+  try {
+    written = await writeFileSet(dir, files, input);
+  } catch (e) {
+    if (e instanceof OutputIsInputError) {
+      con.err(`axletree: ${e.message}; choose another --out directory.\n`);
+      return EXIT.badInput;
+    }
+    throw e;
+  }
+  const text = rideSummaryText(prepared.spec.name, results, written);
+  if (opts.json) {
+    // The long series are left out; they are in the CSV files named here.
+    const cases = results.map(({ series: _series, ...rest }) => ({ ...rest, series_csv: join(dir, rideCsvFile(rest.case)) }));
+    con.out(JSON.stringify({ spec_name: prepared.spec.name, series: 'omitted; see series_csv', cases }, null, 2) + '\n');
+    con.err(text);
+  } else {
+    con.out(text);
+  }
+  return EXIT.ok;
+}
+
+function rideSummaryText(name: string, results: readonly RideResult[], written: string[]): string {
+  const lines = results.map((r) => {
+    const crew = r.crew.map((c) => `${c.role} rise ${c.rise_mm.toFixed(1)} mm, off the floor ${c.airborne_ms.toFixed(1)} ms, floor DLF ${c.floor_dlf.toFixed(2)}`).join('; ');
+    const decay = r.decayCycles === null ? 'no decay to 10 % in the run' : `${r.decayCycles.toFixed(1)} cycles to 10 %`;
+    return `  ${r.case}: ${crew}; yoke ${r.yokeForceMin_N.toFixed(0)} to ${r.yokeForceMax_N.toFixed(0)} N; ${decay}`;
+  });
+  return [`${name}: ride model`, ...lines, 'written:', ...written.map((w) => `  ${w}`)].join('\n') + '\n';
+}

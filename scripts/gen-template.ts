@@ -1,0 +1,12 @@
+// Regenerates templates/specification.xlsx, the blank fill-in workbook, from
+// the schema and the rules data; a test fails while the copy is stale.
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { writeFileAtomic } from '../io/atomic-write.ts';
+import { defaultRulesDir, loadRulesData } from '../io/load-rules-data.ts';
+import { TEMPLATE_FILE, templateWorkbook } from '../io/spec-workbook/template.ts';
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+const bytes = await templateWorkbook(loadRulesData(defaultRulesDir())).xlsx.writeBuffer();
+await writeFileAtomic(join(root, TEMPLATE_FILE), new Uint8Array(bytes));
+console.log(`wrote ${TEMPLATE_FILE}`);

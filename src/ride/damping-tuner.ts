@@ -1,0 +1,54 @@
+import type { RulesData } from '../data/rules-data.ts';
+import { bisectLeast } from './bisect-least.ts';
+import type { RideInput } from './ride-build.ts';
+import { rideLimit } from './ride-data.ts';
+import { RIDE_CASES, rideCaseOf } from './ride-model.ts';
+import type { RideCase, RideResult } from './ride-types.ts';
+import { meetsRideRules, type CrewLimits } from './ride-verdict.ts';
+
+// The floor-damping tuner: the least floor damping ratio with which the crew
+// stay on the floor over the design bump and their motion dies out within the
+// decay rule's cycles, found by bisection over full simulations of all three
+// cases (mechanics note, section 8).
+
+export interface DampingNeeded {
+  /** The least floor damping ratio that meets both rules; null if none up to the upper bound does. */
+  ratio: number | null;
+  /** The bounds searched and the relative tolerance. */
+  lower: number;
+  upper: number;
+  tolerance: number;
+  /** True when even the lower bound meets them (any damping does). */
+  atLower: boolean;
+  simulations: number;
+  working: string;
+}
+
+export const crewLimits = (data: RulesData): CrewLimits => ({
+  maxAirborne_ms: rideLimit(data, 'ride.crew-airborne', 'max_airborne_ms'),
+  maxRise_mm: rideLimit(data, 'ride.crew-airborne', 'max_rise_mm'),
+});
+
+export function floorDampingNeeded(i: RideInput, lower = 0.005, upper = 1, tolerance = 1e-3): DampingNeeded {
+  const limits = crewLimits(i.data);
+  const maxCycles = rideLimit(i.data, 'ride.decay', 'max_cycles').value;
+  let simulations = 0;
+  // The drop first: the decay most often decides, and a failing case ends the trial.
+  const order: RideCase[] = ['drop', ...RIDE_CASES.filter((c) => c !== 'drop')];
+  const holds = (zeta: number) => {
+    const rides: Partial<Record<RideCase, RideResult>> = {};
+    for (const c of order) {
+      rides[c] = rideCaseOf(i, c, { floorDampingRatio: zeta });
+      simulations++;
+      if (!meetsRideRules(rides, limits, maxCycles)) return false;
+    }
+    return true;
+  };
+  const r = bisectLeast(holds, lower, upper, tolerance);
+  const working = r.value === null
+    ? `no floor damping ratio up to ${upper} keeps the crew on the floor and their motion within ${maxCycles} cycles (${simulations} simulations)`
+    : r.atLower
+      ? `the rules are met already at a floor damping ratio of ${lower}`
+      : `bisection over ζ_floor in [${lower}, ${upper}] to ${tolerance * 100} %: least ζ_floor = ${r.value.toFixed(4)} (${simulations} simulations)`;
+  return { ratio: r.value, lower, upper, tolerance, atLower: r.atLower, simulations, working };
+}

@@ -1,0 +1,24 @@
+import type { Limit } from '../data/rules-data.ts';
+import type { CrewRide, RideCase, RideResult } from './ride-types.ts';
+
+// What the ride rules judge, written once so the rules and the damping tuner
+// agree: the crew stay on the floor over the design bump (the two road
+// cases), and their motion dies out within the allowed cycles (every case).
+
+export interface CrewLimits {
+  maxAirborne_ms: Limit;
+  maxRise_mm: Limit;
+}
+
+export const ROAD_CASES: readonly RideCase[] = ['ridge', 'one-wheel'];
+
+/** The crew member is off the floor too long or too high. */
+export const crewLeaves = (c: CrewRide, l: CrewLimits) => c.airborne_ms > l.maxAirborne_ms.value || c.lift_mm > l.maxRise_mm.value;
+
+/** The motion takes more than the allowed cycles to fall below the fraction (or never does in the run). */
+export const decaysSlowly = (r: RideResult, maxCycles: number) => r.decayCycles === null || !(r.decayCycles <= maxCycles);
+
+export function meetsRideRules(rides: Partial<Record<RideCase, RideResult>>, crew: CrewLimits, maxCycles: number): boolean {
+  for (const c of ROAD_CASES) if (rides[c]?.crew.some((m) => crewLeaves(m, crew))) return false;
+  return Object.values(rides).every((r) => !decaysSlowly(r!, maxCycles));
+}
