@@ -14,6 +14,7 @@ import { loadLpSolver } from '../io/load-lp-solver.ts';
 import { prepareSpec } from '../src/spec/prepare.ts';
 import { benchFloor } from './floor-solver.ts';
 import { benchStockPlanner } from './stock-planner.ts';
+import { benchRide } from './ride.ts';
 
 const TARGET_MS = 1000;
 const RUNS = 10;
@@ -43,6 +44,10 @@ for (const file of readdirSync(specs).filter((f) => f.endsWith('.yaml'))) {
   console.log(`${file.padEnd(24)} median ${median.toFixed(1)} ms (first ${times[0].toFixed(1)}, worst ${times[RUNS - 1].toFixed(1)})  target < ${TARGET_MS} ms  ${ok ? 'met' : 'MISSED'}`);
   const p = prepareSpec(raw, data);
   if (p.ok) missed += benchFloor(file, p.spec, data);
+}
+{
+  const p = prepareSpec(parse(readFileSync(new URL('demo-two-crew.yaml', specs), 'utf8')), data);
+  if (p.ok) missed += benchRide(p.spec, data);
 }
 console.log('stock planner, OR-Library bin packing:');
 missed += await benchStockPlanner();

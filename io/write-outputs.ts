@@ -5,6 +5,7 @@ import { renderMarkdown } from './render/report-md.ts';
 import { renderWorkbook } from './render/workbook.ts';
 import { SETTING_OUT_SVG_FILE } from './render/report-figures.ts';
 import { ridePlotOutputs } from './render/report-ride-md.ts';
+import { drawingOutputs } from './render/report-drawings.ts';
 
 export const OUTPUT_FILES = {
   workbook: 'result.xlsx',
@@ -29,6 +30,8 @@ export async function writeOutputs(result: CheckResult, dir: string, inputPath: 
     [OUTPUT_FILES.settingOut, `${result.cutting.setting_out.svg.trim()}\n`],
     // The ride plots report.md links (ride-<case>-<plot>.svg); report.html holds them inline.
     ...ridePlotOutputs(result),
+    // The drawings of the build report.md links (drawing-<id>.svg); report.html holds them inline.
+    ...drawingOutputs(result),
   ];
   return writeFileSet(dir, files, inputPath);
 }

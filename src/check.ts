@@ -6,6 +6,7 @@ import { RULES } from './engine/registry.ts';
 import type { Rule } from './engine/rule.ts';
 import { runRules } from './engine/run-rules.ts';
 import { figures } from './figures.ts';
+import { reportDrawings } from './drawings/report-drawings.ts';
 import { collectLoads } from './loads/collect-loads.ts';
 import { severityRank, worstSeverity } from './findings/finding.ts';
 import type { CheckResult, SpecEntry } from './result/check-result.ts';
@@ -36,6 +37,7 @@ export function checkSpecification(spec: CheckedSpecification, entries: SpecEntr
     balance: { cases: analysis.loadCases },
     loads: collectLoads(analysis),
     cutting: analysis.cutting,
+    drawings: reportDrawings(analysis),
     ...(spec.crew.length > 0 ? { ride: rideSummary(analysis.ride, analysis.floorDampingNeeded.ratio, floorDampingOf(rideInput(analysis)), analysis.floorDampingNeeded.working) } : {}),
     spec_as_checked: entries,
     sources: usedSources(spec, data, findings),

@@ -4,6 +4,7 @@ import { G, UNITS } from './units/units.ts';
 import { tightestYokeRadius } from './model/turn.ts';
 import { memberFigures } from './model/members/member-figures.ts';
 import { floorFigures } from './model/cable-net/floor-figures.ts';
+import { rideFigures } from './ride/ride-figures.ts';
 
 /** The named figures of a check; later families add theirs here. */
 export function figures(a: Analysis): Record<string, Figure> {
@@ -26,6 +27,7 @@ export function figures(a: Analysis): Record<string, Figure> {
     ...turnFigures(a),
     ...memberFigures(a),
     ...floorFigures(a),
+    ...rideFigures(a),
     ...cuttingFigures(a),
   };
 }

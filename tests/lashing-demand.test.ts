@@ -13,7 +13,6 @@ import { dataWithGround, handSpec, prepared } from './support/fixtures.ts';
 // resistance on this ground.
 const data = dataWithGround('hand-rigid', 0);
 const kStop = loadFactor(data, 'stopping_shock_factor').value;
-const kBump = loadFactor(data, 'bump_dynamic_factor').value;
 const demandsOf = (raw: unknown) => new Analysis(prepared(raw, data), data).lashingDemands;
 const byId = <T extends { id: string }>(cases: T[], id: string) => cases.find((c) => c.id === id)!;
 // v = 15 km/h = 4.1667 m/s on R_y = 12 m, L = 2.25 m: R_a = √(144 − 5.0625) = 11.787 m,
@@ -22,6 +21,14 @@ const aLat = ((15 / 3.6) ** 2 * Math.sqrt(144 - 2.25 ** 2)) / 144;
 
 describe('lashing demands', () => {
   const d = demandsOf(handSpec());
+  // The bump factor is the ride model's crew floor factor (src/ride/dynamic-factors.ts).
+  const bumpFactor = new Analysis(prepared(handSpec(), data), data).bumpFactors.crew;
+  const kBump = bumpFactor.value;
+
+  it('takes its bump factor from the ride model', () => {
+    expect(bumpFactor.source).toMatch(/^ride model/);
+    expect(kBump).toBeGreaterThan(1);
+  });
 
   it('the pole crossings pass the whole rolling assembly’s draught and braking', () => {
     const m = 20 + 8 + 2 * 10 + 9 + 80; // 137 kg

@@ -33,8 +33,12 @@ describe('member load cases', () => {
     expect(byId('stopping-shock').poleAxial_N).toBeCloseTo(2 * a.mass.rolling.mass_kg * spec.operation.braking_g * G, 9);
   });
 
-  it('the bump case is the standing envelope times the bump factor; the turn case is the outer wheel', () => {
-    expect(byId('bump').wheel_N).toBeCloseTo(2 * byId('standing').wheel_N, 9);
+  it('the bump case is the standing envelope times the ride model\'s wheel factor; the turn case is the outer wheel', () => {
+    const k = a.bumpFactors.wheel;
+    expect(k.source).toMatch(/^ride model/);
+    expect(byId('bump').wheel_N).toBeCloseTo(k.value * byId('standing').wheel_N, 9);
+    // the pole: the worst standing load plus the ride model's largest yoke force above standing
+    expect(byId('bump').pole_N).toBeCloseTo(byId('standing').pole_N + Math.max(0, a.bumpFactors.yokeIncrease_N!), 9);
     expect(byId('turn').wheel_N).toBe(a.turn.outerWheel);
     expect(byId('turn').wheelLateral_N).toBe(a.turn.outerLateral);
   });

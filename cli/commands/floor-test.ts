@@ -1,5 +1,4 @@
 import { basename, extname, join, resolve } from 'node:path';
-import { OutputIsInputError } from '../../io/atomic-write.ts';
 import { readDropCsvFile } from '../../io/read-drop-csv.ts';
 import { floorTestPlotSvg } from '../../io/render/floor-test-plot.ts';
 import { floorTestMarkdown } from '../../io/render/floor-test-report-md.ts';
@@ -9,6 +8,7 @@ import { estimateFloorTest } from '../../src/floor-test/estimate-floor-test.ts';
 import { FloorTestError, type FloorTestEstimate } from '../../src/floor-test/floor-test-types.ts';
 import { EXIT, type Console } from '../console.ts';
 import { formatIssues } from '../format-issues.ts';
+import { writeOrRefuse } from '../write-or-refuse.ts';
 
 export interface FloorTestOptions {
   massKg?: string;
@@ -42,19 +42,12 @@ export async function floorTestCommand(file: string, opts: FloorTestOptions, con
   }
   const name = basename(file, extname(file));
   const dir = resolve(con.cwd, opts.out ?? join('axletree-out', name));
-  let written: string[];
-  try {
-    written = await writeFileSet(dir, [
-      [FLOOR_TEST_FILES.report, floorTestMarkdown(basename(file), estimate, FLOOR_TEST_FILES.plot, read.ignored)],
-      [FLOOR_TEST_FILES.plot, `${floorTestPlotSvg(read.record, estimate)}\n`],
-    ], input);
-  } catch (e) {
-    if (e instanceof OutputIsInputError) {
-      con.err(`axletree: ${e.message}; choose another --out directory.\n`);
-      return EXIT.badInput;
-    }
-    throw e;
-  }
+  const files: [string, string][] = [
+    [FLOOR_TEST_FILES.report, floorTestMarkdown(basename(file), estimate, FLOOR_TEST_FILES.plot, read.ignored)],
+    [FLOOR_TEST_FILES.plot, `${floorTestPlotSvg(read.record, estimate)}\n`],
+  ];
+  const written = await writeOrRefuse(() => writeFileSet(dir, files, input), con);
+  if (written === null) return EXIT.badInput;
   const text = floorTestSummary(file, estimate, written);
   if (opts.json) {
     con.out(JSON.stringify(estimate, null, 2) + '\n');

@@ -1,6 +1,4 @@
 import { basename, extname, join, resolve } from 'node:path';
-import { OutputIsInputError } from '../../io/atomic-write.ts';
-import { readSpecFile } from '../../io/read-spec.ts';
 import { rideCsv } from '../../io/render/ride-csv.ts';
 import { ridePlotFiles } from '../../io/render/ride-plots.ts';
 import { rideMarkdown } from '../../io/render/ride-report-md.ts';
@@ -10,10 +8,10 @@ import { Analysis } from '../../src/engine/analysis.ts';
 import { floorDampingOf } from '../../src/ride/ride-build.ts';
 import { RIDE_CASES, rideCase, rideInput } from '../../src/ride/ride-model.ts';
 import type { RideCase, RideResult } from '../../src/ride/ride-types.ts';
-import { prepareSpec } from '../../src/spec/prepare.ts';
 import { EXIT, type Console } from '../console.ts';
-import { formatIssues } from '../format-issues.ts';
 import { loadData } from '../load-data.ts';
+import { readPreparedSpec } from '../read-prepared-spec.ts';
+import { writeOrRefuse } from '../write-or-refuse.ts';
 
 export interface RideOptions {
   case?: string;
@@ -33,16 +31,9 @@ export async function rideCommand(file: string, opts: RideOptions, con: Console)
   const data = loadData(con);
   if (!data) return EXIT.badInput;
   const input = resolve(con.cwd, file);
-  const read = readSpecFile(input);
-  if (!read.ok) {
-    con.err(formatIssues(file, read.issues));
-    return EXIT.badInput;
-  }
-  const prepared = prepareSpec(read.raw, data);
-  if (!prepared.ok) {
-    con.err(formatIssues(file, prepared.issues, read.locate));
-    return EXIT.badInput;
-  }
+  const got = await readPreparedSpec(file, input, data, con);
+  if (!got) return EXIT.badInput;
+  const { prepared } = got;
   const analysis = new Analysis(prepared.spec, data);
   const cases = opts.case ? [opts.case as RideCase] : [...RIDE_CASES];
   const results = cases.map((c) => rideCase(analysis, c));
@@ -60,16 +51,8 @@ export async function rideCommand(file: string, opts: RideOptions, con: Console)
     ...results.flatMap((r): [string, string][] => [[rideCsvFile(r.case), rideCsv(r.series)], ...(plots.get(r.case) ?? [])]),
   ];
   const dir = resolve(con.cwd, opts.out ?? join('axletree-out', basename(file, extname(file)), 'ride'));
-  let written: string[];
-  try {
-    written = await writeFileSet(dir, files, input);
-  } catch (e) {
-    if (e instanceof OutputIsInputError) {
-      con.err(`axletree: ${e.message}; choose another --out directory.\n`);
-      return EXIT.badInput;
-    }
-    throw e;
-  }
+  const written = await writeOrRefuse(() => writeFileSet(dir, files, input), con);
+  if (written === null) return EXIT.badInput;
   const text = rideSummaryText(prepared.spec.name, results, written);
   if (opts.json) {
     // The long series are left out; they are in the CSV files named here.

@@ -10,6 +10,7 @@ import { inlineSvg } from './inline-svg.ts';
 import { stockBarSvg } from './stock-bar-svg.ts';
 import { partLabels } from './stock-bar.ts';
 import { parseRidePlotFile, ridePlotSvg } from './ride-plots.ts';
+import { drawingHtml, drawingOfFile } from './report-drawings.ts';
 
 /** The check report as one self-contained HTML file: inline CSS, no external assets. */
 export function renderHtml(result: CheckResult): string {
@@ -57,6 +58,8 @@ function drawFigures(md: MarkdownIt, result: CheckResult): void {
     const src = String(tokens[idx].attrGet('src') ?? '');
     const ride = parseRidePlotFile(src);
     if (ride) return ridePlotHtml(result, ride, src);
+    const drawing = drawingOfFile(result, src);
+    if (drawing) return drawingHtml(drawing);
     if (src !== SETTING_OUT_SVG_FILE) return image(tokens, idx, options, env, self);
     const svg = inlineSvg(result.cutting.setting_out.svg);
     return svg === null

@@ -10,6 +10,7 @@ import { SECTIONS, VERDICT_PREFIX } from './report-sections.ts';
 import { cutListSections } from './report-cutting-md.ts';
 import { stockPlanSections } from './report-stock-plan-md.ts';
 import { rideSections } from './report-ride-md.ts';
+import { drawingSections, firstDrawingBlocks } from './report-drawings.ts';
 
 /** The check report as Markdown: verdict and cautions first, then the evidence. */
 export function renderMarkdown(result: CheckResult): string {
@@ -21,12 +22,14 @@ export function renderMarkdown(result: CheckResult): string {
     `Checked by ${esc(`${result.tool.name} ${result.tool.version}`)}.`,
     `## ${SECTIONS.cautions.title}`,
     requireCautions(result).map((c) => `- ${escapeBlock(c)}`).join('\n'),
+    ...firstDrawingBlocks(result),
     `## ${SECTIONS.findings.title}`,
     findingsTable(ordered),
     `## ${SECTIONS.working.title}`,
     ...workingSections(ordered),
     `## ${SECTIONS.figures.title}`,
     figuresTable(result),
+    ...drawingSections(result),
     `## ${SECTIONS.massBalance.title}`,
     '### Parts',
     partsTable(result),

@@ -74,6 +74,7 @@ ${badgeRules}
 /* Drawings: the setting-out scales down to the page; stock bars keep their
    lengths to one scale per group, caption at the left. */
 .setting-out svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; }
+.drawing svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; break-inside: avoid; -webkit-print-color-adjust: exact; print-color-adjust: exact; }
 .ride-plot svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; break-inside: avoid; }
 .stock-bars { margin: 0.3em 0 1em; }
 .stock-bars figure { display: flex; align-items: center; gap: 0.6em; margin: 0.15em 0; }

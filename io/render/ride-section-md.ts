@@ -45,7 +45,7 @@ function caseBlocks(r: RideCaseResult, o: RideSectionOptions): string[] {
       : `The crew's motion falls below 10 % of its first amplitude in ${formatNumber(r.decayCycles, 'cycles')} cycles.`;
   return [
     `${o.level} ${esc(caseHeading(r))}`,
-    crew.length ? table(['Crew', 'Rise above static (mm)', 'Time off the floor (ms)', 'Floor dynamic load factor'], crew, ['l', 'r', 'r', 'r']) : 'No crew.',
+    crew.length ? table(['Crew', 'Rise above standing (mm)', 'Time off the floor (ms)', 'Floor dynamic load factor'], crew, ['l', 'r', 'r', 'r']) : 'No crew.',
     table(['Wheel', 'Time off the ground (ms)', 'Ground dynamic load factor'], wheels, ['l', 'r', 'r']),
     `Yoke force: least ${formatNumber(r.yokeForceMin_N, 'N')}${UNIT_SPACE}N, greatest ${formatNumber(r.yokeForceMax_N, 'N')}${UNIT_SPACE}N. ${decay}`,
     escapeBlock(`Integration: ${r.method}, ${r.steps} steps.`),

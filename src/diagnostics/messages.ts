@@ -105,6 +105,14 @@ export const MESSAGES = {
   lashingPresent: { code: 2531, text: 'The {joint} joint is lashed: {wraps} wraps of {material}, {size} mm.' },
   lashingMissing: { code: 2532, text: 'The {joint} joint is not lashed, but {why}; it must pass {value} ({case}).' },
   lashingAdvised: { code: 2533, text: 'No lashing is given for the {joint} joint; {why}. Whatever holds it, lashing or joinery, must pass {value} ({case}); this check cannot see joinery.' },
+  // Ride (28xx)
+  rideCrewStays: { code: 2801, text: '{role} stays on the floor over the {case}: off it {value} ms in all (limit {limit} ms), at most {lift} mm above it (limit {liftLimit} mm); peak floor force {dlf} × their weight.' },
+  rideCrewLeaves: { code: 2802, text: '{role} leaves the floor over the {case}: off it {value} ms in all (limit {limit} ms), at most {lift} mm above it (limit {liftLimit} mm); peak floor force {dlf} × their weight on landing.' },
+  rideNotComputed: { code: 2803, text: 'The ride model could not be run for the {case}: {why}.' },
+  rideDecayWithin: { code: 2811, text: 'After the drop test the crew\'s motion falls below {fraction} % of its first amplitude in {value} cycles (limit {limit}); floor damping ratio {zeta} ({zetaSource}).' },
+  rideDecaySlow: { code: 2812, text: 'After the drop test the crew\'s motion takes {value} cycles to fall below {fraction} % of its first amplitude, more than {limit}; floor damping ratio {zeta} ({zetaSource}); {needed}.' },
+  rideYokeHolds: { code: 2821, text: 'Over the {case} the yoke force stays between {value} N and {max} N (standing {static} N): the pole never pulls the yoke up on the necks.' },
+  rideYokeLifts: { code: 2822, text: 'Over the {case} the yoke force falls to {value} N (standing {static} N, peak {max} N): the pole pulls the yoke up on the necks.' },
   // Stock and cutting (27xx)
   stockNoSpecies: { code: 2701, text: 'No {species} stock is listed, so {parts} cannot be planned: buy {buy}.' },
   stockNoSection: { code: 2702, text: '{part}: {reason}; buy {buy}.' },

@@ -26,6 +26,9 @@ import { stockUnserved } from '../rules/stock/unserved.ts';
 import { stockPlanNote } from '../rules/stock/plan.ts';
 import { bentBlanks } from '../rules/stock/bent-blanks.ts';
 import { sidingParts } from '../rules/stock/siding.ts';
+import { crewAirborne } from '../rules/ride/crew-airborne.ts';
+import { rideDecay } from '../rules/ride/decay.ts';
+import { yokeUnloading } from '../rules/ride/yoke-unloading.ts';
 
 /** Every rule, in the order findings are reported. */
 export const RULES: readonly Rule[] = [
@@ -52,6 +55,9 @@ export const RULES: readonly Rule[] = [
   lashingTension,
   lashingSlip,
   lashingAnchorage,
+  crewAirborne,
+  rideDecay,
+  yokeUnloading,
   stockUnserved,
   stockPlanNote,
   bentBlanks,

@@ -76,11 +76,12 @@ export function memberCases(spec: CheckedSpecification, data: RulesData, mass: M
   const standing = envelope(asLoads(standingCases));
   const placeholder = loadFactor(data, 'bump_dynamic_factor');
   const bump = bumpIn?.factor ?? { value: placeholder.value, source: `placeholder bump_dynamic_factor ${placeholder.value}: ${placeholder.source}` };
-  // The pole: the factor on the worst standing load, or that load plus the ride's yoke increase, whichever is more.
-  const poleByFactor = standingPole(cases) * bump.value;
-  const poleByRide = bumpIn?.yokeIncrease_N != null ? standingPole(cases) + bumpIn.yokeIncrease_N : -Infinity;
-  const bumpPole = Math.max(poleByFactor, poleByRide);
-  const poleText = poleByRide > poleByFactor ? `|R_pole| = standing ${f(standingPole(cases))} + ride model's yoke increase ${f(bumpIn!.yokeIncrease_N!)} = ${f(bumpPole)} N` : `|R_pole| = ${f(bumpPole)} N`;
+  // The pole carries what the yoke feels: with a ride model, the worst standing pole load plus the ride's
+  // largest rise of the yoke force over standing (the wheel factor does not reach the pole); without one, the factor.
+  const stand = standingPole(cases);
+  const rideYoke = bumpIn?.yokeIncrease_N ?? null;
+  const bumpPole = rideYoke !== null ? stand + Math.max(0, rideYoke) : stand * bump.value;
+  const poleText = rideYoke !== null ? `|R_pole| = standing ${f(stand)} + the ride model's largest yoke force above standing ${f(Math.max(0, rideYoke))} = ${f(bumpPole)} N` : `|R_pole| = ${f(stand)} × ${bump.value.toFixed(2)} = ${f(bumpPole)} N`;
   const shock = loadFactor(data, 'stopping_shock_factor');
   const asPlaced = cases.find((c) => c.id === 'static')!;
 

@@ -1,6 +1,7 @@
 import type { Finding, Severity } from '../findings/finding.ts';
 import type { CuttingResult } from '../cutlist/cutting-result.ts';
 import type { RideSummary } from './ride-summary.ts';
+import type { Drawing } from '../drawings/drawing.ts';
 
 export interface Figure {
   value: number;
@@ -67,6 +68,8 @@ export interface CheckResult {
   loads: LoadEntry[];
   /** Cut list, leather list, wheel setting-out and stock plan. */
   cutting: CuttingResult;
+  /** Drawings of the build as SVG text: side elevation, plan of the turn, floor straps by tension. */
+  drawings?: Drawing[];
   /** The ride model's cases (results without the full series, plus thinned series to plot) and the floor-damping tuner; absent where the model was not run. */
   ride?: RideSummary;
   spec_as_checked: SpecEntry[];

@@ -5,8 +5,10 @@
 import { RIDE_CASES } from '../ride/ride-model.ts';
 import type { RideCase, RideResult, RideSeries } from '../ride/ride-types.ts';
 
-/** Samples kept per channel for the report's plots: more than a plot's pixel columns. */
-export const PLOT_SAMPLES = 1000;
+/** Samples kept per channel for the report's plots: about one per pixel column of a plot. */
+export const PLOT_SAMPLES = 600;
+/** Significant digits kept for plotting: far finer than a plot can show, and a short result.json. */
+const PLOT_DIGITS = 5;
 
 export type RideCaseSummary = Omit<RideResult, 'series'> & {
   /** Every k-th sample of the series (k in `plot_stride`), for drawing. */
@@ -44,8 +46,9 @@ export function rideCaseSummary(r: RideResult, samples = PLOT_SAMPLES): RideCase
   return { ...rest, plot: strideSeries(series, stride), plot_stride: stride };
 }
 
-/** Every k-th sample, and always the last, so the plot spans the whole run. */
+/** Every k-th sample, and always the last, so the plot spans the whole run; values to PLOT_DIGITS significant digits. */
 export function strideSeries(s: RideSeries, k: number): RideSeries {
   const keep = s.t_s.map((_, i) => i).filter((i) => i % k === 0 || i === s.t_s.length - 1);
-  return { t_s: keep.map((i) => s.t_s[i]), channels: s.channels.map((c) => ({ ...c, values: keep.map((i) => c.values[i]) })) };
+  const round = (v: number) => Number(v.toPrecision(PLOT_DIGITS));
+  return { t_s: keep.map((i) => s.t_s[i]), channels: s.channels.map((c) => ({ ...c, values: keep.map((i) => round(c.values[i])) })) };
 }

@@ -1,5 +1,5 @@
 import type { RulesData } from '../data/rules-data.ts';
-import { bisectLeast } from './bisect-least.ts';
+import { leastOnGrid } from './bisect-least.ts';
 import type { RideInput } from './ride-build.ts';
 import { rideLimit } from './ride-data.ts';
 import { RIDE_CASES, rideCaseOf } from './ride-model.ts';
@@ -14,9 +14,8 @@ import { meetsRideRules, type CrewLimits } from './ride-verdict.ts';
 export interface DampingNeeded {
   /** The least floor damping ratio that meets both rules; null if none up to the upper bound does. */
   ratio: number | null;
-  /** The bounds searched and the relative tolerance. */
-  lower: number;
-  upper: number;
+  /** The rising grid walked before the bisection, and the relative tolerance. */
+  grid: readonly number[];
   tolerance: number;
   /** True when even the lower bound meets them (any damping does). */
   atLower: boolean;
@@ -29,7 +28,10 @@ export const crewLimits = (data: RulesData): CrewLimits => ({
   maxRise_mm: rideLimit(data, 'ride.crew-airborne', 'max_rise_mm'),
 });
 
-export function floorDampingNeeded(i: RideInput, lower = 0.005, upper = 1, tolerance = 1e-3): DampingNeeded {
+/** Floor damping ratios tried in turn before bisecting between the last that fails and the first that holds. */
+export const DAMPING_GRID: readonly number[] = [0.02, 0.05, 0.1, 0.15, 0.2, 0.3, 0.45, 0.7, 1];
+
+export function floorDampingNeeded(i: RideInput, grid: readonly number[] = DAMPING_GRID, tolerance = 5e-3): DampingNeeded {
   const limits = crewLimits(i.data);
   const maxCycles = rideLimit(i.data, 'ride.decay', 'max_cycles').value;
   let simulations = 0;
@@ -44,11 +46,12 @@ export function floorDampingNeeded(i: RideInput, lower = 0.005, upper = 1, toler
     }
     return true;
   };
-  const r = bisectLeast(holds, lower, upper, tolerance);
+  const r = leastOnGrid(holds, grid, tolerance);
+  const [lower, upper] = [grid[0], grid[grid.length - 1]];
   const working = r.value === null
     ? `no floor damping ratio up to ${upper} keeps the crew on the floor and their motion within ${maxCycles} cycles (${simulations} simulations)`
     : r.atLower
       ? `the rules are met already at a floor damping ratio of ${lower}`
-      : `bisection over ζ_floor in [${lower}, ${upper}] to ${tolerance * 100} %: least ζ_floor = ${r.value.toFixed(4)} (${simulations} simulations)`;
-  return { ratio: r.value, lower, upper, tolerance, atLower: r.atLower, simulations, working };
+      : `ζ_floor tried at ${grid.join(', ')} in turn, then bisection to ${tolerance * 100} %: least ζ_floor = ${r.value.toFixed(4)} (${simulations} simulations)`;
+  return { ratio: r.value, grid, tolerance, atLower: r.atLower, simulations, working };
 }

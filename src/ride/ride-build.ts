@@ -47,6 +47,8 @@ export interface BuiltRide {
   floorDamping: { value: number; source: string };
   /** Shortest undamped period of the elements, s, for the step. */
   shortestPeriod: number;
+  /** Shortest time constant of a ground point, c_g/(k_w + k_g), s (Infinity without one). */
+  shortestTimeConstant: number;
   /** Each parameter with its working and source. */
   working: string[];
   sources: string[];
@@ -171,10 +173,9 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
     ...crew.map((c) => 2 * Math.PI * Math.sqrt(c.m / c.k)),
     2 * Math.PI * Math.sqrt(effectiveMass(body, system.axleX, mm(spec.wheels.track_mm) / 2) / contact.k),
     2 * Math.PI * Math.sqrt(yokeMass / yoke.k),
-    // the ground point's time constant c_g/(k_w + k_g), as a period
-    ...(cg > 0 ? [(2 * Math.PI * cg) / (wheel.k + (ground?.k.value ?? 0))] : []),
   ];
-  return { system, inputEnd, breaks, drop: which === 'drop' ? mm(spec.operation.drop_height_mm) : 0, speed, floorDamping, shortestPeriod: Math.min(...periods), working, sources };
+  const shortestTimeConstant = cg > 0 ? cg / (wheel.k + (ground?.k.value ?? 0)) : Infinity;
+  return { system, inputEnd, breaks, drop: which === 'drop' ? mm(spec.operation.drop_height_mm) : 0, speed, floorDamping, shortestPeriod: Math.min(...periods), shortestTimeConstant, working, sources };
 }
 
 /** The body's mass as felt at one wheel (heave, pitch and roll together). */

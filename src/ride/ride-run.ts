@@ -28,7 +28,8 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
   const rest = staticEquilibrium(sys);
   const y0 = Float64Array.from(rest.y);
   if (b.drop > 0) for (let i = 0; i < N; i++) if (i !== 1 && i !== 2) y0[i] += b.drop;
-  const h = Math.min(1e-3, b.shortestPeriod / (s.stepsPerPeriod ?? 60));
+  // A fraction of the shortest period, and half the ground point's time constant (RK4 is then accurate on its decay).
+  const h = Math.min(1e-3, b.shortestPeriod / (s.stepsPerPeriod ?? 60), b.shortestTimeConstant / 2);
   const scratch = newForces(sys), forces = newForces(sys);
   const dyScratch = new Float64Array(stateSize(sys));
   const wheelBits = sys.wheels.length;
@@ -112,9 +113,10 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
     yokeForceMax_N: yokeMax,
     yokeForceStatic_N: rest.forces.yoke,
     decayCycles: anyNever ? null : Math.max(...decays.map((d) => d.cycles!)),
-    method: `classical Runge-Kutta (RK4), fixed step ${(h * 1e3).toFixed(3)} ms (1/${s.stepsPerPeriod ?? 60} of the shortest period ${(b.shortestPeriod * 1e3).toFixed(1)} ms, at most 1 ms), contact changes located by bisection to 1 ns (${stats.events} events)`,
+    method: `classical Runge-Kutta (RK4), fixed step ${(h * 1e3).toFixed(3)} ms (the least of 1/${s.stepsPerPeriod ?? 60} of the shortest period ${(b.shortestPeriod * 1e3).toFixed(1)} ms, half the ground's time constant ${Number.isFinite(b.shortestTimeConstant) ? `${(b.shortestTimeConstant * 1e3).toFixed(2)} ms` : '(none)'} and 1 ms), contact changes located by bisection to 1 ns (${stats.events} events)`,
     steps: stats.steps,
     series: { t_s, channels: [...crewCh.flat(), ...wheelCh.flat(), yokeCh] },
+    floorDamping: b.floorDamping,
     working: b.working,
     sources: b.sources,
   };

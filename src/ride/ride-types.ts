@@ -50,6 +50,8 @@ export interface RideResult {
   method: string;
   steps: number;
   series: RideSeries;
+  /** The crew-on-floor damping ratio used and where it came from. */
+  floorDamping: { value: number; source: string };
   /** The model's parameters with their working, and the sources of its data. */
   working: string[];
   sources: string[];

@@ -2,6 +2,9 @@
 import { describe, expect, it } from 'vitest';
 import { prepareSpec } from '../../src/spec/prepare.ts';
 import { readDemo, rulesData } from '../support/fixtures.ts';
+import { Analysis } from '../../src/engine/analysis.ts';
+import { floorDampingOf } from '../../src/ride/ride-build.ts';
+import { rideInput } from '../../src/ride/ride-model.ts';
 
 function withMeasured(measured: unknown) {
   const raw = readDemo('demo-two-crew') as Record<string, any>;
@@ -28,5 +31,13 @@ describe('floor_straps.measured', () => {
     expect(codes({ damping_ratio: 0, source: 'x' })).toEqual([['floor_straps.measured.damping_ratio', 1033]]);
     expect(codes({ damping_ratio: 0.1 })).toEqual([['floor_straps.measured.source', 1030]]);
     expect(codes({ damping_ratio: 0.1, source: 'x', frequency_hz: 6 })).toEqual([['floor_straps.measured.frequency_hz', 1031]]);
+  });
+
+  it('gives the ride model its damping ratio, with its source', () => {
+    const p = withMeasured({ damping_ratio: 0.09, source: 'sample B, 40 kg from 20 mm' });
+    if (!p.ok) throw new Error('the spec should validate');
+    const used = floorDampingOf(rideInput(new Analysis(p.spec, rulesData)));
+    expect(used.value).toBe(0.09);
+    expect(used.source).toMatch(/sample B, 40 kg from 20 mm/);
   });
 });

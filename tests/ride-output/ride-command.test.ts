@@ -42,6 +42,12 @@ describe('axletree ride', () => {
     for (const c of ['ridge', 'one-wheel', 'drop']) expect(files).toContain(`ride-${c}.csv`);
   });
 
+  it('a spec that cannot be read: exit 2, nothing written', async () => {
+    const r = await runCli(['ride', join(dir, 'none.yaml')], dir);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/No file at/);
+  });
+
   it('an unknown case: exit 2, the cases listed', async () => {
     const r = await runCli(['ride', DEMO, '--case', 'pothole'], dir);
     expect(r.code).toBe(2);

@@ -53,5 +53,9 @@ describe('ride plots', () => {
     expect(s.plot.t_s.at(-1)).toBe(r.series.t_s.at(-1));
     expect(s.plot.t_s[1]).toBe(r.series.t_s[s.plot_stride]);
     expect(strideSeries(r.series, 1).t_s).toEqual(r.series.t_s);
+    const k = 7;
+    // Five significant digits kept.
+    const full = r.series.channels[0].values[k * s.plot_stride];
+    expect(Math.abs(s.plot.channels[0].values[k] - full)).toBeLessThanOrEqual(5e-5 * Math.abs(full) + 1e-12);
   });
 });

@@ -9,9 +9,9 @@ describe(RULE, () => {
   it('passes the rear-axle demo: pole and felloe, inner radius over thickness against the data', async () => {
     const found = await findingsOf(RULE, readDemo('demo-rear-axle'));
     expect(found.map((f) => [f.subject, f.severity])).toEqual([['pole', 'pass'], ['felloe', 'pass']]);
-    // Pole: 1000 mm on the centre line, 64 mm high: R_i = 1000 − 32 = 968 mm. Felloe: inner radius 406 / depth 44.
+    // Pole: 1000 mm on the centre line, 64 mm high: R_i = 1000 − 32 = 968 mm. Felloe: inner radius 406 / depth 54.
     expect(found[0].value).toBeCloseTo(968 / 64, 12);
-    expect(found[1].value).toBeCloseTo(406 / 44, 12);
+    expect(found[1].value).toBeCloseTo(406 / 54, 12);
     // White ash with a strap: the species file's supported figure (from memory).
     expect(found[0].limit).toBe(ash.supported!.value);
   });

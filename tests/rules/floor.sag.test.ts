@@ -36,7 +36,7 @@ describe(RULE, () => {
     const pole = bySubject(found, 'floor over the pole');
     expect(pole.severity).toBe('warning');
     expect(pole.limit).toBeCloseTo(25, 9);
-    expect(pole.message).toContain('bump, 2 × crew weight');
+    expect(pole.message).toMatch(/bump, [\d.]+ × crew weight/);
   });
 
   it('warns above the advisory sag under a person', async () => {

@@ -5,7 +5,7 @@ import type { FloorResult } from '../floor-result.ts';
 import { partClearances, type PartClearance } from './clearance.ts';
 import { floorNet, floorNodeCount, type FloorNet } from './floor-net.ts';
 import { patchWeights } from './foot-patch.ts';
-import { crewResults, describeSegment, railPulls, reactionSum, tensions, type Loaded } from './floor-results.ts';
+import { crewResults, describeSegment, railPulls, reactionSum, strapTensions, tensions, type Loaded, type StrapTension } from './floor-results.ts';
 import { solveNet, type NetSolution, type SolveSettings } from './solve-net.ts';
 
 // The strap floor under the crew, loaded by their weight times a case factor
@@ -26,6 +26,8 @@ export interface FloorModel extends FloorResult {
   segments: number;
   /** The floor's sag over the pole and the axle beneath it. */
   clearances: PartClearance[];
+  /** Each strap's largest tension (empty where the net was not solved). */
+  straps: StrapTension[];
   /** Why the solver stopped short, when it did. */
   stopped?: string;
   /** Largest out-of-balance force before the first step and after each, N. */
@@ -82,6 +84,7 @@ export function floorModel(spec: CheckedSpecification, data: RulesData, factor: 
     nodes: floor.net.nodes.length,
     segments: floor.net.segments.length,
     clearances: partClearances(spec, floor, sol.sag),
+    straps: strapTensions(floor.net, T),
     history: sol.history,
     ...(sol.stopped ? { stopped: sol.stopped } : {}),
   };
@@ -103,6 +106,7 @@ function declined(spec: CheckedSpecification, head: Pick<FloorModel, 'factor' | 
     nodes: count,
     segments: NaN,
     clearances: [],
+    straps: [],
     history: [],
     stopped: `the net would have about ${count} nodes, more than the ${maxNodes} the solver takes (max_nodes)`,
   };

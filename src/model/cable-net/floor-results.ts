@@ -1,7 +1,7 @@
 import type { CrewOnFloor, RailPull } from '../floor-result.ts';
 import type { FootPatch, NodeWeight } from './foot-patch.ts';
 import type { FloorNet } from './floor-net.ts';
-import type { CableNet } from './net.ts';
+import type { CableNet, Family } from './net.ts';
 import type { Rail } from './outline.ts';
 import { pointWeights, weightedSum } from './point-sag.ts';
 import { segmentState } from './segment.ts';
@@ -21,6 +21,27 @@ export interface Loaded {
 
 export function tensions(net: CableNet, sag: ArrayLike<number>): Float64Array {
   return Float64Array.from(net.segments, (seg) => segmentState(seg, at(sag, seg.a), at(sag, seg.b)).tension);
+}
+
+/** One strap's place in plan and the largest tension along it, for the floor drawing. */
+export interface StrapTension {
+  family: Family;
+  number: number;
+  /** y of a front-to-back strap, x of a side-to-side one, mm. */
+  cross: number;
+  /** Its ends along its own direction, mm. */
+  start: number;
+  end: number;
+  maxTension_N: number;
+}
+
+/** The largest segment tension of each strap. */
+export function strapTensions(net: CableNet, T: ArrayLike<number>): StrapTension[] {
+  return net.straps.map((strap) => {
+    let max = 0;
+    for (let i = 0; i < strap.points.length - 1; i++) max = Math.max(max, T[strap.firstSegment + i]);
+    return { family: strap.family, number: strap.number, cross: strap.cross, start: strap.points[0].s, end: strap.points[strap.points.length - 1].s, maxTension_N: max };
+  });
 }
 
 export function describeSegment(net: CableNet, index: number): string {

@@ -11,7 +11,7 @@ import { G } from '../../units/units.ts';
 /** A number the solver may not have reached (NaN) as a finding's value. */
 export const known = (v: number): number | null => (Number.isFinite(v) ? v : null);
 
-export const caseName = (m: FloorModel): string => (m.factor === 1 ? 'crew standing' : `bump, ${m.factor} × crew weight`);
+export const caseName = (m: FloorModel): string => (m.factor === 1 ? 'crew standing' : `bump, ${Number(m.factor.toFixed(2))} × crew weight`);
 
 export function floorWorking(spec: CheckedSpecification, data: RulesData, m: FloorModel): string[] {
   const s = spec.floor_straps;

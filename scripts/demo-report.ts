@@ -1,0 +1,15 @@
+// A demo specification checked and rendered as the HTML report, for the
+// browser test and the README's screenshot.
+import { readFileSync } from 'node:fs';
+import { parse } from 'yaml';
+import { defaultRulesDir, loadRulesData } from '../io/load-rules-data.ts';
+import { renderHtml } from '../io/render/report-html.ts';
+import { checkSpecification } from '../src/check.ts';
+import { prepareSpec } from '../src/spec/prepare.ts';
+
+export function demoReportHtml(demo: string): string {
+  const data = loadRulesData(defaultRulesDir());
+  const p = prepareSpec(parse(readFileSync(new URL(`../specs/${demo}.yaml`, import.meta.url), 'utf8')), data);
+  if (!p.ok) throw new Error(p.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('\n'));
+  return renderHtml(checkSpecification(p.spec, p.entries, data));
+}

@@ -1,0 +1,96 @@
+import { describe, expect, it } from 'vitest';
+import { Analysis } from '../../src/engine/analysis.ts';
+import { rideCaseOf, rideInput } from '../../src/ride/ride-model.ts';
+import { buildRide } from '../../src/ride/ride-build.ts';
+import { energy, stateSize } from '../../src/ride/ride-system.ts';
+import { integrate } from '../../src/ride/integrate.ts';
+import { contactMode, derivative, newForces } from '../../src/ride/ride-system.ts';
+import { staticEquilibrium } from '../../src/ride/static-equilibrium.ts';
+import { rideByOdex } from '../../io/ride-odex.ts';
+import { prepared, readDemo, rulesData } from '../support/fixtures.ts';
+
+const analysis = (name: string) => new Analysis(prepared(readDemo(name)), rulesData);
+const DEMOS = ['demo-two-crew', 'demo-rear-axle', 'teaching-flawed'];
+
+describe('the ride model', () => {
+  it('starts from a static equilibrium that gives the balance model\'s axle and yoke loads', () => {
+    for (const name of DEMOS) {
+      const a = analysis(name);
+      for (const which of ['ridge', 'one-wheel'] as const) {
+        const rest = staticEquilibrium(buildRide(rideInput(a), which).system);
+        expect(rest.forces.yoke, name).toBeCloseTo(a.staticCase.pole_load_N, 6);
+        expect(rest.forces.wheel[0] + rest.forces.wheel[1], name).toBeCloseTo(a.staticCase.axle_load_N, 6);
+        // each person stands on the floor with their own weight
+        a.spec.crew.forEach((c, i) => expect(rest.forces.crew[i]).toBeCloseTo(c.mass_kg * 9.80665, 6));
+      }
+    }
+  });
+
+  it('conserves energy to 0.1 % with damping off and the contacts closed', () => {
+    const a = analysis('demo-two-crew');
+    // The draught couple h_y·C_rr·ΣF_wheel follows the wheel loads and has no potential: off for this check.
+    const sys = { ...buildRide(rideInput(a), 'ridge', { undamped: true, bumpHeight: 0 }).system, draughtArm: 0 };
+    const rest = staticEquilibrium(sys);
+    const y0 = Float64Array.from(rest.y);
+    y0[0] += 0.0005; // heave the body 0.5 mm and lift the first person 3 mm: every contact stays closed
+    y0[3] += 0.003;
+    const E0 = energy(sys, 0, y0), Erest = energy(sys, 0, rest.y);
+    const scratch = newForces(sys);
+    const closed = contactMode(sys, 0, y0, scratch);
+    let worst = 0, opened = false;
+    integrate((t, y, dy) => derivative(sys, t, y, dy), (t, y) => contactMode(sys, t, y, scratch), y0, 0, 3, {
+      h: 2e-4,
+      eventTolerance: 1e-9,
+      onStep(_t0, t1, y, mode) {
+        worst = Math.max(worst, Math.abs(energy(sys, t1, y) - E0));
+        if (mode !== closed) opened = true;
+      },
+    });
+    expect(opened).toBe(false);
+    expect(worst / (E0 - Erest)).toBeLessThan(1e-3);
+    expect(stateSize(sys)).toBe(2 * (3 + 2)); // no ground points without ground damping
+  });
+
+  it('agrees with odex at relative tolerance 1e-10 within 0.05 mm on the crew\'s rise over the demo\'s ridge', () => {
+    const a = analysis('demo-two-crew');
+    const ours = rideCaseOf(rideInput(a), 'ridge');
+    const ref = rideByOdex(rideInput(a), 'ridge', 1e-10);
+    ours.crew.forEach((c, i) => expect(Math.abs(c.rise_mm - ref.rise_mm[i])).toBeLessThan(0.05));
+    expect(ours.crew[0].rise_mm).toBeGreaterThan(5);
+  });
+
+  it('gives each case its results, and the drop test falls from the given height', () => {
+    const a = analysis('demo-two-crew');
+    const r = a.ride;
+    expect(Object.keys(r)).toEqual(['ridge', 'one-wheel', 'drop']);
+    expect(r.drop.crew[0].rise_mm).toBeCloseTo(500, 3); // released 500 mm above standing: the highest point
+    expect(r.ridge.wheels.every((w) => w.dlf > 1)).toBe(true);
+    // the one-wheel bump strikes the left wheel harder than the right
+    expect(r['one-wheel'].wheels[0].dlf).toBeGreaterThan(r['one-wheel'].wheels[1].dlf);
+    expect(r.ridge.series.t_s.length).toBeGreaterThan(1000);
+  });
+
+  it('feeds its factors to the floor, member and lashing rules, saying where they came from', () => {
+    const a = analysis('demo-two-crew');
+    const f = a.bumpFactors;
+    expect(f.crew.source).toMatch(/^ride model, (ridge|one-wheel) case: \d\.\d\d/);
+    expect(f.crew.value).toBeGreaterThanOrEqual(1);
+    expect(a.floorBump.factor).toBe(f.crew.value);
+    expect(a.floorBump.factorSource).toContain('ride model');
+    const bump = a.memberCases.find((c) => c.id === 'bump')!;
+    expect(bump.gravityFactor).toBe(f.wheel.value);
+    expect(bump.sources.join(' ')).toContain('ride model');
+    const crewFactor = Math.max(...a.ride.ridge.crew.map((c) => c.floor_dlf), ...a.ride['one-wheel'].crew.map((c) => c.floor_dlf));
+    expect(f.crew.value).toBeCloseTo(Math.max(1, crewFactor), 12);
+  });
+
+  it('the floor-damping tuner finds a ratio at which the rules just hold', () => {
+    const a = analysis('demo-rear-axle');
+    const need = a.floorDampingNeeded;
+    expect(need.ratio).not.toBeNull();
+    const at = rideCaseOf(rideInput(a), 'drop', { floorDampingRatio: need.ratio! });
+    const below = rideCaseOf(rideInput(a), 'drop', { floorDampingRatio: need.ratio! * 0.97 });
+    expect(at.decayCycles!).toBeLessThanOrEqual(3);
+    expect(below.decayCycles === null || below.decayCycles > 3).toBe(true);
+  });
+});
