@@ -1,4 +1,5 @@
-import { gradeUpper, makeFinding } from '../../engine/make-finding.ts';
+import { makeFinding } from '../../engine/make-finding.ts';
+import { gradeFractions } from './fraction-grade.ts';
 import type { Rule } from '../../engine/rule.ts';
 import { tightestYokeRadius } from '../../model/turn.ts';
 import { G, UNITS } from '../../units/units.ts';
@@ -15,12 +16,7 @@ export const rollover: Rule = {
   run(ctx) {
     const t = ctx.analysis.turn;
     if (!t.steady) return [];
-    const adv = ctx.limit('advisory_fraction');
-    const hard = ctx.limit('hard_fraction');
-    const advA = adv.value * t.rolloverAccel;
-    const hardA = hard.value * t.rolloverAccel;
-    const severity = gradeUpper(t.lateralAccel, advA, hardA);
-    const lim = severity === 'fail' ? { l: hard, a: hardA, level: 'hard' } : { l: adv, a: advA, level: 'advisory' };
+    const { adv, hard, advA, hardA, severity, lim } = gradeFractions(ctx, t.lateralAccel, t.rolloverAccel);
     const tightest = tightestYokeRadius(t.speed, advA, t.reach);
     const safeSpeed = t.yokeRadius * Math.sqrt(advA / t.axleRadius);
     return [

@@ -1,4 +1,5 @@
-import { gradeUpper, makeFinding } from '../../engine/make-finding.ts';
+import { makeFinding } from '../../engine/make-finding.ts';
+import { gradeFractions } from './fraction-grade.ts';
 import type { Rule } from '../../engine/rule.ts';
 import { G } from '../../units/units.ts';
 
@@ -13,13 +14,8 @@ export const sliding: Rule = {
   run(ctx) {
     const t = ctx.analysis.turn;
     if (!t.steady) return [];
-    const adv = ctx.limit('advisory_fraction');
-    const hard = ctx.limit('hard_fraction');
     const ground = ctx.data.grounds[ctx.spec.operation.ground];
-    const advA = adv.value * t.slideAccel;
-    const hardA = hard.value * t.slideAccel;
-    const severity = gradeUpper(t.lateralAccel, advA, hardA);
-    const lim = severity === 'fail' ? { l: hard, a: hardA, level: 'hard' } : { l: adv, a: advA, level: 'advisory' };
+    const { adv, hard, advA, hardA, severity, lim } = gradeFractions(ctx, t.lateralAccel, t.slideAccel);
     const slidesFirst = t.lateralFriction < t.ssf;
     return [
       makeFinding(this.id, {
