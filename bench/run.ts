@@ -6,6 +6,7 @@ import { performance } from 'node:perf_hooks';
 import { parse } from 'yaml';
 import { defaultRulesDir, loadRulesData } from '../io/load-rules-data.ts';
 import { renderHtml } from '../io/render/report-html.ts';
+import { drawReportPlots } from '../io/render/report-plots.ts';
 import { renderMarkdown } from '../io/render/report-md.ts';
 import { renderWorkbook } from '../io/render/workbook.ts';
 import { checkSpecification } from '../src/check.ts';
@@ -33,7 +34,7 @@ for (const file of readdirSync(specs).filter((f) => f.endsWith('.yaml'))) {
     if (!p.ok) throw new Error(`${file} does not validate`);
     const result = checkSpecification(p.spec, p.entries, data, RULES, lp);
     renderMarkdown(result);
-    renderHtml(result);
+    renderHtml(result, await drawReportPlots(result));
     await renderWorkbook(result);
     times.push(performance.now() - t0);
   }

@@ -4,7 +4,7 @@ import { renderHtml } from './render/report-html.ts';
 import { renderMarkdown } from './render/report-md.ts';
 import { renderWorkbook } from './render/workbook.ts';
 import { SETTING_OUT_SVG_FILE } from './render/report-figures.ts';
-import { ridePlotOutputs } from './render/report-ride-md.ts';
+import { drawReportPlots } from './render/report-plots.ts';
 import { drawingOutputs } from './render/report-drawings.ts';
 
 export const OUTPUT_FILES = {
@@ -22,14 +22,15 @@ export function resultJson(result: CheckResult): string {
 
 /** Render everything first, then write each file atomically; returns the paths written. */
 export async function writeOutputs(result: CheckResult, dir: string, inputPath: string): Promise<string[]> {
+  const plots = await drawReportPlots(result);
   const files: [string, string | Uint8Array][] = [
     [OUTPUT_FILES.workbook, await renderWorkbook(result)],
     [OUTPUT_FILES.markdown, renderMarkdown(result)],
-    [OUTPUT_FILES.html, renderHtml(result)],
+    [OUTPUT_FILES.html, renderHtml(result, plots)],
     [OUTPUT_FILES.json, resultJson(result)],
     [OUTPUT_FILES.settingOut, `${result.cutting.setting_out.svg.trim()}\n`],
-    // The ride plots report.md links (ride-<case>-<plot>.svg); report.html holds them inline.
-    ...ridePlotOutputs(result),
+    // The plots report.md links (plot-<id>.svg, ride-<case>-<plot>.svg); report.html holds them inline.
+    ...plots,
     // The drawings of the build report.md links (drawing-<id>.svg); report.html holds them inline.
     ...drawingOutputs(result),
   ];

@@ -4,12 +4,14 @@ import { readFileSync } from 'node:fs';
 import { parse } from 'yaml';
 import { defaultRulesDir, loadRulesData } from '../io/load-rules-data.ts';
 import { renderHtml } from '../io/render/report-html.ts';
+import { drawReportPlots } from '../io/render/report-plots.ts';
 import { checkSpecification } from '../src/check.ts';
 import { prepareSpec } from '../src/spec/prepare.ts';
 
-export function demoReportHtml(demo: string): string {
+export async function demoReportHtml(demo: string): Promise<string> {
   const data = loadRulesData(defaultRulesDir());
   const p = prepareSpec(parse(readFileSync(new URL(`../specs/${demo}.yaml`, import.meta.url), 'utf8')), data);
   if (!p.ok) throw new Error(p.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('\n'));
-  return renderHtml(checkSpecification(p.spec, p.entries, data));
+  const result = checkSpecification(p.spec, p.entries, data);
+  return renderHtml(result, await drawReportPlots(result));
 }

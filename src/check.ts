@@ -7,6 +7,7 @@ import type { Rule } from './engine/rule.ts';
 import { runRules } from './engine/run-rules.ts';
 import { figures } from './figures.ts';
 import { reportDrawings } from './drawings/report-drawings.ts';
+import { reportPlots } from './plots/report-plots.ts';
 import { collectLoads } from './loads/collect-loads.ts';
 import { severityRank, worstSeverity } from './findings/finding.ts';
 import type { CheckResult, SpecEntry } from './result/check-result.ts';
@@ -38,6 +39,7 @@ export function checkSpecification(spec: CheckedSpecification, entries: SpecEntr
     loads: collectLoads(analysis),
     cutting: analysis.cutting,
     drawings: reportDrawings(analysis),
+    plots: reportPlots(analysis),
     ...(spec.crew.length > 0 ? { ride: rideSummary(analysis.ride, analysis.floorDampingNeeded.ratio, floorDampingOf(rideInput(analysis)), analysis.floorDampingNeeded.working) } : {}),
     spec_as_checked: entries,
     sources: usedSources(spec, data, findings),

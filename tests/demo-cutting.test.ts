@@ -8,6 +8,7 @@ import type { LpSolver } from '../src/stock/cutting-types.ts';
 import { loadLpSolver } from '../io/load-lp-solver.ts';
 import { renderWorkbook } from '../io/render/workbook.ts';
 import { renderMarkdown } from '../io/render/report-md.ts';
+import { drawReportPlots } from '../io/render/report-plots.ts';
 import { renderHtml } from '../io/render/report-html.ts';
 import { DRAWING_SCOPE } from '../io/render/inline-svg.ts';
 import { readDemo, rulesData } from './support/fixtures.ts';
@@ -89,7 +90,7 @@ describe('cutting figures of the demo specifications', () => {
 
     const md = renderMarkdown(r);
     for (const h of ['## Cut list', '## Leather and rawhide', '## Wheel setting-out', '## Stock plan']) expect(md, h).toContain(`\n${h}\n`);
-    const html = renderHtml(r);
+    const html = renderHtml(r, await drawReportPlots(r));
     expect(html).toContain(`<span class="setting-out"><svg class="${DRAWING_SCOPE}`);
     // The drawing's style rules reach nothing outside it, so the stock bars keep their paint.
     for (const [, css] of html.matchAll(/<svg[^>]*>[\s\S]*?<style>([\s\S]*?)<\/style>/g)) {

@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { Analysis } from '../src/engine/analysis.ts';
 import { reportDrawings } from '../src/drawings/report-drawings.ts';
 import { inlineSvg } from '../io/render/inline-svg.ts';
@@ -6,6 +6,7 @@ import { checkSpecification } from '../src/check.ts';
 import { prepareSpec } from '../src/spec/prepare.ts';
 import { renderMarkdown } from '../io/render/report-md.ts';
 import { renderHtml } from '../io/render/report-html.ts';
+import { drawReportPlots } from '../io/render/report-plots.ts';
 import { drawingOutputs } from '../io/render/report-drawings.ts';
 import { deepMerge, prepared, readDemo, rulesData } from './support/fixtures.ts';
 
@@ -124,7 +125,10 @@ describe('drawings in the report', () => {
   if (!p.ok) throw new Error('demo does not prepare');
   const result = checkSpecification(p.spec, p.entries, rulesData);
   const md = renderMarkdown(result);
-  const html = renderHtml(result);
+  let html = '';
+  beforeAll(async () => {
+    html = renderHtml(result, await drawReportPlots(result));
+  });
 
   it('report.md links each drawing file written beside it, the side elevation right after the cautions', () => {
     const files = drawingOutputs(result).map(([name]) => name);

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { renderMarkdown } from '../io/render/report-md.ts';
+/** The sample result has neither ride nor plots: nothing to draw. */
+const NO_PLOTS = new Map<string, string>();
 import { renderHtml } from '../io/render/report-html.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 import type { CheckResult } from '../src/result/check-result.ts';
@@ -112,7 +114,7 @@ describe('renderMarkdown', () => {
 
 describe('renderHtml', () => {
   const result = sampleResult();
-  const html = renderHtml(result);
+  const html = renderHtml(result, NO_PLOTS);
 
   it('is one self-contained file', () => {
     expect(html).toMatch(/^<!doctype html>/);
@@ -152,7 +154,7 @@ describe('renderHtml', () => {
   });
 
   it('escapes HTML and Markdown in user text', () => {
-    const hostile = renderHtml(withHostileText());
+    const hostile = renderHtml(withHostileText(), NO_PLOTS);
     expect(hostile).not.toMatch(/<script/i);
     expect(hostile).not.toContain('<img');
     expect(hostile).not.toContain('<b>');
@@ -170,14 +172,14 @@ describe('renderHtml', () => {
   });
 
   it('refuses a result without cautions', () => {
-    expect(() => renderHtml({ ...result, cautions: ['  '] })).toThrow(/cautions/);
+    expect(() => renderHtml({ ...result, cautions: ['  '] }, NO_PLOTS)).toThrow(/cautions/);
   });
 });
 
 describe('report, cutting sections', () => {
   const result = sampleResult();
   const md = renderMarkdown(result);
-  const html = renderHtml(result);
+  const html = renderHtml(result, NO_PLOTS);
   const { cut_list, leather, setting_out, stock_plan } = result.cutting;
 
   it('has the cut list, leather, setting-out and stock plan sections in order, before the spec', () => {
@@ -207,7 +209,7 @@ describe('report, cutting sections', () => {
     for (const svg of ['<svg><script>alert(1)</script></svg>', '<svg><image href="http://example.com/x.png"/></svg>', '<svg onload="alert(1)"></svg>', 'not svg']) {
       const r = sampleResult();
       r.cutting.setting_out.svg = svg;
-      const out = renderHtml(r);
+      const out = renderHtml(r, NO_PLOTS);
       expect(out, svg).not.toContain(svg);
       expect(out).toContain('could not be placed inline');
     }
@@ -246,7 +248,7 @@ describe('report, cutting sections', () => {
   it('escapes part labels inside the SVG bars', () => {
     const r = sampleResult();
     r.cutting.stock_plan.groups[0].plan.patterns[0].cuts[0].label = '<script>x</script> & "q"';
-    const out = renderHtml(r);
+    const out = renderHtml(r, NO_PLOTS);
     expect(out).not.toMatch(/<script/i);
     expect(out).toContain('&#60;script&#62;x&#60;/script&#62; &#38; &#34;q&#34;');
   });

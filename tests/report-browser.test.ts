@@ -25,11 +25,12 @@ interface Laid {
 
 describe.skipIf(!browser)('the HTML report in headless Chromium', () => {
   const dir = mkdtempSync(join(tmpdir(), 'axletree-report-browser-'));
-  const html = demoReportHtml('demo-two-crew');
+  let html = '';
   let context: BrowserContext;
   let page: Page;
 
   beforeAll(async () => {
+    html = await demoReportHtml('demo-two-crew');
     const file = join(dir, 'report.html');
     writeFileSync(file, html);
     context = await launchChromium();
@@ -55,6 +56,8 @@ describe.skipIf(!browser)('the HTML report in headless Chromium', () => {
     // As many figures laid out as the file holds.
     expect(laid).toHaveLength(html.match(/<svg[\s>]/g)!.length);
     expect(laid.length).toBeGreaterThanOrEqual(4); // the three drawings of the build and the wheel setting-out at least
+    // The plots drawn by vega: load per horse, the turn over speed, three per ride case.
+    expect(laid.filter((f) => /\bmarks\b/.test(f.cls))).toHaveLength(2 + 3 * 3);
     for (const f of laid) {
       expect(f.width, f.cls).toBeGreaterThan(0);
       expect(f.height, f.cls).toBeGreaterThan(0);

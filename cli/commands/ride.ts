@@ -37,7 +37,7 @@ export async function rideCommand(file: string, opts: RideOptions, con: Console)
   const analysis = new Analysis(prepared.spec, data);
   const cases = opts.case ? [opts.case as RideCase] : [...RIDE_CASES];
   const results = cases.map((c) => rideCase(analysis, c));
-  const plots = new Map(results.map((r) => [r.case, ridePlotFiles(r.case, r.title, r.series)]));
+  const plots = new Map(await Promise.all(results.map(async (r) => [r.case, await ridePlotFiles(r.case, r.title, r.series)] as const)));
   const report = rideMarkdown({
     specName: prepared.spec.name,
     cases: results,

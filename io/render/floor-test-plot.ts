@@ -2,20 +2,23 @@
 
 import { dampedSineAt } from '../../src/floor-test/damped-sine-fit.ts';
 import type { DropRecord, FloorTestEstimate } from '../../src/floor-test/floor-test-types.ts';
-import { linePlotSvg } from './line-plot-svg.ts';
+import { plotSvg } from './plots/plot-svg.ts';
 
-export function floorTestPlotSvg(record: DropRecord, e: FloorTestEstimate): string {
+export async function floorTestPlotSvg(record: DropRecord, e: FloorTestEstimate): Promise<string> {
   const { start_s, end_s } = e.free_vibration;
   const t = record.t_s.filter((v) => v >= start_s && v <= end_s);
   const fitted = dampedSineAt(e.fit, t.map((v) => v - start_s));
-  return linePlotSvg({
+  return plotSvg({
+    id: 'floor-test',
     title: `Drop test: record and fitted damped sine (f_n ${e.natural_frequency_hz.toFixed(2)} Hz, damping ratio ${e.damping_ratio.toFixed(3)})`,
+    caption: 'The drop record, the damped sine fitted to its free vibration, and the turning points the logarithmic decrement used.',
     xLabel: 'time (s)',
     yLabel: 'displacement (mm)',
     lines: [
       { label: 'record', x: record.t_s, y: record.x_mm },
-      { label: 'fit (free vibration)', x: t, y: fitted, dashed: true },
-      { label: 'turning points used', x: e.extrema.map((p) => p.t_s), y: e.extrema.map((p) => p.x_mm), dots: true },
+      { label: 'fit (free vibration)', x: t, y: fitted, style: 'dashed' },
+      { label: 'turning points used', x: e.extrema.map((p) => p.t_s), y: e.extrema.map((p) => p.x_mm), style: 'dots' },
     ],
+    rules: [],
   });
 }

@@ -9,12 +9,12 @@ import { SETTING_OUT_SVG_FILE, STOCK_BARS_INFO } from './report-figures.ts';
 import { inlineSvg } from './inline-svg.ts';
 import { stockBarSvg } from './stock-bar-svg.ts';
 import { partLabels } from './stock-bar.ts';
-import { parseRidePlotFile, ridePlotSvg } from './ride-plots.ts';
+import type { ReportPlots } from './report-plots.ts';
 import { drawingHtml, drawingOfFile } from './report-drawings.ts';
 
-/** The check report as one self-contained HTML file: inline CSS, no external assets. */
-export function renderHtml(result: CheckResult): string {
-  const md = reportMarkdownIt(result);
+/** The check report as one self-contained HTML file: inline CSS, no external assets; `plots` from drawReportPlots. */
+export function renderHtml(result: CheckResult, plots: ReportPlots): string {
+  const md = reportMarkdownIt(result, plots);
   const body = md.render(renderMarkdown(result));
   const title = md.utils.escapeHtml(`Design-rule check: ${result.spec_name}`);
   return `<!doctype html>
@@ -34,10 +34,10 @@ ${body}</main>
 `;
 }
 
-function reportMarkdownIt(result: CheckResult): MarkdownIt {
+function reportMarkdownIt(result: CheckResult, plots: ReportPlots): MarkdownIt {
   // html: false turns any raw HTML in the text into visible, escaped text.
   const md = markdownit('default', { html: false, linkify: false, typographer: false });
-  drawFigures(md, result);
+  drawFigures(md, result, plots);
   md.core.ruler.push('axletree_report_classes', (state: StateCore) => {
     markHeadings(state.tokens);
     for (const token of state.tokens) {
@@ -48,16 +48,17 @@ function reportMarkdownIt(result: CheckResult): MarkdownIt {
 }
 
 /**
- * Our own drawings go inline: the setting-out image link becomes its SVG, and
- * each stock group's text bars become one SVG bar per pattern. The SVG comes
- * from the result, never from the Markdown text.
+ * Our own drawings go inline: the setting-out, drawing and plot image links
+ * become their SVG, and each stock group's text bars become one SVG bar per
+ * pattern. The SVG comes from the result and its drawn plots, never from the
+ * Markdown text.
  */
-function drawFigures(md: MarkdownIt, result: CheckResult): void {
+function drawFigures(md: MarkdownIt, result: CheckResult, plots: ReportPlots): void {
   const image = md.renderer.rules.image!;
   md.renderer.rules.image = (tokens, idx, options, env, self) => {
     const src = String(tokens[idx].attrGet('src') ?? '');
-    const ride = parseRidePlotFile(src);
-    if (ride) return ridePlotHtml(result, ride, src);
+    const plot = plots.get(src);
+    if (plot !== undefined) return plotHtml(plot, src);
     const drawing = drawingOfFile(result, src);
     if (drawing) return drawingHtml(drawing);
     if (src !== SETTING_OUT_SVG_FILE) return image(tokens, idx, options, env, self);
@@ -81,12 +82,10 @@ function drawFigures(md: MarkdownIt, result: CheckResult): void {
   };
 }
 
-/** A ride plot drawn from the result's thinned series; the Markdown names only the file. */
-function ridePlotHtml(result: CheckResult, plot: NonNullable<ReturnType<typeof parseRidePlotFile>>, file: string): string {
-  const c = result.ride?.cases.find((r) => r.case === plot.case);
-  const svg = c ? ridePlotSvg(c.title, c.plot, plot.kind) : null;
-  const inline = svg === null ? null : inlineSvg(svg);
-  return inline === null ? `<em>The plot could not be placed inline; see ${file} beside report.md.</em>` : `<span class="ride-plot">${inline}</span>`;
+/** A drawn plot inline, or a pointer to its file where it cannot be inlined. */
+function plotHtml(svg: string, file: string): string {
+  const inline = inlineSvg(svg);
+  return inline === null ? `<em>The plot could not be placed inline; see ${file} beside report.md.</em>` : `<span class="plot">${inline}</span>`;
 }
 
 /** Classes on our own h2 headings: the verdict, the cautions, and sections that start a printed page. */

@@ -11,6 +11,7 @@ import { cutListSections } from './report-cutting-md.ts';
 import { stockPlanSections } from './report-stock-plan-md.ts';
 import { rideSections } from './report-ride-md.ts';
 import { drawingSections, firstDrawingBlocks } from './report-drawings.ts';
+import { plotSections } from './report-plots.ts';
 
 /** The check report as Markdown: verdict and cautions first, then the evidence. */
 export function renderMarkdown(result: CheckResult): string {
@@ -30,6 +31,7 @@ export function renderMarkdown(result: CheckResult): string {
     `## ${SECTIONS.figures.title}`,
     figuresTable(result),
     ...drawingSections(result),
+    ...plotSections(result),
     `## ${SECTIONS.massBalance.title}`,
     '### Parts',
     partsTable(result),

@@ -1,10 +1,10 @@
-// The check report's ride section. The plots are linked as SVG files written
-// beside report.md (io/write-outputs.ts); the HTML report draws them inline
-// from the result's thinned series.
+// The check report's ride section. The plots, drawn from the result's thinned
+// series, are linked as SVG files written beside report.md; the HTML report
+// holds them inline (io/render/report-plots.ts).
 
 import type { CheckResult } from '../../src/result/check-result.ts';
 import { SECTIONS } from './report-sections.ts';
-import { ridePlotFiles, ridePlotNames } from './ride-plots.ts';
+import { ridePlotNames } from './ride-plots.ts';
 import { rideSectionBlocks } from './ride-section-md.ts';
 
 export function rideSections(result: CheckResult): string[] {
@@ -24,7 +24,3 @@ export function rideSections(result: CheckResult): string[] {
   ];
 }
 
-/** The ride plot files the report links, with their SVG, for writing beside it. */
-export function ridePlotOutputs(result: CheckResult): [string, string][] {
-  return (result.ride?.cases ?? []).flatMap((c) => ridePlotFiles(c.case, c.title, c.plot));
-}

@@ -75,7 +75,7 @@ ${badgeRules}
    lengths to one scale per group, caption at the left. */
 .setting-out svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; }
 .drawing svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; break-inside: avoid; -webkit-print-color-adjust: exact; print-color-adjust: exact; }
-.ride-plot svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; break-inside: avoid; }
+.plot svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; break-inside: avoid; }
 .stock-bars { margin: 0.3em 0 1em; }
 .stock-bars figure { display: flex; align-items: center; gap: 0.6em; margin: 0.15em 0; }
 .stock-bars figcaption { flex: 0 0 10em; font-size: 0.85em; white-space: nowrap; }

@@ -3,10 +3,11 @@
 // the ground, the yoke). Floor forces are the force channels the ride model
 // names "... floor force".
 // The file names are shared by the ride command, the check's outputs and the
-// report, which links them from Markdown and draws them inline in HTML.
+// report, which links them from Markdown and puts them inline in HTML.
 
 import type { RideCase, RideChannel, RideSeries } from '../../src/ride/ride-types.ts';
-import { linePlotSvg } from './line-plot-svg.ts';
+import type { PlotData } from '../../src/plots/plot-data.ts';
+import { plotSvg } from './plots/plot-svg.ts';
 
 const isFloorForce = (c: RideChannel) => c.unit === 'N' && /floor force$/.test(c.name);
 
@@ -22,23 +23,20 @@ export function ridePlotFile(c: RideCase, kind: RidePlotKind): string {
   return `ride-${c}-${kind}.svg`;
 }
 
-/** The plot file named, if it is one of ours: the report's HTML draws it inline. */
-export function parseRidePlotFile(name: string): { case: RideCase; kind: RidePlotKind } | undefined {
-  const m = /^ride-(ridge|one-wheel|drop)-(heights|floor-forces|support-forces)\.svg$/.exec(name);
-  return m ? { case: m[1] as RideCase, kind: m[2] as RidePlotKind } : undefined;
-}
-
-/** The plot of one kind, or null where the series has no channel in its unit. */
-export function ridePlotSvg(title: string, series: RideSeries, kind: RidePlotKind): string | null {
+/** The plot of one kind as data, or null where the series has no channel in its unit. */
+export function ridePlot(c: RideCase, title: string, series: RideSeries, kind: RidePlotKind): PlotData | null {
   const spec = RIDE_PLOTS.find((p) => p.kind === kind)!;
   const channels = series.channels.filter(spec.pick);
   if (channels.length === 0) return null;
-  return linePlotSvg({
+  return {
+    id: `ride-${c}-${kind}`,
     title: `${title}: ${spec.title}`,
+    caption: `${title}: ${spec.title} over time, from the ride model.`,
     xLabel: 'time (s)',
     yLabel: spec.yLabel,
-    lines: channels.map((c) => ({ label: c.name, x: series.t_s, y: c.values })),
-  });
+    lines: channels.map((ch) => ({ label: ch.name, x: series.t_s, y: ch.values })),
+    rules: [],
+  };
 }
 
 /** The names of the plots the series can fill. */
@@ -46,10 +44,9 @@ export function ridePlotNames(c: RideCase, series: RideSeries): string[] {
   return RIDE_PLOTS.filter((p) => series.channels.some(p.pick)).map((p) => ridePlotFile(c, p.kind));
 }
 
-/** Every plot the series can fill, with its file name. */
-export function ridePlotFiles(c: RideCase, title: string, series: RideSeries): [string, string][] {
-  return RIDE_PLOTS.flatMap((p) => {
-    const svg = ridePlotSvg(title, series, p.kind);
-    return svg === null ? [] : [[ridePlotFile(c, p.kind), `${svg}\n`] as [string, string]];
-  });
+/** Every plot the series can fill, with its file name, drawn to SVG. */
+export async function ridePlotFiles(c: RideCase, title: string, series: RideSeries): Promise<[string, string][]> {
+  const plots = RIDE_PLOTS.map((p) => [ridePlotFile(c, p.kind), ridePlot(c, title, series, p.kind)] as const);
+  const drawn = plots.filter((p): p is readonly [string, PlotData] => p[1] !== null);
+  return Promise.all(drawn.map(async ([file, plot]): Promise<[string, string]> => [file, `${await plotSvg(plot)}\n`]));
 }

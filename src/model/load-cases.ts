@@ -19,33 +19,55 @@ const CREW: { pos: CrewPosition; id: string; title: string }[] = [
 
 export function crewAt(spec: CheckedSpecification, pos: CrewPosition): CheckedSpecification {
   if (pos === 'as placed') return spec;
+  const { front, back } = usableFloor(spec);
+  return crewMovedTo(spec, pos === 'forward' ? front : back);
+}
+
+/** The usable floor's back and front edges, mm from the floor's rear edge. */
+export function usableFloor(spec: CheckedSpecification): { back: number; front: number } {
   const margin = spec.box.floor.usable_margin_mm;
-  const x = pos === 'forward' ? spec.box.floor.depth_mm - margin : margin;
-  return { ...spec, crew: spec.crew.map((c) => ({ ...c, x_mm: x })) };
+  return { back: margin, front: spec.box.floor.depth_mm - margin };
 }
 
-/** The pole load for a spec as it stands (crew as placed, no acceleration). */
-export function staticPoleLoad(spec: CheckedSpecification, data: RulesData, model: MassModel = massModel(spec, data)) {
-  return poleLoad({ parts: model.parts.filter((p) => p.group === 'rolling'), axleX_mm: spec.axle.x_mm, yokeX_mm: spec.pole.yoke_x_mm, yokeZ_mm: spec.pole.yoke_height_mm, accel_g: 0, rollingResistance: data.grounds[spec.operation.ground].rolling_resistance.value });
+/** The whole crew standing together at x (mm from the floor's rear edge). */
+export function crewMovedTo(spec: CheckedSpecification, x_mm: number): CheckedSpecification {
+  return { ...spec, crew: spec.crew.map((c) => ({ ...c, x_mm })) };
 }
 
-export function loadCases(spec: CheckedSpecification, data: RulesData): LoadCaseResult[] {
-  const motions = [
+/** Standing, accelerating and braking at the specification's rates. */
+export function motions(spec: CheckedSpecification): { accel: number; id: string; title: string }[] {
+  return [
     { accel: 0, id: 'static', title: 'standing' },
     { accel: spec.operation.acceleration_g, id: 'accelerating', title: `accelerating at ${spec.operation.acceleration_g} g` },
     { accel: -spec.operation.braking_g, id: 'braking', title: `braking at ${spec.operation.braking_g} g` },
   ];
-  const Crr = data.grounds[spec.operation.ground].rolling_resistance.value;
+}
+
+/** The pole load, the yoke load (pole plus yoke weight) and each horse's share, for one placement of the masses. */
+export function yokeLoads(spec: CheckedSpecification, data: RulesData, model: MassModel, accel_g: number) {
+  const r = poleLoad({
+    parts: model.parts.filter((p) => p.group === 'rolling'),
+    axleX_mm: spec.axle.x_mm,
+    yokeX_mm: spec.pole.yoke_x_mm,
+    yokeZ_mm: spec.pole.yoke_height_mm,
+    accel_g,
+    rollingResistance: data.grounds[spec.operation.ground].rolling_resistance.value,
+  });
+  const yoke_N = r.pole_N + model.yoke.mass_kg * G;
+  return { pole: r, yoke_N, perHorse_N: yoke_N / spec.team.horses };
+}
+
+/** The pole load for a spec as it stands (crew as placed, no acceleration). */
+export function staticPoleLoad(spec: CheckedSpecification, data: RulesData, model: MassModel = massModel(spec, data)) {
+  return yokeLoads(spec, data, model, 0).pole;
+}
+
+export function loadCases(spec: CheckedSpecification, data: RulesData): LoadCaseResult[] {
   const out: LoadCaseResult[] = [];
   for (const crew of CREW) {
-    const variant = crewAt(spec, crew.pos);
-    const model = massModel(variant, data);
-    const rolling = model.parts.filter((p) => p.group === 'rolling');
-    const yokeWeight = model.yoke.mass_kg * G;
-    for (const motion of motions) {
-      const r = poleLoad({ parts: rolling, axleX_mm: spec.axle.x_mm, yokeX_mm: spec.pole.yoke_x_mm, yokeZ_mm: spec.pole.yoke_height_mm, accel_g: motion.accel, rollingResistance: Crr });
-      const yoke = r.pole_N + yokeWeight;
-      const perHorse = yoke / spec.team.horses;
+    const model = massModel(crewAt(spec, crew.pos), data);
+    for (const motion of motions(spec)) {
+      const { pole: r, yoke_N: yoke, perHorse_N: perHorse } = yokeLoads(spec, data, model, motion.accel);
       const id = crew.id ? (motion.id === 'static' ? crew.id : `${crew.id}-${motion.id}`) : motion.id;
       out.push({
         id,

@@ -2,6 +2,7 @@ import type { Finding, Severity } from '../findings/finding.ts';
 import type { CuttingResult } from '../cutlist/cutting-result.ts';
 import type { RideSummary } from './ride-summary.ts';
 import type { Drawing } from '../drawings/drawing.ts';
+import type { PlotData } from '../plots/plot-data.ts';
 
 export interface Figure {
   value: number;
@@ -70,6 +71,8 @@ export interface CheckResult {
   cutting: CuttingResult;
   /** Drawings of the build as SVG text: side elevation, plan of the turn, floor straps by tension. */
   drawings?: Drawing[];
+  /** Plots as data (lines, limits, positions): load on each horse over crew position, lateral acceleration over speed in the planned turn. */
+  plots?: PlotData[];
   /** The ride model's cases (results without the full series, plus thinned series to plot) and the floor-damping tuner; absent where the model was not run. */
   ride?: RideSummary;
   spec_as_checked: SpecEntry[];

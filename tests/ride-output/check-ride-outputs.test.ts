@@ -6,6 +6,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { renderWorkbook } from '../../io/render/workbook.ts';
 import { renderMarkdown } from '../../io/render/report-md.ts';
+import { drawReportPlots } from '../../io/render/report-plots.ts';
 import { renderHtml } from '../../io/render/report-html.ts';
 import { writeOutputs } from '../../io/write-outputs.ts';
 import { SHORT_CAUTION } from '../../src/cautions.ts';
@@ -70,10 +71,10 @@ describe('the ride section of the report', () => {
     expect(md).toContain(SHORT_CAUTION);
   });
 
-  it('HTML holds the plots inline, with no image links left', () => {
-    const html = renderHtml(result);
+  it('HTML holds the plots inline, with no image links left', async () => {
+    const html = renderHtml(result, await drawReportPlots(result));
     expect(html).not.toMatch(/<img/);
-    expect(html.match(/<span class="ride-plot"><svg/g)).toHaveLength(result.ride!.cases.length * 3);
+    expect(html.match(/<span class="plot"><svg/g)).toHaveLength(result.ride!.cases.length * 3 + (result.plots?.length ?? 0));
     expect(html).toMatch(/<h2 class="new-page">Ride<\/h2>/);
   });
 });

@@ -1,7 +1,7 @@
 // The ride command's CSV and plots from a ride case the model ran.
 import { describe, expect, it } from 'vitest';
 import { rideCsv, csvField } from '../../io/render/ride-csv.ts';
-import { parseRidePlotFile, ridePlotFiles, ridePlotNames } from '../../io/render/ride-plots.ts';
+import { ridePlotFiles, ridePlotNames } from '../../io/render/ride-plots.ts';
 import { inlineSvg } from '../../io/render/inline-svg.ts';
 import { rideCaseSummary, strideSeries } from '../../src/result/ride-summary.ts';
 import { demoRide } from '../fixtures/sample-ride.ts';
@@ -27,9 +27,9 @@ describe('rideCsv', () => {
 });
 
 describe('ride plots', () => {
-  it('heights, floor forces and wheel and yoke forces, each with its channels', () => {
+  it('heights, floor forces and wheel and yoke forces, each with its channels', async () => {
     const r = demoRide().results['one-wheel'];
-    const files = ridePlotFiles(r.case, r.title, r.series);
+    const files = await ridePlotFiles(r.case, r.title, r.series);
     expect(files.map(([n]) => n)).toEqual(['ride-one-wheel-heights.svg', 'ride-one-wheel-floor-forces.svg', 'ride-one-wheel-support-forces.svg']);
     expect(ridePlotNames(r.case, r.series)).toEqual(files.map(([n]) => n));
     const [, heights] = files[0];
@@ -38,11 +38,7 @@ describe('ride plots', () => {
       if (c.unit === 'mm') expect(heights).toContain(c.name);
       if (/floor force$/.test(c.name)) expect(floor).toContain(c.name);
     }
-    for (const [name, svg] of files) {
-      expect(parseRidePlotFile(name)?.case).toBe('one-wheel');
-      expect(inlineSvg(svg)).not.toBeNull();
-    }
-    expect(parseRidePlotFile('ride-ridge-other.svg')).toBeUndefined();
+    for (const [, svg] of files) expect(inlineSvg(svg)).not.toBeNull();
   });
 
   it('the summary keeps every k-th sample and the last, without the full series', () => {
