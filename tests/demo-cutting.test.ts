@@ -10,7 +10,7 @@ import { renderWorkbook } from '../io/render/workbook.ts';
 import { renderMarkdown } from '../io/render/report-md.ts';
 import { drawReportPlots } from '../io/render/report-plots.ts';
 import { renderHtml } from '../io/render/report-html.ts';
-import { DRAWING_SCOPE } from '../io/render/inline-svg.ts';
+import { DRAWING_SCOPE, scopeClass } from '../io/render/inline-svg.ts';
 import { readDemo, rulesData } from './support/fixtures.ts';
 
 const DEMOS = ['demo-two-crew', 'demo-rear-axle', 'teaching-flawed'];
@@ -91,11 +91,12 @@ describe('cutting figures of the demo specifications', () => {
     const md = renderMarkdown(r);
     for (const h of ['## Cut list', '## Leather and rawhide', '## Wheel setting-out', '## Stock plan']) expect(md, h).toContain(`\n${h}\n`);
     const html = renderHtml(r, await drawReportPlots(r));
-    expect(html).toContain(`<span class="setting-out"><svg class="${DRAWING_SCOPE}`);
-    // The drawing's style rules reach nothing outside it, so the stock bars keep their paint.
-    for (const [, css] of html.matchAll(/<svg[^>]*>[\s\S]*?<style>([\s\S]*?)<\/style>/g)) {
-      for (const rule of css.split('}').filter((r) => r.trim())) {
-        for (const selector of rule.split('{')[0].split(',')) expect(selector.trim().startsWith(`.${DRAWING_SCOPE} `), selector).toBe(true);
+    expect(html).toContain(`<span class="setting-out"><svg class="${scopeClass(r.cutting.setting_out.svg)}`);
+    // Each drawing's style rules reach only that drawing, so the stock bars and the plots keep their paint.
+    for (const [, scope, css] of html.matchAll(/<svg class="([^" ]+)[^>]*>(?:(?!<\/svg>)[\s\S])*?<style>([\s\S]*?)<\/style>/g)) {
+      expect(scope.startsWith(`${DRAWING_SCOPE}-`)).toBe(true);
+      for (const rule of css.split('}').filter((x) => x.trim())) {
+        for (const selector of rule.split('{')[0].split(',')) expect(selector.trim().startsWith(`.${scope} `), selector).toBe(true);
       }
     }
     expect(html.match(/class="stock-bar"/g)?.length ?? 0).toBe(sum(r.cutting.stock_plan.groups.map((g) => g.plan.patterns.length)));

@@ -142,7 +142,7 @@ describe('drawings in the report', () => {
 
   it('report.html holds them inline, scoped, with their captions', () => {
     expect(html).not.toMatch(/<img[^>]+drawing-/);
-    expect(html.match(/<span class="drawing"><svg class="axletree-drawing"/g)).toHaveLength(3);
+    expect(html.match(/<span class="drawing"><svg class="axletree-drawing-[0-9a-z]+"/g)).toHaveLength(3);
     for (const d of result.drawings!) expect(html).toContain(d.caption.slice(0, 40));
   });
 });

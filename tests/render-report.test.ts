@@ -8,7 +8,7 @@ import type { CheckResult } from '../src/result/check-result.ts';
 import { SHORT_CAUTION } from '../src/cautions.ts';
 import { formatNumber, formatPercent } from '../io/render/number-format.ts';
 import { sectionText } from '../io/render/cutting-text.ts';
-import { DRAWING_SCOPE } from '../io/render/inline-svg.ts';
+import { scopeClass } from '../io/render/inline-svg.ts';
 
 /** The body lines of every fenced block in a Markdown text. */
 function fencedBlocks(md: string): string[] {
@@ -200,7 +200,7 @@ describe('report, cutting sections', () => {
 
   it('links the setting-out drawing in Markdown and puts it inline in HTML', () => {
     expect(md).toContain('![Wheel setting-out drawing](wheel-setting-out.svg)');
-    expect(html).toContain(`<span class="setting-out">${setting_out.svg.replace('<svg ', `<svg class="${DRAWING_SCOPE}" `)}</span>`);
+    expect(html).toContain(`<span class="setting-out">${setting_out.svg.replace('<svg ', `<svg class="${scopeClass(setting_out.svg)}" `)}</span>`);
     expect(html).not.toContain('<img');
     expect(tableAfter(md, '## Wheel setting-out').find((r) => r.includes('between shoulders'))).toContain(setting_out.spoke_length_shoulders_mm.toFixed(1));
   });

@@ -65,6 +65,24 @@ describe.skipIf(!browser)('the HTML report in headless Chromium', () => {
     }
   });
 
+  it("paints every figure as its own SVG says: no drawing's style sheet or the page's reaches another figure", async () => {
+    const mismatches: string[] = await page.evaluate(() =>
+      [...document.querySelectorAll('svg [stroke], svg text[font-size]')].flatMap((e) => {
+        const style = getComputedStyle(e);
+        const want = e.getAttribute('stroke');
+        // An attribute is a presentation hint: a leaked style rule would override it.
+        const probe = document.createElement('span');
+        probe.style.color = want ?? '';
+        document.body.append(probe);
+        const wantColour = getComputedStyle(probe).color;
+        probe.remove();
+        const bad = (want && want !== 'none' && !want.startsWith('url') && style.stroke !== wantColour) || (e.getAttribute('font-size') && style.fontSize !== e.getAttribute('font-size'));
+        return bad ? [`${e.tagName} ${want ?? ''} ${style.stroke} ${e.getAttribute('font-size') ?? ''} ${style.fontSize}`] : [];
+      }),
+    );
+    expect(mismatches.slice(0, 5)).toEqual([]);
+  });
+
   it('opens with the verdict, then the cautions, then the side elevation', async () => {
     const order: string[] = await page.evaluate(() =>
       [...document.querySelectorAll('main h2, main svg[data-origin]')].map((e) => (e.tagName.toLowerCase() === 'h2' ? `h2 ${e.textContent}` : `svg ${e.querySelector('text.title')?.textContent}`)),

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { barCells, barScale, barSegments } from '../io/render/stock-bar.ts';
 import { textBars } from '../io/render/stock-bar-text.ts';
-import { DRAWING_SCOPE, inlineSvg, scopeStyles } from '../io/render/inline-svg.ts';
+import { DRAWING_SCOPE, inlineSvg, scopeClass, scopeStyles } from '../io/render/inline-svg.ts';
 import type { CuttingPattern } from '../src/stock/cutting-types.ts';
 import type { StockPlanGroup } from '../src/cutlist/cutting-result.ts';
 
@@ -56,7 +56,16 @@ describe('stock bars', () => {
 describe('inlineSvg', () => {
   it('drops an XML prolog and keeps a plain drawing', () => {
     const svg = '<svg xmlns="http://www.w3.org/2000/svg"><line x1="0" y1="0" x2="1" y2="1"/><use href="#a"/></svg>';
-    expect(inlineSvg(`<?xml version="1.0" encoding="UTF-8"?>\n${svg}\n`)).toBe(svg.replace('<svg ', `<svg class="${DRAWING_SCOPE}" `));
+    expect(inlineSvg(`<?xml version="1.0" encoding="UTF-8"?>\n${svg}\n`)).toBe(svg.replace('<svg ', `<svg class="${scopeClass(svg)}" `));
+  });
+
+  it('gives each drawing its own scope, so one sheet reaches no other drawing', () => {
+    const a = '<svg><style>path { stroke: #000; }</style><path/></svg>';
+    const b = '<svg><path stroke="red"/></svg>';
+    expect(scopeClass(a)).not.toBe(scopeClass(b));
+    expect(scopeClass(a).startsWith(`${DRAWING_SCOPE}-`)).toBe(true);
+    expect(inlineSvg(a)).toContain(`.${scopeClass(a)} path { stroke: #000; }`);
+    expect(inlineSvg(b)).toBe(`<svg class="${scopeClass(b)}"><path stroke="red"/></svg>`);
   });
 
   it('refuses anything active or external', () => {
@@ -74,19 +83,19 @@ describe('inlineSvg', () => {
 describe('scopeStyles', () => {
   it('confines the drawing\'s style rules to the drawing', () => {
     const svg = '<svg xmlns="http://www.w3.org/2000/svg"><style>rect, text { fill: none; } .dim { stroke-width: 0.2; }</style><rect/></svg>';
-    expect(scopeStyles(svg)).toBe(
+    expect(scopeStyles(svg, DRAWING_SCOPE)).toBe(
       `<svg class="${DRAWING_SCOPE}" xmlns="http://www.w3.org/2000/svg"><style>.${DRAWING_SCOPE} rect, .${DRAWING_SCOPE} text { fill: none; } .${DRAWING_SCOPE} .dim { stroke-width: 0.2; }</style><rect/></svg>`,
     );
   });
 
   it('joins a class already on the root and reads a CDATA sheet', () => {
-    const out = scopeStyles('<svg class="wheel" width="1"><style><![CDATA[ line { stroke: #000; } ]]></style></svg>')!;
+    const out = scopeStyles('<svg class="wheel" width="1"><style><![CDATA[ line { stroke: #000; } ]]></style></svg>', DRAWING_SCOPE)!;
     expect(out.startsWith(`<svg class="${DRAWING_SCOPE} wheel" width="1">`)).toBe(true);
     expect(out).toContain(`.${DRAWING_SCOPE} line { stroke: #000; }`);
   });
 
   it('does not inline a sheet it cannot scope', () => {
-    expect(scopeStyles('<svg><style>@media print { rect { fill: red; } }</style></svg>')).toBeNull();
-    expect(scopeStyles('<svg><style>/* note */ rect { fill: red; }</style></svg>')).toBeNull();
+    expect(scopeStyles('<svg><style>@media print { rect { fill: red; } }</style></svg>', DRAWING_SCOPE)).toBeNull();
+    expect(scopeStyles('<svg><style>/* note */ rect { fill: red; }</style></svg>', DRAWING_SCOPE)).toBeNull();
   });
 });

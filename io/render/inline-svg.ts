@@ -3,7 +3,8 @@
  * the HTML report. The report forbids scripts and outside resources, so a
  * drawing that holds anything active or external is not inlined; null says so.
  * A style sheet inside an inline SVG applies to the whole page, so its rules
- * are scoped to the drawing's own root.
+ * are scoped to the drawing's own root: a class made from the drawing's text,
+ * so one drawing's sheet reaches neither the page nor another drawing.
  */
 const FORBIDDEN = [
   /<script/i,
@@ -16,15 +17,27 @@ const FORBIDDEN = [
   /<!DOCTYPE|<!ENTITY/i,
 ];
 
-/** Class put on the inlined drawing's root; its style rules apply only below it. */
+/** Stem of the class put on an inlined drawing's root; its style rules apply only below it. */
 export const DRAWING_SCOPE = 'axletree-drawing';
 
+/** The scope class of one drawing: the stem and a hash of its text (FNV-1a, 32 bits); the same drawing twice shares one, harmlessly. */
+export function scopeClass(svg: string): string {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < svg.length; i++) h = Math.imul(h ^ svg.charCodeAt(i), 0x01000193) >>> 0;
+  return `${DRAWING_SCOPE}-${h.toString(36)}`;
+}
+
+/** The SVG as it goes inline in the HTML report, or null where it cannot. */
 export function inlineSvg(svg: string): string | null {
-  // An XML prolog is legal in a file but not inside HTML.
-  const body = svg.trim().replace(/^<\?xml[^>]*\?>\s*/, '');
+  const body = svgBody(svg);
   if (!/^<svg[\s>]/.test(body) || !body.endsWith('</svg>')) return null;
   if (FORBIDDEN.some((re) => re.test(body))) return null;
-  return scopeStyles(body);
+  return scopeStyles(body, scopeClass(body));
+}
+
+/** The SVG without an XML prolog, which is legal in a file but not inside HTML. */
+export function svgBody(svg: string): string {
+  return svg.trim().replace(/^<\?xml[^>]*\?>\s*/, '');
 }
 
 /**
@@ -32,7 +45,7 @@ export function inlineSvg(svg: string): string | null {
  * which goes on the root <svg>. Only plain rule lists are rewritten; a sheet
  * with at-rules or comments is beyond this and the drawing is not inlined.
  */
-export function scopeStyles(svg: string): string | null {
+export function scopeStyles(svg: string, scope: string): string | null {
   let ok = true;
   const scoped = svg.replace(/(<style[^>]*>)([\s\S]*?)(<\/style>)/g, (_m, open: string, sheet: string, close: string) => {
     const css = sheet.replace(/^\s*<!\[CDATA\[|\]\]>\s*$/g, '');
@@ -44,7 +57,7 @@ export function scopeStyles(svg: string): string | null {
     const rewritten = rules.map((rule) => {
       const parts = rule.split('{');
       if (parts.length !== 2) ok = false;
-      const each = parts[0].split(',').map((s) => `.${DRAWING_SCOPE} ${s.trim()}`);
+      const each = parts[0].split(',').map((s) => `.${scope} ${s.trim()}`);
       return `${each.join(', ')} {${parts[1] ?? ''}}`;
     });
     return `${open}${rewritten.join(' ')}${close}`;
@@ -52,7 +65,7 @@ export function scopeStyles(svg: string): string | null {
   if (!ok) return null;
   const root = /^<svg\b[^>]*>/.exec(scoped)![0];
   const classed = /\sclass="/.test(root)
-    ? root.replace(/\sclass="/, ` class="${DRAWING_SCOPE} `)
-    : root.replace(/^<svg\b/, `<svg class="${DRAWING_SCOPE}"`);
+    ? root.replace(/\sclass="/, ` class="${scope} `)
+    : root.replace(/^<svg\b/, `<svg class="${scope}"`);
   return classed + scoped.slice(root.length);
 }

@@ -28,10 +28,11 @@ export function ridePlot(c: RideCase, title: string, series: RideSeries, kind: R
   const spec = RIDE_PLOTS.find((p) => p.kind === kind)!;
   const channels = series.channels.filter(spec.pick);
   if (channels.length === 0) return null;
+  const heading = `${title.charAt(0).toUpperCase()}${title.slice(1)}`;
   return {
     id: `ride-${c}-${kind}`,
-    title: `${title}: ${spec.title}`,
-    caption: `${title}: ${spec.title} over time, from the ride model.`,
+    title: `${heading}: ${spec.title}`,
+    caption: `${heading}: ${spec.title} over time, from the ride model.`,
     xLabel: 'time (s)',
     yLabel: spec.yLabel,
     lines: channels.map((ch) => ({ label: ch.name, x: series.t_s, y: ch.values })),
