@@ -17,7 +17,19 @@ import { benchFloor } from './floor-solver.ts';
 import { benchStockPlanner } from './stock-planner.ts';
 import { benchRide } from './ride.ts';
 
+/** The check: validation and every model and rule (the ride model and the stock planner included). */
 const TARGET_MS = 1000;
+/** The report's renderers: Markdown, the plots (vega, about 40 ms each, eleven of them), HTML and the workbook. */
+const OUTPUTS_TARGET_MS = 1500;
+
+/** Print the median, first and worst of a set of runs against a target; 1 if it missed. */
+function report(label: string, times: number[], target: number): number {
+  const sorted = [...times].sort((a, b) => a - b);
+  const median = sorted[Math.floor(sorted.length / 2)];
+  const ok = median < target;
+  console.log(`${label} median ${median.toFixed(1)} ms (first ${times[0].toFixed(1)}, worst ${sorted.at(-1)!.toFixed(1)})  target < ${target} ms  ${ok ? 'met' : 'MISSED'}`);
+  return ok ? 0 : 1;
+}
 const RUNS = 10;
 const data = loadRulesData(defaultRulesDir());
 // Loaded once, as the CLI does; the time to load it is not part of a check.
@@ -27,22 +39,22 @@ let missed = 0;
 
 for (const file of readdirSync(specs).filter((f) => f.endsWith('.yaml'))) {
   const raw = parse(readFileSync(new URL(file, specs), 'utf8'));
-  const times: number[] = [];
+  const checkTimes: number[] = [];
+  const outputTimes: number[] = [];
   for (let i = 0; i < RUNS; i++) {
     const t0 = performance.now();
     const p = prepareSpec(raw, data);
     if (!p.ok) throw new Error(`${file} does not validate`);
     const result = checkSpecification(p.spec, p.entries, data, RULES, lp);
+    const t1 = performance.now();
     renderMarkdown(result);
     renderHtml(result, await drawReportPlots(result));
     await renderWorkbook(result);
-    times.push(performance.now() - t0);
+    checkTimes.push(t1 - t0);
+    outputTimes.push(performance.now() - t1);
   }
-  times.sort((a, b) => a - b);
-  const median = times[Math.floor(RUNS / 2)];
-  const ok = median < TARGET_MS;
-  if (!ok) missed++;
-  console.log(`${file.padEnd(24)} median ${median.toFixed(1)} ms (first ${times[0].toFixed(1)}, worst ${times[RUNS - 1].toFixed(1)})  target < ${TARGET_MS} ms  ${ok ? 'met' : 'MISSED'}`);
+  missed += report(`${file.padEnd(24)} check  `, checkTimes, TARGET_MS);
+  missed += report(`${''.padEnd(24)} outputs`, outputTimes, OUTPUTS_TARGET_MS);
   const p = prepareSpec(raw, data);
   if (p.ok) missed += benchFloor(file, p.spec, data);
 }
