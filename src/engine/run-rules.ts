@@ -1,4 +1,5 @@
 import type { RulesData } from '../data/rules-data.ts';
+import { ruleLimit } from '../data/rule-limit.ts';
 import type { Finding } from '../findings/finding.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { Analysis } from './analysis.ts';
@@ -9,11 +10,7 @@ export function contextFor(rule: Rule, spec: CheckedSpecification, data: RulesDa
     spec,
     data,
     analysis,
-    limit(name) {
-      const l = data.limits[rule.id]?.[name];
-      if (!l) throw new Error(`rules data has no limit ${rule.id}.${name}; add it to rules/limits`);
-      return l;
-    },
+    limit: (name) => ruleLimit(data, rule.id, name),
   };
 }
 

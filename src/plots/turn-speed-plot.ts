@@ -4,7 +4,7 @@ import { rollover } from '../rules/turn/rollover.ts';
 import { sliding } from '../rules/turn/sliding.ts';
 import { UNITS } from '../units/units.ts';
 import type { PlotData } from './plot-data.ts';
-import { ruleLimit } from './plot-limit.ts';
+import { ruleLimit } from '../data/rule-limit.ts';
 
 // Lateral acceleration at the axle over team speed for the planned turn
 // (mechanics note, section 4: a = v² R_a / R_y²), against the rollover

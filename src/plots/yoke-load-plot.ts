@@ -6,7 +6,7 @@ import { yokeLift } from '../rules/balance/yoke-lift.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { G } from '../units/units.ts';
 import type { PlotData } from './plot-data.ts';
-import { ruleLimit } from './plot-limit.ts';
+import { ruleLimit } from '../data/rule-limit.ts';
 
 // The load on each horse as the whole crew moves together over the usable
 // floor, standing, accelerating and braking: the balance model's load cases
