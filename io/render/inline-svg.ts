@@ -36,7 +36,7 @@ export function inlineSvg(svg: string): string | null {
 }
 
 /** The SVG without an XML prolog, which is legal in a file but not inside HTML. */
-export function svgBody(svg: string): string {
+function svgBody(svg: string): string {
   return svg.trim().replace(/^<\?xml[^>]*\?>\s*/, '');
 }
 
