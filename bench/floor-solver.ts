@@ -1,9 +1,9 @@
 // The strap-floor solver on each demo specification, standing and at a bump:
 // build the net, solve it, read the results. Target: well under 100 ms each.
 import { performance } from 'node:perf_hooks';
-import type { RulesData } from '../src/data/rules-data.ts';
-import { floorModel } from '../src/model/cable-net/floor-model.ts';
-import type { CheckedSpecification } from '../src/spec/spec.types.ts';
+import type { RulesData } from '../src/core/data/rules-data.ts';
+import { floorModel } from '../src/core/model/cable-net/floor-model.ts';
+import type { CheckedSpecification } from '../src/core/spec/spec.types.ts';
 
 export const FLOOR_TARGET_MS = 100;
 const RUNS = 10;

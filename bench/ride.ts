@@ -2,11 +2,11 @@
 // demo against a target time after warm-up, and its accuracy against odex at
 // relative tolerance 1e-10 on the crew's rise. Returns the count of missed targets.
 import { performance } from 'node:perf_hooks';
-import type { RulesData } from '../src/data/rules-data.ts';
-import { Analysis } from '../src/engine/analysis.ts';
-import { rideCaseOf, rideInput } from '../src/ride/ride-model.ts';
-import type { CheckedSpecification } from '../src/spec/spec.types.ts';
-import { rideByOdex } from '../io/ride-odex.ts';
+import type { RulesData } from '../src/core/data/rules-data.ts';
+import { Analysis, rideInput } from '../src/core/engine/analysis.ts';
+import { rideCaseOf } from '../src/core/ride/ride-model.ts';
+import type { CheckedSpecification } from '../src/core/spec/spec.types.ts';
+import { rideByOdex } from '../src/node/ride-odex.ts';
 
 const TARGET_MS = 20;
 const TOLERANCE_MM = 0.05;

@@ -7,10 +7,10 @@
 import { readFileSync } from 'node:fs';
 import { performance } from 'node:perf_hooks';
 import { fileURLToPath } from 'node:url';
-import { loadLpSolver } from '../io/load-lp-solver.ts';
-import type { CuttingInstance, LpSolver } from '../src/stock/cutting-types.ts';
-import { DEFAULT_METHOD, planCutting, type CuttingMethod } from '../src/stock/plan-cutting.ts';
-import { planProblems } from '../src/stock/validate-plan.ts';
+import { loadLpSolver } from '../src/node/load-lp-solver.ts';
+import type { CuttingInstance, LpSolver } from '../src/core/stock/cutting-types.ts';
+import { DEFAULT_METHOD, planCutting, type CuttingMethod } from '../src/core/stock/plan-cutting.ts';
+import { planProblems } from '../src/core/stock/validate-plan.ts';
 
 const DATA = new URL('../../shared/data/', import.meta.url);
 const SETS = [

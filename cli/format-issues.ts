@@ -1,6 +1,6 @@
-import { pathText, type InputIssue } from '../src/spec/input-issue.ts';
-import type { Located, Locator } from '../io/read-spec.ts';
-import { MESSAGES } from '../src/diagnostics/messages.ts';
+import { pathText, type InputIssue } from '../src/core/spec/input-issue.ts';
+import type { Located, Locator } from '../src/core/input/read-spec-result.ts';
+import { MESSAGES } from '../src/core/diagnostics/messages.ts';
 
 /** Input problems as text: key path, line and column, message, code. */
 export function formatIssues(file: string, issues: (InputIssue & { at?: Located })[], locate?: Locator): string {

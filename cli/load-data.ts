@@ -1,6 +1,6 @@
-import type { RulesData } from '../src/data/rules-data.ts';
-import { defaultRulesDir, loadRulesData } from '../io/load-rules-data.ts';
-import { RulesDataError } from '../io/rules-data-error.ts';
+import type { RulesData } from '../src/core/data/rules-data.ts';
+import { defaultRulesDir, loadRulesData } from '../src/node/load-rules-data.ts';
+import { RulesDataError } from '../src/core/data/rules-data-error.ts';
 import type { Console } from './console.ts';
 
 /** The rules data, or undefined after reporting what is wrong with it. */

@@ -1,6 +1,7 @@
-import { readSpec, type ReadSpec } from '../io/read-spec.ts';
-import type { RulesData } from '../src/data/rules-data.ts';
-import { prepareSpec, type Prepared } from '../src/spec/prepare.ts';
+import { readSpec } from '../src/node/read-spec.ts';
+import type { ReadSpec } from '../src/core/input/read-spec-result.ts';
+import type { RulesData } from '../src/core/data/rules-data.ts';
+import { prepareSpec, type Prepared } from '../src/core/spec/prepare.ts';
 import type { Console } from './console.ts';
 import { formatIssues } from './format-issues.ts';
 

@@ -1,6 +1,6 @@
-import type { CheckResult } from '../src/result/check-result.ts';
-import { SEVERITIES } from '../src/findings/finding.ts';
-import { SHORT_CAUTION } from '../src/cautions.ts';
+import type { CheckResult } from '../src/core/result/check-result.ts';
+import { SEVERITIES } from '../src/core/findings/finding.ts';
+import { SHORT_CAUTION } from '../src/core/cautions.ts';
 
 /** The terminal summary: verdict, counts, the worst findings, where files went. */
 export function summary(result: CheckResult, written: string[], show = 6): string {

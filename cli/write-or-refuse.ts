@@ -1,4 +1,4 @@
-import { OutputIsInputError } from '../io/atomic-write.ts';
+import { OutputIsInputError } from '../src/node/atomic-write.ts';
 import type { Console } from './console.ts';
 
 /**

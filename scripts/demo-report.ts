@@ -2,11 +2,11 @@
 // browser test and the README's screenshot.
 import { readFileSync } from 'node:fs';
 import { parse } from 'yaml';
-import { defaultRulesDir, loadRulesData } from '../io/load-rules-data.ts';
-import { renderHtml } from '../io/render/report-html.ts';
-import { drawReportPlots } from '../io/render/report-plots.ts';
-import { checkSpecification } from '../src/check.ts';
-import { prepareSpec } from '../src/spec/prepare.ts';
+import { defaultRulesDir, loadRulesData } from '../src/node/load-rules-data.ts';
+import { renderHtml } from '../src/render/report-html.ts';
+import { drawReportPlots } from '../src/render/report-plots.ts';
+import { checkSpecification } from '../src/core/check.ts';
+import { prepareSpec } from '../src/core/spec/prepare.ts';
 
 export async function demoReportHtml(demo: string): Promise<string> {
   const data = loadRulesData(defaultRulesDir());

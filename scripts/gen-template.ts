@@ -2,9 +2,9 @@
 // the schema and the rules data; a test fails while the copy is stale.
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { writeFileAtomic } from '../io/atomic-write.ts';
-import { defaultRulesDir, loadRulesData } from '../io/load-rules-data.ts';
-import { TEMPLATE_FILE, templateWorkbook } from '../io/spec-workbook/template.ts';
+import { writeFileAtomic } from '../src/node/atomic-write.ts';
+import { defaultRulesDir, loadRulesData } from '../src/node/load-rules-data.ts';
+import { TEMPLATE_FILE, templateWorkbook } from '../src/render/spec-workbook/template.ts';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 const bytes = await templateWorkbook(loadRulesData(defaultRulesDir())).xlsx.writeBuffer();

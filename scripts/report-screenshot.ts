@@ -4,7 +4,7 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
-import { writeFileAtomic } from '../io/atomic-write.ts';
+import { writeFileAtomic } from '../src/node/atomic-write.ts';
 import { demoReportHtml } from './demo-report.ts';
 import { launchChromium } from './headless-chromium.ts';
 

@@ -1,10 +1,10 @@
-// Builds the text of src/spec/spec.types.ts from the schema; shared by the
+// Builds the text of src/core/spec/spec.types.ts from the schema; shared by the
 // generator script and the staleness test so both use the same options.
 import { compile } from 'json-schema-to-typescript';
-import schema from '../src/spec/spec.schema.json' with { type: 'json' };
-import { checkedSchema } from '../src/spec/checked-schema.ts';
+import schema from '../src/core/spec/spec.schema.json' with { type: 'json' };
+import { checkedSchema } from '../src/core/spec/checked-schema.ts';
 
-const banner = '/* Generated from src/spec/spec.schema.json by `npm run gen`. Do not edit. */';
+const banner = '/* Generated from src/core/spec/spec.schema.json by `npm run gen`. Do not edit. */';
 
 export async function specTypesSource(): Promise<string> {
   const options = { bannerComment: '', additionalProperties: false, style: { singleQuote: true }, ignoreMinAndMaxItems: true } as const;

@@ -28,7 +28,7 @@ vi.mock('node:fs/promises', async (importOriginal) => {
   };
 });
 
-const { ensureNotSame, OutputIsInputError, writeFileAtomic } = await import('../io/atomic-write.ts');
+const { ensureNotSame, OutputIsInputError, writeFileAtomic } = await import('../src/node/atomic-write.ts');
 
 let dir: string;
 beforeEach(async () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { cantileverEndLoadMoment, centreLoadMoment, eulerLoad, pointLoadsMaxMoment, uniformLoadMoment } from '../src/model/beam-formulas.ts';
-import { rectangle, round } from '../src/model/sections.ts';
+import { cantileverEndLoadMoment, centreLoadMoment, eulerLoad, pointLoadsMaxMoment, uniformLoadMoment } from '../src/core/model/beam-formulas.ts';
+import { rectangle, round } from '../src/core/model/sections.ts';
 
 // Each closed form is checked against an independent numerical solution, and the
 // standard cases named beside them.

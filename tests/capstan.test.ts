@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { capstanHold, frictionForHold, turnsToHold } from '../src/model/capstan.ts';
+import { capstanHold, frictionForHold, turnsToHold } from '../src/core/model/capstan.ts';
 
 describe('capstan equation (Euler-Eytelwein)', () => {
   it('reproduces the textbook worked example', () => {

@@ -1,16 +1,17 @@
+import { settingOutSvg } from '../src/render/report-figures.ts';
 import { beforeAll, describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
-import { checkSpecification } from '../src/check.ts';
-import { RULES } from '../src/engine/registry.ts';
-import { prepareSpec } from '../src/spec/prepare.ts';
-import type { CheckResult } from '../src/result/check-result.ts';
-import type { LpSolver } from '../src/stock/cutting-types.ts';
-import { loadLpSolver } from '../io/load-lp-solver.ts';
-import { renderWorkbook } from '../io/render/workbook.ts';
-import { renderMarkdown } from '../io/render/report-md.ts';
-import { drawReportPlots } from '../io/render/report-plots.ts';
-import { renderHtml } from '../io/render/report-html.ts';
-import { DRAWING_SCOPE, scopeClass } from '../io/render/inline-svg.ts';
+import { checkSpecification } from '../src/core/check.ts';
+import { RULES } from '../src/core/engine/registry.ts';
+import { prepareSpec } from '../src/core/spec/prepare.ts';
+import type { CheckResult } from '../src/core/result/check-result.ts';
+import type { LpSolver } from '../src/core/stock/cutting-types.ts';
+import { loadLpSolver } from '../src/node/load-lp-solver.ts';
+import { renderWorkbook } from '../src/render/workbook.ts';
+import { renderMarkdown } from '../src/render/report-md.ts';
+import { drawReportPlots } from '../src/render/report-plots.ts';
+import { renderHtml } from '../src/render/report-html.ts';
+import { DRAWING_SCOPE, scopeClass } from '../src/render/inline-svg.ts';
 import { readDemo, rulesData } from './support/fixtures.ts';
 
 const DEMOS = ['demo-two-crew', 'demo-rear-axle', 'teaching-flawed'];
@@ -91,7 +92,7 @@ describe('cutting figures of the demo specifications', () => {
     const md = renderMarkdown(r);
     for (const h of ['## Cut list', '## Leather and rawhide', '## Wheel setting-out', '## Stock plan']) expect(md, h).toContain(`\n${h}\n`);
     const html = renderHtml(r, await drawReportPlots(r));
-    expect(html).toContain(`<span class="setting-out"><svg class="${scopeClass(r.cutting.setting_out.svg)}`);
+    expect(html).toContain(`<span class="setting-out"><svg class="${scopeClass(settingOutSvg(r))}`);
     // Each drawing's style rules reach only that drawing, so the stock bars and the plots keep their paint.
     for (const [, scope, css] of html.matchAll(/<svg class="([^" ]+)[^>]*>(?:(?!<\/svg>)[\s\S])*?<style>([\s\S]*?)<\/style>/g)) {
       expect(scope.startsWith(`${DRAWING_SCOPE}-`)).toBe(true);

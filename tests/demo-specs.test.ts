@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { checkSpecification } from '../src/check.ts';
-import { prepareSpec } from '../src/spec/prepare.ts';
+import { checkSpecification } from '../src/core/check.ts';
+import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { readDemo, rulesData } from './support/fixtures.ts';
 
 const FIGURES = ['total_mass', 'rolling_mass', 'cg_x', 'cg_z', 'yoke_load', 'yoke_load_per_horse', 'yoke_load_min', 'yoke_load_max', 'axle_load'];

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { densityFromSG, handbookSpecificGravity, specificGravityAt } from '../src/model/density.ts';
+import { densityFromSG, handbookSpecificGravity, specificGravityAt } from '../src/core/model/density.ts';
 import { rulesData } from './support/fixtures.ts';
 
 describe('timber density at a moisture content', () => {

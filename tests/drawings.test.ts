@@ -1,13 +1,15 @@
+import { buildScene } from '../src/core/result/scene-of.ts';
+import { drawingsOf } from '../src/render/report-drawings.ts';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { Analysis } from '../src/engine/analysis.ts';
-import { reportDrawings } from '../src/drawings/report-drawings.ts';
-import { inlineSvg } from '../io/render/inline-svg.ts';
-import { checkSpecification } from '../src/check.ts';
-import { prepareSpec } from '../src/spec/prepare.ts';
-import { renderMarkdown } from '../io/render/report-md.ts';
-import { renderHtml } from '../io/render/report-html.ts';
-import { drawReportPlots } from '../io/render/report-plots.ts';
-import { drawingOutputs } from '../io/render/report-drawings.ts';
+import { Analysis } from '../src/core/engine/analysis.ts';
+import { reportDrawings } from '../src/render/drawings/report-drawings.ts';
+import { inlineSvg } from '../src/render/inline-svg.ts';
+import { checkSpecification } from '../src/core/check.ts';
+import { prepareSpec } from '../src/core/spec/prepare.ts';
+import { renderMarkdown } from '../src/render/report-md.ts';
+import { renderHtml } from '../src/render/report-html.ts';
+import { drawReportPlots } from '../src/render/report-plots.ts';
+import { drawingOutputs } from '../src/render/report-drawings.ts';
 import { deepMerge, prepared, readDemo, rulesData } from './support/fixtures.ts';
 
 // The drawings' key dimensions measured back from the SVG text: the user unit
@@ -28,7 +30,7 @@ function sheet(svg: string) {
 
 function drawn(raw: unknown) {
   const a = new Analysis(prepared(raw), rulesData);
-  const byId = Object.fromEntries(reportDrawings(a).map((d) => [d.id, d]));
+  const byId = Object.fromEntries(reportDrawings(buildScene(a)).map((d) => [d.id, d]));
   return { a, spec: a.spec, byId };
 }
 
@@ -143,6 +145,6 @@ describe('drawings in the report', () => {
   it('report.html holds them inline, scoped, with their captions', () => {
     expect(html).not.toMatch(/<img[^>]+drawing-/);
     expect(html.match(/<span class="drawing"><svg class="axletree-drawing-[0-9a-z]+"/g)).toHaveLength(3);
-    for (const d of result.drawings!) expect(html).toContain(d.caption.slice(0, 40));
+    for (const d of drawingsOf(result)) expect(html).toContain(d.caption.slice(0, 40));
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { slipCapacity, strandPull, tensileCapacity } from '../src/model/lashing-capacity.ts';
+import { slipCapacity, strandPull, tensileCapacity } from '../src/core/model/lashing-capacity.ts';
 
 // Hand calculations of the mechanics note, section 7.
 describe('lashing capacities', () => {

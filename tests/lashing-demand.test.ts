@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../src/engine/analysis.ts';
-import { cornerDemand } from '../src/model/corner-demand.ts';
-import type { FloorResult } from '../src/model/floor-result.ts';
-import { governing } from '../src/model/joint-force.ts';
-import { loadFactor } from '../src/model/load-factors.ts';
-import { G } from '../src/units/units.ts';
+import { Analysis } from '../src/core/engine/analysis.ts';
+import { cornerDemand } from '../src/core/model/corner-demand.ts';
+import type { FloorResult } from '../src/core/model/floor-result.ts';
+import { governing } from '../src/core/model/joint-force.ts';
+import { loadFactor } from '../src/core/model/load-factors.ts';
+import { G } from '../src/core/units/units.ts';
 import { dataWithGround, handSpec, prepared } from './support/fixtures.ts';
 
 // Hand calculations on the hand spec: measured masses box 20, axle 8, two

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { loadCases, staticPoleLoad } from '../src/model/load-cases.ts';
-import { massModel } from '../src/model/mass-model.ts';
-import { G } from '../src/units/units.ts';
+import { loadCases, staticPoleLoad } from '../src/core/model/load-cases.ts';
+import { massModel } from '../src/core/model/mass-model.ts';
+import { G } from '../src/core/units/units.ts';
 import { dataWithGround, handSpec, prepared } from './support/fixtures.ts';
 
 // Worked examples written out by hand for the hand-calculation spec

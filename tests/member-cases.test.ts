@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../src/engine/analysis.ts';
-import { crewAt } from '../src/model/load-cases.ts';
-import { massModel } from '../src/model/mass-model.ts';
-import { poleLoad } from '../src/model/pole-load.ts';
-import { G } from '../src/units/units.ts';
+import { Analysis } from '../src/core/engine/analysis.ts';
+import { crewAt } from '../src/core/model/load-cases.ts';
+import { massModel } from '../src/core/model/mass-model.ts';
+import { poleLoad } from '../src/core/model/pole-load.ts';
+import { G } from '../src/core/units/units.ts';
 import { prepared, readDemo, rulesData } from './support/fixtures.ts';
 
 describe('member load cases', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { checkSpecification } from '../src/check.ts';
-import { prepareSpec } from '../src/spec/prepare.ts';
-import { G } from '../src/units/units.ts';
+import { checkSpecification } from '../src/core/check.ts';
+import { prepareSpec } from '../src/core/spec/prepare.ts';
+import { G } from '../src/core/units/units.ts';
 import { dataWithGround, handSpec, readDemo, rulesData } from './support/fixtures.ts';
 
 // The hand spec runs on a test ground of its own.

@@ -1,14 +1,15 @@
 import { describe, expect, it } from 'vitest';
-import { renderMarkdown } from '../io/render/report-md.ts';
+import { renderMarkdown } from '../src/render/report-md.ts';
 /** The sample result has neither ride nor plots: nothing to draw. */
 const NO_PLOTS = new Map<string, string>();
-import { renderHtml } from '../io/render/report-html.ts';
+import { renderHtml } from '../src/render/report-html.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
-import type { CheckResult } from '../src/result/check-result.ts';
-import { SHORT_CAUTION } from '../src/cautions.ts';
-import { formatNumber, formatPercent } from '../io/render/number-format.ts';
-import { sectionText } from '../io/render/cutting-text.ts';
-import { scopeClass } from '../io/render/inline-svg.ts';
+import type { CheckResult } from '../src/core/result/check-result.ts';
+import { SHORT_CAUTION } from '../src/core/cautions.ts';
+import { formatNumber, formatPercent } from '../src/render/number-format.ts';
+import { sectionText } from '../src/render/cutting-text.ts';
+import { inlineSvg, scopeClass } from '../src/render/inline-svg.ts';
+import { settingOutSvg } from '../src/render/report-figures.ts';
 
 /** The body lines of every fenced block in a Markdown text. */
 function fencedBlocks(md: string): string[] {
@@ -122,7 +123,7 @@ describe('renderHtml', () => {
     expect(html).not.toContain('<link');
     expect(html).not.toMatch(/src="http/);
     expect(html).not.toMatch(/<script/i);
-    expect(html).not.toMatch(/url\(/);
+    expect(html).not.toMatch(/url\((?!#)/); // only references inside the page (SVG markers)
   });
 
   it('puts the verdict and the cautions before the first table', () => {
@@ -200,19 +201,16 @@ describe('report, cutting sections', () => {
 
   it('links the setting-out drawing in Markdown and puts it inline in HTML', () => {
     expect(md).toContain('![Wheel setting-out drawing](wheel-setting-out.svg)');
-    expect(html).toContain(`<span class="setting-out">${setting_out.svg.replace('<svg ', `<svg class="${scopeClass(setting_out.svg)}" `)}</span>`);
+    expect(html).toContain(`<span class="setting-out"><svg class="${scopeClass(settingOutSvg(result))}"`);
     expect(html).not.toContain('<img');
     expect(tableAfter(md, '## Wheel setting-out').find((r) => r.includes('between shoulders'))).toContain(setting_out.spoke_length_shoulders_mm.toFixed(1));
   });
 
   it('does not inline a drawing that holds a script or an outside link', () => {
     for (const svg of ['<svg><script>alert(1)</script></svg>', '<svg><image href="http://example.com/x.png"/></svg>', '<svg onload="alert(1)"></svg>', 'not svg']) {
-      const r = sampleResult();
-      r.cutting.setting_out.svg = svg;
-      const out = renderHtml(r, NO_PLOTS);
-      expect(out, svg).not.toContain(svg);
-      expect(out).toContain('could not be placed inline');
+      expect(inlineSvg(svg), svg).toBeNull();
     }
+    expect(inlineSvg('<svg><circle r="1"/></svg>')).toMatch(/^<svg class="axletree-/);
   });
 
   it('shows each group with its bound and gap, and each pattern as a text bar in Markdown', () => {

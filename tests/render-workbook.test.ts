@@ -1,13 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
-import { renderWorkbook } from '../io/render/workbook.ts';
-import { SEVERITY_COLOURS, toArgb } from '../io/render/severity-palette.ts';
+import { renderWorkbook } from '../src/render/workbook.ts';
+import { SEVERITY_COLOURS, toArgb } from '../src/render/severity-palette.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
-import type { CheckResult } from '../src/result/check-result.ts';
-import { SHORT_CAUTION } from '../src/cautions.ts';
-import { BAR_FIRST_COLUMN } from '../io/render/sheets/stock-plan-sheet.ts';
-import { partLabels } from '../io/render/stock-bar.ts';
-import { OFFCUT_FILL, partFill } from '../io/render/stock-palette.ts';
+import type { CheckResult } from '../src/core/result/check-result.ts';
+import { SHORT_CAUTION } from '../src/core/cautions.ts';
+import { BAR_FIRST_COLUMN } from '../src/render/sheets/stock-plan-sheet.ts';
+import { partLabels } from '../src/render/stock-bar.ts';
+import { OFFCUT_FILL, partFill } from '../src/render/stock-palette.ts';
 
 async function readBack(result: CheckResult): Promise<ExcelJS.Workbook> {
   const wb = new ExcelJS.Workbook();

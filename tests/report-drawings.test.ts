@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { barCells, barScale, barSegments } from '../io/render/stock-bar.ts';
-import { textBars } from '../io/render/stock-bar-text.ts';
-import { DRAWING_SCOPE, inlineSvg, scopeClass, scopeStyles } from '../io/render/inline-svg.ts';
-import type { CuttingPattern } from '../src/stock/cutting-types.ts';
-import type { StockPlanGroup } from '../src/cutlist/cutting-result.ts';
+import { barCells, barScale, barSegments } from '../src/render/stock-bar.ts';
+import { textBars } from '../src/render/stock-bar-text.ts';
+import { DRAWING_SCOPE, inlineSvg, scopeClass, scopeStyles } from '../src/render/inline-svg.ts';
+import type { CuttingPattern } from '../src/core/stock/cutting-types.ts';
+import type { StockPlanGroup } from '../src/core/cutlist/cutting-result.ts';
 
 // A 1000 mm stock cut to 400 + 300 mm with one 3 mm kerf between them: the
 // offcut is 1000 - 700 - 3 = 297 mm. Demo numbers, laid out by hand below.

@@ -2,12 +2,12 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdtemp, readFile, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { checkSpecification } from '../src/check.ts';
-import { prepareSpec } from '../src/spec/prepare.ts';
-import { renderMarkdown } from '../io/render/report-md.ts';
-import { renderHtml } from '../io/render/report-html.ts';
-import { drawReportPlots, PLOTS_TITLE } from '../io/render/report-plots.ts';
-import { writeOutputs } from '../io/write-outputs.ts';
+import { checkSpecification } from '../src/core/check.ts';
+import { prepareSpec } from '../src/core/spec/prepare.ts';
+import { renderMarkdown } from '../src/render/report-md.ts';
+import { renderHtml } from '../src/render/report-html.ts';
+import { drawReportPlots, PLOTS_TITLE } from '../src/render/report-plots.ts';
+import { writeOutputs } from '../src/node/write-outputs.ts';
 import { readDemo, rulesData } from './support/fixtures.ts';
 
 // The balance and turn plots in the check's outputs: linked with captions

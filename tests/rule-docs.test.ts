@@ -1,7 +1,7 @@
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
-import { RULES } from '../src/engine/registry.ts';
+import { RULES } from '../src/core/engine/registry.ts';
 import { deepMerge, findingsOf, readDemo } from './support/fixtures.ts';
 
 // Each rule has a page in docs/rules/<id>.md and a test in tests/rules/<id>.test.ts;

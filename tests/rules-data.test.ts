@@ -2,9 +2,9 @@ import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync, mkdirSync } f
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { defaultRulesDir, loadRulesData } from '../io/load-rules-data.ts';
-import { RulesDataError } from '../io/rules-data-error.ts';
-import type { RulesData, Sourced, Species } from '../src/data/rules-data.ts';
+import { defaultRulesDir, loadRulesData } from '../src/node/load-rules-data.ts';
+import { RulesDataError } from '../src/core/data/rules-data-error.ts';
+import type { RulesData, Sourced, Species } from '../src/core/data/rules-data.ts';
 
 const data: RulesData = loadRulesData(defaultRulesDir());
 

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { characteristicValue } from '../src/model/timber/characteristic.ts';
-import { timberStrength } from '../src/model/timber/design-strength.ts';
-import { hankinson } from '../src/model/timber/hankinson.ts';
-import { kMod } from '../src/model/timber/load-duration.ts';
-import { propertyAtMoisture } from '../src/model/timber/moisture-strength.ts';
-import { strengthFactor } from '../src/model/timber/strength-factors.ts';
-import type { TimberPart } from '../src/model/timber/timber-part.ts';
+import { characteristicValue } from '../src/core/model/timber/characteristic.ts';
+import { timberStrength } from '../src/core/model/timber/design-strength.ts';
+import { hankinson } from '../src/core/model/timber/hankinson.ts';
+import { kMod } from '../src/core/model/timber/load-duration.ts';
+import { propertyAtMoisture } from '../src/core/model/timber/moisture-strength.ts';
+import { strengthFactor } from '../src/core/model/timber/strength-factors.ts';
+import type { TimberPart } from '../src/core/model/timber/timber-part.ts';
 import { rulesData } from './support/fixtures.ts';
 
 const deg = Math.PI / 180;

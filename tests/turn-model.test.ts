@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { lateralAccelAt, tightestYokeRadius, turnModel } from '../src/model/turn.ts';
-import { massModel } from '../src/model/mass-model.ts';
-import { staticPoleLoad } from '../src/model/load-cases.ts';
-import { G } from '../src/units/units.ts';
+import { lateralAccelAt, tightestYokeRadius, turnModel } from '../src/core/model/turn.ts';
+import { massModel } from '../src/core/model/mass-model.ts';
+import { staticPoleLoad } from '../src/core/model/load-cases.ts';
+import { G } from '../src/core/units/units.ts';
 import { dataWithGround, handSpec, prepared } from './support/fixtures.ts';
 
 const rulesData = dataWithGround('hand-rigid', 0);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { parseQuantity } from '../src/units/parse-quantity.ts';
-import { UNITS, unitOfKey } from '../src/units/units.ts';
+import { parseQuantity } from '../src/core/units/parse-quantity.ts';
+import { UNITS, unitOfKey } from '../src/core/units/units.ts';
 
 // Exact conversion factors: 1 in = 25.4 mm, 1 ft = 12 in, 1 lb = 0.45359237 kg,
 // 1 mile = 1609.344 m (NIST SP 811, 2008, Appendix B.8); g_n = 9.80665 m/s^2 (same, B.8).

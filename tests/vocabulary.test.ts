@@ -1,7 +1,7 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
-import { prepareSpec } from '../src/spec/prepare.ts';
+import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { rulesData } from './support/fixtures.ts';
 
 // The agreed vocabulary (../shared/design/spec-vocabulary.md) must be accepted unchanged.

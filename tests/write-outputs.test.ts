@@ -1,8 +1,10 @@
+import { drawingFile, drawingsOf } from '../src/render/report-drawings.ts';
+import { settingOutSvg } from '../src/render/report-figures.ts';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { mkdtemp, readFile, readdir, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { OUTPUT_FILES, writeOutputs } from '../io/write-outputs.ts';
+import { OUTPUT_FILES, writeOutputs } from '../src/node/write-outputs.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 
 describe('writeOutputs', () => {
@@ -18,9 +20,9 @@ describe('writeOutputs', () => {
     const result = sampleResult();
     const written = await writeOutputs(result, dir, join(dir, 'spec.yaml'));
     expect(written).toContain(join(dir, OUTPUT_FILES.settingOut));
-    expect((await readdir(dir)).sort()).toEqual(Object.values(OUTPUT_FILES).sort());
+    expect((await readdir(dir)).sort()).toEqual([...Object.values(OUTPUT_FILES), ...drawingsOf(result).map((d) => drawingFile(d.id))].sort());
     const svg = await readFile(join(dir, OUTPUT_FILES.settingOut), 'utf8');
-    expect(svg).toBe(`${result.cutting.setting_out.svg}\n`);
+    expect(svg).toBe(`${settingOutSvg(result)}\n`);
     const md = await readFile(join(dir, OUTPUT_FILES.markdown), 'utf8');
     expect(md).toContain(`](${OUTPUT_FILES.settingOut})`);
   });

@@ -1,11 +1,11 @@
 import { basename, extname, join, resolve } from 'node:path';
-import { readSpec } from '../../io/read-spec.ts';
-import { OutputIsInputError } from '../../io/atomic-write.ts';
-import { resultJson, writeOutputs } from '../../io/write-outputs.ts';
-import { checkSpecification } from '../../src/check.ts';
-import { RULES } from '../../src/engine/registry.ts';
-import { loadLpSolver } from '../../io/load-lp-solver.ts';
-import { prepareSpec } from '../../src/spec/prepare.ts';
+import { readSpec } from '../../src/node/read-spec.ts';
+import { OutputIsInputError } from '../../src/node/atomic-write.ts';
+import { resultJson, writeOutputs } from '../../src/node/write-outputs.ts';
+import { checkSpecification } from '../../src/core/check.ts';
+import { RULES } from '../../src/core/engine/registry.ts';
+import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
+import { prepareSpec } from '../../src/core/spec/prepare.ts';
 import { EXIT, type Console } from '../console.ts';
 import { formatIssues } from '../format-issues.ts';
 import { summary } from '../summary.ts';

@@ -1,11 +1,11 @@
 import { basename, extname, join, resolve } from 'node:path';
-import { readDropCsvFile } from '../../io/read-drop-csv.ts';
-import { floorTestPlotSvg } from '../../io/render/floor-test-plot.ts';
-import { floorTestMarkdown } from '../../io/render/floor-test-report-md.ts';
-import { writeFileSet } from '../../io/write-file-set.ts';
-import { say } from '../../src/diagnostics/messages.ts';
-import { estimateFloorTest } from '../../src/floor-test/estimate-floor-test.ts';
-import { FloorTestError, type FloorTestEstimate } from '../../src/floor-test/floor-test-types.ts';
+import { readDropCsvFile } from '../../src/node/read-drop-csv.ts';
+import { floorTestPlotSvg } from '../../src/render/floor-test-plot.ts';
+import { floorTestMarkdown } from '../../src/render/floor-test-report-md.ts';
+import { writeFileSet } from '../../src/node/write-file-set.ts';
+import { say } from '../../src/core/diagnostics/messages.ts';
+import { estimateFloorTest } from '../../src/core/floor-test/estimate-floor-test.ts';
+import { FloorTestError, type FloorTestEstimate } from '../../src/core/floor-test/floor-test-types.ts';
 import { EXIT, type Console } from '../console.ts';
 import { formatIssues } from '../format-issues.ts';
 import { writeOrRefuse } from '../write-or-refuse.ts';

@@ -1,10 +1,10 @@
 import { existsSync } from 'node:fs';
 import { extname, resolve } from 'node:path';
-import { ensureNotSame, OutputIsInputError, writeFileAtomic } from '../../io/atomic-write.ts';
-import { readSpec } from '../../io/read-spec.ts';
-import { choicesOf } from '../../io/spec-workbook/choice-lists.ts';
-import { specificationWorkbook, unplacedKeys } from '../../io/spec-workbook/spec-sheets.ts';
-import { specYaml } from '../../io/spec-yaml-template.ts';
+import { ensureNotSame, OutputIsInputError, writeFileAtomic } from '../../src/node/atomic-write.ts';
+import { readSpec } from '../../src/node/read-spec.ts';
+import { choicesOf } from '../../src/render/spec-workbook/choice-lists.ts';
+import { specificationWorkbook, unplacedKeys } from '../../src/render/spec-workbook/spec-sheets.ts';
+import { specYaml } from '../../src/render/spec-yaml-template.ts';
 import { EXIT, type Console } from '../console.ts';
 import { formatIssues } from '../format-issues.ts';
 import { loadData } from '../load-data.ts';

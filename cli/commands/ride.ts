@@ -1,13 +1,14 @@
 import { basename, extname, join, resolve } from 'node:path';
-import { rideCsv } from '../../io/render/ride-csv.ts';
-import { ridePlotFiles } from '../../io/render/ride-plots.ts';
-import { rideMarkdown } from '../../io/render/ride-report-md.ts';
-import { writeFileSet } from '../../io/write-file-set.ts';
-import { CAUTIONS } from '../../src/cautions.ts';
-import { Analysis } from '../../src/engine/analysis.ts';
-import { floorDampingOf } from '../../src/ride/ride-build.ts';
-import { RIDE_CASES, rideCase, rideInput } from '../../src/ride/ride-model.ts';
-import type { RideCase, RideResult } from '../../src/ride/ride-types.ts';
+import { rideCsv } from '../../src/render/ride-csv.ts';
+import { ridePlotFiles } from '../../src/render/ride-plots.ts';
+import { rideMarkdown } from '../../src/render/ride-report-md.ts';
+import { writeFileSet } from '../../src/node/write-file-set.ts';
+import { CAUTIONS } from '../../src/core/cautions.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
+import { floorDampingOf } from '../../src/core/ride/ride-build.ts';
+import { RIDE_CASES, rideCaseOf } from '../../src/core/ride/ride-model.ts';
+import { rideInput } from '../../src/core/engine/analysis.ts';
+import type { RideCase, RideResult } from '../../src/core/ride/ride-types.ts';
 import { EXIT, type Console } from '../console.ts';
 import { loadData } from '../load-data.ts';
 import { readPreparedSpec } from '../read-prepared-spec.ts';
@@ -36,7 +37,7 @@ export async function rideCommand(file: string, opts: RideOptions, con: Console)
   const { prepared } = got;
   const analysis = new Analysis(prepared.spec, data);
   const cases = opts.case ? [opts.case as RideCase] : [...RIDE_CASES];
-  const results = cases.map((c) => rideCase(analysis, c));
+  const results = cases.map((c) => rideCaseOf(rideInput(analysis), c));
   const plots = new Map(await Promise.all(results.map(async (r) => [r.case, await ridePlotFiles(r.case, r.title, r.series)] as const)));
   const report = rideMarkdown({
     specName: prepared.spec.name,

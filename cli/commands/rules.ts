@@ -1,4 +1,4 @@
-import { RULES } from '../../src/engine/registry.ts';
+import { RULES } from '../../src/core/engine/registry.ts';
 import { EXIT, type Console } from '../console.ts';
 import { loadData } from '../load-data.ts';
 

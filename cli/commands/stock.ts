@@ -1,21 +1,21 @@
 import { resolve } from 'node:path';
-import { loadLpSolver } from '../../io/load-lp-solver.ts';
-import { readSpecFile } from '../../io/read-spec.ts';
-import { baselineText, boughtText, BOUND_NOTE, cutsText, gapText } from '../../io/render/cutting-text.ts';
-import { formatNumber } from '../../io/render/number-format.ts';
-import { MESSAGES } from '../../src/diagnostics/messages.ts';
-import { issue } from '../../src/spec/input-issue.ts';
-import { checkCuttingInstance } from '../../src/stock/check-instance.ts';
-import { CuttingInputError } from '../../src/stock/cutting-problem.ts';
-import type { CuttingPlan } from '../../src/stock/cutting-types.ts';
-import { planCutting } from '../../src/stock/plan-cutting.ts';
-import { StockShortfallError } from '../../src/stock/stock-shortfall.ts';
+import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
+import { readSpec } from '../../src/node/read-spec.ts';
+import { baselineText, boughtText, BOUND_NOTE, cutsText, gapText } from '../../src/render/cutting-text.ts';
+import { formatNumber } from '../../src/render/number-format.ts';
+import { MESSAGES } from '../../src/core/diagnostics/messages.ts';
+import { issue } from '../../src/core/spec/input-issue.ts';
+import { checkCuttingInstance } from '../../src/core/stock/check-instance.ts';
+import { CuttingInputError } from '../../src/core/stock/cutting-problem.ts';
+import type { CuttingPlan } from '../../src/core/stock/cutting-types.ts';
+import { planCutting } from '../../src/core/stock/plan-cutting.ts';
+import { StockShortfallError } from '../../src/core/stock/stock-shortfall.ts';
 import { EXIT, type Console } from '../console.ts';
 import { formatIssues } from '../format-issues.ts';
 
 /** `axletree stock <instance.json> [--json]`: the stock plan of one plain cutting instance. */
 export async function stockCommand(file: string, opts: { json: boolean }, con: Console): Promise<number> {
-  const read = readSpecFile(resolve(con.cwd, file));
+  const read = await readSpec(resolve(con.cwd, file), { workbooks: false });
   if (!read.ok) {
     // The reader's empty-file message speaks of specifications.
     const issues = read.issues.map((i) => (i.code === MESSAGES.fileEmpty.code ? issue([], 'stockInstanceEmpty', { path: file }) : i));

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import type { RulesData } from '../../src/data/rules-data.ts';
-import { floorNet } from '../../src/model/cable-net/floor-net.ts';
-import { crewLoads, floorModel, nodalLoads } from '../../src/model/cable-net/floor-model.ts';
-import { FloorOutline } from '../../src/model/cable-net/outline.ts';
-import { pointWeights, weightedSum } from '../../src/model/cable-net/point-sag.ts';
-import { G } from '../../src/units/units.ts';
+import type { RulesData } from '../../src/core/data/rules-data.ts';
+import { floorNet } from '../../src/core/model/cable-net/floor-net.ts';
+import { crewLoads, floorModel, nodalLoads } from '../../src/core/model/cable-net/floor-model.ts';
+import { FloorOutline } from '../../src/core/model/cable-net/outline.ts';
+import { pointWeights, weightedSum } from '../../src/core/model/cable-net/point-sag.ts';
+import { G } from '../../src/core/units/units.ts';
 import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 const STANDING = { value: 1, source: 'test' };

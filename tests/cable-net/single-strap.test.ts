@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { buildNet, restLength } from '../../src/model/cable-net/net.ts';
-import { solveNet } from '../../src/model/cable-net/solve-net.ts';
-import { tensions } from '../../src/model/cable-net/floor-results.ts';
+import { buildNet, restLength } from '../../src/core/model/cable-net/net.ts';
+import { solveNet } from '../../src/core/model/cable-net/solve-net.ts';
+import { tensions } from '../../src/core/model/cable-net/floor-results.ts';
 
 // Mechanics note, section 5, closed-form check: one strap of span L with a
 // point load P at midspan, angle theta at the ends:

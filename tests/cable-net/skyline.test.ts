@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SkylineCholesky } from '../../src/model/cable-net/skyline.ts';
+import { SkylineCholesky } from '../../src/core/model/cable-net/skyline.ts';
 
 // The skyline Cholesky against a plain dense Gaussian elimination with partial
 // pivoting (written here, independent of the code under test).

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/engine/analysis.ts';
-import { prepareSpec } from '../../src/spec/prepare.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
+import { prepareSpec } from '../../src/core/spec/prepare.ts';
 import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 const analysis = (raw: unknown) => new Analysis(prepared(raw), rulesData);

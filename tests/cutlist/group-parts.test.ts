@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import type { CutListItem } from '../../src/cutlist/cutting-result.ts';
-import { groupParts, holds, stockSections } from '../../src/cutlist/group-parts.ts';
-import { stockPlan } from '../../src/cutlist/stock-plan.ts';
-import type { CheckedSpecification } from '../../src/spec/spec.types.ts';
+import type { CutListItem } from '../../src/core/cutlist/cutting-result.ts';
+import { groupParts, holds, stockSections } from '../../src/core/cutlist/group-parts.ts';
+import { stockPlan } from '../../src/core/cutlist/stock-plan.ts';
+import type { CheckedSpecification } from '../../src/core/spec/spec.types.ts';
 
 // Parts and stock here are made up for the test (demo data).
 

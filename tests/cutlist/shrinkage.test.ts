@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/engine/analysis.ts';
-import { greenSize, shrinkageTo } from '../../src/cutlist/shrinkage.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
+import { greenSize, shrinkageTo } from '../../src/core/cutlist/shrinkage.ts';
 import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 // Wood Handbook (USDA FPL, FPL-GTR-190, 2010), chapter 4, the equation for

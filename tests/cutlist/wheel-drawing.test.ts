@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/engine/analysis.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
+import { wheelDrawing } from '../../src/render/drawings/wheel-drawing.ts';
 import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 // The drawing's key dimensions measured back from the SVG text: the sheet's
@@ -12,8 +13,9 @@ const dim = (svg: string, name: string) => tags(svg, 'dim').find((t) => t.includ
 
 function drawing(raw: unknown) {
   const so = new Analysis(prepared(raw), rulesData).cutting.setting_out;
-  const scale = Number(/data-scale="([\d.]+)"/.exec(so.svg)![1]);
-  return { so, svg: so.svg, scale };
+  const svg = wheelDrawing(so.geometry);
+  const scale = Number(/data-scale="([\d.]+)"/.exec(svg)![1]);
+  return { so, svg, scale };
 }
 
 describe('wheel drawing', () => {

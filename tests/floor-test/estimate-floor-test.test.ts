@@ -2,10 +2,10 @@
 // damping, with seeded noise, so each run sees the same records.
 import { describe, expect, it } from 'vitest';
 import { syntheticDrop, normal, type SyntheticDrop } from '../../scripts/synthetic-drop-record.ts';
-import { estimateFloorTest } from '../../src/floor-test/estimate-floor-test.ts';
-import { dampingFromDecrement } from '../../src/floor-test/log-decrement.ts';
-import { noiseLevel } from '../../src/floor-test/noise-level.ts';
-import { FloorTestError } from '../../src/floor-test/floor-test-types.ts';
+import { estimateFloorTest } from '../../src/core/floor-test/estimate-floor-test.ts';
+import { dampingFromDecrement } from '../../src/core/floor-test/log-decrement.ts';
+import { noiseLevel } from '../../src/core/floor-test/noise-level.ts';
+import { FloorTestError } from '../../src/core/floor-test/floor-test-types.ts';
 
 const BASE: SyntheticDrop = {
   mass_kg: 40,

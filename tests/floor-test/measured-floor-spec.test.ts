@@ -1,10 +1,10 @@
 // floor_straps.measured: a drop-tested floor named in the specification.
 import { describe, expect, it } from 'vitest';
-import { prepareSpec } from '../../src/spec/prepare.ts';
+import { prepareSpec } from '../../src/core/spec/prepare.ts';
 import { readDemo, rulesData } from '../support/fixtures.ts';
-import { Analysis } from '../../src/engine/analysis.ts';
-import { floorDampingOf } from '../../src/ride/ride-build.ts';
-import { rideInput } from '../../src/ride/ride-model.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
+import { floorDampingOf } from '../../src/core/ride/ride-build.ts';
+import { rideInput } from '../../src/core/engine/analysis.ts';
 
 function withMeasured(measured: unknown) {
   const raw = readDemo('demo-two-crew') as Record<string, any>;

@@ -1,6 +1,6 @@
 // The floor-test CSV: good files read, malformed ones name the line (and column).
 import { describe, expect, it } from 'vitest';
-import { parseDropCsv } from '../../io/read-drop-csv.ts';
+import { parseDropCsv } from '../../src/node/read-drop-csv.ts';
 
 const rows = (n: number, from = 0) => Array.from({ length: n }, (_, i) => `${(from + i) / 1000},${Math.sin(i / 5).toFixed(4)}`);
 const good = ['time_s,displacement_mm', ...rows(30)].join('\n');

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import type { PlotData } from '../../src/plots/plot-data.ts';
-import { PLOT_HEIGHT, PLOT_WIDTH, plotSpec } from '../../io/render/plots/plot-spec.ts';
-import { plotSvg } from '../../io/render/plots/plot-svg.ts';
-import { thinPoints } from '../../io/render/plots/thin-points.ts';
-import { inlineSvg } from '../../io/render/inline-svg.ts';
+import type { PlotData } from '../../src/core/plots/plot-data.ts';
+import { PLOT_HEIGHT, PLOT_WIDTH, plotSpec } from '../../src/render/plots/plot-spec.ts';
+import { plotSvg } from '../../src/render/plots/plot-svg.ts';
+import { thinPoints } from '../../src/render/plots/thin-points.ts';
+import { inlineSvg } from '../../src/render/inline-svg.ts';
 
 // The plots are drawn by vega-lite; these tests measure the drawn SVG back
 // against the data: a line from (0, 0) to (10, 10) spans the plot, a level

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import type { RulesData } from '../../src/data/rules-data.ts';
-import { Analysis } from '../../src/engine/analysis.ts';
-import { turnSpeedPlot, TURN_SPEED_SAMPLES } from '../../src/plots/turn-speed-plot.ts';
-import { G, UNITS } from '../../src/units/units.ts';
+import type { RulesData } from '../../src/core/data/rules-data.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
+import { turnSpeedPlot, TURN_SPEED_SAMPLES } from '../../src/core/plots/turn-speed-plot.ts';
+import { G, UNITS } from '../../src/core/units/units.ts';
 import { dataWithGround, findingsOf, handSpec, prepared } from '../support/fixtures.ts';
 
 // The hand-calculation spec: yoke path R_y = 12 m, reach L = 2.25 m, so the

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { loadCases } from '../../src/model/load-cases.ts';
-import { YOKE_LOAD_SAMPLES, yokeLoadPlot } from '../../src/plots/yoke-load-plot.ts';
-import { G } from '../../src/units/units.ts';
+import { loadCases } from '../../src/core/model/load-cases.ts';
+import { YOKE_LOAD_SAMPLES, yokeLoadPlot } from '../../src/core/plots/yoke-load-plot.ts';
+import { G } from '../../src/core/units/units.ts';
 import { dataWithGround, handSpec, prepared } from '../support/fixtures.ts';
 
 // The hand-calculation spec (tests/support/fixtures.ts) on rigid ground

@@ -1,9 +1,9 @@
 // The ride command's CSV and plots from a ride case the model ran.
 import { describe, expect, it } from 'vitest';
-import { rideCsv, csvField } from '../../io/render/ride-csv.ts';
-import { ridePlotFiles, ridePlotNames } from '../../io/render/ride-plots.ts';
-import { inlineSvg } from '../../io/render/inline-svg.ts';
-import { rideCaseSummary, strideSeries } from '../../src/result/ride-summary.ts';
+import { rideCsv, csvField } from '../../src/render/ride-csv.ts';
+import { ridePlotFiles, ridePlotNames } from '../../src/render/ride-plots.ts';
+import { inlineSvg } from '../../src/render/inline-svg.ts';
+import { rideCaseSummary, strideSeries } from '../../src/core/result/ride-summary.ts';
 import { demoRide } from '../fixtures/sample-ride.ts';
 
 describe('rideCsv', () => {

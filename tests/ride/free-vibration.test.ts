@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { integrate } from '../../src/ride/integrate.ts';
-import { decayCycles, TurningPoints } from '../../src/ride/decay.ts';
-import { bisectLeast } from '../../src/ride/bisect-least.ts';
+import { integrate } from '../../src/core/ride/integrate.ts';
+import { decayCycles, TurningPoints } from '../../src/core/ride/decay.ts';
+import { bisectLeast } from '../../src/core/ride/bisect-least.ts';
 
 // A single mass on a linear spring and damper, released from rest: the
 // integrator and the decay measure against the closed form.

@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/engine/analysis.ts';
-import { rideCaseOf, rideInput } from '../../src/ride/ride-model.ts';
-import { buildRide } from '../../src/ride/ride-build.ts';
-import { energy, stateSize } from '../../src/ride/ride-system.ts';
-import { integrate } from '../../src/ride/integrate.ts';
-import { contactMode, derivative, newForces } from '../../src/ride/ride-system.ts';
-import { staticEquilibrium } from '../../src/ride/static-equilibrium.ts';
-import { rideByOdex } from '../../io/ride-odex.ts';
+import { Analysis, rideInput } from '../../src/core/engine/analysis.ts';
+import { rideCaseOf } from '../../src/core/ride/ride-model.ts';
+import { buildRide } from '../../src/core/ride/ride-build.ts';
+import { energy, stateSize } from '../../src/core/ride/ride-system.ts';
+import { integrate } from '../../src/core/ride/integrate.ts';
+import { contactMode, derivative, newForces } from '../../src/core/ride/ride-system.ts';
+import { staticEquilibrium } from '../../src/core/ride/static-equilibrium.ts';
+import { rideByOdex } from '../../src/node/ride-odex.ts';
 import { prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 const analysis = (name: string) => new Analysis(prepared(readDemo(name)), rulesData);

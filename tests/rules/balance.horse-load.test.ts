@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { G } from '../../src/units/units.ts';
+import { G } from '../../src/core/units/units.ts';
 import { findingsOf, fractionHitting, readDemo, deepMerge } from '../support/fixtures.ts';
 
 const RULE = 'balance.horse-load';

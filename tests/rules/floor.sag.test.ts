@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { deepMerge, findingsOf, prepared, readDemo, rulesData } from '../support/fixtures.ts';
-import { Analysis } from '../../src/engine/analysis.ts';
-import type { Finding } from '../../src/findings/finding.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
+import type { Finding } from '../../src/core/findings/finding.ts';
 
 const RULE = 'floor.sag';
 const THICK = { floor_straps: { width_mm: 30, thickness_mm: 10, pitch_mm: 32, pretension_N: 60 } };

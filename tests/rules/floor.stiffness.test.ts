@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/engine/analysis.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
 import { deepMerge, findingsOf, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 const RULE = 'floor.stiffness';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/engine/analysis.ts';
-import { hankinson } from '../../src/model/timber/hankinson.ts';
-import { felloeRunoutDeg } from '../../src/rules/member/felloe.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
+import { hankinson } from '../../src/core/model/timber/hankinson.ts';
+import { felloeRunoutDeg } from '../../src/core/rules/member/felloe.ts';
 import { dataWithGround, deepMerge, rulesData, findingsOf, handSpec, prepared, readDemo } from '../support/fixtures.ts';
 
 // The hand spec runs on a test ground of its own.

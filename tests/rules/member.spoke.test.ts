@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/engine/analysis.ts';
-import { bucklingFactor } from '../../src/rules/member/spoke.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
+import { bucklingFactor } from '../../src/core/rules/member/spoke.ts';
 import { dataWithGround, deepMerge, findingsOf, handSpec, prepared, readDemo } from '../support/fixtures.ts';
 
 // The hand spec runs on a test ground of its own.

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/engine/analysis.ts';
-import { G } from '../../src/units/units.ts';
+import { Analysis } from '../../src/core/engine/analysis.ts';
+import { G } from '../../src/core/units/units.ts';
 import { dataWithGround, deepMerge, rulesData, findingsOf, handSpec, prepared, readDemo } from '../support/fixtures.ts';
 
 // The hand spec runs on a test ground of its own.

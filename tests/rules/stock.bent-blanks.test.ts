@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { deepMerge, readDemo, rulesData, prepared } from '../support/fixtures.ts';
-import { runRules } from '../../src/engine/run-rules.ts';
-import { RULES } from '../../src/engine/registry.ts';
-import type { RulesData } from '../../src/data/rules-data.ts';
+import { runRules } from '../../src/core/engine/run-rules.ts';
+import { RULES } from '../../src/core/engine/registry.ts';
+import type { RulesData } from '../../src/core/data/rules-data.ts';
 
 const RULE = 'stock.bent-blanks';
 const rule = RULES.find((r) => r.id === RULE)!;

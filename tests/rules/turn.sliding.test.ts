@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { G } from '../../src/units/units.ts';
+import { G } from '../../src/core/units/units.ts';
 import { deepMerge, findingsOf, fractionHitting, readDemo, rulesData } from '../support/fixtures.ts';
 
 const RULE = 'turn.sliding';

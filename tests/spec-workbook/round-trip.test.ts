@@ -4,11 +4,11 @@ import { describe, expect, it } from 'vitest';
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { parse } from 'yaml';
-import { parseSpecWorkbook } from '../../io/read-spec-workbook.ts';
-import { specificationWorkbook } from '../../io/spec-workbook/spec-sheets.ts';
-import { specYaml } from '../../io/spec-yaml-template.ts';
-import { defaultRulesDir, loadRulesData } from '../../io/load-rules-data.ts';
-import { prepareSpec } from '../../src/spec/prepare.ts';
+import { parseSpecWorkbook } from '../../src/core/input/parse-spec-workbook.ts';
+import { specificationWorkbook } from '../../src/render/spec-workbook/spec-sheets.ts';
+import { specYaml } from '../../src/render/spec-yaml-template.ts';
+import { defaultRulesDir, loadRulesData } from '../../src/node/load-rules-data.ts';
+import { prepareSpec } from '../../src/core/spec/prepare.ts';
 import { CHOICES } from '../support/spec-workbook.ts';
 import { REPO } from '../support/run-cli.ts';
 

@@ -3,8 +3,8 @@
 import { describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
 import { join } from 'node:path';
-import { defaultRulesDir, loadRulesData } from '../../io/load-rules-data.ts';
-import { TEMPLATE_FILE, templateWorkbook } from '../../io/spec-workbook/template.ts';
+import { defaultRulesDir, loadRulesData } from '../../src/node/load-rules-data.ts';
+import { TEMPLATE_FILE, templateWorkbook } from '../../src/render/spec-workbook/template.ts';
 import { REPO } from '../support/run-cli.ts';
 import { reloaded } from '../support/spec-workbook.ts';
 

@@ -3,11 +3,11 @@
 // the optimum: the same optimum, proved, a valid plan, a bound that does not
 // exceed the optimum, and a shortfall where exhaustive search finds no plan.
 import { beforeAll, describe, expect, it } from 'vitest';
-import { loadLpSolver } from '../../io/load-lp-solver.ts';
-import type { CuttingInstance, LpSolver } from '../../src/stock/cutting-types.ts';
-import { planCutting, type CuttingMethod } from '../../src/stock/plan-cutting.ts';
-import { StockShortfallError } from '../../src/stock/stock-shortfall.ts';
-import { planProblems } from '../../src/stock/validate-plan.ts';
+import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
+import type { CuttingInstance, LpSolver } from '../../src/core/stock/cutting-types.ts';
+import { planCutting, type CuttingMethod } from '../../src/core/stock/plan-cutting.ts';
+import { StockShortfallError } from '../../src/core/stock/stock-shortfall.ts';
+import { planProblems } from '../../src/core/stock/validate-plan.ts';
 import { bruteForceOptimum, seeded } from '../support/brute-force-cutting.ts';
 
 const INSTANCES = 30;

@@ -1,11 +1,11 @@
 // The planner on cases worked by hand: kerf, prices over two stock lengths,
 // availability limits, labels, and first-fit decreasing alone.
 import { beforeAll, describe, expect, it } from 'vitest';
-import { loadLpSolver } from '../../io/load-lp-solver.ts';
-import type { CuttingInstance, CuttingPlan, LpSolver } from '../../src/stock/cutting-types.ts';
-import { planCutting } from '../../src/stock/plan-cutting.ts';
-import { StockShortfallError } from '../../src/stock/stock-shortfall.ts';
-import { planProblems } from '../../src/stock/validate-plan.ts';
+import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
+import type { CuttingInstance, CuttingPlan, LpSolver } from '../../src/core/stock/cutting-types.ts';
+import { planCutting } from '../../src/core/stock/plan-cutting.ts';
+import { StockShortfallError } from '../../src/core/stock/stock-shortfall.ts';
+import { planProblems } from '../../src/core/stock/validate-plan.ts';
 
 let lp: LpSolver;
 beforeAll(async () => {

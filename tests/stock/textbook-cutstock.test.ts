@@ -4,10 +4,10 @@
 // pieces 45, 36, 31, 14 with demands 97, 610, 395, 211; LP bound 452.25
 // rolls, integer optimum 453.
 import { beforeAll, describe, expect, it } from 'vitest';
-import { loadLpSolver } from '../../io/load-lp-solver.ts';
-import type { CuttingInstance, LpSolver } from '../../src/stock/cutting-types.ts';
-import { planCutting, type CuttingMethod } from '../../src/stock/plan-cutting.ts';
-import { planProblems } from '../../src/stock/validate-plan.ts';
+import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
+import type { CuttingInstance, LpSolver } from '../../src/core/stock/cutting-types.ts';
+import { planCutting, type CuttingMethod } from '../../src/core/stock/plan-cutting.ts';
+import { planProblems } from '../../src/core/stock/validate-plan.ts';
 
 const CUTSTOCK: CuttingInstance = {
   kerf_mm: 0,

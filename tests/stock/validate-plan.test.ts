@@ -1,9 +1,9 @@
 // Plan validation finds each way a plan can be broken. The plan under test is
 // a sound first-fit plan, then broken one way at a time.
 import { describe, expect, it } from 'vitest';
-import type { CuttingInstance, CuttingPlan } from '../../src/stock/cutting-types.ts';
-import { planCutting } from '../../src/stock/plan-cutting.ts';
-import { planProblems } from '../../src/stock/validate-plan.ts';
+import type { CuttingInstance, CuttingPlan } from '../../src/core/stock/cutting-types.ts';
+import { planCutting } from '../../src/core/stock/plan-cutting.ts';
+import { planProblems } from '../../src/core/stock/validate-plan.ts';
 
 // 2 x 1200 + 1 x 500 mm with a 4 mm kerf from 3000 mm stock, price 12:
 // 1200 + 1200 + 500 + 2 x 4 = 2908 <= 3000, one stock piece, offcut

@@ -2,7 +2,7 @@
 // only, written apart from the planner (real lengths, no grid, no LP): every
 // piece, longest first, goes into each open stock piece that still holds it
 // or opens one of each stock length still available.
-import type { CuttingInstance } from '../../src/stock/cutting-types.ts';
+import type { CuttingInstance } from '../../src/core/stock/cutting-types.ts';
 
 /** The least cost (or stock count where unpriced); Infinity when no plan exists. */
 export function bruteForceOptimum(inst: CuttingInstance): number {

@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { parse } from 'yaml';
-import { defaultRulesDir, loadRulesData } from '../../io/load-rules-data.ts';
-import type { RulesData } from '../../src/data/rules-data.ts';
-import { prepareSpec } from '../../src/spec/prepare.ts';
-import type { CheckedSpecification } from '../../src/spec/spec.types.ts';
+import { defaultRulesDir, loadRulesData } from '../../src/node/load-rules-data.ts';
+import type { RulesData } from '../../src/core/data/rules-data.ts';
+import { prepareSpec } from '../../src/core/spec/prepare.ts';
+import type { CheckedSpecification } from '../../src/core/spec/spec.types.ts';
 
 export const rulesData: RulesData = loadRulesData(defaultRulesDir());
 
@@ -51,8 +51,8 @@ export function handSpec(): Record<string, any> {
 
 /** Run one rule on a raw spec; optionally replace some of its limits. */
 export async function findingsOf(ruleId: string, raw: unknown, limits: Record<string, number> = {}, data: RulesData = rulesData) {
-  const { RULES } = await import('../../src/engine/registry.ts');
-  const { runRules } = await import('../../src/engine/run-rules.ts');
+  const { RULES } = await import('../../src/core/engine/registry.ts');
+  const { runRules } = await import('../../src/core/engine/run-rules.ts');
   const rule = RULES.find((r) => r.id === ruleId);
   if (!rule) throw new Error(`no rule ${ruleId}`);
   const own = structuredClone(data.limits[ruleId]);

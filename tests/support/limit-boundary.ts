@@ -1,5 +1,5 @@
 import { expect } from 'vitest';
-import type { Finding } from '../../src/findings/finding.ts';
+import type { Finding } from '../../src/core/findings/finding.ts';
 import { findingsOf, fractionHitting } from './fixtures.ts';
 
 type Pick = (found: Finding[]) => Finding;

@@ -5,9 +5,9 @@ import ExcelJS from 'exceljs';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { parse } from 'yaml';
-import { defaultRulesDir, loadRulesData } from '../../io/load-rules-data.ts';
-import { choicesOf } from '../../io/spec-workbook/choice-lists.ts';
-import { specificationWorkbook } from '../../io/spec-workbook/spec-sheets.ts';
+import { defaultRulesDir, loadRulesData } from '../../src/node/load-rules-data.ts';
+import { choicesOf } from '../../src/render/spec-workbook/choice-lists.ts';
+import { specificationWorkbook } from '../../src/render/spec-workbook/spec-sheets.ts';
 import { REPO } from './run-cli.ts';
 
 export const CHOICES = choicesOf(loadRulesData(defaultRulesDir()));

@@ -1,0 +1,5 @@
+export interface Size {
+  length_mm: number;
+  width_mm: number;
+  thickness_mm: number;
+}

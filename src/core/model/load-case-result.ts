@@ -1,0 +1,11 @@
+export interface LoadCaseResult {
+  id: string;
+  title: string;
+  crew_position: 'as placed' | 'forward' | 'aft';
+  accel_g: number;
+  pole_load_N: number;
+  yoke_load_N: number;
+  per_horse_N: number;
+  axle_load_N: number;
+  working: string;
+}

@@ -1,0 +1,86 @@
+import type { RulesData } from '../data/rules-data.ts';
+import type { LoadCaseResult } from './load-case-result.ts';
+import type { CheckedSpecification } from '../spec/spec.types.ts';
+import { G } from '../units/units.ts';
+import { massModel, type MassModel } from './mass-model.ts';
+import { poleLoad } from './pole-load.ts';
+
+// The longitudinal load cases of the mechanics note, section 3: the crew as
+// placed and at both ends of the usable floor, each standing still,
+// accelerating and braking. Taking every combination is the safe side.
+
+type CrewPosition = LoadCaseResult['crew_position'];
+
+const CREW: { pos: CrewPosition; id: string; title: string }[] = [
+  { pos: 'as placed', id: '', title: 'crew as placed' },
+  { pos: 'forward', id: 'crew-forward', title: 'crew at the front of the usable floor' },
+  { pos: 'aft', id: 'crew-aft', title: 'crew at the back of the usable floor' },
+];
+
+export function crewAt(spec: CheckedSpecification, pos: CrewPosition): CheckedSpecification {
+  if (pos === 'as placed') return spec;
+  const { front, back } = usableFloor(spec);
+  return crewMovedTo(spec, pos === 'forward' ? front : back);
+}
+
+/** The usable floor's back and front edges, mm from the floor's rear edge. */
+export function usableFloor(spec: CheckedSpecification): { back: number; front: number } {
+  const margin = spec.box.floor.usable_margin_mm;
+  return { back: margin, front: spec.box.floor.depth_mm - margin };
+}
+
+/** The whole crew standing together at x (mm from the floor's rear edge). */
+export function crewMovedTo(spec: CheckedSpecification, x_mm: number): CheckedSpecification {
+  return { ...spec, crew: spec.crew.map((c) => ({ ...c, x_mm })) };
+}
+
+/** Standing, accelerating and braking at the specification's rates. */
+export function motions(spec: CheckedSpecification): { accel: number; id: string; title: string }[] {
+  return [
+    { accel: 0, id: 'static', title: 'standing' },
+    { accel: spec.operation.acceleration_g, id: 'accelerating', title: `accelerating at ${spec.operation.acceleration_g} g` },
+    { accel: -spec.operation.braking_g, id: 'braking', title: `braking at ${spec.operation.braking_g} g` },
+  ];
+}
+
+/** The pole load, the yoke load (pole plus yoke weight) and each horse's share, for one placement of the masses. */
+export function yokeLoads(spec: CheckedSpecification, data: RulesData, model: MassModel, accel_g: number) {
+  const r = poleLoad({
+    parts: model.parts.filter((p) => p.group === 'rolling'),
+    axleX_mm: spec.axle.x_mm,
+    yokeX_mm: spec.pole.yoke_x_mm,
+    yokeZ_mm: spec.pole.yoke_height_mm,
+    accel_g,
+    rollingResistance: data.grounds[spec.operation.ground].rolling_resistance.value,
+  });
+  const yoke_N = r.pole_N + model.yoke.mass_kg * G;
+  return { pole: r, yoke_N, perHorse_N: yoke_N / spec.team.horses };
+}
+
+/** The pole load for a spec as it stands (crew as placed, no acceleration). */
+export function staticPoleLoad(spec: CheckedSpecification, data: RulesData, model: MassModel = massModel(spec, data)) {
+  return yokeLoads(spec, data, model, 0).pole;
+}
+
+export function loadCases(spec: CheckedSpecification, data: RulesData): LoadCaseResult[] {
+  const out: LoadCaseResult[] = [];
+  for (const crew of CREW) {
+    const model = massModel(crewAt(spec, crew.pos), data);
+    for (const motion of motions(spec)) {
+      const { pole: r, yoke_N: yoke, perHorse_N: perHorse } = yokeLoads(spec, data, model, motion.accel);
+      const id = crew.id ? (motion.id === 'static' ? crew.id : `${crew.id}-${motion.id}`) : motion.id;
+      out.push({
+        id,
+        title: `${motion.title}, ${crew.title}`,
+        crew_position: crew.pos,
+        accel_g: motion.accel,
+        pole_load_N: r.pole_N,
+        yoke_load_N: yoke,
+        per_horse_N: perHorse,
+        axle_load_N: r.axle_N,
+        working: `${r.working}\nR_yoke = R_pole + m_yoke·g = ${r.pole_N.toFixed(1)} + ${model.yoke.mass_kg.toFixed(2)} kg × ${G} = ${yoke.toFixed(1)} N; per horse ${yoke.toFixed(1)} / ${spec.team.horses} = ${perHorse.toFixed(1)} N`,
+      });
+    }
+  }
+  return out;
+}

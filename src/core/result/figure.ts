@@ -1,0 +1,4 @@
+export interface Figure {
+  value: number;
+  unit: string;
+}

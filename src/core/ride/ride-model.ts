@@ -1,0 +1,22 @@
+import { buildRide, type RideInput, type RideOptions } from './ride-build.ts';
+import { rideLimit } from './ride-data.ts';
+import { rideTitle, runRide } from './ride-run.ts';
+import type { RideCase, RideResult } from './ride-types.ts';
+export { RIDE_CASES } from './ride-types.ts';
+
+// Entry points of the ride model: one case, or all three.
+
+
+export function rideCaseOf(i: RideInput, which: RideCase, o: RideOptions = {}): RideResult {
+  const built = buildRide(i, which, o);
+  return runRide(built, which, {
+    duration: o.duration ?? rideLimit(i.data, 'ride.inputs', 'duration_s').value,
+    sampleInterval: rideLimit(i.data, 'ride.inputs', 'sample_interval_s').value,
+    decayFraction: rideLimit(i.data, 'ride.decay', 'fraction').value,
+    title: rideTitle(which),
+  });
+}
+
+export function rideCases(i: RideInput, o: RideOptions = {}): Record<RideCase, RideResult> {
+  return { ridge: rideCaseOf(i, 'ridge', o), 'one-wheel': rideCaseOf(i, 'one-wheel', o), drop: rideCaseOf(i, 'drop', o) };
+}

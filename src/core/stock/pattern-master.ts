@@ -1,0 +1,166 @@
+import type { Model } from 'highs';
+import type { Bin } from './bin.ts';
+import type { CuttingProblem } from './cutting-problem.ts';
+import type { LpSolver } from './cutting-types.ts';
+import { boundedKnapsack } from './knapsack.ts';
+import { addColumn, buildModel, feasibleValues, runMip, type LpColumn } from './lp-model.ts';
+import { binPattern, patternBin, patternKey, type Pattern } from './pattern.ts';
+
+// The master problem of column generation over cutting patterns, kept in one
+// HiGHS model that is re-solved warm as columns are added: "at least the
+// demand" rows, "at most the available" rows, one column per pattern, and an
+// artificial column per demand row (priced above any plan) so the master is
+// feasible from the start. With the artificials the LP is a relaxation still,
+// so its optimum bounds every plan.
+
+export class PatternMaster {
+  readonly patterns: Pattern[] = [];
+  private readonly known = new Set<string>();
+  private readonly availRow: number[];
+  private readonly model: Model;
+  private readonly T: number;
+  /** Demand and availability the rows ask for now (reduced while diving). */
+  demand: number[];
+
+  constructor(
+    private readonly p: CuttingProblem,
+    readonly lp: LpSolver,
+    start: Bin[] | null,
+  ) {
+    this.T = p.types.length;
+    this.demand = p.types.map((t) => t.demand);
+    this.availRow = p.stocks.map(() => -1);
+    const rows = { lower: [...this.demand], upper: p.types.map(() => Infinity) };
+    p.stocks.forEach((s, k) => {
+      if (s.available === Infinity) return;
+      this.availRow[k] = rows.lower.length;
+      rows.lower.push(-Infinity);
+      rows.upper.push(s.available);
+    });
+    for (const pat of startPatterns(p, start)) this.remember(pat);
+    const big = (p.types.reduce((s, t) => s + t.demand, 0) + 1) * Math.max(1, ...p.stocks.map((s) => s.weight));
+    const artificial: LpColumn[] = p.types.map((_, i) => ({ cost: big, upper: Infinity, rows: [i], values: [1] }));
+    this.model = buildModel(lp, rows, [...artificial, ...this.patterns.map((pat) => this.column(pat))]);
+  }
+
+  dispose(): void {
+    this.model.dispose();
+  }
+
+  /**
+   * Price until no pattern has a negative reduced cost, or until `until`.
+   * Returns the LP value and a proved bound: the LP value when it converged,
+   * else Farley's (the duals scaled down until feasible), or null.
+   */
+  converge(until: number): { value: number; bound: number | null } | null {
+    const { p, lp, model } = this;
+    const positive = p.stocks.every((s) => s.weight > 0);
+    let bound: number | null = null;
+    for (;;) {
+      model.run();
+      if (model.getModelStatus() !== lp.constants.modelStatus.optimal) return null;
+      const value = model.getObjectiveValue();
+      const dual = model.getSolution().rowDual;
+      const best = boundedKnapsack(
+        p.types.map((t, i) => ({ size: t.size, value: dual[i], bound: this.demand[i] })),
+        p.stocks.map((s) => s.capacity),
+      );
+      let theta = 1;
+      let added = false;
+      p.stocks.forEach((s, k) => {
+        const mu = this.availRow[k] >= 0 ? dual[this.availRow[k]] : 0;
+        if (positive) theta = Math.max(theta, (best[k].value + mu) / s.weight);
+        if (s.weight - mu - best[k].value < -1e-9 * Math.max(1, s.weight) && this.remember({ stock: k, counts: best[k].counts })) {
+          addColumn(lp, model, this.column(this.patterns[this.patterns.length - 1]));
+          added = true;
+        }
+      });
+      if (!added) return { value, bound: Math.max(bound ?? -Infinity, value) };
+      if (positive) bound = Math.max(bound ?? -Infinity, value / theta);
+      if (this.lp.now() > until) return { value, bound };
+    }
+  }
+
+  /** LP values of the patterns at the last solve. */
+  values(): Float64Array {
+    return this.model.getSolution().colValue.subarray(this.T);
+  }
+
+  /** Ask the rows for less: what is left after fixing some stock pieces. */
+  reduce(demand: number[], used: number[]): void {
+    this.demand = demand;
+    const { model, T } = this;
+    model.changeRowsBounds({ kind: 'range', from: 0, to: T - 1 }, demand, demand.map(() => this.lp.infinity));
+    this.p.stocks.forEach((s, k) => {
+      const r = this.availRow[k];
+      if (r >= 0) model.changeRowBounds(r, -this.lp.infinity, s.available - used[k]);
+    });
+  }
+
+  /** Ask the rows for the whole demand and availability again. */
+  restore(): void {
+    this.reduce(
+      this.p.types.map((t) => t.demand),
+      this.p.stocks.map(() => 0),
+    );
+  }
+
+  /** A MIP over every pattern generated so far, then back to the LP. */
+  mip(seconds: number, start: Bin[] | null): Bin[] | null {
+    const { model, T, lp } = this;
+    const zeros = Array(T).fill(0);
+    model.changeColsBounds({ kind: 'range', from: 0, to: T - 1 }, zeros, zeros);
+    runMip(lp, model, seconds, this.p.step, start ? [...zeros, ...this.counts(start)] : undefined);
+    const x = feasibleValues(lp, model);
+    const bins = x ? this.patterns.flatMap((pat, j) => Array.from({ length: Math.round(x[T + j]) }, () => patternBin(pat))) : null;
+    model.clearIntegrality();
+    model.changeColsBounds({ kind: 'range', from: 0, to: T - 1 }, zeros, Array(T).fill(lp.infinity));
+    return bins;
+  }
+
+  /** Add the patterns of these bins as columns (a MIP start must be made of columns). */
+  include(bins: Bin[]): void {
+    for (const b of bins) if (this.remember(binPattern(this.p, b))) addColumn(this.lp, this.model, this.column(this.patterns[this.patterns.length - 1]));
+  }
+
+  private counts(bins: Bin[]): number[] {
+    const index = new Map(this.patterns.map((pat, j) => [patternKey(pat), j]));
+    const x = this.patterns.map(() => 0);
+    for (const b of bins) {
+      const j = index.get(patternKey(binPattern(this.p, b)));
+      if (j !== undefined) x[j]++;
+    }
+    return x;
+  }
+
+  private remember(pat: Pattern): boolean {
+    const key = patternKey(pat);
+    if (this.known.has(key)) return false;
+    this.known.add(key);
+    this.patterns.push(pat);
+    return true;
+  }
+
+  private column(pat: Pattern): LpColumn {
+    const rows: number[] = [];
+    const values: number[] = [];
+    pat.counts.forEach((c, i) => c > 0 && (rows.push(i), values.push(c)));
+    const r = this.availRow[pat.stock];
+    if (r >= 0) (rows.push(r), values.push(1));
+    const s = this.p.stocks[pat.stock];
+    return { cost: s.weight, upper: s.available, rows, values };
+  }
+}
+
+// The starting bins' patterns, then one single-type pattern per piece type
+// and stock that holds it, so the master is never short of columns.
+function startPatterns(p: CuttingProblem, start: Bin[] | null): Pattern[] {
+  const out: Pattern[] = (start ?? []).map((b) => binPattern(p, b));
+  p.types.forEach((t, i) => {
+    p.stocks.forEach((s, k) => {
+      const n = Math.min(t.demand, Math.floor(s.capacity / t.size));
+      if (n > 0) out.push({ stock: k, counts: p.types.map((_, j) => (j === i ? n : 0)) });
+    });
+  });
+  return out;
+}

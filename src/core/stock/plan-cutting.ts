@@ -1,0 +1,74 @@
+import { binsObjective, type Bin } from './bin.ts';
+import { patternLpBound } from './column-generation.ts';
+import { prepareProblem, type CuttingProblem } from './cutting-problem.ts';
+import type { CuttingInstance, CuttingPlan, LpSolver } from './cutting-types.ts';
+import { downsize } from './downsize.ts';
+import { allItems, firstFit } from './first-fit.ts';
+import { roundUpBound } from './objective-step.ts';
+import { planFromBins } from './plan-from-bins.ts';
+import { simpleBound } from './simple-bound.ts';
+import { solveExactly, type ExactMethod } from './solve-exactly.ts';
+import { StockShortfallError } from './stock-shortfall.ts';
+
+export type CuttingMethod = ExactMethod | 'first-fit decreasing';
+
+/** Measured better on the OR-Library u120 and u250 sets (bench/stock-planner.ts, DEVELOPERS.md). */
+export const DEFAULT_METHOD: CuttingMethod = 'column generation';
+export const DEFAULT_TIME_LIMIT_S = 5;
+
+export interface PlanOptions {
+  /** Wall-clock budget for the whole plan. */
+  timeLimit_s?: number;
+  method?: CuttingMethod;
+}
+
+/**
+ * The stock plan of one cutting problem. Without a solver (or with the
+ * first-fit method) it is first-fit decreasing; with one, the chosen exact
+ * method within the time limit, its shortfall repaired by first-fit, and
+ * never worse than first-fit alone.
+ */
+export function planCutting(instance: CuttingInstance, lp: LpSolver | undefined, opts: PlanOptions = {}): CuttingPlan {
+  // Without a solver nothing is timed: first-fit decreasing runs to its end.
+  const deadline = lp ? lp.now() + (opts.timeLimit_s ?? DEFAULT_TIME_LIMIT_S) * 1000 : Infinity;
+  const method = lp ? (opts.method ?? DEFAULT_METHOD) : 'first-fit decreasing';
+  const p = prepareProblem(instance);
+  const ffd = firstFit(p, [], allItems(p));
+  const ffdBins = ffd.unplaced.length === 0 ? downsize(p, ffd.bins) : null;
+  const baseline = baselineOf(p, ffdBins);
+  const simple = simpleBound(p);
+  const meetsBound = ffdBins !== null && binsObjective(p, ffdBins) <= roundUpBound(simple, p.step) + 1e-9;
+  if (method === 'first-fit decreasing' || meetsBound || p.types.length === 0) {
+    if (!ffdBins) throw new StockShortfallError(p, ffd.unplaced);
+    // Already optimal; with a solver the bound shown is still the LP's.
+    const lpBound = lp && p.grid.exact && p.types.length > 0 ? patternLpBound(p, lp, deadline, ffdBins) : null;
+    return planFromBins(p, ffdBins, { lower_bound: Math.max(simple, lpBound ?? 0), proved: false, method: 'first-fit decreasing', baseline });
+  }
+  const outcome = solveExactly(p, lp!, method, deadline, ffdBins);
+  const solved = outcome.bins;
+  // Off an exact grid the solver's bound belongs to a coarser problem.
+  const bound = p.grid.exact && outcome.lowerBound !== null ? Math.max(outcome.lowerBound, simple) : simple;
+  const pick = choose(p, solved, ffdBins);
+  if (!pick) throw new StockShortfallError(p, ffd.unplaced);
+  const fromSolver = pick === solved;
+  const repaired = fromSolver && outcome.repaired;
+  return planFromBins(p, pick, {
+    lower_bound: bound,
+    proved: fromSolver && outcome.proved && !repaired && p.grid.exact,
+    method: fromSolver ? `${outcome.method}${repaired ? ', repaired by first-fit decreasing' : ''}` : `first-fit decreasing (${outcome.method} found nothing better in time)`,
+    baseline,
+  });
+}
+
+function choose(p: CuttingProblem, a: Bin[] | null, b: Bin[] | null): Bin[] | null {
+  if (!a || !b) return a ?? b;
+  return binsObjective(p, a) <= binsObjective(p, b) + 1e-9 ? a : b;
+}
+
+// Where first-fit cannot keep within the stock available, its baseline is
+// the same first-fit with the limits lifted: a count to compare, not a plan.
+function baselineOf(p: CuttingProblem, bins: Bin[] | null): CuttingPlan['baseline'] {
+  const lifted = { ...p, stocks: p.stocks.map((s) => ({ ...s, available: Infinity })) };
+  const base = bins ?? downsize(lifted, firstFit(lifted, [], allItems(lifted)).bins);
+  return { pieces_used: base.length, cost: p.priced ? Math.round(binsObjective(p, base) * 1e6) / 1e6 : null };
+}

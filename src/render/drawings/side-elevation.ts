@@ -1,0 +1,147 @@
+import type { BuildScene } from '../../core/result/build-scene.ts';
+import { dimAttrs, n3, SvgSheet, type Pt } from './svg-sheet.ts';
+import { fitScale, FONT, scaleBarLength, SHEET_WIDTH, svgDocument, type Drawing } from './drawing.ts';
+
+// The build seen from its left side, to scale: ground, wheel, axle end-on,
+// frame and siding, the pole along its centre line, the yoke end-on, the crew
+// at their places and centre-of-mass heights, the rolling assembly's centre of
+// mass, and the static case's axle and yoke loads as arrows. Vehicle x runs
+// forward from the rear of the floor, z up from the ground.
+
+const MARGIN = { left: 12, right: 12, top: 14 };
+/** Paper below the ground: two rows of dimensions and the scale bar. */
+const BELOW = 32;
+/** Drawn length of a load arrow, paper mm. */
+const ARROW = 13;
+
+const whole = (v: number) => Math.round(v).toString();
+
+export function sideElevation(a: BuildScene): Drawing {
+  const { spec } = a;
+  const lay = a.layout;
+  const r = lay.wheelRadius;
+  const frame = spec.box.floor.frame;
+  const depth = spec.box.floor.depth_mm;
+  const xMin = Math.min(spec.axle.x_mm - r, -frame.width_mm, spec.pole.rear_x_mm);
+  const xMax = spec.pole.yoke_x_mm + spec.yoke.width_mm / 2;
+  const crewTop = Math.max(0, ...spec.crew.map((c) => lay.floorTopZ + c.cg_height_mm));
+  const zMax = Math.max(2 * r, spec.pole.yoke_height_mm + spec.yoke.height_mm / 2, lay.floorTopZ + spec.box.siding_height_mm, crewTop);
+  const s = fitScale(xMax - xMin, SHEET_WIDTH - MARGIN.left - MARGIN.right);
+  const ox = MARGIN.left - xMin / s;
+  const oy = MARGIN.top + 8 + zMax / s; // the ground line; 8 mm for the labels above the tallest part
+  const P = (x: number, z: number): Pt => [ox + x / s, oy - z / s];
+  const sheet = new SvgSheet();
+
+  sheet.text(MARGIN.left, 8, `Side elevation, scale 1:${s} on A4, dimensions in mm`, 'start', 'title');
+  sheet.line([MARGIN.left / 2, oy], [SHEET_WIDTH - MARGIN.right / 2, oy], 'ground');
+
+  // Wheel, nave and axle (end-on).
+  const hub = P(spec.axle.x_mm, lay.axleZ);
+  sheet.raw(`<circle class="wheel" cx="${n3(hub[0])}" cy="${n3(hub[1])}" r="${n3(r / s)}" data-diameter="${n3(2 * r)}"/>`);
+  sheet.circle(hub, lay.felloeInner / s, 'felloe');
+  sheet.circle(hub, spec.wheels.nave.diameter_mm / 2 / s, 'nave');
+  sheet.rect(hub[0] - spec.axle.width_mm / 2 / s, hub[1] - spec.axle.height_mm / 2 / s, spec.axle.width_mm / s, spec.axle.height_mm / s, 'axle');
+
+  // Frame rails in section at the rear and front, the floor between them, the siding above.
+  const [fx0, fz0] = P(-frame.width_mm, lay.floorTopZ);
+  sheet.rect(fx0, fz0, (depth + 2 * frame.width_mm) / s, frame.thickness_mm / s, 'frame');
+  sheet.rect(ox, oy - (lay.floorTopZ + spec.box.siding_height_mm) / s, depth / s, spec.box.siding_height_mm / s, 'hidden');
+
+  drawPole(a, sheet, P, s);
+
+  // Yoke end-on at the yoke point.
+  const yk = P(spec.pole.yoke_x_mm, spec.pole.yoke_height_mm);
+  sheet.rect(yk[0] - spec.yoke.width_mm / 2 / s, yk[1] - spec.yoke.height_mm / 2 / s, spec.yoke.width_mm / s, spec.yoke.height_mm / s, 'yoke');
+  sheet.text(yk[0], yk[1] - spec.yoke.height_mm / 2 / s - 2, 'yoke', 'end');
+
+  // Crew: a post from the floor to each person's centre of mass; one label per standing place.
+  const places = new Map<number, string[]>();
+  for (const c of spec.crew) {
+    const foot = P(c.x_mm, lay.floorTopZ);
+    const cg = P(c.x_mm, lay.floorTopZ + c.cg_height_mm);
+    sheet.line(foot, cg, 'crew');
+    sheet.raw(`<circle class="crew-cg" cx="${n3(cg[0])}" cy="${n3(cg[1])}" r="1.2" data-role="${c.role.replace(/[^\w -]/g, '')}"/>`);
+    places.set(c.x_mm, [...(places.get(c.x_mm) ?? []), c.role]);
+  }
+  for (const [x, roles] of places) {
+    const top = Math.max(...spec.crew.filter((c) => c.x_mm === x).map((c) => c.cg_height_mm));
+    const [lx, ly] = P(x, lay.floorTopZ + top);
+    sheet.text(lx, ly - 2.5, `crew: ${roles.join(', ')}`, 'start', 'small');
+  }
+
+  // Centre of mass of the rolling assembly: a circle with two filled quarters.
+  const cm = a.rolling;
+  const [cx, cy] = P(cm.x_mm, cm.z_mm);
+  const q = 2;
+  sheet.raw(`<g class="centre-of-mass" data-x="${n3(cm.x_mm)}" data-z="${n3(cm.z_mm)}"><circle cx="${n3(cx)}" cy="${n3(cy)}" r="${q}"/><path class="cm-fill" d="M ${n3(cx)} ${n3(cy)} h ${q} a ${q} ${q} 0 0 0 ${-q} ${-q} z M ${n3(cx)} ${n3(cy)} h ${-q} a ${q} ${q} 0 0 0 ${q} ${q} z"/></g>`);
+  sheet.text(cx - q - 1, cy + 1, 'centre of mass', 'end', 'small');
+
+  // Static loads as the reactions on the vehicle: up where positive, down where negative.
+  const stat = a.static_case;
+  loadArrow(sheet, [hub[0], hub[1]], stat.axle_load_N, `axle load ${whole(stat.axle_load_N)} N`, 'start');
+  loadArrow(sheet, [yk[0], yk[1] + (Math.sign(stat.yoke_load_N || 1) * spec.yoke.height_mm) / 2 / s], stat.yoke_load_N, `yoke load ${whole(stat.yoke_load_N)} N`, 'end');
+
+  // Dimensions below the ground: axle from the rear of the floor and the reach to the yoke; then the wheel.
+  const row1 = oy + 7;
+  const row2 = oy + 16;
+  for (const x of [0, spec.axle.x_mm, spec.pole.yoke_x_mm]) sheet.line(P(x, 0), [ox + x / s, row1 + 1.5], 'extension');
+  sheet.line([ox, row1], [hub[0], row1], 'dim', dimAttrs('axle-x', spec.axle.x_mm));
+  sheet.text((ox + hub[0]) / 2, row1 - 1.2, whole(spec.axle.x_mm), 'middle', 'small');
+  sheet.line([hub[0], row1], [yk[0], row1], 'dim', dimAttrs('reach', spec.pole.yoke_x_mm - spec.axle.x_mm));
+  sheet.text((hub[0] + yk[0]) / 2, row1 - 1.2, `axle to yoke ${whole(spec.pole.yoke_x_mm - spec.axle.x_mm)}`, 'middle', 'small');
+  for (const side of [-1, 1]) sheet.line([hub[0] + (side * r) / s, oy - r / s], [hub[0] + (side * r) / s, row2 + 1.5], 'extension');
+  sheet.line([hub[0] - r / s, row2], [hub[0] + r / s, row2], 'dim', dimAttrs('wheel-diameter', 2 * r));
+  sheet.text(hub[0] + r / s + 1.5, row2 + FONT / 3, `wheel Ø ${whole(2 * r)}`, 'start', 'small');
+
+  const bar = scaleBarLength(xMax - xMin);
+  const yb = oy + 23;
+  sheet.rect(MARGIN.left, yb, bar / s, 1.2, 'scale-bar', ` data-length="${bar}"`);
+  sheet.text(MARGIN.left + bar / s + 1.5, yb + 1.2, `${bar} mm`, 'start', 'small');
+
+  const caption =
+    `Side elevation at 1:${s}, drawn from the specification: the static case with the crew as placed. ` +
+    `The rolling assembly's centre of mass is ${whole(cm.x_mm)} mm ahead of the rear of the floor and ${whole(cm.z_mm)} mm above the ground; ` +
+    `the wheels carry ${whole(stat.axle_load_N)} N and the yoke ${whole(stat.yoke_load_N)} N (${whole(stat.per_horse_N)} N a horse).`;
+  const svg = svgDocument({
+    height: oy + BELOW,
+    scale: s,
+    origin: [ox, oy],
+    data: { 'wheel-diameter': 2 * r, 'axle-x': spec.axle.x_mm, 'axle-z': lay.axleZ, 'yoke-x': spec.pole.yoke_x_mm, 'yoke-z': spec.pole.yoke_height_mm },
+    style: [
+      `.pole { stroke: #999; stroke-width: ${n3(spec.pole.height_mm / s)}; } .frame, .axle, .yoke { fill: #ccc; }`,
+      '.crew { stroke-width: 0.6; } .crew-cg { fill: #fff; } .cm-fill { fill: #000; stroke: none; } .wheel { stroke-width: 0.5; }',
+    ],
+    parts: sheet.parts,
+  });
+  return { id: 'side-elevation', title: 'Side elevation', caption, svg };
+}
+
+function drawPole(a: BuildScene, sheet: SvgSheet, P: (x: number, z: number) => Pt, s: number): void {
+  const { pole } = a.spec;
+  const lay = a.layout;
+  const rear = P(pole.rear_x_mm, lay.poleZ);
+  const root = P(pole.root_x_mm, lay.poleZ);
+  const yoke = P(pole.yoke_x_mm, pole.yoke_height_mm);
+  const pt = (p: Pt) => `${n3(p[0])} ${n3(p[1])}`;
+  let d: string;
+  if (lay.pole.ok && pole.bend_radius_mm !== undefined) {
+    const t = lay.pole.path.tangentPoint;
+    // Upward on paper is anticlockwise, SVG sweep 0; a downward bend sweeps 1.
+    const sweep = pole.yoke_height_mm >= lay.poleZ ? 0 : 1;
+    d = `M ${pt(rear)} L ${pt(root)} A ${n3(pole.bend_radius_mm / s)} ${n3(pole.bend_radius_mm / s)} 0 0 ${sweep} ${pt(P(t.x, t.z))} L ${pt(yoke)}`;
+  } else {
+    // No bend given, or one that cannot reach the yoke (the bend rule says so): drawn straight from the root.
+    d = `M ${pt(rear)} L ${pt(root)} L ${pt(yoke)}`;
+  }
+  sheet.raw(`<path class="pole" d="${d}"/>`);
+  sheet.raw(`<path class="centre" d="${d}"/>`);
+  sheet.text((root[0] + yoke[0]) / 2 + 2, (root[1] + yoke[1]) / 2 + 4, 'pole', 'start');
+}
+
+/** An arrow ending at `at`, from below for a positive (upward) force, from above for a negative one. */
+function loadArrow(sheet: SvgSheet, at: Pt, force_N: number, label: string, anchor: 'start' | 'end'): void {
+  const dir = force_N >= 0 ? 1 : -1;
+  const from: Pt = [at[0], at[1] + dir * ARROW];
+  sheet.line(from, at, 'load', ` marker-end="url(#load-arrow)" data-force="${n3(force_N)}"`);
+  sheet.text(at[0] + (anchor === 'start' ? 1.5 : -1.5), from[1] - dir * 2, label, anchor, 'small');
+}

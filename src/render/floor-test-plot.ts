@@ -1,0 +1,24 @@
+// The drop record with the fitted damped sine over its free-vibration part.
+
+import { dampedSineAt } from '../core/floor-test/damped-sine-fit.ts';
+import type { DropRecord, FloorTestEstimate } from '../core/floor-test/floor-test-types.ts';
+import { plotSvg } from './plots/plot-svg.ts';
+
+export async function floorTestPlotSvg(record: DropRecord, e: FloorTestEstimate): Promise<string> {
+  const { start_s, end_s } = e.free_vibration;
+  const t = record.t_s.filter((v) => v >= start_s && v <= end_s);
+  const fitted = dampedSineAt(e.fit, t.map((v) => v - start_s));
+  return plotSvg({
+    id: 'floor-test',
+    title: `Drop test: record and fitted damped sine (f_n ${e.natural_frequency_hz.toFixed(2)} Hz, damping ratio ${e.damping_ratio.toFixed(3)})`,
+    caption: 'The drop record, the damped sine fitted to its free vibration, and the turning points the logarithmic decrement used.',
+    xLabel: 'time (s)',
+    yLabel: 'displacement (mm)',
+    lines: [
+      { label: 'record', x: record.t_s, y: record.x_mm },
+      { label: 'fit (free vibration)', x: t, y: fitted, style: 'dashed' },
+      { label: 'turning points used', x: e.extrema.map((p) => p.t_s), y: e.extrema.map((p) => p.x_mm), style: 'dots' },
+    ],
+    rules: [],
+  });
+}

@@ -1,0 +1,93 @@
+// PlotData to a vega-lite chart: one layer each for the lines, the marked
+// points and the horizontal and vertical reference lines, all sharing one
+// legend keyed by label (colour and dash together). Reference lines take a
+// colour by what they stand for, so an advisory limit looks the same in every
+// plot. Pure: the chart is data; src/render/plots/vega-svg.ts draws it.
+
+import type { TopLevelSpec } from 'vega-lite';
+import type { PlotData, RuleKind } from '../../core/plots/plot-data.ts';
+import { thinPoints } from './thin-points.ts';
+
+export const PLOT_WIDTH = 600;
+export const PLOT_HEIGHT = 240;
+
+/** Our own plain choices: lines in distinct hues, limits in the report's warning and failure tones, thresholds dark. */
+const LINE_COLOURS = ['#1f5fa8', '#2e8b57', '#8a4fb0', '#b8860b', '#008b8b', '#a0522d', '#4b5a6a', '#c2185b'];
+/** Per kind, the first, second, ... line of that kind: two thresholds in one plot still differ. */
+const RULE_COLOURS: Record<RuleKind, string[]> = {
+  advisory: ['#e69500', '#9c6b00'],
+  hard: ['#c62828', '#7f1010'],
+  threshold: ['#222222', '#6d4c41'],
+  position: ['#666666', '#00838f'],
+};
+const SOLID: number[] = [];
+const DASHED = [6, 3];
+const RULE_DASH: Record<RuleKind, number[][]> = {
+  advisory: [[6, 3], [10, 3, 2, 3]],
+  hard: [[6, 3], [10, 3, 2, 3]],
+  threshold: [[2, 2], [8, 2, 2, 2]],
+  position: [[8, 3, 2, 3], [3, 3]],
+};
+/** Room beside the data on the x axis where a vertical line could sit on the frame. */
+const X_PAD = 0.03;
+
+interface Row {
+  label: string;
+  x?: number;
+  y?: number;
+  order?: number;
+}
+
+export function plotSpec(plot: PlotData, size = { width: PLOT_WIDTH, height: PLOT_HEIGHT }): TopLevelSpec {
+  const drawn = plot.lines.filter((l) => l.style !== 'dots');
+  const dots = plot.lines.filter((l) => l.style === 'dots');
+  const labels = [...plot.lines.map((l) => l.label), ...plot.rules.map((r) => r.label)];
+  const nth = plot.rules.map((r, i) => plot.rules.slice(0, i).filter((q) => q.kind === r.kind).length);
+  const colours = [...plot.lines.map((_, i) => LINE_COLOURS[i % LINE_COLOURS.length]), ...plot.rules.map((r, i) => cycle(RULE_COLOURS[r.kind], nth[i]))];
+  const dashes = [...plot.lines.map((l) => (l.style === 'dashed' ? DASHED : SOLID)), ...plot.rules.map((r, i) => cycle(RULE_DASH[r.kind], nth[i]))];
+  const legend = { labelLimit: 0, symbolType: 'stroke', symbolStrokeWidth: 2, symbolSize: 260 };
+  const colour = { field: 'label', type: 'nominal', title: null, sort: labels, scale: { domain: labels, range: colours }, legend } as const;
+  const dash = { field: 'label', type: 'nominal', title: null, sort: labels, scale: { domain: labels, range: dashes }, legend } as const;
+  const x = { field: 'x', type: 'quantitative', title: plot.xLabel, ...xScale(plot) } as const;
+  const y = { field: 'y', type: 'quantitative', title: plot.yLabel } as const;
+  const lineRows: Row[] = drawn.flatMap((l) => thinPoints(l.x, l.y, 2 * size.width).map(([px, py], order) => ({ label: l.label, x: px, y: py, order })));
+  const dotRows: Row[] = dots.flatMap((l) => l.x.map((px, i) => ({ label: l.label, x: px, y: l.y[i] })));
+  const yRules: Row[] = plot.rules.filter((r) => r.axis === 'y').map((r) => ({ label: r.label, y: r.value }));
+  const xRules: Row[] = plot.rules.filter((r) => r.axis === 'x').map((r) => ({ label: r.label, x: r.value }));
+  const layers = [
+    lineRows.length && { data: { values: lineRows }, mark: { type: 'line', strokeWidth: 1.6, clip: true }, encoding: { x, y, color: colour, strokeDash: dash, order: { field: 'order', type: 'quantitative' } } },
+    yRules.length && { data: { values: yRules }, mark: { type: 'rule', strokeWidth: 1.3 }, encoding: { y, color: colour, strokeDash: dash } },
+    xRules.length && { data: { values: xRules }, mark: { type: 'rule', strokeWidth: 1.3 }, encoding: { x, color: colour, strokeDash: dash } },
+    dotRows.length && { data: { values: dotRows }, mark: { type: 'point', filled: true, size: 60, opacity: 1 }, encoding: { x, y, color: colour } },
+  ].filter(Boolean);
+  return {
+    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
+    title: plot.title,
+    width: size.width,
+    height: size.height,
+    background: '#ffffff',
+    config: {
+      font: 'sans-serif',
+      title: { fontSize: 13, anchor: 'start', offset: 8 },
+      axis: { labelFontSize: 11, titleFontSize: 11, titleFontWeight: 'normal', gridColor: '#e4e4e4' },
+      legend: { orient: 'bottom', direction: 'vertical', columns: 2, labelFontSize: 11, columnPadding: 24 },
+      view: { stroke: '#444444' },
+      // No ARIA label per data point: the caption and title say what the plot shows, and the file stays small.
+      mark: { aria: false },
+    },
+    layer: layers,
+  } as TopLevelSpec;
+}
+
+const cycle = <T>(list: readonly T[], i: number): T => list[i % list.length];
+
+/** With vertical lines, a little room past the outermost so none hides on the frame; otherwise the library's own domain. */
+function xScale(plot: PlotData): { scale?: { domain: [number, number]; nice: boolean; zero: boolean } } {
+  const rules = plot.rules.filter((r) => r.axis === 'x').map((r) => r.value);
+  if (rules.length === 0) return {};
+  const xs = [...plot.lines.flatMap((l) => l.x), ...rules].filter(Number.isFinite);
+  const lo = xs.reduce((a, b) => Math.min(a, b));
+  const hi = xs.reduce((a, b) => Math.max(a, b));
+  const pad = X_PAD * (hi - lo || 1);
+  return { scale: { domain: [lo - pad, hi + pad], nice: false, zero: false } };
+}

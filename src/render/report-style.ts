@@ -1,0 +1,95 @@
+import { SEVERITIES } from '../core/findings/finding.ts';
+import { SEVERITY_COLOURS } from './severity-palette.ts';
+
+// Badges: the word is always printed; the border keeps a badge visible when
+// printed without background colours.
+const badgeRules = SEVERITIES.map((s) => {
+  const { fill, text } = SEVERITY_COLOURS[s];
+  return `.badge-${s} { background: ${fill}; color: ${text}; }`;
+}).join('\n');
+
+/** The report's whole style sheet, inlined so the HTML file stands alone. */
+export const REPORT_CSS = `
+:root { color-scheme: light; }
+body {
+  font-family: "Segoe UI", "Helvetica Neue", Arial, sans-serif;
+  font-size: 11pt;
+  line-height: 1.4;
+  color: #111;
+  margin: 0 auto;
+  padding: 1.5em;
+  max-width: 60em;
+}
+h1 { font-size: 1.6em; margin: 0 0 0.4em; }
+h2 { font-size: 1.3em; margin: 1.4em 0 0.5em; border-bottom: 1px solid #999; }
+h3 { font-size: 1.1em; margin: 1.2em 0 0.4em; }
+h4 { font-size: 1em; margin: 1em 0 0.3em; }
+h2.verdict { font-size: 1.8em; border-bottom: none; margin-top: 0.4em; }
+h2.verdict .badge { font-size: 1em; padding: 0.1em 0.6em; }
+h2.cautions + ul {
+  border: 2px solid #b45f06;
+  background: #fff4e5;
+  padding: 0.6em 0.8em 0.6em 2em;
+  font-weight: 600;
+}
+table {
+  border-collapse: collapse;
+  width: 100%;
+  margin: 0.5em 0 1em;
+  font-size: 0.9em;
+  table-layout: auto;
+}
+th, td {
+  border: 1px solid #999;
+  padding: 0.2em 0.4em;
+  vertical-align: top;
+  overflow-wrap: break-word;
+}
+/* Numbers and badges stay whole; the last column (message, basis, note) takes
+   the squeeze and may break anywhere, so a table never runs off the page. */
+td[style*="text-align:right"] { white-space: nowrap; }
+td:last-child { overflow-wrap: anywhere; }
+th { background: #eee; text-align: left; }
+pre {
+  background: #f6f6f6;
+  border: 1px solid #ccc;
+  padding: 0.5em;
+  white-space: pre-wrap;
+  overflow-wrap: anywhere;
+  font-size: 0.85em;
+}
+code { font-family: Consolas, "DejaVu Sans Mono", monospace; }
+.badge {
+  display: inline-block;
+  border: 1px solid #333;
+  border-radius: 0.3em;
+  padding: 0 0.4em;
+  font-weight: 700;
+  letter-spacing: 0.03em;
+  white-space: nowrap;
+  -webkit-print-color-adjust: exact;
+  print-color-adjust: exact;
+}
+${badgeRules}
+/* Drawings: the setting-out scales down to the page; stock bars keep their
+   lengths to one scale per group, caption at the left. */
+.setting-out svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; }
+.drawing svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; break-inside: avoid; -webkit-print-color-adjust: exact; print-color-adjust: exact; }
+.plot svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; break-inside: avoid; }
+.stock-bars { margin: 0.3em 0 1em; }
+.stock-bars figure { display: flex; align-items: center; gap: 0.6em; margin: 0.15em 0; }
+.stock-bars figcaption { flex: 0 0 10em; font-size: 0.85em; white-space: nowrap; }
+.stock-bars svg { max-width: calc(100% - 11em); height: auto; -webkit-print-color-adjust: exact; print-color-adjust: exact; }
+hr { border: none; border-top: 1px solid #999; margin: 2em 0 0.5em; }
+
+@page { size: A4; margin: 15mm 12mm; }
+@media print {
+  body { max-width: none; padding: 0; font-size: 9.5pt; }
+  h2.new-page { break-before: page; }
+  h2, h3, h4 { break-after: avoid; }
+  table { font-size: 8pt; }
+  thead { display: table-header-group; }
+  tr, pre, figure { break-inside: avoid; }
+  pre { font-size: 7.5pt; }
+}
+`;

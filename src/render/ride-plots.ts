@@ -1,0 +1,53 @@
+// Plots of one ride case over time: the length channels (crew and wheel
+// heights), the floor forces under the crew, and the other forces (wheels on
+// the ground, the yoke). Floor forces are the force channels the ride model
+// names "... floor force".
+// The file names are shared by the ride command, the check's outputs and the
+// report, which links them from Markdown and puts them inline in HTML.
+
+import type { RideCase, RideChannel, RideSeries } from '../core/ride/ride-types.ts';
+import type { PlotData } from '../core/plots/plot-data.ts';
+import { plotSvg } from './plots/plot-svg.ts';
+
+const isFloorForce = (c: RideChannel) => c.unit === 'N' && /floor force$/.test(c.name);
+
+export const RIDE_PLOTS = [
+  { kind: 'heights', title: 'crew and wheel heights', yLabel: 'height from standing (mm)', pick: (c: RideChannel) => c.unit === 'mm' },
+  { kind: 'floor-forces', title: 'floor forces under the crew', yLabel: 'force (N)', pick: isFloorForce },
+  { kind: 'support-forces', title: 'wheel and yoke forces', yLabel: 'force (N)', pick: (c: RideChannel) => c.unit === 'N' && !isFloorForce(c) },
+] as const;
+
+export type RidePlotKind = (typeof RIDE_PLOTS)[number]['kind'];
+
+export function ridePlotFile(c: RideCase, kind: RidePlotKind): string {
+  return `ride-${c}-${kind}.svg`;
+}
+
+/** The plot of one kind as data, or null where the series has no channel in its unit. */
+export function ridePlot(c: RideCase, title: string, series: RideSeries, kind: RidePlotKind): PlotData | null {
+  const spec = RIDE_PLOTS.find((p) => p.kind === kind)!;
+  const channels = series.channels.filter(spec.pick);
+  if (channels.length === 0) return null;
+  const heading = `${title.charAt(0).toUpperCase()}${title.slice(1)}`;
+  return {
+    id: `ride-${c}-${kind}`,
+    title: `${heading}: ${spec.title}`,
+    caption: `${heading}: ${spec.title} over time, from the ride model.`,
+    xLabel: 'time (s)',
+    yLabel: spec.yLabel,
+    lines: channels.map((ch) => ({ label: ch.name, x: series.t_s, y: ch.values })),
+    rules: [],
+  };
+}
+
+/** The names of the plots the series can fill. */
+export function ridePlotNames(c: RideCase, series: RideSeries): string[] {
+  return RIDE_PLOTS.filter((p) => series.channels.some(p.pick)).map((p) => ridePlotFile(c, p.kind));
+}
+
+/** Every plot the series can fill, with its file name, drawn to SVG. */
+export async function ridePlotFiles(c: RideCase, title: string, series: RideSeries): Promise<[string, string][]> {
+  const plots = RIDE_PLOTS.map((p) => [ridePlotFile(c, p.kind), ridePlot(c, title, series, p.kind)] as const);
+  const drawn = plots.filter((p): p is readonly [string, PlotData] => p[1] !== null);
+  return Promise.all(drawn.map(async ([file, plot]): Promise<[string, string]> => [file, `${await plotSvg(plot)}\n`]));
+}

@@ -1,0 +1,55 @@
+import { builtinModules } from 'node:module';
+import { describe, expect, it } from 'vitest';
+import { circles, readGraph } from './import-graph.ts';
+
+// The layers, lowest first; a file may import its own layer and those below.
+// core: spec, units, models, rules, findings, the pipeline (pure);
+// render: the report model and its renderers (pure, strings or bytes out);
+// node: files, solvers, workers; cli: arguments and exit codes.
+const LAYERS = ['src/core/', 'src/render/', 'src/node/', 'cli/'] as const;
+const PURE = new Set(['src/core/', 'src/render/']);
+const BUILTINS = new Set([...builtinModules, ...builtinModules.map((m) => `node:${m}`)]);
+// What a pure layer must not touch even without an import: the process, the clock, chance.
+const IMPURE = [/\bprocess\./, /\bDate\.now\b/, /\bnew Date\(\s*\)/, /\bMath\.random\b/, /\bperformance\.now\b/, /\brequire\(/];
+
+const graph = readGraph(['src', 'cli']);
+const layerOf = (p: string) => LAYERS.findIndex((l) => p.startsWith(l));
+
+describe('layers', () => {
+  it('every source file sits in a layer', () => {
+    expect([...graph.keys()].filter((p) => layerOf(p) < 0)).toEqual([]);
+  });
+
+  it('no file imports a higher layer', () => {
+    const upward: string[] = [];
+    for (const [p, f] of graph) {
+      for (const i of f.imports) if (layerOf(i) > layerOf(p)) upward.push(`${p} -> ${i}`);
+    }
+    expect(upward).toEqual([]);
+  });
+
+  it('core and render import no node built-ins and touch no process, clock or randomness', () => {
+    const bad: string[] = [];
+    for (const [p, f] of graph) {
+      if (!PURE.has(LAYERS[layerOf(p)])) continue;
+      for (const pkg of f.packages) if (BUILTINS.has(pkg)) bad.push(`${p} imports ${pkg}`);
+      const code = f.text.replace(/\/\/.*$/gm, '').replace(/\/\*[\s\S]*?\*\//g, '');
+      for (const re of IMPURE) if (re.test(code)) bad.push(`${p} uses ${re.source}`);
+    }
+    expect(bad).toEqual([]);
+  });
+
+  it('there is no import circle, type-only imports included', () => {
+    expect(circles(readGraph(['src', 'cli', 'scripts', 'bench']))).toEqual([]);
+  });
+
+  it('the circle finder finds a circle (a test of the test)', () => {
+    const g = new Map([
+      ['a.ts', { path: 'a.ts', text: '', imports: ['b.ts'], packages: [] }],
+      ['b.ts', { path: 'b.ts', text: '', imports: ['c.ts'], packages: [] }],
+      ['c.ts', { path: 'c.ts', text: '', imports: ['a.ts'], packages: [] }],
+      ['d.ts', { path: 'd.ts', text: '', imports: ['a.ts'], packages: [] }],
+    ]);
+    expect(circles(g)).toEqual([['a.ts', 'b.ts', 'c.ts']]);
+  });
+});
