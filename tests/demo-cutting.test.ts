@@ -1,8 +1,8 @@
 import { settingOutSvg } from '../src/render/report-figures.ts';
 import { beforeAll, describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
-import { checkSpecification } from '../src/core/check.ts';
-import { RULES } from '../src/core/engine/registry.ts';
+import { runCheck } from '../src/core/pipeline/run-check.ts';
+import { RULES } from '../src/core/rules/index.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
 import type { CheckResult } from '../src/core/result/check-result.ts';
 import type { LpSolver } from '../src/core/stock/cutting-types.ts';
@@ -20,7 +20,7 @@ const CUTTING_FIGURES = ['timber_volume', 'stock_pieces', 'stock_cost', 'stock_w
 function check(name: string, lp?: LpSolver): CheckResult {
   const p = prepareSpec(readDemo(name), rulesData);
   if (!p.ok) throw new Error(JSON.stringify(p.issues));
-  return checkSpecification(p.spec, p.entries, rulesData, RULES, lp);
+  return runCheck(p.spec, p.entries, rulesData, { lp: lp });
 }
 
 const sum = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0);

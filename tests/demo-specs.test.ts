@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { checkSpecification } from '../src/core/check.ts';
+import { runCheck } from '../src/core/pipeline/run-check.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { readDemo, rulesData } from './support/fixtures.ts';
 
@@ -9,7 +9,7 @@ const FIGURES = ['total_mass', 'rolling_mass', 'cg_x', 'cg_z', 'yoke_load', 'yok
 function check(name: string) {
   const p = prepareSpec(readDemo(name), rulesData);
   if (!p.ok) throw new Error(JSON.stringify(p.issues));
-  return checkSpecification(p.spec, p.entries, rulesData);
+  return runCheck(p.spec, p.entries, rulesData);
 }
 
 // Each demo's comment block promises a verdict; these hold the demos to it.

@@ -4,7 +4,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { Analysis } from '../src/core/engine/analysis.ts';
 import { reportDrawings } from '../src/render/drawings/report-drawings.ts';
 import { inlineSvg } from '../src/render/inline-svg.ts';
-import { checkSpecification } from '../src/core/check.ts';
+import { runCheck } from '../src/core/pipeline/run-check.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { renderMarkdown } from '../src/render/report-md.ts';
 import { renderHtml } from '../src/render/report-html.ts';
@@ -125,7 +125,7 @@ describe.each(cases)('drawings of %s', (_name, raw) => {
 describe('drawings in the report', () => {
   const p = prepareSpec(readDemo('demo-two-crew'), rulesData);
   if (!p.ok) throw new Error('demo does not prepare');
-  const result = checkSpecification(p.spec, p.entries, rulesData);
+  const result = runCheck(p.spec, p.entries, rulesData);
   const md = renderMarkdown(result);
   let html = '';
   beforeAll(async () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkSpecification } from '../src/core/check.ts';
+import { runCheck } from '../src/core/pipeline/run-check.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { G } from '../src/core/units/units.ts';
 import { dataWithGround, handSpec, readDemo, rulesData } from './support/fixtures.ts';
@@ -10,7 +10,7 @@ const rigid = dataWithGround('hand-rigid', 0);
 function check(raw: unknown, data = rulesData) {
   const p = prepareSpec(raw, data);
   if (!p.ok) throw new Error(JSON.stringify(p.issues));
-  return checkSpecification(p.spec, p.entries, data);
+  return runCheck(p.spec, p.entries, data);
 }
 
 describe('member figures', () => {

@@ -36,7 +36,7 @@ function withHostileText(): CheckResult {
     defaulted: false,
   });
   result.findings[1].message = '- not a list, <i>not</i> italic';
-  result.sources.push('12. not an ordered item');
+  result.sources.push({ id: 'demo-note', citation: '12. not an ordered item', kind: 'from-memory' });
   return result;
 }
 
@@ -72,11 +72,11 @@ describe('renderMarkdown', () => {
       const heading = md.indexOf(`**${f.severity.toUpperCase()}** ${f.rule}: ${f.subject}`, workingStart);
       if (f.severity === 'pass') {
         expect(heading, f.rule).toBe(-1);
-        expect(blocks).not.toContain(f.working);
+        expect(blocks).not.toContain(f.working_text);
       } else {
         expect(heading, f.rule).toBeGreaterThan(workingStart);
         const fence = md.indexOf('```text\n', heading);
-        expect(md.slice(fence + '```text\n'.length).startsWith(f.working)).toBe(true);
+        expect(md.slice(fence + '```text\n'.length).startsWith(f.working_text)).toBe(true);
         expect(md.indexOf(f.fix, heading)).toBeGreaterThan(heading);
       }
     }
@@ -101,15 +101,15 @@ describe('renderMarkdown', () => {
     expect(row.match(/(?<!\\)\|/g)).toHaveLength(6);
   });
 
-  it('numbers the sources', () => {
-    result.sources.forEach((s, i) => expect(md).toContain(`\n${i + 1}. ${s.replace(/_/g, '\\_')}`));
+  it('lists the sources by id with their citations', () => {
+    result.sources.forEach((s) => expect(md).toContain(`\n- **${s.id}**: ${s.citation}`));
   });
 
   it('keeps a working fence closed even when the working holds backticks', () => {
     const r = sampleResult();
-    r.findings[1].working = 'step 1\n```\nnot the end';
+    r.findings[1].working_text = 'step 1\n```\nnot the end';
     const blocks = fencedBlocks(renderMarkdown(r));
-    expect(blocks).toContain(r.findings[1].working);
+    expect(blocks).toContain(r.findings[1].working_text);
   });
 });
 
@@ -165,7 +165,8 @@ describe('renderHtml', () => {
     expect(hostile).toContain('![p](http://example.com/p.png)');
     expect(hostile).toContain('&lt;b&gt;bold&lt;/b&gt;');
     expect(hostile).toContain('<p>- not a list, &lt;i&gt;not&lt;/i&gt; italic</p>');
-    expect(hostile).toContain('<li>12. not an ordered item</li>');
+    expect(hostile).toContain('12. not an ordered item');
+    expect(hostile).not.toMatch(/<ol[^>]*>\s*<li>not an ordered item/);
   });
 
   it('renders an escaped pipe as a literal pipe inside its cell', () => {

@@ -109,7 +109,7 @@ describe('renderWorkbook', () => {
     expect(row.values).toEqual([
       undefined, // exceljs rows are 1-based
       warning.rule, warning.code, warning.severity, warning.subject, warning.value, warning.unit,
-      warning.limit, warning.utilisation, warning.message, warning.fix, warning.source, warning.working,
+      warning.limit, warning.utilisation, warning.message, warning.fix, warning.sources.join('; '), warning.working_text,
     ]);
     expect(row.getCell(8).numFmt).toBe('0.0%');
     expect(row.getCell(12).alignment?.wrapText).toBe(true);
@@ -160,11 +160,10 @@ describe('renderWorkbook', () => {
     });
   });
 
-  it('numbers every source', async () => {
+  it('lists every source by id with its citation', async () => {
     const rows = dataRows(sheet(await readBack(result), 'Sources'));
-    expect(rows.map((r) => [r.getCell(1).value, r.getCell(2).value])).toEqual(
-      result.sources.map((s, i) => [i + 1, s]),
-    );
+    expect(rows.map((r) => r.getCell(1).value)).toEqual(result.sources.map((s) => s.id));
+    rows.forEach((r, i) => expect(String(r.getCell(2).value)).toContain(result.sources[i].citation));
   });
 
   it('refuses a result without cautions', async () => {

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdtemp, readFile, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { checkSpecification } from '../src/core/check.ts';
+import { runCheck } from '../src/core/pipeline/run-check.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { renderMarkdown } from '../src/render/report-md.ts';
 import { renderHtml } from '../src/render/report-html.ts';
@@ -16,7 +16,7 @@ import { readDemo, rulesData } from './support/fixtures.ts';
 describe('plots in the report', () => {
   const p = prepareSpec(readDemo('demo-two-crew'), rulesData);
   if (!p.ok) throw new Error('demo does not prepare');
-  const result = checkSpecification(p.spec, p.entries, rulesData);
+  const result = runCheck(p.spec, p.entries, rulesData);
   const md = renderMarkdown(result);
   let dir = '';
   let written: string[] = [];

@@ -105,22 +105,32 @@ describe('rules data as shipped', () => {
     for (const id of ['turf', 'packed-earth', 'sand', 'gravel', 'paved']) expect(data.grounds).toHaveProperty([id]);
   });
 
+  // Every number cites sources of the catalogue; a document is cited at a place in it
+  // (a table, section, chapter, equation or page), or the value is marked as recalled or as practice.
+  const citesPlace = (ids: string[]) =>
+    ids.every((id) => {
+      const e = data.sources[id];
+      if (e.kind === 'from-memory' || e.kind === 'common-practice') return true;
+      return /\b(table|section|clause|chapter|equation|problem|page|abstract)\b/i.test(e.where ?? '');
+    });
+
   it('gives every material and ground value a source that cites a table or is marked', () => {
     const items = sourcedValues({ species: data.species, leathers: data.leathers, grounds: data.grounds }, '');
     // 15 species x 16 numbers alone exceed this; a walk that finds nothing must fail.
     expect(items.length).toBeGreaterThan(200);
     for (const { path, item } of items) {
-      expect(item.source.trim(), path).not.toBe('');
-      const citesTable = /\btables?\b/i.test(item.source) && /(FPL-GTR-\d+|ISO \d+|handbook)/i.test(item.source);
-      expect(citesTable || MARKED.test(item.source), `${path}: ${item.source}`).toBe(true);
+      expect(item.sources.length, path).toBeGreaterThan(0);
+      for (const id of item.sources) expect(data.sources, `${path}: ${id}`).toHaveProperty([id]);
+      expect(citesPlace(item.sources), `${path}: ${item.source}`).toBe(true);
     }
   });
 
-  it('gives every limit a source that cites a place in a document or is marked', () => {
-    for (const { path, item } of sourcedValues(data.limits, '')) {
-      expect(item.source.trim(), path).not.toBe('');
-      const citesPlace = /\b(table|section|clause|chapter|equation|problem)\b/i.test(item.source);
-      expect(citesPlace || MARKED.test(item.source), `${path}: ${item.source}`).toBe(true);
+  it('gives every limit and parameter a source that cites a place in a document or is marked', () => {
+    const items = sourcedValues({ limits: data.limits, params: data.params }, '');
+    expect(items.length).toBeGreaterThan(60);
+    for (const { path, item } of items) {
+      expect(item.sources.length, path).toBeGreaterThan(0);
+      expect(citesPlace(item.sources), `${path}: ${item.source}`).toBe(true);
     }
   });
 
@@ -246,7 +256,7 @@ describe('loading broken rules data', () => {
   it('rejects a number without a source and a negative strength, naming file, line and key', () => {
     const dir = copyRules();
     const file = join(dir, 'materials', 'species.yaml');
-    const whiteAshMor = 'dry12: { value: 103000, source: "Wood Handbook FPL-GTR-190 (2010), Table 5-3a, transcribed" }';
+    const whiteAshMor = 'dry12: { value: 103000, source: wood-handbook-2010-t5-3a }';
     edit(file, whiteAshMor, 'dry12: { value: 103000 }');
     edit(file, 'green: { value: 8800,', 'green: { value: -8800,'); // rock elm shear, green
     const err = loadError(dir);

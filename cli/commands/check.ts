@@ -2,8 +2,8 @@ import { basename, extname, join, resolve } from 'node:path';
 import { readSpec } from '../../src/node/read-spec.ts';
 import { OutputIsInputError } from '../../src/node/atomic-write.ts';
 import { resultJson, writeOutputs } from '../../src/node/write-outputs.ts';
-import { checkSpecification } from '../../src/core/check.ts';
-import { RULES } from '../../src/core/engine/registry.ts';
+import { runCheck } from '../../src/core/pipeline/run-check.ts';
+import { RULES } from '../../src/core/rules/index.ts';
 import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
 import { prepareSpec } from '../../src/core/spec/prepare.ts';
 import { EXIT, type Console } from '../console.ts';
@@ -31,7 +31,7 @@ export async function checkCommand(file: string, opts: CheckOptions, con: Consol
     return EXIT.badInput;
   }
   // The solver is loaded only once the spec is known to be good.
-  const result = checkSpecification(prepared.spec, prepared.entries, data, RULES, await loadLpSolver());
+  const result = runCheck(prepared.spec, prepared.entries, data, { lp: await loadLpSolver() });
   result.input = read.raw;
   const dir = resolve(con.cwd, opts.out ?? join('axletree-out', basename(file, extname(file))));
   let written: string[];

@@ -1,3 +1,4 @@
+import { limitLevel } from './data/param.ts';
 import type { Analysis } from './engine/analysis.ts';
 import type { Figure } from './result/figure.ts';
 import { G, UNITS } from './units/units.ts';
@@ -50,7 +51,7 @@ function cuttingFigures(a: Analysis): Record<string, Figure> {
 // steady turn exists, the path radii are reported as 0 (turn.pole-reach says why).
 function turnFigures(a: Analysis): Record<string, Figure> {
   const t = a.turn;
-  const advisory = a.data.limits['turn.rollover']?.advisory_fraction?.value ?? 1;
+  const advisory = limitLevel(a.data, 'turn.rollover', 'lateral_fraction', 'advisory');
   return {
     ssf: { value: t.ssf, unit: '1' },
     rollover_accel: { value: t.rolloverAccel, unit: 'm/s²' },

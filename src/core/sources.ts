@@ -1,21 +1,29 @@
-import type { RulesData, Sourced } from './data/rules-data.ts';
+import type { RulesData, SourceEntry } from './data/rules-data.ts';
 import type { Finding } from './findings/finding.ts';
 import type { CheckedSpecification } from './spec/spec.types.ts';
 
-function sourcesOf(node: unknown, out: Set<string>): void {
-  if (typeof node !== 'object' || node === null) return;
-  if ('source' in node && typeof (node as Sourced).source === 'string') out.add((node as Sourced).source);
-  for (const v of Object.values(node)) sourcesOf(v, out);
+/** A source as the result lists it: its catalogue entry under its id. */
+export interface CitedSource extends SourceEntry {
+  id: string;
 }
 
-/** Sources of every material and ground the spec uses and every finding cites. */
-export function usedSources(spec: CheckedSpecification, data: RulesData, findings: Finding[]): string[] {
-  const out = new Set<string>();
+function idsOf(node: unknown, out: Set<string>): void {
+  if (typeof node !== 'object' || node === null) return;
+  const ids = (node as { sources?: unknown }).sources;
+  if (Array.isArray(ids)) for (const id of ids) out.add(String(id));
+  for (const v of Object.values(node)) idsOf(v, out);
+}
+
+/** Every source the materials and ground of the build and the findings cite, in catalogue order. */
+export function usedSources(spec: CheckedSpecification, data: RulesData, findings: readonly Finding[]): CitedSource[] {
+  const ids = new Set<string>();
   const species = new Set([spec.box.floor.frame.species, spec.axle.species, spec.wheels.nave.species, spec.wheels.spoke.species, spec.wheels.felloe.species, spec.pole.species, spec.yoke.species]);
-  for (const s of species) sourcesOf(data.species[s], out);
+  for (const s of species) if (Object.hasOwn(data.species, s)) idsOf(data.species[s], ids);
   const leathers = new Set([spec.floor_straps.material, ...spec.lashings.map((l) => l.material), ...(spec.wheels.tyre ? [spec.wheels.tyre.material] : [])]);
-  for (const l of leathers) sourcesOf(data.leathers[l], out);
-  sourcesOf(data.grounds[spec.operation.ground], out);
-  for (const f of findings) out.add(f.source);
-  return [...out].sort();
+  for (const l of leathers) if (Object.hasOwn(data.leathers, l)) idsOf(data.leathers[l], ids);
+  if (Object.hasOwn(data.grounds, spec.operation.ground)) idsOf(data.grounds[spec.operation.ground], ids);
+  for (const f of findings) for (const id of f.sources) ids.add(id);
+  return Object.keys(data.sources)
+    .filter((id) => ids.has(id))
+    .map((id) => ({ id, ...data.sources[id] }));
 }

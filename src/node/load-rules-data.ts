@@ -1,5 +1,6 @@
-// Reads the editable rules data (materials, grounds, limits) from YAML files
-// under rules/, checks it against the schema and hands the core one object.
+// Reads the editable rules data (sources, materials, grounds, rule limits,
+// model parameters) from YAML files under rules/, checks it against the
+// schema and the source catalogue, and hands the core one object.
 import { existsSync, readFileSync, readdirSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -7,6 +8,7 @@ import { LineCounter, isMap, isScalar, isSeq, parseDocument, type Document } fro
 import type { RulesData } from '../core/data/rules-data.ts';
 import { RulesDataError, type RulesDataProblem } from '../core/data/rules-data-error.ts';
 import { schemaProblems } from '../core/data/validate-rules-data.ts';
+import { citedSources, normaliseSources } from '../core/data/normalise-sources.ts';
 
 /** The repository's own rules/ directory. */
 export function defaultRulesDir(): string {
@@ -21,6 +23,7 @@ interface YamlFile {
 
 /** Files that hold one top-level table each, by the RulesData key they fill. */
 const TABLE_FILES = {
+  sources: ['sources.yaml'],
   species: ['materials', 'species.yaml'],
   leathers: ['materials', 'leathers.yaml'],
   grounds: ['grounds.yaml'],
@@ -33,49 +36,71 @@ export function loadRulesData(dir: string): RulesData {
   for (const key of Object.keys(TABLE_FILES) as TableKey[]) {
     tables[key] = readYaml(join(dir, ...TABLE_FILES[key]), problems);
   }
-  const limitFiles = listLimitFiles(join(dir, 'limits')).map((f) => readYaml(f, problems));
+  const limits = readGroups(join(dir, 'limits'), 'rule id', problems);
+  const params = readGroups(join(dir, 'parameters'), 'parameter group', problems);
   if (problems.length > 0) throw new RulesDataError(problems);
 
-  // Which limits file each rule id came from, so a fault can be traced back.
-  const limitOrigin = new Map<string, YamlFile>();
-  const limits: Record<string, unknown> = {};
-  for (const lf of limitFiles) {
+  const data = {
+    sources: tables.sources?.doc.toJS() ?? null,
+    species: tables.species?.doc.toJS() ?? null,
+    leathers: tables.leathers?.doc.toJS() ?? null,
+    grounds: tables.grounds?.doc.toJS() ?? null,
+    limits: limits.values,
+    params: params.values,
+  };
+  const originOf = (path: string[]): [YamlFile | null | undefined, string[]] => {
+    const [top, ...inner] = path;
+    if (top === 'limits') return [limits.origin.get(inner[0] ?? ''), inner];
+    if (top === 'params') return [params.origin.get(inner[0] ?? ''), inner];
+    return [tables[top as TableKey], inner];
+  };
+  const report = (path: string[], message: string) => {
+    const [origin, inner] = originOf(path);
+    if (origin === undefined || origin === null) problems.push({ file: dir, line: null, keyPath: path.join('.'), message });
+    else problems.push(at(origin, inner, message));
+  };
+  for (const sp of schemaProblems(data)) report(sp.path, sp.message);
+  if (problems.length === 0) {
+    // Every cited source must be in the catalogue.
+    const catalogue = data.sources as Record<string, unknown>;
+    for (const top of ['species', 'leathers', 'grounds', 'limits', 'params'] as const) {
+      for (const c of citedSources(data[top], [top])) {
+        if (!Object.hasOwn(catalogue, c.id)) report(c.path, `unknown source id "${c.id}": add it to rules/sources.yaml or cite one that is there`);
+      }
+    }
+  }
+  if (problems.length > 0) throw new RulesDataError(inFileOrder(problems));
+  for (const top of ['species', 'leathers', 'grounds', 'limits', 'params'] as const) normaliseSources(data[top], data.sources as RulesData['sources']);
+  return data as RulesData;
+}
+
+/**
+ * The files of one folder, each a mapping of group id (a rule id, or a
+ * parameter group) to its entries, merged; which file each group came from,
+ * so a fault can be traced back.
+ */
+function readGroups(folder: string, what: string, problems: RulesDataProblem[]): { values: Record<string, unknown>; origin: Map<string, YamlFile> } {
+  const origin = new Map<string, YamlFile>();
+  const values: Record<string, unknown> = {};
+  for (const lf of listYamlFiles(folder).map((f) => readYaml(f, problems))) {
     if (lf === null) continue;
     const contents = lf.doc.contents;
     if (contents === null) continue; // a file of comments only adds nothing
     if (!isMap(contents)) {
-      problems.push(at(lf, [], 'must be a mapping of rule id to limits'));
+      problems.push(at(lf, [], `must be a mapping of ${what} to entries`));
       continue;
     }
-    for (const [ruleId, ruleLimits] of Object.entries(lf.doc.toJS() as Record<string, unknown>)) {
-      const earlier = limitOrigin.get(ruleId);
+    for (const [id, entries] of Object.entries(lf.doc.toJS() as Record<string, unknown>)) {
+      const earlier = origin.get(id);
       if (earlier !== undefined) {
-        problems.push(at(lf, [ruleId], `rule id is already given in ${earlier.file}: give each rule's limits in one file`));
+        problems.push(at(lf, [id], `${what} is already given in ${earlier.file}: give each in one file`));
         continue;
       }
-      limitOrigin.set(ruleId, lf);
-      limits[ruleId] = ruleLimits;
+      origin.set(id, lf);
+      values[id] = entries;
     }
   }
-  if (problems.length > 0) throw new RulesDataError(problems);
-
-  const data = {
-    species: tables.species?.doc.toJS() ?? null,
-    leathers: tables.leathers?.doc.toJS() ?? null,
-    grounds: tables.grounds?.doc.toJS() ?? null,
-    limits,
-  };
-  for (const sp of schemaProblems(data)) {
-    const [top, ...inner] = sp.path;
-    const origin = top === 'limits' ? limitOrigin.get(inner[0] ?? '') : tables[top as TableKey];
-    if (origin === undefined || origin === null) {
-      problems.push({ file: dir, line: null, keyPath: sp.path.join('.'), message: sp.message });
-    } else {
-      problems.push(at(origin, inner, sp.message));
-    }
-  }
-  if (problems.length > 0) throw new RulesDataError(inFileOrder(problems));
-  return data as RulesData;
+  return { values, origin };
 }
 
 /** Problems grouped by file, in the order a reader meets them. */
@@ -87,12 +112,12 @@ function inFileOrder(problems: RulesDataProblem[]): RulesDataProblem[] {
   );
 }
 
-function listLimitFiles(limitsDir: string): string[] {
-  if (!existsSync(limitsDir) || !statSync(limitsDir).isDirectory()) return [];
-  return readdirSync(limitsDir)
+function listYamlFiles(folder: string): string[] {
+  if (!existsSync(folder) || !statSync(folder).isDirectory()) return [];
+  return readdirSync(folder)
     .filter((name) => name.endsWith('.yaml'))
     .sort()
-    .map((name) => join(limitsDir, name));
+    .map((name) => join(folder, name));
 }
 
 /** Parses one file; records any read or syntax fault and returns null for it. */

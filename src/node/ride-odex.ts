@@ -4,7 +4,7 @@ import { buildRide, type RideInput } from '../core/ride/ride-build.ts';
 import { derivative, stateSize } from '../core/ride/ride-system.ts';
 import type { RideCase } from '../core/ride/ride-types.ts';
 import { staticEquilibrium } from '../core/ride/static-equilibrium.ts';
-import { rideLimit } from '../core/ride/ride-data.ts';
+import { rideParam } from '../core/ride/ride-data.ts';
 import { odexSolve } from './odex-solver.ts';
 
 export interface OdexRide {
@@ -23,7 +23,7 @@ export function rideByOdex(i: RideInput, which: RideCase, relativeTolerance = 1e
   if (b.drop > 0) for (let k = 0; k < N; k++) if (k !== 1 && k !== 2) y0[k] += b.drop;
   const dy = new Float64Array(stateSize(sys));
   const rise = sys.crew.map(() => 0);
-  const duration = rideLimit(i.data, 'ride.inputs', 'duration_s').value;
+  const duration = rideParam(i.data, 'ride.inputs', 'duration_s').value;
   const r = odexSolve((t, y) => { derivative(sys, t, y, dy); return Array.from(dy); }, 0, y0, duration, {
     relativeTolerance,
     absoluteTolerance: relativeTolerance * 1e-3,

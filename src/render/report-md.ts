@@ -1,3 +1,5 @@
+import type { CitedSource } from '../core/sources.ts';
+import { citationText } from '../core/data/source-text.ts';
 import type { CheckResult } from '../core/result/check-result.ts';
 import type { SpecEntry } from '../core/spec/spec-entry.ts';
 import type { LoadCaseResult } from '../core/model/load-case-result.ts';
@@ -92,8 +94,8 @@ function workingSections(ordered: readonly Finding[]): string[] {
     `### ${n}. ${severityMark(f.severity)} ${esc(f.rule)}: ${esc(f.subject)}`,
     escapeBlock(f.message),
     `**Fix:** ${esc(f.fix)}`,
-    `**Source:** ${esc(f.source)}`,
-    fencedBlock(f.working),
+    `**Sources:** ${esc(f.sources.join(', ') || 'none cited')}`,
+    fencedBlock(f.working_text),
   ]);
 }
 
@@ -167,7 +169,7 @@ function specTable(entries: readonly SpecEntry[]): string {
   return table(['Path', 'Value', 'Unit', 'Default', 'Note'], rows);
 }
 
-function sourcesList(sources: readonly string[]): string {
+function sourcesList(sources: readonly CitedSource[]): string {
   if (sources.length === 0) return 'No sources cited.';
-  return sources.map((s, i) => `${i + 1}. ${escapeBlock(s)}`).join('\n');
+  return sources.map((s) => `- **${esc(s.id)}**: ${escapeBlock(citationText(s))} (${esc(s.kind)})${s.note ? `. ${escapeBlock(s.note)}` : ''}`).join('\n');
 }

@@ -10,6 +10,8 @@ export const SEVERITY_COLOURS: Record<Severity, { fill: string; text: string }> 
   warning: { fill: '#FFC000', text: '#000000' },
   advice: { fill: '#BDD7EE', text: '#000000' },
   pass: { fill: '#C6EFCE', text: '#000000' },
+  info: { fill: '#E7E6E6', text: '#000000' },
+  error: { fill: '#7F7F7F', text: '#FFFFFF' },
 };
 
 /** '#RRGGBB' to the opaque 'FFRRGGBB' form spreadsheets use. */

@@ -5,7 +5,7 @@ import { crewLoads, floorModel, nodalLoads } from '../../src/core/model/cable-ne
 import { FloorOutline } from '../../src/core/model/cable-net/outline.ts';
 import { pointWeights, weightedSum } from '../../src/core/model/cable-net/point-sag.ts';
 import { G } from '../../src/core/units/units.ts';
-import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts';
+import { deepMerge, prepared, readDemo, rulesData, withParams } from '../support/fixtures.ts';
 
 const STANDING = { value: 1, source: 'test' };
 const DEMOS = ['demo-two-crew', 'demo-rear-axle', 'teaching-flawed'];
@@ -13,9 +13,7 @@ const WEAVES = ['two-way', 'front-to-back', 'side-to-side'] as const;
 
 /** The rules data with the floor solver's tolerance replaced. */
 function withTolerance(fraction: number): RulesData {
-  const own = structuredClone(rulesData.limits['floor.convergence']);
-  own.tolerance_fraction = { ...own.tolerance_fraction, value: fraction };
-  return { ...rulesData, limits: { ...rulesData.limits, 'floor.convergence': own } };
+  return withParams('floor.solver', { tolerance_fraction: fraction });
 }
 
 const specOf = (demo: string, straps: Record<string, unknown> = {}) => prepared(deepMerge(readDemo(demo), { floor_straps: straps }));

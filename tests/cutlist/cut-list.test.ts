@@ -6,7 +6,7 @@ import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts
 const analysis = (raw: unknown) => new Analysis(prepared(raw), rulesData);
 const row = (a: Analysis, part: string) => a.cutting.cut_list.find((i) => i.part.startsWith(part))!;
 const massOf = (a: Analysis, part: string) => a.mass.parts.find((p) => p.part === part)!.mass_kg;
-const limits = rulesData.limits.cutlist;
+const limits = rulesData.params.cutlist;
 
 describe('cut list', () => {
   const a = analysis(readDemo('demo-two-crew'));

@@ -3,7 +3,7 @@ import { Analysis } from '../../src/core/engine/analysis.ts';
 import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 const leather = (raw: unknown) => new Analysis(prepared(raw), rulesData).cutting.leather;
-const limits = rulesData.limits.cutlist;
+const limits = rulesData.params.cutlist;
 
 describe('leather list by hand', () => {
   const l = leather(readDemo('demo-two-crew'));

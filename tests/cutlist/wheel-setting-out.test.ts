@@ -3,7 +3,7 @@ import { Analysis } from '../../src/core/engine/analysis.ts';
 import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 const settingOut = (raw: unknown) => new Analysis(prepared(raw), rulesData).cutting.setting_out;
-const tenon = rulesData.limits.cutlist;
+const tenon = rulesData.params.cutlist;
 
 describe('wheel setting-out against hand calculation', () => {
   it('the central-axle demo: 6 spokes, 2 bent felloe pieces, no tyre', () => {

@@ -8,7 +8,9 @@ describe(RULE, () => {
   it('passes for the central-axle demo', async () => {
     const found = await findingsOf(RULE, readDemo('demo-two-crew'));
     expect(found.map((f) => f.severity)).toEqual(['pass', 'pass']);
-    expect(found[0].subject).toBe('standing, crew as placed');
+    expect(found[0].subject).toBe('case.static');
+    expect(found[0].subject_label).toBe('standing, crew as placed');
+    expect(found[0].load_case).toBe('static');
   });
 
   it('warns above the advisory fraction and fails above the hard one', async () => {
@@ -21,6 +23,10 @@ describe(RULE, () => {
     expect(hard.severity).toBe('fail');
     expect(hard.limit!).toBeCloseTo(0.1 * 200 * G, 9);
     expect(hard.utilisation!).toBeCloseTo(hard.value! / hard.limit!, 12);
+    // The numbers the message prints are the limit's own: 5 % and 10 % of 200 kg × g.
+    expect(hard.params.advisory as number).toBeCloseTo(0.05 * 200 * G, 9);
+    expect(hard.params.hard as number).toBeCloseTo(0.1 * 200 * G, 9);
+    expect(hard.sources).toEqual(expect.arrayContaining(['design-basis-balance', 'from-memory']));
   });
 
   it('boundary: a load equal to the hard limit is not above it', async () => {
@@ -28,10 +34,10 @@ describe(RULE, () => {
     const worst = (await findingsOf(RULE, raw)).at(-1)!;
     const W = 340 * G;
     const f = fractionHitting(worst.value!, W);
-    const at = (await findingsOf(RULE, raw, { advisory_fraction: f, hard_fraction: f })).at(-1)!;
+    const at = (await findingsOf(RULE, raw, { 'load_fraction.advisory': f, 'load_fraction.hard': f })).at(-1)!;
     expect(at.limit).toBe(worst.value);
     expect(at.severity).toBe('pass');
-    const over = (await findingsOf(RULE, raw, { advisory_fraction: f * 0.999, hard_fraction: f * 0.999 })).at(-1)!;
+    const over = (await findingsOf(RULE, raw, { 'load_fraction.advisory': f * 0.999, 'load_fraction.hard': f * 0.999 })).at(-1)!;
     expect(over.severity).toBe('fail');
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { Analysis } from '../../src/core/engine/analysis.ts';
-import { deepMerge, findingsOf, fractionHitting, prepared, readDemo, rulesData } from '../support/fixtures.ts';
+import { deepMerge, findingsOf, withParams, fractionHitting, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 const RULE = 'floor.convergence';
 const raw = (patch: unknown = {}) => deepMerge(readDemo('demo-two-crew'), patch);
@@ -15,11 +15,11 @@ describe(RULE, () => {
     expect(found[0].value!).toBeLessThanOrEqual(found[0].limit!);
     expect(found[0].message).toContain(`${m.iterations} Newton steps`);
     // Tolerance: tolerance_fraction × the crew's weight (rules/limits/floor.yaml).
-    expect(m.tolerance_N).toBeCloseTo(rulesData.limits[RULE].tolerance_fraction.value * m.appliedLoad_N, 15);
+    expect(m.tolerance_N).toBeCloseTo(rulesData.params['floor.solver'].tolerance_fraction.value * m.appliedLoad_N, 15);
   });
 
   it('fails when the solve runs out of steps, with the steps and the residual left', async () => {
-    const [standing] = await findingsOf(RULE, raw(), { max_iterations: 1 });
+    const [standing] = await findingsOf(RULE, raw(), {}, withParams('floor.solver', { max_iterations: 1 }));
     expect(standing.severity).toBe('fail');
     expect(standing.value!).toBeGreaterThan(standing.limit!);
     expect(standing.message).toContain('after 1 Newton steps');
@@ -27,14 +27,14 @@ describe(RULE, () => {
 
   it('boundary: exactly the steps it needs passes, one fewer fails', async () => {
     const n = new Analysis(prepared(raw()), rulesData).floorStatic.iterations;
-    expect((await findingsOf(RULE, raw(), { max_iterations: n }))[0].severity).toBe('pass');
-    expect((await findingsOf(RULE, raw(), { max_iterations: n - 1 }))[0].severity).toBe('fail');
+    expect((await findingsOf(RULE, raw(), {}, withParams('floor.solver', { max_iterations: n })))[0].severity).toBe('pass');
+    expect((await findingsOf(RULE, raw(), {}, withParams('floor.solver', { max_iterations: n - 1 })))[0].severity).toBe('fail');
   });
 
   it('boundary: a residual equal to the tolerance has converged', async () => {
     const m = new Analysis(prepared(raw()), rulesData).floorStatic;
     const fraction = fractionHitting(m.residual_N, m.appliedLoad_N);
-    const [at] = await findingsOf(RULE, raw(), { tolerance_fraction: fraction });
+    const [at] = await findingsOf(RULE, raw(), {}, withParams('floor.solver', { tolerance_fraction: fraction }));
     expect(at.value).toBe(at.limit);
     expect(at.severity).toBe('pass');
   });

@@ -1,3 +1,4 @@
+import { ruleParam } from '../../src/core/data/param.ts';
 import { describe, expect, it } from 'vitest';
 import { Analysis } from '../../src/core/engine/analysis.ts';
 import { deepMerge, findingsOf, fractionHitting, prepared, readDemo, rulesData } from '../support/fixtures.ts';
@@ -21,13 +22,13 @@ describe(RULE, () => {
     expect(atBump.severity).toBe('fail');
     expect(atBump.value).toBe(bump.maxTension_N / (20 * 3));
     // Mechanics note, sections 1 and 5: f_d = f_t × η_slot / SF, from rules/materials/leathers.yaml and rules/limits/floor.yaml.
-    const lim = rulesData.limits[RULE];
+    const lim = { slot_efficiency: ruleParam(rulesData, RULE, 'slot_efficiency'), safety_factor: ruleParam(rulesData, RULE, 'safety_factor') };
     const fd = (rulesData.leathers.rawhide.tensile_strength_MPa.value * lim.slot_efficiency.value) / lim.safety_factor.value;
     expect(atBump.limit).toBeCloseTo(fd, 12);
     expect(atBump.utilisation).toBeGreaterThan(1);
     // The finding says which dynamic factor it used and where it came from.
-    expect(atBump.working).toContain('bump_dynamic_factor');
-    expect(atBump.working).toContain(`factor ${rulesData.limits['load-cases'].bump_dynamic_factor.value}`);
+    expect(atBump.working_text).toContain('bump_dynamic_factor');
+    expect(atBump.working_text).toContain(`factor ${rulesData.params['load-cases'].bump_dynamic_factor.value}`);
   });
 
   it('warns between the advisory utilisation and the design strength', async () => {

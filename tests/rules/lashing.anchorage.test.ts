@@ -22,7 +22,7 @@ describe(RULE, () => {
     const [f] = await findingsOf(RULE, deepMerge(demo, poleToAxle(1)));
     expect(f.severity).toBe('fail');
     // one turn holds 10 × e^(2π × 0.61) = 10 × 46.186 = 461.9 N
-    expect(f.working).toContain('= 461.9 N');
+    expect(f.working_text).toContain('= 461.9 N');
   });
 
   it('gives advice with the turns needed where none are given', async () => {

@@ -20,7 +20,7 @@ describe(RULE, () => {
     // 0.36 × 2 × 8 × 100 = 576 N against the box's braking with the stopping shock, about 1000 N
     expect(f.limit).toBeCloseTo(576, 9);
     expect(f.severity).toBe('fail');
-    expect(f.working).toContain('braking');
+    expect(f.working_text).toContain('braking');
   });
 
   it('warns between the advisory fraction and the whole slip capacity', async () => {

@@ -41,7 +41,7 @@ describe(RULE, () => {
     expect(f.limit).toBeCloseTo(720, 9);
     expect(f.value!).toBeGreaterThan(1600);
     expect(f.severity).toBe('fail');
-    expect(f.working).toContain('apart = (k_bump − 1)·m·g');
+    expect(f.working_text).toContain('apart = (k_bump − 1)·m·g');
   });
 
   it('driven wet, the strength falls by the wet strength factor', async () => {
@@ -69,7 +69,7 @@ describe(RULE, () => {
   it('a joint whose force is not known is a warning, not a pass', async () => {
     // A floor solver stopped after one step leaves the corner forces unknown.
     const data = structuredClone(rulesData);
-    data.limits['floor.convergence'].max_iterations.value = 1;
+    data.params['floor.solver'].max_iterations.value = 1;
     const raw = deepMerge(demo, { lashings: [{ joint: 'frame-corners', material: 'rawhide', width_mm: 12, thickness_mm: 3, wraps: 10 }] });
     const [f] = await findingsOf(RULE, raw, {}, data);
     expect(f.severity).toBe('warning');

@@ -10,7 +10,7 @@ describe(RULE, () => {
   it('passes for the central-axle demo, governed by the worse of the design turn and the bump', async () => {
     const f = await one(readDemo('demo-two-crew'));
     expect(f.severity).toBe('pass');
-    expect(f.working).toContain('k_mod');
+    expect(f.working_text).toContain('k_mod');
     // Hand calculation (mechanics note, section 6): a = (1640 − 940)/2 = 350 mm, r = 470 mm,
     // W = 78 × 72²/6 mm³ at the bearing; the outer wheel's loads from the turn model, the bump's from the ride model's wheel factor.
     const a = new Analysis(prepared(readDemo('demo-two-crew')), rulesData);

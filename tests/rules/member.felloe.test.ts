@@ -52,7 +52,7 @@ describe(RULE, () => {
   it("fails the teaching example's four sawn segments", async () => {
     const f = await one(readDemo('teaching-flawed'));
     expect(f.severity).toBe('fail');
-    expect(f.working).toContain('grain run-out at the segment ends 180°/4 = 45.0°');
+    expect(f.working_text).toContain('grain run-out at the segment ends 180°/4 = 45.0°');
   });
 
   it('boundary: a stress equal to the design strength passes', async () => {

@@ -42,7 +42,7 @@ describe(RULE, () => {
     // lowers the strength left; find the governing utilisation by hand over the cases.
     const W = 60 ** 3 / 6;
     const sigma = (c: (typeof cases)[number]) => (c.pole_N * 2000) / W;
-    const gov = cases.find((c) => b.working.includes(`governing: bending at the root, ${c.title}`))!;
+    const gov = cases.find((c) => b.working_text.includes(`governing: bending at the root, ${c.title}`))!;
     expect(b.value).toBeCloseTo(sigma(gov), 9);
     // Euler (mechanics note, section 6): E_0.05 = 12000 × (1 − 1.645 × 0.22) MPa (Wood Handbook
     // Table 5-3a, 12 %), I = 60⁴/12, L = 2000 mm, K = 1; demand 3 × m × 0.3 g.

@@ -8,8 +8,8 @@ describe(RULE, () => {
     const found = await findingsOf(RULE, readDemo('demo-two-crew'));
     expect(found).toHaveLength(4); // two crew, two road cases
     expect(found.every((f) => f.severity === 'pass')).toBe(true);
-    expect(found[0].working).toContain('Runge-Kutta');
-    expect(found[0].source).toContain('from memory');
+    expect(found[0].working_text).toContain('Runge-Kutta');
+    expect(found[0].working_text).toContain('from memory');
   });
 
   it('fails when a 40 mm ridge throws the crew off the floor', async () => {

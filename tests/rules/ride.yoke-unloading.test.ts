@@ -15,7 +15,7 @@ describe(RULE, () => {
     const ridge = found.find((f) => f.subject.includes('ridge'))!;
     expect(ridge.severity).toBe('warning');
     expect(ridge.value!).toBeLessThan(0);
-    expect(ridge.working).toContain('standing');
+    expect(ridge.working_text).toContain('standing');
   });
 
   it('boundary: a least yoke force equal to the limit passes, a hair above it warns', async () => {

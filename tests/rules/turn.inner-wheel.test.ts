@@ -16,15 +16,15 @@ describe(RULE, () => {
     const [f] = await findingsOf(RULE, deepMerge(readDemo('demo-two-crew'), { operation: { turn_radius_m: 2.75 } }));
     expect(f.severity).toBe('warning');
     expect(f.value).toBeCloseTo(Math.sqrt(2.75 ** 2 - 2.67 ** 2) - 0.82, 9);
-    expect(f.working).toContain('ratio =');
+    expect(f.working_text).toContain('ratio = R_inner / R_outer');
   });
 
   it('boundary: an inner radius equal to the limit passes', async () => {
     const raw = readDemo('demo-two-crew');
     const [probe] = await findingsOf(RULE, raw);
-    const [f] = await findingsOf(RULE, raw, { least_inner_radius_m: probe.value! });
+    const [f] = await findingsOf(RULE, raw, { 'inner_radius_m.hard': probe.value! });
     expect(f.severity).toBe('pass');
-    const [g] = await findingsOf(RULE, raw, { least_inner_radius_m: probe.value! + 1e-9 });
+    const [g] = await findingsOf(RULE, raw, { 'inner_radius_m.hard': probe.value! + 1e-9 });
     expect(g.severity).toBe('warning');
   });
 

@@ -16,8 +16,8 @@ describe(RULE, () => {
   it('fails for the teaching example (25 km/h on 6 m) and gives a safe speed and radius', async () => {
     const [f] = await findingsOf(RULE, readDemo('teaching-flawed'));
     expect(f.severity).toBe('fail');
-    expect(f.fix).toMatch(/Slow to \d+\.\d km\/h/);
-    expect(f.working).toContain('v_roll = R_y·√(g·SSF / R_a)');
+    expect(f.fix).toMatch(/Slow to \d+(\.\d+)? km\/h/);
+    expect(f.working_text).toContain('v_roll = R_y·√(g·SSF / R_a)');
   });
 
   it('warns between the advisory and the hard fraction', async () => {
@@ -30,12 +30,15 @@ describe(RULE, () => {
   it('boundary: a lateral acceleration equal to the hard limit is within it', async () => {
     const raw = readDemo('demo-two-crew');
     const [probe] = await findingsOf(RULE, raw);
-    const aRoll = probe.limit! / 0.5; // the advisory limit is 0.5 of g*SSF in rules/limits/turn.yaml
+    const aRoll = probe.working.find((s) => s.formula === 'a_roll = g·SSF')!.result!;
+    // The finding reports the hard level, 0.75 of g·SSF (rules/limits/turn.yaml), and prints both.
+    expect(probe.limit!).toBeCloseTo(0.75 * aRoll, 12);
+    expect(probe.params.advisory as number).toBeCloseTo(0.5 * aRoll, 12);
     expect(aRoll / G).toBeGreaterThan(0.3);
     const frac = fractionHitting(probe.value!, aRoll);
-    const [f] = await findingsOf(RULE, raw, { advisory_fraction: frac, hard_fraction: frac });
+    const [f] = await findingsOf(RULE, raw, { 'lateral_fraction.advisory': frac, 'lateral_fraction.hard': frac });
     expect(f.severity).toBe('pass');
-    const [g] = await findingsOf(RULE, raw, { advisory_fraction: frac * 0.99, hard_fraction: frac * 0.99 });
+    const [g] = await findingsOf(RULE, raw, { 'lateral_fraction.advisory': frac * 0.99, 'lateral_fraction.hard': frac * 0.99 });
     expect(g.severity).toBe('fail');
   });
 });

@@ -8,7 +8,8 @@ describe(RULE, () => {
   it('passes at 20 km/h on a 15 m turn on turf', async () => {
     const [f] = await findingsOf(RULE, readDemo('demo-two-crew'));
     expect(f.severity).toBe('pass');
-    expect(f.limit).toBeCloseTo(0.7 * rulesData.grounds.turf.lateral_friction.value * G, 9);
+    expect(f.limit).toBeCloseTo(1.0 * rulesData.grounds.turf.lateral_friction.value * G, 9);
+    expect(f.params.advisory as number).toBeCloseTo(0.7 * rulesData.grounds.turf.lateral_friction.value * G, 9);
   });
 
   it('fails when the turn needs more than the ground gives', async () => {
@@ -22,9 +23,9 @@ describe(RULE, () => {
     const [probe] = await findingsOf(RULE, raw);
     const slide = rulesData.grounds['packed-earth'].lateral_friction.value * G;
     const frac = fractionHitting(probe.value!, slide);
-    const [f] = await findingsOf(RULE, raw, { advisory_fraction: frac, hard_fraction: frac });
+    const [f] = await findingsOf(RULE, raw, { 'lateral_fraction.advisory': frac, 'lateral_fraction.hard': frac });
     expect(f.severity).toBe('pass');
-    const [g] = await findingsOf(RULE, raw, { advisory_fraction: frac * 0.99, hard_fraction: frac * 0.99 });
+    const [g] = await findingsOf(RULE, raw, { 'lateral_fraction.advisory': frac * 0.99, 'lateral_fraction.hard': frac * 0.99 });
     expect(g.severity).toBe('fail');
   });
 });

@@ -9,8 +9,8 @@ export const rulesData: RulesData = loadRulesData(defaultRulesDir());
 
 /** The real data with one more ground type of the given rolling resistance. */
 export function dataWithGround(id: string, rollingResistance: number): RulesData {
-  const src = 'test fixture';
-  return { ...rulesData, grounds: { ...rulesData.grounds, [id]: { name: id, rolling_resistance: { value: rollingResistance, source: src }, lateral_friction: { value: 0.5, source: src } } } };
+  const src = { sources: ['demo-data'], source: 'test fixture' };
+  return { ...rulesData, grounds: { ...rulesData.grounds, [id]: { name: id, rolling_resistance: { value: rollingResistance, ...src }, lateral_friction: { value: 0.5, ...src } } } };
 }
 
 export function readDemo(name: string): Record<string, unknown> {
@@ -49,15 +49,38 @@ export function handSpec(): Record<string, any> {
   };
 }
 
-/** Run one rule on a raw spec; optionally replace some of its limits. */
+/**
+ * The data with some of one rule's numbers replaced: `name` for a parameter's
+ * value, `name.hard` or `name.advisory` for a level of a limit.
+ */
+export function withRuleData(ruleId: string, values: Record<string, number>, data: RulesData = rulesData): RulesData {
+  const own = structuredClone(data.limits[ruleId]) as Record<string, Record<string, any>>;
+  for (const [k, v] of Object.entries(values)) {
+    const [name, level] = k.split('.');
+    if (!own[name]) throw new Error(`rules data has no ${ruleId}.${name}`);
+    if (level) own[name][level] = { ...own[name][level], value: v };
+    else own[name] = { ...own[name], value: v };
+  }
+  return { ...data, limits: { ...data.limits, [ruleId]: own as RulesData['limits'][string] } };
+}
+
+/** The data with some model parameters of one group replaced (rules/parameters). */
+export function withParams(group: string, values: Record<string, number>, data: RulesData = rulesData): RulesData {
+  const own = structuredClone(data.params[group]);
+  for (const [k, v] of Object.entries(values)) {
+    if (!own[k]) throw new Error(`rules data has no parameter ${group}.${k}`);
+    own[k] = { ...own[k], value: v };
+  }
+  return { ...data, params: { ...data.params, [group]: own } };
+}
+
+/** Run one rule on a raw spec; optionally replace some of its numbers (see withRuleData). */
 export async function findingsOf(ruleId: string, raw: unknown, limits: Record<string, number> = {}, data: RulesData = rulesData) {
-  const { RULES } = await import('../../src/core/engine/registry.ts');
-  const { runRules } = await import('../../src/core/engine/run-rules.ts');
+  const { RULES } = await import('../../src/core/rules/index.ts');
+  const { runRules } = await import('../../src/core/pipeline/run-rules.ts');
   const rule = RULES.find((r) => r.id === ruleId);
   if (!rule) throw new Error(`no rule ${ruleId}`);
-  const own = structuredClone(data.limits[ruleId]);
-  for (const [k, v] of Object.entries(limits)) own[k] = { ...own[k], value: v };
-  const withLimits = { ...data, limits: { ...data.limits, [ruleId]: own } };
+  const withLimits = withRuleData(ruleId, limits, data);
   return runRules([rule], prepared(raw, withLimits), withLimits);
 }
 

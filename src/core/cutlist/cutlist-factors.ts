@@ -1,7 +1,8 @@
-import type { Limit, RulesData } from '../data/rules-data.ts';
+import type { Param, RulesData } from '../data/rules-data.ts';
+import { param, paramOr } from '../data/param.ts';
 
-// The cut list's allowances and factors, from rules/limits/stock.yaml under
-// "cutlist" (not a rule of its own).
+// The cut list's allowances and factors, from rules/parameters/cutting.yaml
+// under "cutlist".
 
 export type CutlistFactor =
   | 'bend_end_allowance_mm'
@@ -12,18 +13,11 @@ export type CutlistFactor =
   | 'linchpin_length_factor'
   | 'hide_waste_factor';
 
-export function cutlistFactor(data: RulesData, name: CutlistFactor): Limit {
-  const f = data.limits.cutlist?.[name];
-  if (!f) throw new Error(`rules data has no cutlist.${name}; add it to rules/limits/stock.yaml`);
-  return f;
+export function cutlistFactor(data: RulesData, name: CutlistFactor): Param {
+  return param(data, 'cutlist', name);
 }
 
 /** Usable area of one hide of a material: its own figure, else the general one. */
-export function usableHide(data: RulesData, material: string): Limit & { name: string } {
-  const own = `usable_hide_m2.${material}`;
-  const f = data.limits.cutlist?.[own];
-  if (f) return { ...f, name: own };
-  const general = data.limits.cutlist?.usable_hide_m2;
-  if (!general) throw new Error('rules data has no cutlist.usable_hide_m2; add it to rules/limits/stock.yaml');
-  return { ...general, name: 'usable_hide_m2' };
+export function usableHide(data: RulesData, material: string): Param & { name: string } {
+  return paramOr(data, 'cutlist', [`usable_hide_m2.${material}`, 'usable_hide_m2']);
 }

@@ -1,16 +1,50 @@
 // Shapes of the editable data under rules/. The core receives these already
 // loaded (the edge reads the files), so it never touches the file system.
+// Every number cites its sources by id (rules/sources.yaml).
 
-/** A number with the document and table it came from, or "from memory". */
-export interface Sourced {
-  value: number;
-  source: string;
+export type SourceKind = 'standard' | 'handbook' | 'paper' | 'book' | 'method' | 'record' | 'common-practice' | 'from-memory';
+
+/** One entry of the source catalogue. */
+export interface SourceEntry {
+  citation: string;
+  /** The table, section, page or equation within it. */
+  where?: string;
+  kind: SourceKind;
   note?: string;
+  url?: string;
 }
 
-/** A limit a rule compares against; teachers may edit value and source. */
-export interface Limit extends Sourced {
+/** A number with the ids of the sources it rests on. */
+export interface Sourced {
+  value: number;
+  sources: string[];
+  note?: string;
+  /** The sources and the note as one line of text (for working and older readers). */
+  source: string;
+}
+
+/** A model or rule parameter: a number with its unit and sources. */
+export interface Param extends Sourced {
   unit: string;
+}
+
+/** The name older code gives a parameter. */
+export type Limit = Param;
+
+/** One level of a limit: the value and its sources. */
+export interface LimitLevel {
+  value: number;
+  sources: string[];
+  note?: string;
+  source: string;
+}
+
+/** A limit a rule compares against: an advisory level, a hard level, or both. */
+export interface LimitData {
+  unit: string;
+  advisory?: LimitLevel;
+  hard?: LimitLevel;
+  note?: string;
 }
 
 export interface GreenDry {
@@ -50,9 +84,17 @@ export interface Ground {
 }
 
 export interface RulesData {
+  sources: Record<string, SourceEntry>;
   species: Record<string, Species>;
   leathers: Record<string, Leather>;
   grounds: Record<string, Ground>;
-  /** Limits by rule id, then by limit name. */
-  limits: Record<string, Record<string, Limit>>;
+  /** Each rule's limits and parameters, by rule id, then by name. */
+  limits: Record<string, Record<string, Param | LimitData>>;
+  /** Model parameters by group, then by name. */
+  params: Record<string, Record<string, Param>>;
+}
+
+/** True for a limit with levels, false for a parameter. */
+export function isLimitData(x: Param | LimitData): x is LimitData {
+  return !('value' in x);
 }

@@ -1,99 +1,74 @@
 import type { RulesData } from '../data/rules-data.ts';
-import type { LoadCaseResult } from '../model/load-case-result.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
-import { loadCases } from '../model/load-cases.ts';
-import { massModel, type MassModel } from '../model/mass-model.ts';
-import { memberCases, type MemberCase } from '../model/member-cases.ts';
-import { turnModel, type TurnModel } from '../model/turn.ts';
-import { lashingDemands, type Joint, type JointDemand } from '../model/lashing-demand.ts';
-import { floorModel, type FloorModel } from '../model/cable-net/floor-model.ts';
-import { loadFactor } from '../model/load-factors.ts';
 import type { LpSolver } from '../stock/cutting-types.ts';
-import type { CuttingResult } from '../cutlist/cutting-result.ts';
-import { cuttingResult } from '../cutlist/cutting-model.ts';
-import type { RideCase, RideResult } from '../ride/ride-types.ts';
-import { rideCases } from '../ride/ride-model.ts';
 import type { RideInput } from '../ride/ride-build.ts';
-import { floorDampingNeeded, type DampingNeeded } from '../ride/damping-tuner.ts';
-import { crewFloorFactor, wheelFactor, yokeIncrease, type DynamicFactor } from '../ride/dynamic-factors.ts';
+import { ModelGraph } from '../pipeline/model-graph.ts';
+import { MODELS } from '../pipeline/models.ts';
+import type { BumpFactors, ModelValues } from '../pipeline/model-values.ts';
 
-/** The bump case's factors: the crew's for the floor and lashings, the wheels' for the members. */
-export interface BumpFactors {
-  crew: DynamicFactor;
-  wheel: DynamicFactor;
-  /** The ride model's largest yoke force above the standing one, N; null without a ride. */
-  yokeIncrease_N: number | null;
-}
+export type { BumpFactors };
 
-/** Models computed at most once per check, on first use by any rule. */
+/**
+ * The models of one check behind named getters, for the code that reads
+ * several models at once (figures, drawings' scene, loads, plots). Rules read
+ * models through their context instead, which shows them only what they name.
+ */
 export class Analysis {
-  #mass?: MassModel;
-  #cases?: LoadCaseResult[];
-  #turn?: TurnModel;
-  #lashingDemands?: Record<Joint, JointDemand>;
-  #floorStatic?: FloorModel;
-  #floorBump?: FloorModel;
-  #memberCases?: MemberCase[];
-  #cutting?: CuttingResult;
-  #ride?: Record<RideCase, RideResult>;
-  #dampingNeeded?: DampingNeeded;
-  #bumpFactors?: BumpFactors;
+  readonly graph: ModelGraph;
   constructor(
     readonly spec: CheckedSpecification,
     readonly data: RulesData,
     /** The LP solver for the stock plan, loaded at the edge; without it the plan is first-fit decreasing. */
     readonly lp?: LpSolver,
-  ) {}
-  get mass(): MassModel {
-    return (this.#mass ??= massModel(this.spec, this.data));
+    options: { ride?: boolean; graph?: ModelGraph } = {},
+  ) {
+    this.graph = options.graph ?? new ModelGraph(MODELS, { spec, data, lp, ride: options.ride ?? true });
   }
-  get loadCases(): LoadCaseResult[] {
-    return (this.#cases ??= loadCases(this.spec, this.data));
+  get mass(): ModelValues['mass'] {
+    return this.graph.get('mass');
   }
-  /** The static case with the crew as placed. */
-  get staticCase(): LoadCaseResult {
-    return this.loadCases.find((c) => c.id === 'static')!;
+  get loadCases(): ModelValues['loadCases'] {
+    return this.graph.get('loadCases');
   }
-  /** The design turn at the design speed, crew as placed. */
-  get turn(): TurnModel {
-    return (this.#turn ??= turnModel(this.spec, this.data, this.mass, this.staticCase.axle_load_N));
+  get staticCase(): ModelValues['staticCase'] {
+    return this.graph.get('staticCase');
   }
-  /** The strap floor under the crew's weight alone (factor 1). */
-  get floorStatic(): FloorModel {
-    return (this.#floorStatic ??= floorModel(this.spec, this.data, { value: 1, source: 'the crew standing, no dynamic factor' }));
+  get turn(): ModelValues['turn'] {
+    return this.graph.get('turn');
   }
-  /** The strap floor under the crew's weight times the bump factor (the ride model's crew floor factor). */
-  get floorBump(): FloorModel {
-    return (this.#floorBump ??= floorModel(this.spec, this.data, this.bumpFactors.crew));
+  get floorStatic(): ModelValues['floorStatic'] {
+    return this.graph.get('floorStatic');
   }
-  /** The ride model's three cases (ridge, one wheel, drop test), run once. */
-  get ride(): Record<RideCase, RideResult> {
-    return (this.#ride ??= rideCases(rideInput(this)));
+  get floorBump(): ModelValues['floorBump'] {
+    return this.graph.get('floorBump');
   }
-  /** The least floor damping ratio that meets the ride rules (the tuner). */
-  get floorDampingNeeded(): DampingNeeded {
-    return (this.#dampingNeeded ??= floorDampingNeeded(rideInput(this)));
+  /** The ride model's three cases; throws where it was not run (check `hasRide` first). */
+  get ride(): NonNullable<ModelValues['ride']> {
+    const r = this.graph.get('ride');
+    if (!r) throw new Error('the ride model was not run (no crew, or a statics-only run)');
+    return r;
   }
-  /** The bump case's dynamic factors from the ride model, with where they came from. */
+  get hasRide(): boolean {
+    return this.graph.get('ride') !== null;
+  }
+  get floorDampingNeeded(): NonNullable<ModelValues['floorDampingNeeded']> {
+    const d = this.graph.get('floorDampingNeeded');
+    if (!d) throw new Error('the floor-damping tuner was not run (no crew, or a statics-only run)');
+    return d;
+  }
   get bumpFactors(): BumpFactors {
-    if (this.#bumpFactors) return this.#bumpFactors;
-    const placeholder = loadFactor(this.data, 'bump_dynamic_factor');
-    const rides = this.spec.crew.length > 0 ? this.ride : null;
-    return (this.#bumpFactors = { crew: crewFloorFactor(rides, placeholder), wheel: wheelFactor(rides, placeholder), yokeIncrease_N: yokeIncrease(rides)?.value ?? null });
+    return this.graph.get('bumpFactors');
   }
-  /** The load cases the timber members are checked in, with their load-duration classes. */
-  get memberCases(): MemberCase[] {
-    return (this.#memberCases ??= memberCases(this.spec, this.data, this.mass, this.loadCases, this.turn, { factor: this.bumpFactors.wheel, yokeIncrease_N: this.bumpFactors.yokeIncrease_N }));
+  get memberCases(): ModelValues['memberCases'] {
+    return this.graph.get('memberCases');
   }
-  /** Cut list, leather list, wheel setting-out and stock plan. */
-  get cutting(): CuttingResult {
-    return (this.#cutting ??= cuttingResult(this.spec, this.data, this.mass.layout, this.lp));
+  get cutting(): ModelValues['cutting'] {
+    return this.graph.get('cutting');
   }
-  /** The force each lashed joint must pass, case by case. */
-  get lashingDemands(): Record<Joint, JointDemand> {
-    return (this.#lashingDemands ??= lashingDemands({ spec: this.spec, data: this.data, mass: this.mass, cases: this.loadCases, turn: this.turn, floorBump: this.floorBump, bump: this.bumpFactors.crew }));
+  get lashingDemands(): ModelValues['lashingDemands'] {
+    return this.graph.get('lashingDemands');
   }
 }
 
 /** What the ride model reads from the other models of a check. */
-export const rideInput = (a: Analysis): RideInput => ({ spec: a.spec, data: a.data, mass: a.mass, staticCase: a.staticCase, floorStatic: a.floorStatic });
+export const rideInput = (a: Analysis): RideInput => a.graph.get('rideInput');

@@ -3,7 +3,10 @@ import type { Finding } from '../findings/finding.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import type { Analysis } from './analysis.ts';
 
-export interface RuleContext {
+// The older shape of a rule, kept while rules move to defineRule
+// (src/core/pipeline/define-rule.ts); the registry adapts each.
+
+export interface LegacyRuleContext {
   spec: CheckedSpecification;
   data: RulesData;
   analysis: Analysis;
@@ -11,17 +14,16 @@ export interface RuleContext {
   limit(name: string): Limit;
 }
 
-/** A rule: metadata plus one function. Its id never changes once published. */
-export interface Rule {
+export interface LegacyRule {
   id: string;
   title: string;
-  /** What it checks, in a sentence a teacher can read out. */
   checks: string;
-  /** A check can fail; a note only informs (advice), never fails. */
   kind: 'check' | 'note';
-  /** The most severe finding it can give, where that is not 'fail' (a check that only warns). */
   worst?: 'warning';
-  /** Names of the limits it reads from rules/limits under its id. */
   limits: readonly string[];
-  run(ctx: RuleContext): Finding[];
+  run(ctx: LegacyRuleContext): Finding[];
 }
+
+/** @deprecated the older name */
+export type Rule = LegacyRule;
+export type RuleContext = LegacyRuleContext;

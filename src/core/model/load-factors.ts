@@ -1,8 +1,7 @@
-import type { Limit, RulesData } from '../data/rules-data.ts';
+import type { Param, RulesData } from '../data/rules-data.ts';
+import { param } from '../data/param.ts';
 
-/** A shared load-case factor from rules/limits/load-cases.yaml. */
-export function loadFactor(data: RulesData, name: 'bump_dynamic_factor' | 'braking_strut_factor' | 'stopping_shock_factor'): Limit {
-  const f = data.limits['load-cases']?.[name];
-  if (!f) throw new Error(`rules data has no load-cases.${name}; add it to rules/limits/load-cases.yaml`);
-  return f;
+/** A shared load-case factor from rules/parameters/load-cases.yaml. */
+export function loadFactor(data: RulesData, name: 'bump_dynamic_factor' | 'braking_strut_factor' | 'stopping_shock_factor'): Param {
+  return param(data, 'load-cases', name);
 }

@@ -6,7 +6,7 @@ import { yokeLift } from '../rules/balance/yoke-lift.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { G } from '../units/units.ts';
 import type { PlotData } from './plot-data.ts';
-import { ruleLimit } from '../data/rule-limit.ts';
+import { limitLevel } from '../data/param.ts';
 
 // The load on each horse as the whole crew moves together over the usable
 // floor, standing, accelerating and braking: the balance model's load cases
@@ -30,7 +30,7 @@ export function yokeLoadPlot(spec: CheckedSpecification, data: RulesData): PlotD
   const weight = spec.team.horse_mass_kg * G;
   const yokeWeight = massModel(spec, data).yoke.mass_kg * G;
   const horses = spec.team.horses;
-  const lift = ruleLimit(data, yokeLift.id, 'lift_N').value;
+  const lift = limitLevel(data, yokeLift.id, 'pole_load', 'hard');
   const crewMass = spec.crew.reduce((s, c) => s + c.mass_kg, 0);
   const crewX = spec.crew.reduce((s, c) => s + c.mass_kg * c.x_mm, 0) / crewMass;
   return {
@@ -41,8 +41,8 @@ export function yokeLoadPlot(spec: CheckedSpecification, data: RulesData): PlotD
     yLabel: 'load per horse (N)',
     lines,
     rules: [
-      { label: `advisory limit, ${horseLoad.id}`, axis: 'y', value: ruleLimit(data, horseLoad.id, 'advisory_fraction').value * weight, kind: 'advisory' },
-      { label: `hard limit, ${horseLoad.id}`, axis: 'y', value: ruleLimit(data, horseLoad.id, 'hard_fraction').value * weight, kind: 'hard' },
+      { label: `advisory limit, ${horseLoad.id}`, axis: 'y', value: limitLevel(data, horseLoad.id, 'load_fraction', 'advisory') * weight, kind: 'advisory' },
+      { label: `hard limit, ${horseLoad.id}`, axis: 'y', value: limitLevel(data, horseLoad.id, 'load_fraction', 'hard') * weight, kind: 'hard' },
       { label: `pole lifts the yoke below this, ${yokeLift.id}`, axis: 'y', value: (lift + yokeWeight) / horses, kind: 'threshold' },
       { label: 'axle', axis: 'x', value: spec.axle.x_mm, kind: 'position' },
       { label: 'crew as placed (centre of mass)', axis: 'x', value: crewX, kind: 'position' },

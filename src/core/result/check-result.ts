@@ -1,3 +1,4 @@
+import type { CitedSource } from '../sources.ts';
 import type { Figure } from './figure.ts';
 import type { SpecEntry } from '../spec/spec-entry.ts';
 import type { LoadEntry } from '../loads/load-entry.ts';
@@ -33,7 +34,7 @@ export interface CheckResult {
   choices: Choices;
   /** The specification as read, before conversion and defaults; the result workbook starts with it. */
   input?: unknown;
-  /** Every source cited by a limit, material value or finding. */
-  sources: string[];
+  /** Every source cited by a limit, material value or finding, with its catalogue entry. */
+  sources: CitedSource[];
   cautions: string[];
 }

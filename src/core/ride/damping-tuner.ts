@@ -1,7 +1,8 @@
+import { ruleLimit } from '../data/rule-limit.ts';
 import type { RulesData } from '../data/rules-data.ts';
 import { leastOnGrid } from './bisect-least.ts';
 import type { RideInput } from './ride-build.ts';
-import { rideLimit } from './ride-data.ts';
+import { rideParam } from './ride-data.ts';
 import { RIDE_CASES, rideCaseOf } from './ride-model.ts';
 import type { RideCase, RideResult } from './ride-types.ts';
 import { meetsRideRules, type CrewLimits } from './ride-verdict.ts';
@@ -24,8 +25,8 @@ export interface DampingNeeded {
 }
 
 export const crewLimits = (data: RulesData): CrewLimits => ({
-  maxAirborne_ms: rideLimit(data, 'ride.crew-airborne', 'max_airborne_ms'),
-  maxRise_mm: rideLimit(data, 'ride.crew-airborne', 'max_rise_mm'),
+  maxAirborne_ms: ruleLimit(data, 'ride.crew-airborne', 'max_airborne_ms'),
+  maxRise_mm: ruleLimit(data, 'ride.crew-airborne', 'max_rise_mm'),
 });
 
 /** Floor damping ratios tried in turn before bisecting between the last that fails and the first that holds. */
@@ -33,7 +34,7 @@ export const DAMPING_GRID: readonly number[] = [0.02, 0.05, 0.1, 0.15, 0.2, 0.3,
 
 export function floorDampingNeeded(i: RideInput, grid: readonly number[] = DAMPING_GRID, tolerance = 5e-3): DampingNeeded {
   const limits = crewLimits(i.data);
-  const maxCycles = rideLimit(i.data, 'ride.decay', 'max_cycles').value;
+  const maxCycles = ruleLimit(i.data, 'ride.decay', 'max_cycles').value;
   let simulations = 0;
   // The drop first: the decay most often decides, and a failing case ends the trial.
   const order: RideCase[] = ['drop', ...RIDE_CASES.filter((c) => c !== 'drop')];

@@ -7,7 +7,7 @@ import type { LoadCaseResult } from '../model/load-case-result.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { G, mm, UNITS } from '../units/units.ts';
 import { rigidBody } from './body-inertia.ts';
-import { groundContact, inSeries, rideLimit } from './ride-data.ts';
+import { groundContact, inSeries, rideParam } from './ride-data.ts';
 import type { RideCase } from './ride-types.ts';
 import { wheelEnvelope, type Envelope } from './road-envelope.ts';
 import type { RideSystem, RoadInput } from './ride-system.ts';
@@ -71,7 +71,7 @@ function measuredFloorDamping(spec: CheckedSpecification): { value: number; sour
 export function floorDampingOf(i: RideInput): { value: number; source: string } {
   const measured = measuredFloorDamping(i.spec);
   if (measured) return measured;
-  const l = rideLimit(i.data, 'ride.supports', 'floor_damping_ratio');
+  const l = rideParam(i.data, 'ride.supports', 'floor_damping_ratio');
   return { value: l.value, source: `ride.supports.floor_damping_ratio, rules/limits/ride.yaml: ${l.source}` };
 }
 
@@ -82,7 +82,7 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
   const working = [body.working];
   const sources: string[] = [];
   const lim = (g: string, n: string) => {
-    const l = rideLimit(data, g, n);
+    const l = rideParam(data, g, n);
     sources.push(`${g}.${n}: ${l.source}`);
     return l.value;
   };

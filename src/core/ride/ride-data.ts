@@ -1,18 +1,16 @@
-import type { Limit, RulesData } from '../data/rules-data.ts';
+import type { Param, RulesData } from '../data/rules-data.ts';
+import { param } from '../data/param.ts';
 
-// The ride model's data from rules/limits/ride.yaml, read in one place.
+// The ride model's data from rules/parameters/ride.yaml, read in one place.
 
-export function rideLimit(data: RulesData, group: string, name: string): Limit {
-  const l = data.limits[group]?.[name];
-  if (!l) throw new Error(`rules data has no ${group}.${name}; add it to rules/limits/ride.yaml`);
-  return l;
+export function rideParam(data: RulesData, group: string, name: string): Param {
+  return param(data, group, name);
 }
 
 /** A ground's stiffness and damping under a rim; null where the ground is not listed (taken as rigid). */
-export function groundContact(data: RulesData, ground: string): { k: Limit; zeta: Limit } | null {
-  const k = data.limits['ride.ground-contact']?.[ground];
-  const zeta = data.limits['ride.ground-damping']?.[ground];
-  return k && zeta ? { k, zeta } : null;
+export function groundContact(data: RulesData, ground: string): { k: Param; zeta: Param } | null {
+  const has = (g: string) => Object.hasOwn(data.params, g) && Object.hasOwn(data.params[g], ground);
+  return has('ride.ground-contact') && has('ride.ground-damping') ? { k: param(data, 'ride.ground-contact', ground), zeta: param(data, 'ride.ground-damping', ground) } : null;
 }
 
 /** Two springs in series with their damping ratios: the stiffness, and each ratio weighted by its spring's share of the strain energy. */

@@ -1,5 +1,5 @@
 import { buildRide, type RideInput, type RideOptions } from './ride-build.ts';
-import { rideLimit } from './ride-data.ts';
+import { rideParam } from './ride-data.ts';
 import { rideTitle, runRide } from './ride-run.ts';
 import type { RideCase, RideResult } from './ride-types.ts';
 export { RIDE_CASES } from './ride-types.ts';
@@ -10,9 +10,9 @@ export { RIDE_CASES } from './ride-types.ts';
 export function rideCaseOf(i: RideInput, which: RideCase, o: RideOptions = {}): RideResult {
   const built = buildRide(i, which, o);
   return runRide(built, which, {
-    duration: o.duration ?? rideLimit(i.data, 'ride.inputs', 'duration_s').value,
-    sampleInterval: rideLimit(i.data, 'ride.inputs', 'sample_interval_s').value,
-    decayFraction: rideLimit(i.data, 'ride.decay', 'fraction').value,
+    duration: o.duration ?? rideParam(i.data, 'ride.inputs', 'duration_s').value,
+    sampleInterval: rideParam(i.data, 'ride.inputs', 'sample_interval_s').value,
+    decayFraction: rideParam(i.data, 'ride.inputs', 'decay_fraction').value,
     title: rideTitle(which),
   });
 }

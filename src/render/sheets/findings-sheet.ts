@@ -44,8 +44,8 @@ export function addFindingsSheet(wb: ExcelJS.Workbook, result: CheckResult): voi
       cellNumber(f.utilisation),
       f.message,
       f.fix,
-      f.source,
-      f.working,
+      f.sources.join('; '),
+      f.working_text,
     ]);
     row.getCell(5).numFmt = numFmtForUnit(f.unit);
     row.getCell(7).numFmt = numFmtForUnit(f.unit);

@@ -1,3 +1,4 @@
+import { param } from '../../data/param.ts';
 import type { RulesData } from '../../data/rules-data.ts';
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
 import { G } from '../../units/units.ts';
@@ -34,11 +35,10 @@ export interface FloorModel extends FloorResult {
   history: number[];
 }
 
-/** The solver's tolerance, step limit and node limit from rules/limits/floor.yaml, for this applied load. */
+/** The solver's tolerance, step limit and node limit from rules/parameters/floor.yaml, for this applied load. */
 export function floorSolveSettings(data: RulesData, appliedLoad_N: number): SolveSettings & { fraction: number; maxNodes: number } {
-  const lim = data.limits['floor.convergence'];
-  if (!lim?.tolerance_fraction || !lim?.max_iterations || !lim?.max_nodes) throw new Error('rules data has no floor.convergence tolerance_fraction, max_iterations and max_nodes; add them to rules/limits/floor.yaml');
-  return { fraction: lim.tolerance_fraction.value, tolerance_N: lim.tolerance_fraction.value * appliedLoad_N, maxIterations: lim.max_iterations.value, maxNodes: lim.max_nodes.value };
+  const p = (name: string) => param(data, 'floor.solver', name).value;
+  return { fraction: p('tolerance_fraction'), tolerance_N: p('tolerance_fraction') * appliedLoad_N, maxIterations: p('max_iterations'), maxNodes: p('max_nodes') };
 }
 
 export function crewLoads(spec: CheckedSpecification, floor: FloorNet, factor: number): Loaded[] {

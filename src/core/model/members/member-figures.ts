@@ -1,3 +1,4 @@
+import { ruleParam } from '../../data/param.ts';
 import type { Analysis } from '../../engine/analysis.ts';
 import type { Figure } from '../../result/figure.ts';
 import { stiffness05 } from '../timber/design-strength.ts';
@@ -12,8 +13,7 @@ export function memberFigures(a: Analysis): Record<string, Figure> {
   const stat = a.staticCase;
   const arm = axleArm(a.spec);
   const pole = poleCantilever(a.spec, a.mass.layout);
-  const K = a.data.limits['member.pole']?.effective_length_factor;
-  if (!K) throw new Error('rules data has no member.pole.effective_length_factor; add it to rules/limits/member.yaml');
+  const K = ruleParam(a.data, 'member.pole', 'effective_length_factor');
   const E = stiffness05(a.data, timberPart(a.spec, 'pole'), a.spec.moisture_content_pct);
   return {
     axle_stress_static: { value: armMoment(stat.axle_load_N / 2, 0, arm.a, arm.wheelRadius) / arm.bearing.W, unit: 'MPa' },

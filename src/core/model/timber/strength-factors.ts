@@ -1,7 +1,8 @@
-import type { Limit, RulesData } from '../../data/rules-data.ts';
+import type { Param, RulesData } from '../../data/rules-data.ts';
+import { param, paramOr } from '../../data/param.ts';
 
 // The design-strength factors shared by every member rule, from the
-// `timber-strength` block of rules/limits/member.yaml (not a rule of its own).
+// `timber-strength` group of rules/parameters/timber-strength.yaml.
 
 export type StrengthFactorName =
   | 'fifth_percentile_z'
@@ -27,13 +28,11 @@ export type StrengthFactorName =
 
 const BLOCK = 'timber-strength';
 
-export function strengthFactor(data: RulesData, name: StrengthFactorName): Limit {
-  const f = data.limits[BLOCK]?.[name];
-  if (!f) throw new Error(`rules data has no ${BLOCK}.${name}; add it to rules/limits/member.yaml`);
-  return f;
+export function strengthFactor(data: RulesData, name: StrengthFactorName): Param {
+  return param(data, BLOCK, name);
 }
 
 /** M_p for a species: its own entry where the data holds one, else the general value. */
-export function intersectionMoisture(data: RulesData, species: string): Limit {
-  return data.limits[BLOCK]?.[`intersection_moisture_pct_${species}`] ?? strengthFactor(data, 'intersection_moisture_pct');
+export function intersectionMoisture(data: RulesData, species: string): Param {
+  return paramOr(data, BLOCK, [`intersection_moisture_pct_${species}`, 'intersection_moisture_pct']);
 }

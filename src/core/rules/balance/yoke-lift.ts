@@ -1,37 +1,43 @@
-import { makeFinding } from '../../engine/make-finding.ts';
-import type { Rule } from '../../engine/rule.ts';
+import { defineRule } from '../../pipeline/define-rule.ts';
+import { num, step } from '../../pipeline/step.ts';
 
-export const yokeLift: Rule = {
+export const yokeLift = defineRule({
   id: 'balance.yoke-lift',
   title: 'The yoke stays down on the horses',
   checks: 'In every load case (crew anywhere on the usable floor; standing, accelerating, braking) the pole presses down on the yoke.',
   kind: 'check',
-  limits: ['lift_N', 'light_N'],
-  run(ctx) {
-    const cases = ctx.analysis.loadCases;
-    const worst = cases.reduce((w, c) => (c.pole_load_N < w.pole_load_N ? c : w));
-    const lift = ctx.limit('lift_N');
-    const light = ctx.limit('light_N');
-    const lifts = worst.pole_load_N < lift.value;
-    const isLight = !lifts && worst.pole_load_N < light.value;
-    const table = cases.map((c) => `  ${c.id.padEnd(28)} R_pole = ${c.pole_load_N.toFixed(1)} N`).join('\n');
-    return [
-      makeFinding(this.id, {
-        severity: lifts ? 'fail' : isLight ? 'advice' : 'pass',
-        subject: worst.title,
-        value: worst.pole_load_N,
-        unit: 'N',
-        limit: lifts ? lift.value : light.value,
-        message: lifts ? 'yokeLifts' : 'yokePresses',
-        params: { case: worst.title, value: Math.abs(worst.pole_load_N).toFixed(0) },
-        fix: lifts
-          ? 'Move the axle back (towards the rear edge), move the crew or the load forward, or lower the yoke point so the loaded centre of mass stands ahead of the axle in every case.'
-          : isLight
-            ? 'The yoke only just rests on the necks in this case; a little more weight ahead of the axle keeps it from bouncing.'
-            : 'None needed.',
-        source: lifts ? lift.source : light.source,
-        working: `Least pole load over all load cases:\n${table}\nGoverning case, ${worst.id}:\n${worst.working}\nlifts when R_pole < ${lift.value} N; light below ${light.value} N`,
-      }),
-    ];
+  method: ['design-basis-balance'],
+  needs: ['loadCases'],
+  limits: { pole_load: { direction: 'min', unit: 'N', levels: { advisory: 'advice', hard: 'fail' } } },
+  params: [],
+  messages: {
+    lifts: { code: 2001, text: 'The yoke lifts off the horses in the case "{case}": the pole pulls up with {lift:N}.' },
+    presses: { code: 2002, text: 'The yoke presses down in every load case; least pole load {value:N} ({case}).' },
+    light: { code: 2003, text: 'The yoke only just rests on the horses in the case "{case}": least pole load {value:N}, below the {advisory:N} a firmly seated yoke needs.' },
   },
-};
+  run(ctx) {
+    const cases = ctx.models.loadCases;
+    const worst = cases.reduce((w, c) => (c.pole_load_N < w.pole_load_N ? c : w));
+    ctx.report({
+      subject: `case.${worst.id}`,
+      label: worst.title,
+      message: { pass: 'presses', advice: 'light', fail: 'lifts' },
+      params: { case: worst.title, lift: Math.max(0, -worst.pole_load_N) },
+      value: worst.pole_load_N,
+      unit: 'N',
+      against: { limit: 'pole_load' },
+      load_case: worst.id,
+      fix:
+        worst.pole_load_N < (ctx.limit('pole_load').hard ?? 0)
+          ? 'Move the axle back (towards the rear edge), move the crew or the load forward, or lower the yoke point so the loaded centre of mass stands ahead of the axle in every case.'
+          : 'A little more weight ahead of the axle keeps a lightly seated yoke from bouncing; none needed where the rule passes.',
+      working: [
+        'least pole load over all load cases (the pole presses down where R_pole > 0)',
+        ...cases.map((c) => step(`R_pole, ${c.title}`, '', c.pole_load_N, 'N')),
+        `governing case ${worst.id}:`,
+        ...worst.working.split('\n'),
+        step('R_pole,min', num(worst.pole_load_N, 'N'), worst.pole_load_N, 'N'),
+      ],
+    });
+  },
+});

@@ -1,3 +1,4 @@
+import { param } from '../../data/param.ts';
 import { makeFinding } from '../../engine/make-finding.ts';
 import type { Rule } from '../../engine/rule.ts';
 import { caseName, floorWorking, known } from './floor-working.ts';
@@ -7,10 +8,10 @@ export const floorConvergence: Rule = {
   title: 'Floor model convergence',
   checks: 'Whether the cable-net model of the floor reached equilibrium, standing and at a bump, within the tolerance and the number of Newton steps allowed.',
   kind: 'check',
-  limits: ['tolerance_fraction', 'max_iterations'],
+  limits: [],
   run(ctx) {
-    const tol = ctx.limit('tolerance_fraction');
-    const steps = ctx.limit('max_iterations');
+    const tol = param(ctx.data, 'floor.solver', 'tolerance_fraction');
+    const steps = param(ctx.data, 'floor.solver', 'max_iterations');
     return [ctx.analysis.floorStatic, ctx.analysis.floorBump].map((m) =>
       makeFinding(this.id, {
         severity: m.converged ? 'pass' : 'fail',

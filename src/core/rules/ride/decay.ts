@@ -1,3 +1,4 @@
+import { param } from '../../data/param.ts';
 import { makeFinding } from '../../engine/make-finding.ts';
 import type { Rule } from '../../engine/rule.ts';
 import { decaysSlowly } from '../../ride/ride-verdict.ts';
@@ -9,10 +10,10 @@ export const rideDecay: Rule = {
   checks: "After the drop test, the cycles until the crew's motion falls below 10 % of its first amplitude, against three cycles (common practice).",
   kind: 'check',
   worst: 'warning',
-  limits: ['max_cycles', 'fraction'],
+  limits: ['max_cycles'],
   run(ctx) {
     const max = ctx.limit('max_cycles');
-    const fraction = ctx.limit('fraction');
+    const fraction = param(ctx.data, 'ride.inputs', 'decay_fraction');
     const r = ctx.analysis.ride.drop;
     const slow = decaysSlowly(r, max.value);
     const need = slow ? ctx.analysis.floorDampingNeeded : null;

@@ -1,37 +1,38 @@
-import { makeFinding } from '../../engine/make-finding.ts';
-import type { Rule } from '../../engine/rule.ts';
+import { defineRule } from '../../pipeline/define-rule.ts';
+import { num, step } from '../../pipeline/step.ts';
 
-const f3 = (v: number) => v.toFixed(3);
-
-export const innerWheel: Rule = {
+export const innerWheel = defineRule({
   id: 'turn.inner-wheel',
   title: 'The inner wheel rolls forward in the planned turn',
   checks: "The inner wheel's path radius in the tightest planned turn is not below zero; below it the inner wheel runs backwards and scrubs, twisting the axle arm and the nave.",
   kind: 'check',
   worst: 'warning',
-  limits: ['least_inner_radius_m'],
-  run(ctx) {
-    const t = ctx.analysis.turn;
-    if (!t.steady) return [];
-    const lim = ctx.limit('least_inner_radius_m');
-    const ok = t.innerRadius >= lim.value;
-    return [
-      makeFinding(this.id, {
-        severity: ok ? 'pass' : 'warning',
-        subject: `turn on a ${t.yokeRadius} m yoke path`,
-        value: t.innerRadius,
-        unit: 'm',
-        limit: lim.value,
-        message: ok ? 'innerWheelForward' : 'innerWheelBackward',
-        params: { inner: f3(t.innerRadius), outer: f3(t.outerRadius), ratio: t.wheelSpeedRatio.toFixed(3) },
-        fix: ok ? 'None needed.' : 'Plan a wider turn; a turn this tight can only be made at a walk, with the inner wheel dragged round.',
-        source: lim.source,
-        working: [
-          'R_inner = R_a − t/2, R_outer = R_a + t/2, wheel speed ratio = R_inner / R_outer',
-          `R_inner = ${f3(t.axleRadius)} − ${f3(t.track)}/2 = ${f3(t.innerRadius)} m; R_outer = ${f3(t.axleRadius)} + ${f3(t.track)}/2 = ${f3(t.outerRadius)} m`,
-          `ratio = ${f3(t.innerRadius)} / ${f3(t.outerRadius)} = ${t.wheelSpeedRatio.toFixed(3)}`,
-        ].join('\n'),
-      }),
-    ];
+  method: ['design-basis-turning'],
+  needs: ['turn'],
+  limits: { inner_radius_m: { direction: 'min', unit: 'm', levels: { hard: 'warning' } } },
+  params: [],
+  messages: {
+    forward: { code: 2612, text: 'In the planned turn both wheels roll forward: inner path {inner:m}, outer {outer:m}, speed ratio {ratio:1}.' },
+    backward: { code: 2611, text: 'In the planned turn the inner wheel runs backwards (path radius {inner:m}; outer {outer:m}; speed ratio {ratio:1}): it scrubs sideways instead of rolling.' },
   },
-};
+  run(ctx) {
+    const t = ctx.models.turn;
+    if (!t.steady) return; // turn.pole-reach says why
+    ctx.report({
+      subject: 'turn.design',
+      label: `turn on a ${num(t.yokeRadius)} m yoke path`,
+      message: { pass: 'forward', warning: 'backward' },
+      params: { inner: t.innerRadius, outer: t.outerRadius, ratio: t.wheelSpeedRatio },
+      value: t.innerRadius,
+      unit: 'm',
+      against: { limit: 'inner_radius_m' },
+      load_case: 'turn',
+      fix: 'Plan a wider turn; a turn this tight can only be made at a walk, with the inner wheel dragged round.',
+      working: [
+        step('R_inner = R_a − t/2', `${num(t.axleRadius)} − ${num(t.track)}/2`, t.innerRadius, 'm'),
+        step('R_outer = R_a + t/2', `${num(t.axleRadius)} + ${num(t.track)}/2`, t.outerRadius, 'm'),
+        step('wheel speed ratio = R_inner / R_outer', `${num(t.innerRadius)} / ${num(t.outerRadius)}`, t.wheelSpeedRatio, '1'),
+      ],
+    });
+  },
+});

@@ -1,0 +1,31 @@
+import type { RulesData } from '../data/rules-data.ts';
+import type { CheckedSpecification } from '../spec/spec.types.ts';
+import type { LpSolver } from '../stock/cutting-types.ts';
+import type { ModelId, ModelValues } from './model-values.ts';
+
+/** What every model may read besides other models: the checked spec, the data and the run's options. */
+export interface ModelInputs {
+  spec: CheckedSpecification;
+  data: RulesData;
+  /** The LP solver for the stock plan, loaded at the edge; without it the plan is first-fit decreasing. */
+  lp?: LpSolver;
+  /** False for a statics-only run: the ride model is not started and the bump factors are the data's bound. */
+  ride: boolean;
+}
+
+/** A parameter a model reads, as `group.name` of rules/parameters. */
+export type ParamKey = `${string}.${string}`;
+
+export interface ModelDef<K extends ModelId = ModelId, N extends ModelId = ModelId> {
+  id: K;
+  /** The models it reads; the graph computes these first, and only these are visible to it. */
+  needs: readonly N[];
+  /** The parameters it reads from rules/parameters, checked when the data is loaded. */
+  params: readonly ParamKey[];
+  compute(models: { readonly [P in N]: ModelValues[P] }, inputs: ModelInputs): ModelValues[K];
+}
+
+/** A model: metadata plus one function, typed by what it gives and what it needs. */
+export function defineModel<K extends ModelId, N extends ModelId = never>(def: ModelDef<K, N>): ModelDef<K, N> {
+  return def;
+}

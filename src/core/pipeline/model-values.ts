@@ -1,0 +1,49 @@
+import type { CuttingResult } from '../cutlist/cutting-result.ts';
+import type { FloorModel } from '../model/cable-net/floor-model.ts';
+import type { JointDemand, Joint } from '../model/lashing-demand.ts';
+import type { LoadCaseResult } from '../model/load-case-result.ts';
+import type { MassModel } from '../model/mass-model.ts';
+import type { MemberCase } from '../model/member-cases.ts';
+import type { TurnModel } from '../model/turn.ts';
+import type { DampingNeeded } from '../ride/damping-tuner.ts';
+import type { DynamicFactor } from '../ride/dynamic-factors.ts';
+import type { RideInput } from '../ride/ride-build.ts';
+import type { RideCase, RideResult } from '../ride/ride-types.ts';
+
+/** The bump case's factors: the crew's for the floor and lashings, the wheels' for the members. */
+export interface BumpFactors {
+  crew: DynamicFactor;
+  wheel: DynamicFactor;
+  /** The ride model's largest yoke force above the standing one, N; null without a ride. */
+  yokeIncrease_N: number | null;
+}
+
+/** Every model of a check by id, with what it gives. Models and rules name the ones they read. */
+export interface ModelValues {
+  mass: MassModel;
+  loadCases: LoadCaseResult[];
+  /** The static case with the crew as placed. */
+  staticCase: LoadCaseResult;
+  /** The design turn at the design speed, crew as placed. */
+  turn: TurnModel;
+  /** The strap floor under the crew's weight alone (factor 1). */
+  floorStatic: FloorModel;
+  /** What the ride model reads from the other models. */
+  rideInput: RideInput;
+  /** The ride model's three cases; null where it is not run (no crew, or a statics-only run). */
+  ride: Record<RideCase, RideResult> | null;
+  /** The least floor damping ratio that meets the ride rules (the tuner); null where the ride model is not run. */
+  floorDampingNeeded: DampingNeeded | null;
+  /** The bump case's dynamic factors, from the ride model or the placeholder. */
+  bumpFactors: BumpFactors;
+  /** The strap floor under the crew's weight times the bump factor. */
+  floorBump: FloorModel;
+  /** The load cases the timber members are checked in, with their load-duration classes. */
+  memberCases: MemberCase[];
+  /** Cut list, leather list, wheel setting-out and stock plan. */
+  cutting: CuttingResult;
+  /** The force each lashed joint must pass, case by case. */
+  lashingDemands: Record<Joint, JointDemand>;
+}
+
+export type ModelId = keyof ModelValues;

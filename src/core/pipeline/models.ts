@@ -1,0 +1,118 @@
+import { cuttingResult } from '../cutlist/cutting-model.ts';
+import { floorModel } from '../model/cable-net/floor-model.ts';
+import { lashingDemands } from '../model/lashing-demand.ts';
+import { loadCases } from '../model/load-cases.ts';
+import { loadFactor } from '../model/load-factors.ts';
+import { massModel } from '../model/mass-model.ts';
+import { memberCases } from '../model/member-cases.ts';
+import { turnModel } from '../model/turn.ts';
+import { floorDampingNeeded } from '../ride/damping-tuner.ts';
+import { crewFloorFactor, wheelFactor, yokeIncrease } from '../ride/dynamic-factors.ts';
+import { rideCases } from '../ride/ride-model.ts';
+import { defineModel, type ModelDef } from './define-model.ts';
+
+// Every model of a check, with what it reads. The pipeline computes only the
+// models the requested rules and outputs need, each once.
+
+const TIMBER = ['timber-strength.fifth_percentile_z', 'timber-strength.gamma_M'] as const;
+
+export const massDef = defineModel({
+  id: 'mass',
+  needs: [],
+  params: [],
+  compute: (_, { spec, data }) => massModel(spec, data),
+});
+
+export const loadCasesDef = defineModel({
+  id: 'loadCases',
+  needs: [],
+  params: [],
+  compute: (_, { spec, data }) => loadCases(spec, data),
+});
+
+export const staticCaseDef = defineModel({
+  id: 'staticCase',
+  needs: ['loadCases'],
+  params: [],
+  compute: ({ loadCases }) => {
+    const c = loadCases.find((x) => x.id === 'static');
+    if (!c) throw new Error('the load cases hold no static case');
+    return c;
+  },
+});
+
+export const turnDef = defineModel({
+  id: 'turn',
+  needs: ['mass', 'staticCase'],
+  params: [],
+  compute: ({ mass, staticCase }, { spec, data }) => turnModel(spec, data, mass, staticCase.axle_load_N),
+});
+
+export const floorStaticDef = defineModel({
+  id: 'floorStatic',
+  needs: [],
+  params: ['floor.solver.tolerance_fraction', 'floor.solver.max_iterations', 'floor.solver.max_nodes'],
+  compute: (_, { spec, data }) => floorModel(spec, data, { value: 1, source: 'the crew standing, no dynamic factor' }),
+});
+
+export const rideInputDef = defineModel({
+  id: 'rideInput',
+  needs: ['mass', 'staticCase', 'floorStatic'],
+  params: [],
+  compute: ({ mass, staticCase, floorStatic }, { spec, data }) => ({ spec, data, mass, staticCase, floorStatic }),
+});
+
+export const rideDef = defineModel({
+  id: 'ride',
+  needs: ['rideInput'],
+  params: ['ride.inputs.duration_s', 'ride.inputs.sample_interval_s', 'ride.inputs.decay_fraction', 'ride.wheel-contact.damping_ratio', 'ride.supports.yoke_pad_stiffness', 'ride.supports.yoke_damping_ratio', 'ride.supports.shear_modulus_ratio', 'ride.supports.legs_stiffness', 'ride.supports.floor_damping_ratio'],
+  compute: ({ rideInput }, { spec, ride }) => (ride && spec.crew.length > 0 ? rideCases(rideInput) : null),
+});
+
+export const floorDampingNeededDef = defineModel({
+  id: 'floorDampingNeeded',
+  needs: ['rideInput'],
+  params: [],
+  compute: ({ rideInput }, { spec, ride }) => (ride && spec.crew.length > 0 ? floorDampingNeeded(rideInput) : null),
+});
+
+export const bumpFactorsDef = defineModel({
+  id: 'bumpFactors',
+  needs: ['ride'],
+  params: ['load-cases.bump_dynamic_factor'],
+  compute: ({ ride }, { data }) => {
+    const placeholder = loadFactor(data, 'bump_dynamic_factor');
+    return { crew: crewFloorFactor(ride, placeholder), wheel: wheelFactor(ride, placeholder), yokeIncrease_N: yokeIncrease(ride)?.value ?? null };
+  },
+});
+
+export const floorBumpDef = defineModel({
+  id: 'floorBump',
+  needs: ['bumpFactors'],
+  params: ['floor.solver.tolerance_fraction', 'floor.solver.max_iterations', 'floor.solver.max_nodes'],
+  compute: ({ bumpFactors }, { spec, data }) => floorModel(spec, data, bumpFactors.crew),
+});
+
+export const memberCasesDef = defineModel({
+  id: 'memberCases',
+  needs: ['mass', 'loadCases', 'turn', 'bumpFactors'],
+  params: ['load-cases.braking_strut_factor', 'load-cases.stopping_shock_factor', ...TIMBER],
+  compute: ({ mass, loadCases, turn, bumpFactors }, { spec, data }) => memberCases(spec, data, mass, loadCases, turn, { factor: bumpFactors.wheel, yokeIncrease_N: bumpFactors.yokeIncrease_N }),
+});
+
+export const cuttingDef = defineModel({
+  id: 'cutting',
+  needs: ['mass'],
+  params: [],
+  compute: ({ mass }, { spec, data, lp }) => cuttingResult(spec, data, mass.layout, lp),
+});
+
+export const lashingDemandsDef = defineModel({
+  id: 'lashingDemands',
+  needs: ['mass', 'loadCases', 'turn', 'floorBump', 'bumpFactors'],
+  params: ['load-cases.stopping_shock_factor'],
+  compute: ({ mass, loadCases, turn, floorBump, bumpFactors }, { spec, data }) => lashingDemands({ spec, data, mass, cases: loadCases, turn, floorBump, bump: bumpFactors.crew }),
+});
+
+/** Every model, in no particular order: the graph finds the order from their needs. */
+export const MODELS: readonly ModelDef[] = [massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, floorBumpDef, memberCasesDef, cuttingDef, lashingDemandsDef] as unknown as readonly ModelDef[];

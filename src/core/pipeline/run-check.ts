@@ -1,0 +1,60 @@
+import pkg from '../../../package.json' with { type: 'json' };
+import { CAUTIONS } from '../cautions.ts';
+import { choicesOf } from '../data/choices.ts';
+import type { RulesData } from '../data/rules-data.ts';
+import { Analysis, rideInput } from '../engine/analysis.ts';
+import { figures } from '../figures.ts';
+import { severityRank, verdictOf } from '../findings/severity.ts';
+import { collectLoads } from '../loads/collect-loads.ts';
+import { reportPlots } from '../plots/report-plots.ts';
+import type { CheckResult } from '../result/check-result.ts';
+import { rideSummary } from '../result/ride-summary.ts';
+import { buildScene } from '../result/scene-of.ts';
+import { floorDampingOf } from '../ride/ride-build.ts';
+import { RULES } from '../rules/index.ts';
+import { usedSources } from '../sources.ts';
+import type { SpecEntry } from '../spec/spec-entry.ts';
+import type { CheckedSpecification } from '../spec/spec.types.ts';
+import type { LpSolver } from '../stock/cutting-types.ts';
+import type { Rule } from './define-rule.ts';
+import { runRules } from './run-rules.ts';
+
+export interface RunOptions {
+  /** The rules to run (all by default). */
+  rules?: readonly Rule[];
+  /** The LP solver for the stock plan, loaded at the edge; without it the plan is first-fit decreasing. */
+  lp?: LpSolver;
+  /** False for a statics-only run: the ride model is not started. */
+  ride?: boolean;
+}
+
+/**
+ * The whole check of a prepared specification: pure, no I/O. Every command
+ * and every front end calls this and hands the result to the renderers.
+ */
+export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data: RulesData, options: RunOptions = {}): CheckResult {
+  const analysis = new Analysis(spec, data, options.lp, { ride: options.ride ?? true });
+  const findings = runRules(options.rules ?? RULES, spec, data, analysis);
+  // Worst first, keeping rule order within a severity.
+  const ordered = findings.map((f, i) => ({ f, i })).sort((a, b) => severityRank(b.f.severity) - severityRank(a.f.severity) || a.i - b.i).map((x) => x.f);
+  const damping = analysis.graph.get('floorDampingNeeded');
+  const ride = analysis.graph.get('ride');
+  return {
+    tool: { name: pkg.name, version: pkg.version },
+    spec_name: spec.name,
+    verdict: verdictOf(findings.map((f) => f.severity)),
+    figures: figures(analysis),
+    findings: ordered,
+    mass: { parts: analysis.mass.parts, rolling_mass_kg: analysis.mass.rolling.mass_kg, yoke_mass_kg: analysis.mass.yoke.mass_kg, total_mass_kg: analysis.mass.total.mass_kg },
+    balance: { cases: analysis.loadCases },
+    loads: collectLoads(analysis),
+    cutting: analysis.cutting,
+    scene: buildScene(analysis),
+    plots: reportPlots(analysis),
+    ...(ride && damping ? { ride: rideSummary(ride, damping.ratio, floorDampingOf(rideInput(analysis)), damping.working) } : {}),
+    spec_as_checked: entries,
+    choices: choicesOf(data),
+    sources: usedSources(spec, data, findings),
+    cautions: [...CAUTIONS],
+  };
+}

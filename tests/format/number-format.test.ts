@@ -1,0 +1,65 @@
+import { describe, expect, it } from 'vitest';
+import { formatNumber, formatPercent, formatQuantity, NO_VALUE, UNIT_SPACE } from '../../src/core/format/number-format.ts';
+import { literalText, placeholders, renderTemplate } from '../../src/core/format/template.ts';
+
+// The one formatter: three significant figures, lengths in whole mm from 10 mm,
+// never more than four significant figures (issue: one number formatter).
+const sigFigs = (text: string) => text.replace(/^-/, '').replace('.', '').replace(/^0+/, '').length;
+
+describe('number format', () => {
+  it('writes three significant figures by default', () => {
+    expect(formatNumber(0.012345)).toBe('0.0123');
+    expect(formatNumber(1.2345)).toBe('1.23');
+    expect(formatNumber(12.345)).toBe('12.3');
+    expect(formatNumber(123.45)).toBe('123');
+  });
+
+  it('writes whole numbers from a thousand, with at most four significant figures', () => {
+    expect(formatNumber(1234.5)).toBe('1235');
+    expect(formatNumber(123456)).toBe('123500');
+  });
+
+  it('writes lengths in whole millimetres from 10 mm, one decimal below', () => {
+    expect(formatNumber(2439.04, 'mm')).toBe('2439');
+    expect(formatNumber(50, 'mm')).toBe('50');
+    expect(formatNumber(15.24, 'mm')).toBe('15');
+    expect(formatNumber(3.456, 'mm')).toBe('3.5');
+  });
+
+  it('never writes a negative zero, and writes a dash for what is not a number', () => {
+    expect(formatNumber(-0.0000001, 'mm')).toBe('0');
+    expect(formatNumber(0)).toBe('0');
+    for (const v of [NaN, Infinity, -Infinity, null, undefined]) expect(formatNumber(v)).toBe(NO_VALUE);
+  });
+
+  it('never prints more than four significant figures', () => {
+    for (let e = -5; e <= 7; e++) {
+      for (const m of [1.23456789, 9.87654321, 5.5555555]) {
+        for (const unit of ['', 'mm', 'N', 'MPa']) {
+          const text = formatNumber(m * 10 ** e, unit);
+          const digits = text.replace(/0+$/, '');
+          expect(sigFigs(digits), `${m}e${e} ${unit}: ${text}`).toBeLessThanOrEqual(4);
+        }
+      }
+    }
+  });
+
+  it('joins a number and its unit with a no-break space; a ratio has no unit', () => {
+    expect(formatQuantity(1234.5, 'N')).toBe(`1235${UNIT_SPACE}N`);
+    expect(formatQuantity(0.5, '1')).toBe('0.5');
+    expect(formatPercent(0.1234)).toBe(`12.3${UNIT_SPACE}%`);
+  });
+});
+
+describe('message templates', () => {
+  it('fills placeholders from raw params, each with its format', () => {
+    const t = 'Each horse carries {value:N} ({share:%}) in "{case}", ratio {r:1}.';
+    expect(placeholders(t).map((p) => p.name)).toEqual(['value', 'share', 'case', 'r']);
+    expect(renderTemplate(t, { value: 171.6, share: 0.0876, case: 'braking', r: 0.51234 })).toBe(`Each horse carries 172${UNIT_SPACE}N (8.76${UNIT_SPACE}%) in "braking", ratio 0.512.`);
+    expect(literalText(t)).not.toMatch(/\d/);
+  });
+
+  it('refuses a template whose param is missing', () => {
+    expect(() => renderTemplate('{a:N} and {b}', { a: 1 })).toThrow(/needs the param "b"/);
+  });
+});
