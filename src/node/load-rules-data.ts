@@ -9,6 +9,9 @@ import type { RulesData } from '../core/data/rules-data.ts';
 import { RulesDataError, type RulesDataProblem } from '../core/data/rules-data-error.ts';
 import { schemaProblems } from '../core/data/validate-rules-data.ts';
 import { citedSources, normaliseSources } from '../core/data/normalise-sources.ts';
+import { declaredDataProblems } from '../core/pipeline/declared-data.ts';
+import { MODELS } from '../core/pipeline/models.ts';
+import { RULES } from '../core/rules/index.ts';
 
 /** The repository's own rules/ directory. */
 export function defaultRulesDir(): string {
@@ -71,6 +74,13 @@ export function loadRulesData(dir: string): RulesData {
   }
   if (problems.length > 0) throw new RulesDataError(inFileOrder(problems));
   for (const top of ['species', 'leathers', 'grounds', 'limits', 'params'] as const) normaliseSources(data[top], data.sources as RulesData['sources']);
+  // What the models and rules declare they read must be there.
+  for (const p of declaredDataProblems(data as RulesData, MODELS, RULES)) {
+    const [origin] = originOf([p.table, p.group]);
+    if (origin) problems.push(at(origin, [p.group], `${p.name}: ${p.message}`));
+    else problems.push({ file: join(dir, p.table === 'params' ? 'parameters' : 'limits'), line: null, keyPath: `${p.group}.${p.name}`, message: p.message });
+  }
+  if (problems.length > 0) throw new RulesDataError(problems);
   return data as RulesData;
 }
 

@@ -15,6 +15,16 @@ import { defineModel, type ModelDef } from './define-model.ts';
 // models the requested rules and outputs need, each once.
 
 const TIMBER = ['timber-strength.fifth_percentile_z', 'timber-strength.gamma_M'] as const;
+/** The 5th-percentile stiffness of a timber part (the pole's bending spring in the ride model). */
+const TIMBER_STIFFNESS = ['timber-strength.fifth_percentile_z', 'timber-strength.cov_moe', 'timber-strength.min_moisture_credit_pct'] as const;
+/** Everything a run of the ride model reads (the ground's own stiffness and damping follow the specification's ground). */
+const RIDE = [
+  'ride.inputs.duration_s', 'ride.inputs.sample_interval_s', 'ride.inputs.decay_fraction',
+  'ride.wheel-contact.stiffness_bare', 'ride.wheel-contact.stiffness_tyred', 'ride.wheel-contact.damping_ratio',
+  'ride.supports.yoke_pad_stiffness', 'ride.supports.yoke_damping_ratio', 'ride.supports.shear_modulus_ratio', 'ride.supports.legs_stiffness', 'ride.supports.floor_damping_ratio',
+  ...TIMBER_STIFFNESS,
+] as const;
+const CUTTING = ['bend_end_allowance_mm', 'bend_good_fraction', 'nave_tenon_fraction', 'felloe_tenon_fraction', 'linchpin_diameter_fraction', 'linchpin_length_factor', 'hide_waste_factor'].map((n) => `cutlist.${n}` as const);
 
 export const massDef = defineModel({
   id: 'mass',
@@ -65,14 +75,14 @@ export const rideInputDef = defineModel({
 export const rideDef = defineModel({
   id: 'ride',
   needs: ['rideInput'],
-  params: ['ride.inputs.duration_s', 'ride.inputs.sample_interval_s', 'ride.inputs.decay_fraction', 'ride.wheel-contact.damping_ratio', 'ride.supports.yoke_pad_stiffness', 'ride.supports.yoke_damping_ratio', 'ride.supports.shear_modulus_ratio', 'ride.supports.legs_stiffness', 'ride.supports.floor_damping_ratio'],
+  params: RIDE,
   compute: ({ rideInput }, { spec, ride }) => (ride && spec.crew.length > 0 ? rideCases(rideInput) : null),
 });
 
 export const floorDampingNeededDef = defineModel({
   id: 'floorDampingNeeded',
   needs: ['rideInput'],
-  params: [],
+  params: RIDE,
   compute: ({ rideInput }, { spec, ride }) => (ride && spec.crew.length > 0 ? floorDampingNeeded(rideInput) : null),
 });
 
@@ -96,14 +106,14 @@ export const floorBumpDef = defineModel({
 export const memberCasesDef = defineModel({
   id: 'memberCases',
   needs: ['mass', 'loadCases', 'turn', 'bumpFactors'],
-  params: ['load-cases.braking_strut_factor', 'load-cases.stopping_shock_factor', ...TIMBER],
+  params: ['load-cases.bump_dynamic_factor', 'load-cases.braking_strut_factor', 'load-cases.stopping_shock_factor', ...TIMBER],
   compute: ({ mass, loadCases, turn, bumpFactors }, { spec, data }) => memberCases(spec, data, mass, loadCases, turn, { factor: bumpFactors.wheel, yokeIncrease_N: bumpFactors.yokeIncrease_N }),
 });
 
 export const cuttingDef = defineModel({
   id: 'cutting',
   needs: ['mass'],
-  params: [],
+  params: CUTTING,
   compute: ({ mass }, { spec, data, lp }) => cuttingResult(spec, data, mass.layout, lp),
 });
 

@@ -7,7 +7,7 @@ import { ROAD_CASES } from './ride-verdict.ts';
 // decay cycles NaN where the motion does not fall below 10 % in the run;
 // floor damping needed NaN where no ratio up to 1 meets the ride rules.
 export function rideFigures(a: Analysis): Record<string, Figure> {
-  if (a.spec.crew.length === 0) return {};
+  if (!a.hasRide) return {};
   const road = ROAD_CASES.map((c) => a.ride[c]);
   const crew = road.flatMap((r) => r.crew);
   const need = a.floorDampingNeeded;
