@@ -9,54 +9,93 @@ const THICK = { floor_straps: { width_mm: 30, thickness_mm: 10, pitch_mm: 32, pr
 const THIN = { box: { floor: { frame: { width_mm: 42, thickness_mm: 38, bend_radius_mm: 180 } } }, floor_straps: { width_mm: 24, thickness_mm: 4, pitch_mm: 34, weave: 'two-way', pretension_N: 160 } };
 const raw = (patch: unknown = {}) => deepMerge(readDemo('demo-two-crew'), patch);
 const bySubject = (found: Finding[], s: string) => found.find((f) => f.subject === s)!;
+const floors = (r: unknown) => new Analysis(prepared(r), rulesData);
 
 describe(RULE, () => {
   it('passes a stiff floor: small sag under each person, clear of the pole and the axle', async () => {
     const found = await findingsOf(RULE, raw(THICK));
-    expect(found.map((f) => f.subject)).toEqual(['driver, standing', 'companion, standing', 'floor over the pole', 'floor over the axle']);
+    expect(found.map((f) => f.subject)).toEqual(['crew.0', 'crew.1', 'part.pole', 'part.axle']);
+    expect(found.map((f) => f.subject_label)).toEqual(['driver, standing', 'companion, standing', 'floor over the pole', 'floor over the axle']);
     expect(found.every((f) => f.severity === 'pass')).toBe(true);
-    const sag = new Analysis(prepared(raw(THICK)), rulesData).floorStatic.crew[0].sag_mm;
-    expect(found[0].value).toBe(sag);
+    const a = floors(raw(THICK));
+    expect(found[0].value).toBe(a.floorStatic.crew[0].sag_mm);
+    expect(found[0].load_case).toBe('static');
+    // Standing clear of both parts: the bump case, the deeper sag, is the one shown; its clearance left is clearance − sag.
+    const pole = a.floorBump.clearances[0];
+    expect(found[2]).toMatchObject({ load_case: 'bump', message_key: 'clears', value: pole.clearance_mm - pole.sag_mm, limit: 0 });
+    expect(found[2].params).toMatchObject({ part: 'pole', sag: pole.sag_mm, clearance: pole.clearance_mm, case: 'bump' });
   });
 
   it('fails a floor that rests on the pole with the crew standing', async () => {
     // Thin side-to-side straps only: each sags deepest between the two crew, over the pole.
     const found = await findingsOf(RULE, raw(deepMerge(THIN, { floor_straps: { weave: 'side-to-side' } })));
-    const pole = bySubject(found, 'floor over the pole');
+    const pole = bySubject(found, 'part.pole');
     expect(pole.severity).toBe('fail');
+    expect(pole.load_case).toBe('static');
     // With the default floor height the pole's top is one frame thickness below the floor top (layout).
-    expect(pole.limit).toBeCloseTo(38, 9);
-    expect(pole.value!).toBeGreaterThan(38);
-    expect(pole.message).toContain('"crew standing"');
+    expect(pole.params.clearance as number).toBeCloseTo(38, 9);
+    expect(pole.params.sag as number).toBeGreaterThan(38);
+    expect(pole.value!).toBeCloseTo(38 - (pole.params.sag as number), 9);
+    expect(pole.limit).toBe(0);
+    expect(pole.message_key).toBe('strikes');
+    expect(pole.message).toContain('in the crew standing case and reaches it');
+    expect(pole.sources).toContain('design-basis-floor');
   });
 
   it('warns when the floor reaches the pole only at a bump', async () => {
     // The thin floor on a 25 mm frame: the standing sag over the pole (about 20 mm) clears it, the bump sag (about 28 mm) does not.
     const found = await findingsOf(RULE, raw(deepMerge(THIN, { box: { floor: { frame: { thickness_mm: 25 } } } })));
-    const pole = bySubject(found, 'floor over the pole');
+    const pole = bySubject(found, 'part.pole');
     expect(pole.severity).toBe('warning');
-    expect(pole.limit).toBeCloseTo(25, 9);
-    expect(pole.message).toMatch(/bump, [\d.]+ × crew weight/);
+    expect(pole.load_case).toBe('bump');
+    expect(pole.params.clearance as number).toBeCloseTo(25, 9);
+    expect(pole.value!).toBeLessThan(0);
+    expect(pole.message).toContain('in the bump case and reaches it');
+    expect(pole.working_text).toMatch(/bump, [\d.]+ × crew weight/);
   });
 
   it('warns above the advisory sag under a person', async () => {
-    const found = await findingsOf(RULE, raw(), { advisory_sag_mm: 10 });
-    expect(bySubject(found, 'driver, standing').severity).toBe('warning');
+    const found = await findingsOf(RULE, raw(), { 'sag_mm.advisory': 10 });
+    const driver = bySubject(found, 'crew.0');
+    expect(driver.severity).toBe('warning');
+    expect(driver.message_key).toBe('over');
+    expect(driver.params.advisory).toBe(10);
   });
 
   it('boundary: a sag equal to the advisory limit is within it', async () => {
     const r = raw();
-    const sag = bySubject(await findingsOf(RULE, r), 'driver, standing').value!;
-    const at = bySubject(await findingsOf(RULE, r, { advisory_sag_mm: sag }), 'driver, standing');
+    const sag = bySubject(await findingsOf(RULE, r), 'crew.0').value!;
+    const at = bySubject(await findingsOf(RULE, r, { 'sag_mm.advisory': sag }), 'crew.0');
     expect(at.limit).toBe(sag);
     expect(at.severity).toBe('pass');
-    const over = bySubject(await findingsOf(RULE, r, { advisory_sag_mm: sag * (1 - 1e-12) }), 'driver, standing');
+    const over = bySubject(await findingsOf(RULE, r, { 'sag_mm.advisory': sag * (1 - 1e-12) }), 'crew.0');
+    expect(over.severity).toBe('warning');
+  });
+
+  it('boundary: a standing clearance left equal to its limit passes, a hair less fails', async () => {
+    const r = raw(THICK);
+    const p = floors(r).floorStatic.clearances[0];
+    const left = p.clearance_mm - p.sag_mm;
+    const at = bySubject(await findingsOf(RULE, r, { 'clearance_mm.hard': left }), 'part.pole');
+    expect(at.severity).toBe('pass');
+    const over = bySubject(await findingsOf(RULE, r, { 'clearance_mm.hard': left + 1e-9 }), 'part.pole');
+    expect(over).toMatchObject({ severity: 'fail', load_case: 'static', value: left });
+  });
+
+  it('boundary: a clearance left at a bump equal to its limit passes, a hair less warns', async () => {
+    const r = raw(THICK);
+    const p = floors(r).floorBump.clearances[1];
+    const left = p.clearance_mm - p.sag_mm;
+    const at = bySubject(await findingsOf(RULE, r, { 'bump_clearance_mm.hard': left }), 'part.axle');
+    expect(at).toMatchObject({ severity: 'pass', load_case: 'bump', value: left, limit: left });
+    const over = bySubject(await findingsOf(RULE, r, { 'bump_clearance_mm.hard': left + 1e-9 }), 'part.axle');
     expect(over.severity).toBe('warning');
   });
 
   it('fails, saying why, when the floor could not be solved', async () => {
     const found = await findingsOf(RULE, raw({ floor_straps: { width_mm: 4, thickness_mm: 1, pitch_mm: 5 } }));
     expect(found.length).toBeGreaterThan(0);
-    expect(found.every((f) => f.severity === 'fail' && f.code === 2203)).toBe(true);
+    expect(found.every((f) => f.severity === 'fail' && f.code === 2215 && f.message_key === 'notSolved' && f.subject === 'floor.net')).toBe(true);
+    expect(found[0].message).toContain('max_nodes');
   });
 });

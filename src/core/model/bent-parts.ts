@@ -1,11 +1,13 @@
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 
 // The steam-bent parts of a build and the numbers the bend check needs
-// (mechanics note, section 6). The thickness is the part's dimension in the
+// (design basis, section 6). The thickness is the part's dimension in the
 // plane of the bend; the radius compared is the inner (concave) face's, the
 // radius of the bending form, whatever line the specification measures on.
 
 export interface BentPart {
+  /** A stable id of the part: `pole`, `felloe`, `frame`. */
+  id: 'pole' | 'felloe' | 'frame';
   part: string;
   /** Key of the radius in the specification. */
   key: string;
@@ -23,15 +25,15 @@ export function bentParts(spec: CheckedSpecification): BentPart[] {
   const out: BentPart[] = [];
   const { pole } = spec;
   if (pole.bend_radius_mm !== undefined) {
-    out.push({ part: 'pole', key: 'pole.bend_radius_mm', species: pole.species, givenRadius: pole.bend_radius_mm, measuredOn: 'centre line', thickness: pole.height_mm, thicknessName: 'height', innerRadius: pole.bend_radius_mm - pole.height_mm / 2, strap: pole.bend_strap });
+    out.push({ id: 'pole', part: 'pole', key: 'pole.bend_radius_mm', species: pole.species, givenRadius: pole.bend_radius_mm, measuredOn: 'centre line', thickness: pole.height_mm, thicknessName: 'height', innerRadius: pole.bend_radius_mm - pole.height_mm / 2, strap: pole.bend_strap });
   }
   const felloe = spec.wheels.felloe;
   if (felloe.bend_radius_mm !== undefined) {
-    out.push({ part: 'felloe', key: 'wheels.felloe.bend_radius_mm', species: felloe.species, givenRadius: felloe.bend_radius_mm, measuredOn: 'inner face', thickness: felloe.depth_mm, thicknessName: 'depth', innerRadius: felloe.bend_radius_mm, strap: felloe.bend_strap });
+    out.push({ id: 'felloe', part: 'felloe', key: 'wheels.felloe.bend_radius_mm', species: felloe.species, givenRadius: felloe.bend_radius_mm, measuredOn: 'inner face', thickness: felloe.depth_mm, thicknessName: 'depth', innerRadius: felloe.bend_radius_mm, strap: felloe.bend_strap });
   }
   const frame = spec.box.floor.frame;
   if (frame.bend_radius_mm !== undefined) {
-    out.push({ part: 'floor frame front rail', key: 'box.floor.frame.bend_radius_mm', species: frame.species, givenRadius: frame.bend_radius_mm, measuredOn: 'centre line', thickness: frame.width_mm, thicknessName: 'width in plan', innerRadius: frame.bend_radius_mm - frame.width_mm / 2, strap: frame.bend_strap });
+    out.push({ id: 'frame', part: 'floor frame front rail', key: 'box.floor.frame.bend_radius_mm', species: frame.species, givenRadius: frame.bend_radius_mm, measuredOn: 'centre line', thickness: frame.width_mm, thicknessName: 'width in plan', innerRadius: frame.bend_radius_mm - frame.width_mm / 2, strap: frame.bend_strap });
   }
   return out;
 }

@@ -1,34 +1,56 @@
 import { param } from '../../data/param.ts';
-import { makeFinding } from '../../engine/make-finding.ts';
-import type { Rule } from '../../engine/rule.ts';
-import { caseName, floorWorking, known } from './floor-working.ts';
+import { defineRule, type LimitSpec } from '../../pipeline/define-rule.ts';
+import { grade } from '../../pipeline/grade.ts';
+import { num, step } from '../../pipeline/step.ts';
+import { floorCases, floorWorking, mN, netSources } from './floor-working.ts';
 
-export const floorConvergence: Rule = {
+const RESIDUAL: LimitSpec = { direction: 'max', unit: "of the solver's tolerance" };
+
+export const floorConvergence = defineRule({
   id: 'floor.convergence',
   title: 'Floor model convergence',
   checks: 'Whether the cable-net model of the floor reached equilibrium, standing and at a bump, within the tolerance and the number of Newton steps allowed.',
   kind: 'check',
-  limits: [],
-  run(ctx) {
-    const tol = param(ctx.data, 'floor.solver', 'tolerance_fraction');
-    const steps = param(ctx.data, 'floor.solver', 'max_iterations');
-    return [ctx.analysis.floorStatic, ctx.analysis.floorBump].map((m) =>
-      makeFinding(this.id, {
-        severity: m.converged ? 'pass' : 'fail',
-        subject: caseName(m),
-        value: known(m.residual_N),
-        unit: 'N',
-        limit: m.tolerance_N,
-        message: m.converged ? 'floorConverged' : 'floorNotConverged',
-        params: { case: caseName(m), iterations: m.iterations, value: Number.isFinite(m.residual_N) ? m.residual_N.toExponential(2) : 'unknown', limit: m.tolerance_N.toExponential(2), reason: m.stopped ?? '' },
-        fix: m.converged ? 'None needed.' : 'Check the strap sizes, material and pretension for a slip of the pen (a strap far too thin or soft for the crew); if they are right, allow more Newton steps in rules/limits/floor.yaml and report the case.',
-        source: `tolerance: ${tol.source}; steps: ${steps.source}`,
-        working: [
-          ...floorWorking(ctx.spec, ctx.data, m),
-          `tolerance = ${tol.value} × applied load = ${tol.value} × ${m.appliedLoad_N.toFixed(2)} = ${m.tolerance_N.toExponential(3)} N; at most ${steps.value} steps`,
-          m.history.length ? `largest out-of-balance force before the first step and after each: ${m.history.map((r) => r.toExponential(2)).join(', ')} N` : 'no steps taken',
-        ].join('\n'),
-      }),
-    );
+  method: ['design-basis-floor'],
+  needs: ['floorStatic', 'floorBump', 'bumpFactors'],
+  limits: { residual: RESIDUAL },
+  params: [],
+  messages: {
+    converged: { code: 2221, text: 'The floor model settled in the {case} case in {iterations} Newton steps: largest out-of-balance force {residual:mN}, tolerance {tolerance:mN}.' },
+    notConverged: { code: 2222, text: 'The floor model did not settle in the {case} case: after {iterations} Newton steps the largest out-of-balance force is {residual:mN} against the tolerance {tolerance:mN} ({reason}).' },
+    declined: { code: 2223, text: 'The floor model was not solved in the {case} case: {reason}.' },
   },
-};
+  run(ctx) {
+    const { spec, data } = ctx;
+    // The solver's own settings (model parameters): the limit compares the residual with the tolerance they give.
+    const tol = param(data, 'floor.solver', 'tolerance_fraction');
+    const steps = param(data, 'floor.solver', 'max_iterations');
+    const nodes = param(data, 'floor.solver', 'max_nodes');
+    for (const c of floorCases(ctx.models, data)) {
+      const m = c.model;
+      const fix = 'Check the strap sizes, material and pretension for a slip of the pen (a strap far too thin or soft for the crew); if they are right, allow more Newton steps (max_iterations in rules/parameters/floor.yaml) and report the case.';
+      const common = { subject: 'floor.net', label: `floor net, ${c.label}`, load_case: c.load_case, sources: [...tol.sources, ...steps.sources, ...netSources(spec, data), ...c.sources] };
+      const working = [
+        ...floorWorking(spec, data, m),
+        step('tolerance = tolerance_fraction × applied load', `${num(tol.value)} × ${num(m.appliedLoad_N)} N`, mN(m.tolerance_N), 'mN'),
+        `at most ${num(steps.value, 'count')} Newton steps (max_iterations) and ${num(nodes.value, 'count')} nodes (max_nodes)`,
+        m.history.length ? `largest out-of-balance force before the first step and after each: ${m.history.map((r) => num(mN(r))).join(', ')} mN` : 'no steps taken',
+      ];
+      if (!Number.isFinite(m.residual_N)) {
+        // Declined before a step (too many nodes): there is no residual to compare.
+        ctx.report({ ...common, message: 'declined', params: { case: c.name, reason: m.stopped ?? 'not solved' }, value: null, unit: 'N', severity: 'fail', fix, working });
+        continue;
+      }
+      ctx.report({
+        ...common,
+        message: { pass: 'converged', fail: 'notConverged' },
+        params: { case: c.name, iterations: m.iterations, residual: mN(m.residual_N), tolerance: mN(m.tolerance_N), reason: m.stopped ?? 'the residual is above the limit this rule sets' },
+        value: m.residual_N,
+        unit: 'N',
+        against: { limit: 'residual', times: m.tolerance_N },
+        fix: grade(m.residual_N, ctx.limit('residual'), RESIDUAL, m.tolerance_N).severity === 'pass' ? 'None needed.' : fix,
+        working,
+      });
+    }
+  },
+});

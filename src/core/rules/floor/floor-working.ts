@@ -1,46 +1,95 @@
+import { param } from '../../data/param.ts';
 import type { RulesData } from '../../data/rules-data.ts';
-import { makeFinding } from '../../engine/make-finding.ts';
-import type { Finding, Severity } from '../../findings/finding.ts';
+import type { WorkingStep } from '../../findings/finding.ts';
+import type { Severity } from '../../findings/severity.ts';
+import { formatNumber } from '../../format/number-format.ts';
 import type { FloorModel } from '../../model/cable-net/floor-model.ts';
+import type { MessageSpec, Report } from '../../pipeline/define-rule.ts';
+import type { BumpFactors } from '../../pipeline/model-values.ts';
+import { num, step } from '../../pipeline/step.ts';
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
 import { G } from '../../units/units.ts';
 
-// The lines every floor finding opens its working with: the net, the loads
-// and how the solve ended.
+// What the floor rules share: the two cases the floor is solved in, the
+// steps every floor finding opens its working with (the net, the loads and
+// how the solve ended), and the finding for a floor that was not solved.
+
+/** One case the floor is solved in, as the findings name it. */
+export interface FloorCase {
+  model: FloorModel;
+  load_case: 'static' | 'bump';
+  /** In words, for a message: `crew standing`, `bump`. */
+  name: string;
+  /** For a finding's label, with the factor on the crew's weight. */
+  label: string;
+  /** The sources of that factor. */
+  sources: string[];
+}
+
+export function standingCase(model: FloorModel): FloorCase {
+  return { model, load_case: 'static', name: 'crew standing', label: 'crew standing', sources: [] };
+}
+
+/** The bump case: its factor comes from the ride model or, without one, the placeholder of rules/parameters. */
+export function bumpCase(model: FloorModel, bump: BumpFactors, data: RulesData): FloorCase {
+  const sources = bump.crew.from === null ? param(data, 'load-cases', 'bump_dynamic_factor').sources : ['design-basis-ride'];
+  return { model, load_case: 'bump', name: 'bump', label: `bump, ${formatNumber(model.factor)} × crew weight`, sources };
+}
+
+export function floorCases(models: { floorStatic: FloorModel; floorBump: FloorModel; bumpFactors: BumpFactors }, data: RulesData): [FloorCase, FloorCase] {
+  return [standingCase(models.floorStatic), bumpCase(models.floorBump, models.bumpFactors, data)];
+}
 
 /** A number the solver may not have reached (NaN) as a finding's value. */
 export const known = (v: number): number | null => (Number.isFinite(v) ? v : null);
 
-export const caseName = (m: FloorModel): string => (m.factor === 1 ? 'crew standing' : `bump, ${Number(m.factor.toFixed(2))} × crew weight`);
+/** The sources of the net itself: the strap material's stiffness. */
+export const netSources = (spec: CheckedSpecification, data: RulesData): string[] => data.leathers[spec.floor_straps.material].modulus_MPa.sources;
 
-export function floorWorking(spec: CheckedSpecification, data: RulesData, m: FloorModel): string[] {
+// Residuals are far below a newton once solved; millinewtons keep them readable.
+export const mN = (force_N: number): number => force_N * 1e3;
+
+export function floorWorking(spec: CheckedSpecification, data: RulesData, m: FloorModel): (WorkingStep | string)[] {
   const s = spec.floor_straps;
   const E = data.leathers[s.material].modulus_MPa.value;
   const { length_mm, width_mm } = spec.box.floor.foot_patch;
   return [
-    `EA = E × b × t = ${E} MPa × ${s.width_mm} × ${s.thickness_mm} mm = ${m.EA_N.toFixed(0)} N (${s.material}); T_0 = ${m.pretension_N} N; l_0 = p / (1 + T_0/EA) per segment`,
-    `net: ${s.weave} weave at pitch ${s.pitch_mm} mm, ${m.nodes} nodes, ${Number.isFinite(m.segments) ? m.segments : 'no'} tension-only segments, ends fixed to the frame`,
-    `crew load = m × g × factor, factor ${m.factor} (${m.factorSource}): ${spec.crew.map((c) => `${c.role} ${+c.mass_kg.toFixed(2)} kg × ${G} × ${m.factor} = ${(c.mass_kg * G * m.factor).toFixed(1)} N`).join('; ')}`,
-    `each spread over a ${length_mm} × ${width_mm} mm foot patch (front to back × side to side)`,
+    step(`EA = E × b × t (${s.material})`, `${num(E)} MPa × ${num(s.width_mm, 'mm')} mm × ${num(s.thickness_mm, 'mm')} mm`, m.EA_N, 'N'),
+    step('T_0 (pretension)', '', m.pretension_N, 'N'),
+    'each segment of plan length p is cut to l_0 = p / (1 + T_0/EA), so it carries T_0 when flat',
+    `net: ${s.weave} weave at a pitch of ${num(s.pitch_mm, 'mm')} mm, ${num(m.nodes, 'count')} nodes, ${Number.isFinite(m.segments) ? num(m.segments, 'count') : 'no'} tension-only segments, ends fixed to the frame`,
+    `factor on the crew's weight ${num(m.factor)} (${m.factorSource})`,
+    ...spec.crew.map((c) => step(`P = m × g × factor (${c.role})`, `${num(c.mass_kg)} × ${num(G)} × ${num(m.factor)}`, c.mass_kg * G * m.factor, 'N')),
+    `each spread over a ${num(length_mm, 'mm')} × ${num(width_mm, 'mm')} mm foot patch (front to back × side to side)`,
     Number.isFinite(m.residual_N)
-      ? `Newton-Raphson: ${m.iterations} steps, residual ${m.residual_N.toExponential(2)} N ${m.converged ? '≤' : '>'} tolerance ${m.tolerance_N.toExponential(2)} N${m.converged ? '' : ` (${m.stopped})`}`
+      ? `Newton-Raphson: ${num(m.iterations, 'count')} steps, residual ${num(mN(m.residual_N))} mN ${m.converged ? '≤' : '>'} tolerance ${num(mN(m.tolerance_N))} mN${m.converged ? '' : ` (${m.stopped})`}`
       : `not solved: ${m.stopped}`,
-    `equilibrium: frame reactions ${m.reactionSum_N.toFixed(2)} N, applied ${m.appliedLoad_N.toFixed(2)} N`,
+    step('equilibrium: Σ frame reactions', '', m.reactionSum_N, 'N'),
+    step('equilibrium: Σ applied crew load', '', m.appliedLoad_N, 'N'),
   ];
 }
 
+/** The message a floor rule gives where the floor was not solved; each rule gives it its own code. */
+export function notSolvedMessage(code: number): MessageSpec {
+  return { code, text: 'The floor model did not settle in the {case} case ({reason}), so its tensions and sags cannot be trusted; see floor.convergence.' };
+}
+
 /** A floor that was not solved: its values are not to be trusted, and the finding says so and points to floor.convergence. */
-export function notSolvedFinding(rule: string, m: FloorModel, o: { severity: Severity; unit: string; value?: number | null; limit?: number | null; what: string; source: string; working: string }): Finding {
-  return makeFinding(rule, {
-    severity: o.severity,
-    subject: caseName(m),
+export function notSolvedReport(
+  c: FloorCase,
+  o: { subject: string; severity: Severity; unit: string; value?: number | null; what: string; sources: readonly string[]; working: readonly (WorkingStep | string)[] },
+): Report<never, 'notSolved'> {
+  return {
+    subject: o.subject,
+    label: c.label,
+    message: 'notSolved',
+    params: { case: c.name, reason: c.model.stopped ?? 'not converged' },
     value: o.value ?? null,
     unit: o.unit,
-    limit: o.limit ?? null,
-    message: 'floorNotSolved',
-    params: { case: caseName(m), reason: m.stopped ?? 'not converged' },
+    severity: o.severity,
     fix: `See floor.convergence; the floor must be solved before its ${o.what} can be judged.`,
-    source: o.source,
+    sources: [...o.sources, ...c.sources],
     working: o.working,
-  });
+    load_case: c.load_case,
+  };
 }

@@ -1,67 +1,96 @@
-import { makeFinding } from '../../engine/make-finding.ts';
-import type { Rule } from '../../engine/rule.ts';
-import type { Finding } from '../../findings/finding.ts';
-import type { FloorModel } from '../../model/cable-net/floor-model.ts';
-import { caseName, floorWorking, notSolvedFinding } from './floor-working.ts';
+import type { PartClearance } from '../../model/cable-net/clearance.ts';
+import { defineRule, type LimitSpec } from '../../pipeline/define-rule.ts';
+import { grade } from '../../pipeline/grade.ts';
+import { num, step } from '../../pipeline/step.ts';
+import { floorCases, floorWorking, netSources, notSolvedMessage, notSolvedReport, type FloorCase } from './floor-working.ts';
 
-export const floorSag: Rule = {
+// Resting on the pole or the axle with the crew standing fails; reaching it
+// only at a bump is a knock, and warns.
+const SAG: LimitSpec = { direction: 'max', unit: 'mm' };
+const CLEARANCE: LimitSpec = { direction: 'min', unit: 'mm' };
+const BUMP_CLEARANCE: LimitSpec = { direction: 'min', unit: 'mm', levels: { hard: 'warning' } };
+
+export const floorSag = defineRule({
   id: 'floor.sag',
   title: 'Floor sag under the crew and over the parts beneath',
   checks: 'How far the woven floor sags under each crew member standing, and whether it sags onto the pole or the axle beneath it, standing or at a bump.',
   kind: 'check',
-  limits: ['advisory_sag_mm'],
+  method: ['design-basis-floor'],
+  needs: ['floorStatic', 'floorBump', 'bumpFactors'],
+  limits: {
+    sag_mm: SAG,
+    clearance_mm: CLEARANCE,
+    bump_clearance_mm: BUMP_CLEARANCE,
+  },
+  params: [],
+  messages: {
+    over: { code: 2211, text: '{role} sags the floor {value:mm} standing, more than the advisory {advisory:mm}.' },
+    within: { code: 2212, text: '{role} sags the floor {value:mm} standing, within the advisory {advisory:mm}.' },
+    strikes: { code: 2213, text: "The floor sags {sag:mm} over the {part} in the {case} case and reaches it: the {part}'s top is {clearance:mm} below the floor top." },
+    clears: { code: 2214, text: 'The floor sags at most {sag:mm} over the {part} in the {case} case, clear of its top {clearance:mm} below the floor top by {value:mm}.' },
+    notSolved: notSolvedMessage(2215),
+  },
   run(ctx) {
     const { spec, data } = ctx;
-    const adv = ctx.limit('advisory_sag_mm');
-    const stat = ctx.analysis.floorStatic;
-    const bump = ctx.analysis.floorBump;
-    const unsolved = [stat, bump].filter((m) => !m.converged);
+    const cases = floorCases(ctx.models, data);
+    const net = netSources(spec, data);
+    const unsolved = cases.filter((c) => !c.model.converged);
     if (unsolved.length) {
-      return unsolved.map((m) => notSolvedFinding(this.id, m, { severity: 'fail', unit: 'mm', what: 'sag', source: adv.source, working: floorWorking(spec, data, m).join('\n') }));
+      for (const c of unsolved) ctx.report(notSolvedReport(c, { subject: 'floor.net', severity: 'fail', unit: 'mm', what: 'sag', sources: net, working: floorWorking(spec, data, c.model) }));
+      return;
     }
-    const base = floorWorking(spec, data, stat);
-    const crew: Finding[] = stat.crew.map((c) => {
-      const over = c.sag_mm > adv.value;
-      return makeFinding(this.id, {
-        severity: over ? 'warning' : 'pass',
-        subject: `${c.role}, standing`,
+    const [stat, bump] = cases;
+    const base = floorWorking(spec, data, stat.model);
+    stat.model.crew.forEach((c, i) =>
+      ctx.report({
+        subject: `crew.${i}`,
+        label: `${c.role}, standing`,
+        message: { pass: 'within', warning: 'over', fail: 'over' },
+        params: { role: c.role },
         value: c.sag_mm,
         unit: 'mm',
-        limit: adv.value,
-        message: over ? 'floorSagOver' : 'floorSagWithin',
-        params: { role: c.role, value: c.sag_mm.toFixed(1), limit: adv.value },
-        fix: over ? 'Raise the pretension, use thicker or wider straps, a closer pitch or a two-way weave; stand on a sample panel to judge the footing.' : 'None needed.',
-        source: adv.source,
-        working: [...base, `sag at the centre of ${c.role}'s foot patch (interpolated between nodes) = ${c.sag_mm.toFixed(2)} mm; advisory ${adv.value} mm`].join('\n'),
-      });
-    });
-    // The pole and axle: resting on one standing fails; striking one at a bump warns.
-    const parts: Finding[] = stat.clearances.map((sp, i) => {
-      const bp = bump.clearances[i];
-      const touch = (m: FloorModel, sag: number) => `${caseName(m)}: sag over the ${sp.part} ${sag.toFixed(1)} mm`;
-      const severity = sp.sag_mm > sp.clearance_mm ? 'fail' : bp.sag_mm > bp.clearance_mm ? 'warning' : 'pass';
-      const shown = severity === 'fail' ? { m: stat, p: sp } : { m: bump, p: bp };
-      const hits = severity !== 'pass';
-      return makeFinding(this.id, {
-        severity,
-        subject: `floor over the ${sp.part}`,
-        value: shown.p.sag_mm,
+        against: { limit: 'sag_mm' },
+        load_case: stat.load_case,
+        fix:
+          grade(c.sag_mm, ctx.limit('sag_mm'), SAG).severity !== 'pass'
+            ? 'Raise the pretension, use thicker or wider straps, a closer pitch or a two-way weave; stand on a sample panel to judge the footing.'
+            : 'None needed.',
+        sources: net,
+        working: [...base, step(`sag at the centre of ${c.role}'s foot patch (interpolated between nodes)`, '', c.sag_mm, 'mm')],
+      }),
+    );
+    const left = (p: PartClearance) => p.clearance_mm - p.sag_mm;
+    const beyond = (v: number, limit: 'clearance_mm' | 'bump_clearance_mm', spec: LimitSpec) => grade(v, ctx.limit(limit), spec).severity !== 'pass';
+    stat.model.clearances.forEach((sp, i) => {
+      const bp = bump.model.clearances[i];
+      // The standing case governs where it is beyond its limit; otherwise the bump, the deeper sag.
+      const standingHits = beyond(left(sp), 'clearance_mm', CLEARANCE);
+      const [c, p]: [FloorCase, PartClearance] = standingHits ? [stat, sp] : [bump, bp];
+      const at = (q: PartClearance, k: FloorCase) => step(`sag over the ${q.part}, ${k.label} (at x ${num(q.at.x, 'mm')}, y ${num(q.at.y, 'mm')} mm)`, '', q.sag_mm, 'mm');
+      ctx.report({
+        subject: `part.${sp.part}`,
+        label: `floor over the ${sp.part}`,
+        message: { pass: 'clears', warning: 'strikes', fail: 'strikes' },
+        params: { part: sp.part, sag: p.sag_mm, clearance: p.clearance_mm, case: c.name },
+        value: left(p),
         unit: 'mm',
-        limit: sp.clearance_mm,
-        message: hits ? 'floorStrikes' : 'floorClears',
-        params: { part: sp.part, value: shown.p.sag_mm.toFixed(1), limit: sp.clearance_mm.toFixed(0), case: caseName(shown.m) },
-        fix: hits
-          ? `Stiffen the floor (more pretension, thicker or wider straps, a closer pitch, a two-way weave), move the crew off the ${sp.part}, or deepen the frame rails so the ${sp.part} sits lower.`
-          : 'None needed.',
-        source: `geometry of the specification: the straps lie on the frame's top face and the ${sp.part}'s top is ${sp.clearance_mm.toFixed(0)} mm below it (layout)`,
+        against: { limit: standingHits ? 'clearance_mm' : 'bump_clearance_mm' },
+        load_case: c.load_case,
+        fix:
+          standingHits || beyond(left(bp), 'bump_clearance_mm', BUMP_CLEARANCE)
+            ? `Stiffen the floor (more pretension, thicker or wider straps, a closer pitch, a two-way weave), move the crew off the ${sp.part}, or deepen the frame rails so the ${sp.part} sits lower.`
+            : 'None needed.',
+        sources: [...net, ...c.sources],
         working: [
-          ...floorWorking(spec, data, shown.m),
-          `clearance = floor top − ${sp.part} top = ${sp.clearance_mm.toFixed(1)} mm, over x ${sp.x[0].toFixed(0)} to ${sp.x[1].toFixed(0)} mm, y ${sp.y[0].toFixed(0)} to ${sp.y[1].toFixed(0)} mm`,
-          `${touch(stat, sp.sag_mm)} (at x ${sp.at.x.toFixed(0)}, y ${sp.at.y.toFixed(0)} mm); ${touch(bump, bp.sag_mm)} (at x ${bp.at.x.toFixed(0)}, y ${bp.at.y.toFixed(0)} mm)`,
+          ...floorWorking(spec, data, c.model),
+          step(`clearance = floor top − ${sp.part} top (layout: the straps lie on the frame's top face)`, '', sp.clearance_mm, 'mm'),
+          `over x ${num(sp.x[0], 'mm')} to ${num(sp.x[1], 'mm')} mm, y ${num(sp.y[0], 'mm')} to ${num(sp.y[1], 'mm')} mm`,
+          at(sp, stat),
+          at(bp, bump),
+          step(`clearance left = clearance − sag (${c.name})`, `${num(p.clearance_mm)} − ${num(p.sag_mm)}`, left(p), 'mm'),
           'resting on it standing fails; reaching it only at a bump warns',
-        ].join('\n'),
+        ],
       });
     });
-    return [...crew, ...parts];
   },
-};
+});

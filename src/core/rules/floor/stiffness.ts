@@ -1,37 +1,49 @@
-import { makeFinding } from '../../engine/make-finding.ts';
-import type { Rule } from '../../engine/rule.ts';
-import { floorWorking, notSolvedFinding } from './floor-working.ts';
+import { defineRule } from '../../pipeline/define-rule.ts';
+import { num, step } from '../../pipeline/step.ts';
+import { floorWorking, netSources, notSolvedMessage, notSolvedReport, standingCase } from './floor-working.ts';
 
-export const floorStiffness: Rule = {
+export const floorStiffness = defineRule({
   id: 'floor.stiffness',
   title: 'Floor stiffness under each crew member',
   checks: 'The vertical stiffness of the woven floor under each crew member standing, as load over sag (secant) and as the slope at that load (tangent), the spring the ride model puts under each person.',
   kind: 'note',
-  limits: [],
+  method: ['design-basis-floor'],
+  needs: ['floorStatic'],
+  limits: {},
+  params: [],
+  messages: {
+    note: { code: 2231, text: 'Under {role} ({load:N} standing) the floor sags {sag:mm}: secant stiffness {value:N/mm}, tangent stiffness {tangent:N/mm}.' },
+    notSolved: notSolvedMessage(2232),
+  },
   run(ctx) {
-    const m = ctx.analysis.floorStatic;
+    const c = standingCase(ctx.models.floorStatic);
+    const m = c.model;
+    const sources = netSources(ctx.spec, ctx.data);
     const base = floorWorking(ctx.spec, ctx.data, m);
     if (!m.converged) {
-      return [notSolvedFinding(this.id, m, { severity: 'advice', unit: 'N/mm', what: 'stiffness', source: 'mechanics note, section 5: the cable-net model', working: base.join('\n') })];
+      ctx.report(notSolvedReport(c, { subject: 'floor.net', severity: 'info', unit: 'N/mm', what: 'stiffness', sources, working: base }));
+      return;
     }
-    return m.crew.map((c) =>
-      makeFinding(this.id, {
-        severity: 'advice',
-        subject: `${c.role}, standing`,
-        value: c.secantStiffness_N_per_mm,
+    m.crew.forEach((p, i) =>
+      ctx.report({
+        subject: `crew.${i}`,
+        label: `${p.role}, standing`,
+        message: 'note',
+        params: { role: p.role, load: p.load_N, sag: p.sag_mm, tangent: p.tangentStiffness_N_per_mm },
+        value: p.secantStiffness_N_per_mm,
         unit: 'N/mm',
-        limit: null,
-        message: 'floorStiffnessNote',
-        params: { role: c.role, load: c.load_N.toFixed(0), sag: c.sag_mm.toFixed(1), value: c.secantStiffness_N_per_mm.toFixed(1), tangent: c.tangentStiffness_N_per_mm.toFixed(1) },
+        severity: 'info',
+        load_case: c.load_case,
         fix: 'None needed; a stiffer floor (more pretension, thicker straps, closer pitch) passes more of each bump to the crew, a softer one sags more.',
-        source: 'mechanics note, section 5: the cable-net model; the tangent from the tangent stiffness matrix at the standing load',
+        sources,
         working: [
           ...base,
-          `secant k = P / sag = ${c.load_N.toFixed(1)} / ${c.sag_mm.toFixed(3)} = ${c.secantStiffness_N_per_mm.toFixed(2)} N/mm`,
-          `tangent k = 1 / (i^T K_t^-1 w): w spreads 1 N over ${c.role}'s foot patch, i reads the sag at its centre = ${c.tangentStiffness_N_per_mm.toFixed(2)} N/mm`,
-          '(the other crew stand where they are; a stiffening net has tangent above secant)',
-        ].join('\n'),
+          step('k_s = P / sag', `${num(p.load_N)} / ${num(p.sag_mm)}`, p.secantStiffness_N_per_mm, 'N/mm'),
+          `K_t: the net's tangent stiffness matrix at the standing load; w spreads one newton over ${p.role}'s foot patch; i reads the sag at its centre`,
+          step('k_t = 1 / (iᵀ K_t⁻¹ w)', '', p.tangentStiffness_N_per_mm, 'N/mm'),
+          'the other crew stand where they are; a stiffening net has its tangent above its secant',
+        ],
       }),
     );
   },
-};
+});
