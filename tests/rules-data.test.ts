@@ -309,10 +309,10 @@ describe('loading broken rules data', () => {
     expect(loadError(dir).message).toMatch(new RegExp(`${file}:\\d+: \\(whole file\\): not valid YAML: Map keys must be unique`));
   });
 
-  it('names a missing file, and accepts a rules directory without limits', () => {
+  it('names a missing file, and refuses a rules directory without the limits the rules declare', () => {
     const dir = copyRules();
     rmSync(join(dir, 'limits'), { recursive: true, force: true });
-    expect(loadRulesData(dir).limits).toEqual({});
+    expect(loadError(dir).message).toContain('the rule balance.yoke-lift compares with the limit pole_load, which the data does not hold');
     rmSync(join(dir, 'materials', 'leathers.yaml'));
     expect(loadError(dir).message).toContain(`${join(dir, 'materials', 'leathers.yaml')}: (whole file): file not found`);
   });

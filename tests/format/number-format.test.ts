@@ -4,7 +4,7 @@ import { literalText, placeholders, renderTemplate } from '../../src/core/format
 
 // The one formatter: three significant figures, lengths in whole mm from 10 mm,
 // never more than four significant figures (issue: one number formatter).
-const sigFigs = (text: string) => text.replace(/^-/, '').replace('.', '').replace(/^0+/, '').length;
+const sigFigs = (text: string) => text.replace(/e-?\d+$/, '').replace(/^-/, '').replace('.', '').replace(/^0+/, '').length;
 
 describe('number format', () => {
   it('writes three significant figures by default', () => {
@@ -26,8 +26,14 @@ describe('number format', () => {
     expect(formatNumber(3.456, 'mm')).toBe('3.5');
   });
 
+  it('writes a value below a thousandth with its exponent, so it never reads as zero', () => {
+    expect(formatNumber(1.2345e-7, 'N')).toBe('1.23e-7');
+    expect(formatNumber(-0.00042)).toBe('-4.2e-4');
+  });
+
   it('never writes a negative zero, and writes a dash for what is not a number', () => {
     expect(formatNumber(-0.0000001, 'mm')).toBe('0');
+    expect(formatNumber(-0.0004, 'mm')).toBe('0');
     expect(formatNumber(0)).toBe('0');
     for (const v of [NaN, Infinity, -Infinity, null, undefined]) expect(formatNumber(v)).toBe(NO_VALUE);
   });

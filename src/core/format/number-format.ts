@@ -25,6 +25,11 @@ export function formatNumber(value: number | null | undefined, unit = '', sig = 
   if (value === 0) return '0';
   if (WHOLE.has(unit)) return trimZero(Math.round(value).toString());
   const a = Math.abs(value);
+  // Below a thousandth a fixed point would print nothing but zeros: write the exponent.
+  if (a < 1e-3 && !LENGTH.has(unit)) {
+    const [m, e] = value.toExponential(sig - 1).split('e');
+    return `${trimZero(m)}e${Number(e)}`;
+  }
   if (LENGTH.has(unit) && a >= 10) return trimZero(roundSig(value, 4).toFixed(0));
   if (a >= 1000) return trimZero(roundSig(value, Math.max(sig, 4)).toFixed(0));
   const decimals = Math.max(0, sig - 1 - Math.floor(Math.log10(a)));
