@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { Analysis } from '../../src/core/engine/analysis.ts';
 import { deepMerge, findingsOf, prepared, readDemo, rulesData, withParams } from '../support/fixtures.ts';
-import { expectUtilisationBoundary } from '../support/limit-boundary.ts';
+import { expectPlainTemplates, expectUtilisationBoundary, governingStep, stepsOf } from '../support/member-support.ts';
 
 const RULE = 'member.frame-rail';
 // The central-axle demo (floor 560 × 1020 mm) with deep 50 × 120 mm rails of selected
@@ -27,19 +27,28 @@ function momentAt(x: number, L: number, loads: { at_mm: number; force_N: number 
 
 describe(RULE, () => {
   it('passes deep rails of selected stock', async () => {
-    expect((await one(deepRails())).severity).toBe('pass');
+    const f = await one(deepRails());
+    expect(f.severity).toBe('pass');
+    expect(f.message_key).toBe('within');
+    expect(f.subject).toMatch(/^frame\.(front|rear|left|right)-rail$/);
   });
 
   it('hand calculation: the largest moment by statics under the strap-end pulls on the governing rail, bent in plan', async () => {
     const raw = deepRails();
     const a = new Analysis(prepared(raw), rulesData);
     const f = await one(raw);
-    expect(f.message).toContain('bump');
-    const rail = a.floorBump.rails.find((r) => f.subject.includes(`${r.rail} rail`))!;
+    expect(f.load_case).toBe('bump');
+    expect(f.params.duration).toBe('instantaneous');
+    const rail = a.floorBump.rails.find((r) => f.subject === `frame.${r.rail}-rail`)!;
+    expect(f.subject_label).toBe(`${rail.rail} rail of the floor frame`);
     // Between loads the moment is linear in x, so its largest value sits under a load.
     const M = Math.max(...rail.pulls.map((q) => momentAt(q.at_mm, rail.span_mm, rail.pulls)));
     expect(rail.pulls.length).toBeGreaterThan(0);
     expect(f.value).toBeCloseTo(M / W, 9);
+    // The bump factor comes from the ride model here, and the finding cites it.
+    expect(f.sources).toContain('design-basis-ride');
+    // Three cases (pretension, standing, bump) on each rail the straps pull on.
+    expect(stepsOf(f, 'σ = M_max/W')).toHaveLength(3 * a.floorStatic.rails.filter((r) => r.total_N > 0).length);
   });
 
   it('the pretension alone: each strap end pulls T_0 on its rail, a permanent case', async () => {
@@ -50,25 +59,42 @@ describe(RULE, () => {
     // (Side rails, L = 560 mm, 17 ends: 5100 × 280 − 600 × 32 × 36 = 736 800 N·mm, less.)
     // σ = M/W = 2 439 000 / 120 000 = 20.325 MPa.
     const f = await one(deepRails({ floor_straps: { pretension_N: 600 } }));
-    expect(f.subject).toContain('front rail');
-    expect(f.message).toContain('"strap pretension alone" (k_mod 0.6, permanent)');
+    expect(f.subject).toBe('frame.front-rail');
+    expect(f.load_case).toBe('pretension');
+    expect(f.params).toMatchObject({ case: 'strap pretension alone', duration: 'permanent', kMod: 0.6, mode: 'front rail' });
+    expect(f.message).toContain('"strap pretension alone" (permanent load, k_mod 0.6)');
     expect(f.value).toBeCloseTo(2_439_000 / W, 9);
     expect(f.value).toBeCloseTo(20.325, 9);
+    expect(f.working_text).toContain('strap pretension alone [permanent]: each strap end pulls T_0 on its rail (T_0 = 600 N, pitch 32 mm)');
+    const Mstep = governingStep(f, 'M_max = max over x of [R_A·x − Σ P_i·(x − a_i)]');
+    expect(Mstep.formula).toContain('at x = 510 mm');
+    expect(Mstep.result).toBeCloseTo(2_439_000, 6);
     // The uniform load of the same total, w = ΣP/L = 18 600 / 1020 N/mm, for comparison:
     // w·L²/8 = 18 600 × 1020 / 8 = 2 371 500 N·mm.
-    expect(f.working_text).toContain('strap pretension alone [permanent]: each strap end pulls T_0 = 600 N on its rail (pitch 32 mm)');
-    expect(f.working_text).toContain('front rail: 31 strap ends, ΣP = 18600 N (largest 600.0 N); M_max = max over x of [R_A·x − Σ P_i·(x − a_i)] = 2439.0 N·m at 510 mm (for comparison, a uniform load w = ΣP/L gives w·L²/8 = 2371.5 N·m)');
+    expect(governingStep(f, 'ΣP over 31 strap ends').result).toBe(18_600);
+    expect(governingStep(f, 'for comparison, a uniform load').result).toBeCloseTo(2_371_500, 6);
   });
 
   it('fails slender rails', async () => {
-    expect((await one(deepMerge(readDemo('demo-two-crew'), { box: { floor: { frame: { width_mm: 30, thickness_mm: 30 } } } }))).severity).toBe('fail');
+    const f = await one(deepMerge(readDemo('demo-two-crew'), { box: { floor: { frame: { width_mm: 30, thickness_mm: 30 } } } }));
+    expect(f.severity).toBe('fail');
+    expect(f.message_key).toBe('over');
   });
 
   it('warns, and does not pass, when the floor model does not converge', async () => {
     const data = withParams('floor.solver', { max_iterations: 1 });
     const f = await one(readDemo('demo-two-crew'), data);
     expect(f.severity).toBe('warning');
+    expect(f.subject).toBe('frame.rails');
+    expect(f.message_key).toBe('notChecked');
+    expect(f.code).toBe(2303);
     expect(f.message).toContain('did not converge');
+    expect(f.value).toBeNull();
+    expect(stepsOf(f, 'floor model iterations')[0].result).toBe(1);
+  });
+
+  it('its messages hold no numbers of their own', () => {
+    expectPlainTemplates(RULE);
   });
 
   it('boundary: a stress equal to the design strength passes', async () => {

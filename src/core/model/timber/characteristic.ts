@@ -38,7 +38,10 @@ export interface CharacteristicValue {
   /** 5th percentile of clear wood, MPa. */
   fk: number;
   working: string[];
+  /** The sources as text, for older readers. */
   sources: string[];
+  /** The same sources as catalogue ids (rules/sources.yaml). */
+  sourceIds: string[];
 }
 
 const f = (v: number, d = 1) => v.toFixed(d);
@@ -58,16 +61,19 @@ function meanAtMoisture(data: RulesData, sp: Species, speciesId: string, key: Sp
   const { M, credit, mp } = moistureOf(data, speciesId, moisturePct);
   const value = propertyAtMoisture(p12, pg, M, mp.value);
   const sources = [gd.dry12.source];
+  const sourceIds = [...gd.dry12.sources];
+  if (moisturePct < credit.value) sourceIds.push(...credit.sources);
   let line: string;
   if (M === 12) {
     line = moisturePct < 12 ? `at ${moisturePct} % moisture: no strength credited below ${credit.value} %, the value at 12 % applies: ${f(value)} MPa` : `at 12 % moisture: the handbook value applies`;
   } else {
     sources.push(gd.green.source, mp.source);
+    sourceIds.push(...gd.green.sources, ...mp.sources);
     line = M >= mp.value
       ? `at ${M} % moisture, at or above M_p = ${mp.value} %: the green value applies: ${f(value)} MPa`
       : `at ${M} % moisture: P_M = P_12 (P_12/P_g)^((12 − M)/(M_p − 12)) = ${f(p12)} × (${f(p12)}/${f(pg)})^((12 − ${M})/(${mp.value} − 12)) = ${f(value)} MPa`;
   }
-  return { p12, pg, value, line, sources };
+  return { p12, pg, value, line, sources, sourceIds };
 }
 
 export function characteristicValue(data: RulesData, speciesId: string, property: TimberProperty, moisturePct: number, grainDeg: number): CharacteristicValue {
@@ -77,6 +83,7 @@ export function characteristicValue(data: RulesData, speciesId: string, property
   const main = meanAtMoisture(data, sp, speciesId, def.key, def.toMPa, moisturePct);
   const working = [`${name}: handbook mean ${f(main.p12)} MPa at 12 %, ${f(main.pg)} MPa green`, main.line];
   const sources = [...main.sources];
+  const sourceIds = [...main.sourceIds];
   let mean = main.value;
   if (grainDeg > 0 && def.across !== null) {
     const n = strengthFactor(data, def.across.n);
@@ -87,16 +94,19 @@ export function characteristicValue(data: RulesData, speciesId: string, property
       perp = ratio.value * mean;
       perpText = `f_perp = ${ratio.value} × f_par = ${f(perp, 2)} MPa`;
       sources.push(ratio.source);
+      sourceIds.push(...ratio.sources);
     } else {
       const across = meanAtMoisture(data, sp, speciesId, def.across.key, def.toMPa, moisturePct);
       perp = across.value;
       perpText = `f_perp = ${f(perp, 2)} MPa (across the grain at the same moisture)`;
       sources.push(...across.sources);
+      sourceIds.push(...across.sourceIds);
     }
     const theta = grainDeg * UNITS.deg.si;
     const at = hankinson(mean, perp, theta, n.value);
     working.push(`grain at ${f(grainDeg)}° to the part: Hankinson f_θ = f_par·f_perp / (f_par·sin^n θ + f_perp·cos^n θ), n = ${n.value}, ${perpText}: = ${f(at, 2)} MPa`);
     sources.push(n.source);
+    sourceIds.push(...n.sources);
     mean = at;
   } else if (grainDeg > 0) {
     working.push(`grain at ${f(grainDeg)}° to the part: not applied to ${def.name}`);
@@ -106,5 +116,6 @@ export function characteristicValue(data: RulesData, speciesId: string, property
   const fk = mean * (1 - z.value * cov.value);
   working.push(`5th percentile: f_k = f·(1 − z·COV) = ${f(mean, 2)} × (1 − ${z.value} × ${cov.value}) = ${f(fk, 2)} MPa`);
   sources.push(cov.source);
-  return { property, name, mean, fk, working, sources };
+  sourceIds.push(...z.sources, ...cov.sources);
+  return { property, name, mean, fk, working, sources, sourceIds: [...new Set(sourceIds)] };
 }

@@ -12,6 +12,8 @@ export interface DesignValue {
   duration: Duration;
   kMod: number;
   kModSource: string;
+  /** The catalogue ids k_mod rests on. */
+  kModSources: string[];
   /** MPa. */
   value: number;
   line: string;
@@ -19,8 +21,14 @@ export interface DesignValue {
 
 export interface TimberStrength {
   characteristic: CharacteristicValue;
+  /** The grade factor and the partial factor the design value uses. */
+  kSelect: number;
+  gammaM: number;
   working: string[];
+  /** The sources as text, for older readers. */
   sources: string[];
+  /** The same sources as catalogue ids: the species' values and the factors. */
+  sourceIds: string[];
   design(d: Duration): DesignValue;
 }
 
@@ -35,12 +43,15 @@ export function timberStrength(data: RulesData, part: TimberPart, property: Timb
   const sources = [...ch.sources, sel.source, gamma.source];
   return {
     characteristic: ch,
+    kSelect: sel.value,
+    gammaM: gamma.value,
     working: [...ch.working, `grade ${part.grade} (${part.gradeFrom}): k_select = ${sel.value}; γ_M = ${gamma.value}`],
     sources,
+    sourceIds: [...new Set([...ch.sourceIds, ...sel.sources, ...gamma.sources])],
     design(d) {
       const k = kMod(data, d);
       const value = (ch.fk * sel.value * k.value) / gamma.value;
-      return { duration: d, kMod: k.value, kModSource: k.source, value, line: `f_d = f_k·k_select·k_mod/γ_M = ${f(ch.fk)} × ${sel.value} × ${k.value} / ${gamma.value} = ${f(value)} MPa` };
+      return { duration: d, kMod: k.value, kModSource: k.source, kModSources: k.sources, value, line: `f_d = f_k·k_select·k_mod/γ_M = ${f(ch.fk)} × ${sel.value} × ${k.value} / ${gamma.value} = ${f(value)} MPa` };
     },
   };
 }

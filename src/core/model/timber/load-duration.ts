@@ -7,7 +7,7 @@ import { strengthFactor } from './strength-factors.ts';
 
 export type Duration = 'permanent' | 'long' | 'medium' | 'short' | 'instantaneous';
 
-export function kMod(data: RulesData, d: Duration): { value: number; source: string } {
+export function kMod(data: RulesData, d: Duration): { value: number; source: string; sources: string[] } {
   const f = strengthFactor(data, `k_mod_${d}`);
-  return { value: f.value, source: f.source };
+  return { value: f.value, source: f.source, sources: f.sources };
 }

@@ -1,67 +1,110 @@
-import type { Rule } from '../../engine/rule.ts';
 import { eulerLoad } from '../../model/beam-formulas.ts';
 import { rectangle } from '../../model/sections.ts';
 import { stiffness05, timberStrength } from '../../model/timber/design-strength.ts';
 import { timberPart } from '../../model/timber/timber-part.ts';
-import { kModBasis, memberFinding, type CaseCheck } from './member-finding.ts';
+import { defineRule } from '../../pipeline/define-rule.ts';
+import { num, step } from '../../pipeline/step.ts';
+import { memberReport, strengthCheck, stressReport, type CaseCheck } from './member-finding.ts';
+import { BUCKLING_MESSAGES, STRESS_MESSAGES } from './member-messages.ts';
 
-const f = (v: number, d = 2) => v.toFixed(d);
+/** EN 1995-1-1 section 6.3.2: k = 0.5·(1 + β_c·(λ_rel − λ_rel,0) + λ_rel²). */
+function instabilityK(lambdaRel: number, betaC: number, threshold: number): number {
+  return 0.5 * (1 + betaC * (lambdaRel - threshold) + lambdaRel ** 2);
+}
 
 /** EN 1995-1-1 section 6.3.2: k_c from the relative slenderness. */
 export function bucklingFactor(lambdaRel: number, betaC: number, threshold: number): number {
   if (lambdaRel <= threshold) return 1;
-  const k = 0.5 * (1 + betaC * (lambdaRel - threshold) + lambdaRel ** 2);
+  const k = instabilityK(lambdaRel, betaC, threshold);
   return 1 / (k + Math.sqrt(k * k - lambdaRel ** 2));
 }
 
-export const spokeMember: Rule = {
+/** The buckling factor worked, for a spoke beyond the threshold slenderness. */
+function kcSteps(lambdaRel: number, betaC: number, threshold: number, kc: number) {
+  const k = instabilityK(lambdaRel, betaC, threshold);
+  return [
+    step('k = 0.5·(1 + β_c·(λ_rel − λ_rel,0) + λ_rel²)', `0.5 × (1 + ${num(betaC)} × (${num(lambdaRel)} − ${num(threshold)}) + ${num(lambdaRel)}²)`, k, '1'),
+    step('k_c = 1/(k + √(k² − λ_rel²))', `1/(${num(k)} + √(${num(k)}² − ${num(lambdaRel)}²))`, kc, '1'),
+  ];
+}
+
+export const spokeMember = defineRule({
   id: 'member.spoke',
   title: 'Spoke crushing and buckling',
   checks: 'The spoke under the nave carries the whole wheel load in compression: crushing along the grain, and buckling over its free length between nave and felloe, in every load case.',
   kind: 'check',
-  limits: ['utilisation_max', 'effective_length_factor', 'straightness_factor', 'slenderness_threshold'],
+  method: ['design-basis-members', 'design-basis-materials', 'en-1995-1-1-6-3-2'],
+  needs: ['mass', 'memberCases'],
+  limits: { utilisation: { direction: 'max', unit: 'of the design strength (in buckling, of the buckling resistance)' } },
+  params: ['effective_length_factor', 'straightness_factor', 'slenderness_threshold'],
+  messages: { ...STRESS_MESSAGES, ...BUCKLING_MESSAGES },
   run(ctx) {
     const { spec, data } = ctx;
     const M = spec.moisture_content_pct;
     const part = timberPart(spec, 'spoke');
     const compression = timberStrength(data, part, 'compression', M);
     const E = stiffness05(data, part, M);
-    const S = rectangle(spec.wheels.spoke.width_mm, spec.wheels.spoke.thickness_mm);
-    const L = ctx.analysis.mass.layout.spokeLength;
-    const K = ctx.limit('effective_length_factor');
-    const beta = ctx.limit('straightness_factor');
-    const lim0 = ctx.limit('slenderness_threshold');
+    const { width_mm: b, thickness_mm: t } = spec.wheels.spoke;
+    const S = rectangle(b, t);
+    const lay = ctx.models.mass.layout;
+    const L = lay.spokeLength;
+    const K = ctx.param('effective_length_factor');
+    const beta = ctx.param('straightness_factor');
+    const lim0 = ctx.param('slenderness_threshold');
     const Ncr = eulerLoad(E.fk, S.Imin, L, K.value);
     // The clear-wood f_k (not reduced for the grade) in the slenderness: the modulus is
     // clear-wood too, and the larger λ_rel is the safe side.
-    const lambdaRel = Math.sqrt((compression.characteristic.fk * S.area) / Ncr);
+    const fck = compression.characteristic.fk;
+    const lambdaRel = Math.sqrt((fck * S.area) / Ncr);
     const kc = bucklingFactor(lambdaRel, beta.value, lim0.value);
-    const umax = ctx.limit('utilisation_max');
+    const utilisation = ctx.limit('utilisation');
     const crush: CaseCheck[] = [];
     const buckle: CaseCheck[] = [];
-    for (const c of ctx.analysis.memberCases) {
+    for (const c of ctx.models.memberCases) {
       const fc = compression.design(c.duration);
       const sigma = c.wheel_N / S.area;
-      const basis = kModBasis(fc.kMod, c.duration);
-      crush.push({ memberCase: c, mode: 'crushing along the grain', demand: sigma, capacity: fc.value, basis, sources: [fc.kModSource], line: `σ_c = N_w/A = ${f(c.wheel_N, 1)} / ${f(S.area, 0)} = ${f(sigma)} MPa; ${fc.line}` });
+      crush.push(strengthCheck(c, 'crushing along the grain', sigma, compression, fc, [step('σ_c = N_w/A', `${num(c.wheel_N)} / ${num(S.area)}`, sigma, 'MPa')]));
+      // The buckling resistance follows the same design strength: k_c·f_c,0,d·A against the wheel load.
       const Nb = kc * fc.value * S.area;
-      buckle.push({ memberCase: c, mode: 'buckling', demand: c.wheel_N, capacity: Nb, basis, sources: [fc.kModSource], line: `N_b = k_c·f_c,d·A = ${f(kc, 3)} × ${f(fc.value)} × ${f(S.area, 0)} = ${f(Nb, 0)} N against N_w = ${f(c.wheel_N, 0)} N` });
+      const strength = strengthCheck(c, 'buckling', c.wheel_N, compression, fc, []);
+      buckle.push({ ...strength, capacity: Nb, steps: [...strength.steps, step('N_b = k_c·f_c,0,d·A', `${num(kc)} × ${num(fc.value)} × ${num(S.area)}`, Nb, 'N'), step('N_w', '', c.wheel_N, 'N')] });
     }
-    const section = `${S.label} (width × thickness), A = ${f(S.area, 0)} mm²`;
-    const bIntro = [
-      `free length L = felloe inner radius − nave radius = ${f(L, 1)} mm; ${section}, I_min = ${f(S.Imin, 0)} mm⁴`,
-      ...compression.working,
-      ...E.working,
-      `Euler load N_cr = π²·E_0.05·I_min/(K·L)² = π² × ${f(E.fk, 0)} × ${f(S.Imin, 0)} / (${K.value} × ${f(L, 1)})² = ${f(Ncr, 0)} N`,
-      `relative slenderness λ_rel = √(f_c,0,k·A / N_cr) = √(${f(compression.characteristic.fk)} × ${f(S.area, 0)} / ${f(Ncr, 0)}) = ${f(lambdaRel, 3)} (clear-wood f_k, the larger λ_rel)`,
-      lambdaRel <= lim0.value
-        ? `λ_rel ≤ ${lim0.value}: no reduction, k_c = 1`
-        : `k = 0.5·(1 + β_c·(λ_rel − ${lim0.value}) + λ_rel²) with β_c = ${beta.value}; k_c = 1/(k + √(k² − λ_rel²)) = ${f(kc, 3)} (EN 1995-1-1 section 6.3.2)`,
-    ];
-    const fixCrush = 'Use a larger spoke section, a stronger species, or selected straight-grained stock (set its grade).';
-    return [
-      memberFinding({ rule: this.id, part: part.label, unit: 'MPa', checks: crush, umax, intro: [section, ...compression.working], sources: compression.sources, fix: fixCrush }),
-      memberFinding({ rule: this.id, part: part.label, unit: 'N', checks: buckle, umax, intro: bIntro, sources: [...compression.sources, ...E.sources, K.source, beta.source, lim0.source], fix: 'Thicken the spoke in its thinner direction (buckling resistance rises with the cube of it), or shorten it with a larger nave or deeper felloe.' }),
-    ];
+    const section = [`${S.label} (width × thickness)`, step('A = b·t', `${num(b)} × ${num(t)}`, S.area, 'mm²')];
+    ctx.report(
+      stressReport({
+        subject: 'wheel.spoke',
+        label: 'spoke under the nave',
+        part: part.label,
+        checks: crush,
+        limit: utilisation,
+        intro: [...section, ...compression.working],
+        sources: compression.sourceIds,
+        fix: 'Use a larger spoke section, a stronger species, or selected straight-grained stock (set its grade).',
+      }),
+    );
+    ctx.report(
+      memberReport({
+        subject: 'wheel.spoke.strut',
+        label: 'spoke as a strut between nave and felloe',
+        part: part.label,
+        unit: 'N',
+        checks: buckle,
+        limit: utilisation,
+        message: { pass: 'bucklingWithin', fail: 'bucklingOver' },
+        intro: [
+          step('L = felloe inner radius − nave radius', `${num(lay.felloeInner)} − ${num(spec.wheels.nave.diameter_mm)}/2`, L, 'mm'),
+          ...section,
+          step('I_min = max(b, t)·min(b, t)³/12', `${num(Math.max(b, t))} × ${num(Math.min(b, t))}³/12`, S.Imin, 'mm⁴'),
+          ...compression.working,
+          ...E.working,
+          step('N_cr = π²·E_0.05·I_min/(K·L)²', `π² × ${num(E.fk)} × ${num(S.Imin)} / (${num(K.value)} × ${num(L)})²`, Ncr, 'N'),
+          step('λ_rel = √(f_c,0,k·A / N_cr)', `√(${num(fck)} × ${num(S.area)} / ${num(Ncr)})`, lambdaRel, '1'),
+          'the clear-wood f_c,0,k in λ_rel, not reduced for the grade: the larger λ_rel, the safe side',
+          ...(lambdaRel <= lim0.value ? [step('λ_rel ≤ λ_rel,0: no reduction, k_c', `${num(lambdaRel)} ≤ ${num(lim0.value)}`, kc, '1')] : kcSteps(lambdaRel, beta.value, lim0.value, kc)),
+        ],
+        sources: [...compression.sourceIds, ...E.sourceIds, ...K.sources, ...beta.sources, ...lim0.sources],
+        fix: 'Thicken the spoke in its thinner direction (buckling resistance rises with the cube of it), or shorten it with a larger nave or deeper felloe.',
+      }),
+    );
   },
-};
+});

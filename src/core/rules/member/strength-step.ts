@@ -1,0 +1,12 @@
+import type { WorkingStep } from '../../findings/finding.ts';
+import type { TimberProperty } from '../../model/timber/characteristic.ts';
+import type { DesignValue, TimberStrength } from '../../model/timber/design-strength.ts';
+import { num, step } from '../../pipeline/step.ts';
+
+const SYMBOL: Record<TimberProperty, string> = { bending: 'f_m', compression: 'f_c,0', shear: 'f_v', stiffness: 'E' };
+
+/** The design strength of one case as a step: f_d = f_k·k_select·k_mod/γ_M. */
+export function strengthStep(s: TimberStrength, d: DesignValue): WorkingStep {
+  const f = SYMBOL[s.characteristic.property];
+  return step(`${f},d = ${f},k·k_select·k_mod/γ_M`, `${num(s.characteristic.fk)} × ${num(s.kSelect)} × ${num(d.kMod)} / ${num(s.gammaM)}`, d.value, 'MPa');
+}
