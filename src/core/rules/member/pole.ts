@@ -19,8 +19,8 @@ export const poleMember = defineRule({
   params: ['effective_length_factor'],
   messages: {
     ...STRESS_MESSAGES,
-    strutWithin: { code: 2304, text: '{part}, {mode}: {value:N} ({factor:1} × the braking force), within the Euler load {limit:N} (modulus at its fifth percentile); case "{case}".' },
-    strutOver: { code: 2305, text: '{part}, {mode}: {value:N} ({factor:1} × the braking force) exceeds the Euler load {limit:N} (modulus at its fifth percentile) in "{case}".' },
+    strutWithin: { code: 2306, text: '{part}, {mode}: {value:N} ({factor:1} × the braking force), within the Euler load {limit:N} (modulus at its fifth percentile); case "{case}".' },
+    strutOver: { code: 2307, text: '{part}, {mode}: {value:N} ({factor:1} × the braking force) exceeds the Euler load {limit:N} (modulus at its fifth percentile) in "{case}".' },
   },
   run(ctx) {
     const { spec, data } = ctx;
