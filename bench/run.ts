@@ -5,9 +5,10 @@ import { readFileSync, readdirSync } from 'node:fs';
 import { performance } from 'node:perf_hooks';
 import { parse } from 'yaml';
 import { defaultRulesDir, loadRulesData } from '../src/node/load-rules-data.ts';
-import { renderHtml } from '../src/render/report-html.ts';
+import { reportDocument } from '../src/render/model/report-document.ts';
+import { renderHtml } from '../src/render/html/render-html.ts';
 import { drawReportPlots } from '../src/render/report-plots.ts';
-import { renderMarkdown } from '../src/render/report-md.ts';
+import { renderMarkdown } from '../src/render/markdown/render-markdown.ts';
 import { renderWorkbook } from '../src/render/workbook.ts';
 import { runCheck } from '../src/core/pipeline/run-check.ts';
 import { RULES } from '../src/core/rules/index.ts';
@@ -19,7 +20,7 @@ import { benchRide } from './ride.ts';
 
 /** The check: validation and every model and rule (the ride model and the stock planner included). */
 const TARGET_MS = 1000;
-/** The report's renderers: Markdown, the plots (vega, about 40 ms each, eleven of them), HTML and the workbook. */
+/** The report's model and renderers: Markdown, the plots (vega, about 40 ms each, eleven of them), HTML and the workbook. */
 const OUTPUTS_TARGET_MS = 1500;
 
 /** Print the median, first and worst of a set of runs against a target; 1 if it missed. */
@@ -47,9 +48,10 @@ for (const file of readdirSync(specs).filter((f) => f.endsWith('.yaml'))) {
     if (!p.ok) throw new Error(`${file} does not validate`);
     const result = runCheck(p.spec, p.entries, data, { lp: lp });
     const t1 = performance.now();
-    renderMarkdown(result);
-    renderHtml(result, await drawReportPlots(result));
-    await renderWorkbook(result);
+    const doc = reportDocument(result);
+    renderMarkdown(doc);
+    renderHtml(doc, await drawReportPlots(result));
+    await renderWorkbook(result, doc);
     checkTimes.push(t1 - t0);
     outputTimes.push(performance.now() - t1);
   }

@@ -3,7 +3,8 @@
 import { readFileSync } from 'node:fs';
 import { parse } from 'yaml';
 import { defaultRulesDir, loadRulesData } from '../src/node/load-rules-data.ts';
-import { renderHtml } from '../src/render/report-html.ts';
+import { reportDocument } from '../src/render/model/report-document.ts';
+import { renderHtml } from '../src/render/html/render-html.ts';
 import { drawReportPlots } from '../src/render/report-plots.ts';
 import { runCheck } from '../src/core/pipeline/run-check.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
@@ -13,5 +14,5 @@ export async function demoReportHtml(demo: string): Promise<string> {
   const p = prepareSpec(parse(readFileSync(new URL(`../specs/${demo}.yaml`, import.meta.url), 'utf8')), data);
   if (!p.ok) throw new Error(p.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('\n'));
   const result = runCheck(p.spec, p.entries, data);
-  return renderHtml(result, await drawReportPlots(result));
+  return renderHtml(reportDocument(result), await drawReportPlots(result));
 }

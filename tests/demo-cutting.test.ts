@@ -8,9 +8,8 @@ import type { CheckResult } from '../src/core/result/check-result.ts';
 import type { LpSolver } from '../src/core/stock/cutting-types.ts';
 import { loadLpSolver } from '../src/node/load-lp-solver.ts';
 import { renderWorkbook } from '../src/render/workbook.ts';
-import { renderMarkdown } from '../src/render/report-md.ts';
+import { htmlOf, markdownOf } from './support/report-outputs.ts';
 import { drawReportPlots } from '../src/render/report-plots.ts';
-import { renderHtml } from '../src/render/report-html.ts';
 import { DRAWING_SCOPE, scopeClass } from '../src/render/inline-svg.ts';
 import { readDemo, rulesData } from './support/fixtures.ts';
 
@@ -89,10 +88,10 @@ describe('cutting figures of the demo specifications', () => {
     expect(shoulders).toBe(r.cutting.setting_out.spoke_length_shoulders_mm);
     expect(wb.getWorksheet('Stock plan')).toBeDefined();
 
-    const md = renderMarkdown(r);
+    const md = markdownOf(r);
     for (const h of ['## Cut list', '## Leather and rawhide', '## Wheel setting-out', '## Stock plan']) expect(md, h).toContain(`\n${h}\n`);
-    const html = renderHtml(r, await drawReportPlots(r));
-    expect(html).toContain(`<span class="setting-out"><svg class="${scopeClass(settingOutSvg(r))}`);
+    const html = htmlOf(r, await drawReportPlots(r));
+    expect(html).toContain(`<figure class="setting-out"><svg class="${scopeClass(settingOutSvg(r))}`);
     // Each drawing's style rules reach only that drawing, so the stock bars and the plots keep their paint.
     for (const [, scope, css] of html.matchAll(/<svg class="([^" ]+)[^>]*>(?:(?!<\/svg>)[\s\S])*?<style>([\s\S]*?)<\/style>/g)) {
       expect(scope.startsWith(`${DRAWING_SCOPE}-`)).toBe(true);
@@ -100,6 +99,6 @@ describe('cutting figures of the demo specifications', () => {
         for (const selector of rule.split('{')[0].split(',')) expect(selector.trim().startsWith(`.${scope} `), selector).toBe(true);
       }
     }
-    expect(html.match(/class="stock-bar"/g)?.length ?? 0).toBe(sum(r.cutting.stock_plan.groups.map((g) => g.plan.patterns.length)));
+    expect(html.match(/<svg [^>]*class="axletree-drawing-[0-9a-z]+ stock-bar"/g)?.length ?? 0).toBe(sum(r.cutting.stock_plan.groups.map((g) => g.plan.patterns.length)));
   });
 });

@@ -6,8 +6,7 @@ import { reportDrawings } from '../src/render/drawings/report-drawings.ts';
 import { inlineSvg } from '../src/render/inline-svg.ts';
 import { runCheck } from '../src/core/pipeline/run-check.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
-import { renderMarkdown } from '../src/render/report-md.ts';
-import { renderHtml } from '../src/render/report-html.ts';
+import { htmlOf, markdownOf } from './support/report-outputs.ts';
 import { drawReportPlots } from '../src/render/report-plots.ts';
 import { drawingOutputs } from '../src/render/report-drawings.ts';
 import { deepMerge, prepared, readDemo, rulesData } from './support/fixtures.ts';
@@ -126,10 +125,10 @@ describe('drawings in the report', () => {
   const p = prepareSpec(readDemo('demo-two-crew'), rulesData);
   if (!p.ok) throw new Error('demo does not prepare');
   const result = runCheck(p.spec, p.entries, rulesData);
-  const md = renderMarkdown(result);
+  const md = markdownOf(result);
   let html = '';
   beforeAll(async () => {
-    html = renderHtml(result, await drawReportPlots(result));
+    html = htmlOf(result, await drawReportPlots(result));
   });
 
   it('report.md links each drawing file written beside it, the side elevation right after the cautions', () => {
@@ -144,7 +143,7 @@ describe('drawings in the report', () => {
 
   it('report.html holds them inline, scoped, with their captions', () => {
     expect(html).not.toMatch(/<img[^>]+drawing-/);
-    expect(html.match(/<span class="drawing"><svg class="axletree-drawing-[0-9a-z]+"/g)).toHaveLength(3);
+    expect(html.match(/<figure class="drawing"><svg class="axletree-drawing-[0-9a-z]+"/g)).toHaveLength(3);
     for (const d of drawingsOf(result)) expect(html).toContain(d.caption.slice(0, 40));
   });
 });

@@ -1,29 +1,57 @@
 import { describe, expect, it } from 'vitest';
-import { renderMarkdown } from '../src/render/report-md.ts';
-/** The sample result has neither ride nor plots: nothing to draw. */
-const NO_PLOTS = new Map<string, string>();
-import { renderHtml } from '../src/render/report-html.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 import type { CheckResult } from '../src/core/result/check-result.ts';
+import type { Finding } from '../src/core/findings/finding.ts';
+import { SEVERITY_MEANING } from '../src/core/findings/severity.ts';
 import { SHORT_CAUTION } from '../src/core/cautions.ts';
-import { formatNumber, formatPercent } from '../src/render/number-format.ts';
+import { formatNumber, formatPercent, formatQuantity } from '../src/core/format/number-format.ts';
+import { reportDocument } from '../src/render/model/report-document.ts';
 import { sectionText } from '../src/render/cutting-text.ts';
 import { inlineSvg, scopeClass } from '../src/render/inline-svg.ts';
 import { settingOutSvg } from '../src/render/report-figures.ts';
+import { htmlOf, markdownOf } from './support/report-outputs.ts';
 
-/** The body lines of every fenced block in a Markdown text. */
+/** The body lines of every fenced text block in a Markdown text. */
 function fencedBlocks(md: string): string[] {
   return [...md.matchAll(/^(`{3,})text\n([\s\S]*?)\n\1$/gm)].map((m) => m[2]);
 }
 
-/** Data rows of the first Markdown table after a heading. */
-function tableAfter(md: string, heading: string): string[] {
+/** Data rows of the first Markdown table after a heading (or the nth, counting from 0). */
+function tableAfter(md: string, heading: string, nth = 0): string[] {
   const start = md.indexOf(`\n${heading}\n`);
+  expect(start, heading).toBeGreaterThan(0);
   const lines = md.slice(start).split('\n');
-  const first = lines.findIndex((l) => l.startsWith('|'));
+  let first = lines.findIndex((l) => l.startsWith('|'));
+  for (let k = 0; k < nth; k++) {
+    while (lines[first]?.startsWith('|')) first++;
+    first = lines.findIndex((l, i) => i > first && l.startsWith('|'));
+  }
   const rows: string[] = [];
   for (let i = first + 2; i < lines.length && lines[i].startsWith('|'); i++) rows.push(lines[i]);
   return rows;
+}
+
+/** The cells of a Markdown table row, escaped pipes kept inside their cell. */
+const cellsOf = (row: string) => row.slice(2, -2).split(/ (?<!\\)\| /).map((c) => c.trim());
+
+/** A note (info finding) added to the sample, which has none. */
+function withNote(): CheckResult {
+  const r = sampleResult();
+  const note: Finding = {
+    ...r.findings[0],
+    rule: 'balance.axle-position',
+    code: 2021,
+    severity: 'info',
+    subject: 'case.static',
+    subject_label: 'standing, crew as placed',
+    message: 'The loaded centre of mass stands forward of the axle.',
+    utilisation: null,
+    limit: null,
+    working: [{ formula: 'x_g - x_a', substituted: '356 - 280', result: 76, unit: 'mm' }],
+    working_text: 'x_g - x_a = 356 - 280 = 76 mm',
+  };
+  r.findings.push(note);
+  return r;
 }
 
 function withHostileText(): CheckResult {
@@ -36,19 +64,35 @@ function withHostileText(): CheckResult {
     defaulted: false,
   });
   result.findings[1].message = '- not a list, <i>not</i> italic';
+  result.findings[1].subject_label = '*crew* <u>aft</u> | braking';
   result.sources.push({ id: 'demo-note', citation: '12. not an ordered item', kind: 'from-memory' });
   return result;
 }
 
+describe('the report model', () => {
+  it('keeps the sections in order: verdict, cautions, findings, working, then the evidence, sources last', () => {
+    const ids = reportDocument(sampleResult()).sections.map((s) => s.id);
+    expect(ids.slice(0, 5)).toEqual(['verdict', 'cautions', 'findings', 'working', 'notes']);
+    const later = ['figures', 'massBalance', 'loads', 'cutList', 'leather', 'settingOut', 'stockPlan', 'spec', 'sources'];
+    const at = later.map((id) => ids.indexOf(id));
+    expect(at.every((i) => i > 4)).toBe(true);
+    expect([...at].sort((a, b) => a - b)).toEqual(at);
+  });
+
+  it('refuses a result without cautions', () => {
+    expect(() => reportDocument({ ...sampleResult(), cautions: ['  '] })).toThrow(/cautions/);
+  });
+});
+
 describe('renderMarkdown', () => {
   const result = sampleResult();
-  const md = renderMarkdown(result);
+  const md = markdownOf(result);
 
   it('opens with the title, the verdict and every caution before the findings table', () => {
-    const tableStart = md.indexOf('| # | Severity');
+    const tableStart = md.indexOf('| No. | Severity | Rule');
     expect(tableStart).toBeGreaterThan(0);
     expect(md.startsWith(`# Design-rule check: ${result.spec_name}`)).toBe(true);
-    expect(md.indexOf('Verdict: **FAIL**')).toBeLessThan(tableStart);
+    expect(md.indexOf('## Verdict: **FAIL**')).toBeLessThan(tableStart);
     for (const caution of result.cautions) {
       const at = md.indexOf(caution);
       expect(at, caution).toBeGreaterThan(0);
@@ -60,16 +104,41 @@ describe('renderMarkdown', () => {
     expect(md.trimEnd().endsWith(`*${SHORT_CAUTION}*`)).toBe(true);
   });
 
-  it('lists findings worst first', () => {
+  it('says in one line what each severity means', () => {
     const rows = tableAfter(md, '## Findings');
-    expect(rows.map((r) => r.split('|')[2].trim())).toEqual(['**FAIL**', '**WARNING**', '**ADVICE**', '**PASS**']);
+    for (const [s, meaning] of Object.entries(SEVERITY_MEANING)) {
+      expect(rows.find((r) => r.startsWith(`| **${s.toUpperCase()}** |`)), s).toContain(`| ${meaning} |`);
+    }
   });
 
-  it('shows the working of every flagged finding in a fenced block, and not of passes', () => {
+  it('lists graded findings worst first, each with its subject in words', () => {
+    const rows = tableAfter(md, '## Findings', 1).map(cellsOf);
+    expect(rows.map((r) => r[1])).toEqual(['**FAIL**', '**WARNING**', '**ADVICE**', '**PASS**']);
+    expect(rows.map((r) => r[0])).toEqual(['1', '2', '3', '4']);
+    const warning = result.findings.find((f) => f.severity === 'warning')!;
+    expect(rows[1]).toEqual([
+      '2', '**WARNING**', warning.rule, String(warning.code), warning.subject_label,
+      formatQuantity(warning.value, warning.unit), formatQuantity(warning.limit, warning.unit), formatPercent(warning.utilisation), warning.message.replace(/'/g, "'"),
+    ]);
+  });
+
+  it('shows notes apart and never counts them in the verdict line', () => {
+    const r = withNote();
+    const text = markdownOf(r);
+    expect(text).toContain('\n4 graded findings: 0 error, 1 fail, 1 warning, 1 advice, 1 pass.\n');
+    expect(text).toContain('1 note informs without grading');
+    expect(tableAfter(text, '## Findings', 1)).toHaveLength(4);
+    const notes = tableAfter(text, '## Notes').map(cellsOf);
+    expect(notes).toHaveLength(1);
+    expect(notes[0].slice(0, 5)).toEqual(['N1', '**INFO**', 'balance.axle-position', '2021', 'standing, crew as placed']);
+    expect(text.indexOf('### N1. **INFO** balance.axle-position: standing, crew as placed')).toBeGreaterThan(text.indexOf('\n## Notes\n'));
+  });
+
+  it('shows the working of every flagged finding step by step, with its fix and its sources by id, and not of passes', () => {
     const blocks = fencedBlocks(md);
-    const workingStart = md.indexOf('## Working of flagged findings');
+    const workingStart = md.indexOf('\n## Working of flagged findings\n');
     for (const f of result.findings) {
-      const heading = md.indexOf(`**${f.severity.toUpperCase()}** ${f.rule}: ${f.subject}`, workingStart);
+      const heading = md.indexOf(`**${f.severity.toUpperCase()}** ${f.rule}: ${f.subject_label}`, workingStart);
       if (f.severity === 'pass') {
         expect(heading, f.rule).toBe(-1);
         expect(blocks).not.toContain(f.working_text);
@@ -77,18 +146,25 @@ describe('renderMarkdown', () => {
         expect(heading, f.rule).toBeGreaterThan(workingStart);
         const fence = md.indexOf('```text\n', heading);
         expect(md.slice(fence + '```text\n'.length).startsWith(f.working_text)).toBe(true);
-        expect(md.indexOf(f.fix, heading)).toBeGreaterThan(heading);
+        expect(md.indexOf(`**Fix:** ${f.fix}`, heading)).toBeGreaterThan(heading);
+        expect(md.indexOf(`**Sources:** ${f.sources.join(', ')}`, heading)).toBeGreaterThan(heading);
       }
     }
   });
 
-  it('tables parts, load cases and the spec with defaults marked', () => {
+  it('writes a computed step with its result through the one formatter', () => {
+    const r = withNote();
+    expect(fencedBlocks(markdownOf(r))).toContain(`x_g - x_a = 356 - 280 = ${formatQuantity(76, 'mm')}`);
+  });
+
+  it('tables parts with totals, load cases and the spec with defaults marked, numbers through the one formatter', () => {
     const parts = tableAfter(md, '### Parts');
     expect(parts).toHaveLength(result.mass.parts.length + 3);
-    expect(parts[0]).toContain(result.mass.parts[0].mass_kg.toFixed(3));
+    expect(cellsOf(parts[0])[2]).toBe(formatNumber(result.mass.parts[0].mass_kg, 'kg'));
+    expect(cellsOf(parts.at(-1)!)).toEqual(['**Total**', '', `**${formatNumber(result.mass.total_mass_kg, 'kg')}**`, '', '', '', '', '']);
     const cases = tableAfter(md, '### Load cases');
     expect(cases).toHaveLength(result.balance.cases.length);
-    result.balance.cases.forEach((c, i) => expect(cases[i]).toContain(c.pole_load_N.toFixed(1)));
+    result.balance.cases.forEach((c, i) => expect(cellsOf(cases[i])[4]).toBe(formatNumber(c.pole_load_N, 'N')));
     const spec = tableAfter(md, '## Spec as checked');
     result.spec_as_checked.forEach((e, i) => expect(spec[i].includes('*default*')).toBe(e.defaulted));
   });
@@ -101,29 +177,40 @@ describe('renderMarkdown', () => {
     expect(row.match(/(?<!\\)\|/g)).toHaveLength(6);
   });
 
-  it('lists the sources by id with their citations', () => {
-    result.sources.forEach((s) => expect(md).toContain(`\n- **${s.id}**: ${s.citation}`));
+  it('lists every cited source by id with its catalogue entry', () => {
+    const rows = tableAfter(md, '## Sources').map(cellsOf);
+    expect(rows.map((r) => r[0].replace(/\\/g, ''))).toEqual(result.sources.map((s) => s.id));
+    result.sources.forEach((s, i) => expect(rows[i][1]).toContain(s.citation.slice(0, 20)));
   });
 
   it('keeps a working fence closed even when the working holds backticks', () => {
     const r = sampleResult();
-    r.findings[1].working_text = 'step 1\n```\nnot the end';
-    const blocks = fencedBlocks(renderMarkdown(r));
-    expect(blocks).toContain(r.findings[1].working_text);
+    r.findings[1].working = [{ formula: 'step 1\n```\nnot the end', substituted: '', result: null, unit: '' }];
+    expect(fencedBlocks(markdownOf(r))).toContain('step 1\n```\nnot the end');
+  });
+
+  it('escapes Markdown in user text, so it shows literally', () => {
+    const hostile = markdownOf(withHostileText());
+    expect(hostile).toContain('\n\\- not a list, \\<i\\>not\\</i\\> italic\n');
+    expect(hostile).toContain('\\*crew\\* \\<u\\>aft\\</u\\> \\| braking');
+    expect(hostile).toContain('\\!\\[p\\](http://example.com/p.png)');
+    expect(hostile).not.toContain('![p](');
   });
 });
 
 describe('renderHtml', () => {
   const result = sampleResult();
-  const html = renderHtml(result, NO_PLOTS);
+  const html = htmlOf(result);
 
   it('is one self-contained file', () => {
     expect(html).toMatch(/^<!doctype html>/);
     expect(html).toContain('<style>');
+    expect(html).toContain(`<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'">`);
     expect(html).not.toContain('<link');
     expect(html).not.toMatch(/src="http/);
     expect(html).not.toMatch(/<script/i);
     expect(html).not.toMatch(/url\((?!#)/); // only references inside the page (SVG markers)
+    expect(html).not.toMatch(/href="(?!#)/); // links only to anchors in the page
   });
 
   it('puts the verdict and the cautions before the first table', () => {
@@ -138,12 +225,13 @@ describe('renderHtml', () => {
     }
   });
 
-  it('shows severity as a coloured badge with the word', () => {
+  it('shows severity as a coloured badge with the word, and what each severity means', () => {
     expect(html).toContain('<h2 class="verdict">Verdict: <strong class="badge badge-fail">FAIL</strong></h2>');
     for (const s of ['fail', 'warning', 'advice', 'pass']) {
       expect(html).toContain(`<strong class="badge badge-${s}">${s.toUpperCase()}</strong>`);
       expect(html).toMatch(new RegExp(`\\.badge-${s} \\{ background: #[0-9A-F]{6}`));
     }
+    for (const meaning of Object.values(SEVERITY_MEANING)) expect(html).toContain(`<td>${meaning}</td>`);
   });
 
   it('prints on A4 with big sections on new pages', () => {
@@ -154,34 +242,46 @@ describe('renderHtml', () => {
     expect(html).toContain('<h2 class="cautions">Cautions</h2>');
   });
 
+  it('shows the working as steps, and links a finding\'s sources to their entries', () => {
+    const r = withNote();
+    const out = htmlOf(r);
+    expect(out).toContain(`<li><span>x_g - x_a</span> = <span>356 - 280</span> = <span class="result">${formatQuantity(76, 'mm')}</span></li>`);
+    for (const s of r.sources) {
+      expect(out).toContain(`<tr id="source-${s.id}">`);
+      expect(out).toContain(`<a href="#source-${s.id}">${s.id}</a>`);
+    }
+  });
+
   it('escapes HTML and Markdown in user text', () => {
-    const hostile = renderHtml(withHostileText(), NO_PLOTS);
+    const hostile = htmlOf(withHostileText());
     expect(hostile).not.toMatch(/<script/i);
     expect(hostile).not.toContain('<img');
     expect(hostile).not.toContain('<b>');
+    expect(hostile).not.toContain('<u>');
     expect(hostile).not.toMatch(/src="http/);
     expect(hostile).toContain('&lt;script&gt;alert(&quot;x&quot;)&lt;/script&gt;');
     expect(hostile).toContain('<title>Design-rule check: Mine &lt;script&gt;');
     expect(hostile).toContain('![p](http://example.com/p.png)');
     expect(hostile).toContain('&lt;b&gt;bold&lt;/b&gt;');
     expect(hostile).toContain('<p>- not a list, &lt;i&gt;not&lt;/i&gt; italic</p>');
-    expect(hostile).toContain('12. not an ordered item');
+    expect(hostile).toContain('<td>*crew* &lt;u&gt;aft&lt;/u&gt; | braking</td>');
+    expect(hostile).toContain('<td>12. not an ordered item</td>');
     expect(hostile).not.toMatch(/<ol[^>]*>\s*<li>not an ordered item/);
   });
 
-  it('renders an escaped pipe as a literal pipe inside its cell', () => {
+  it('keeps a pipe in a cell as a literal pipe', () => {
     expect(html).toContain('<td>measured | estimated from drawing</td>');
   });
 
   it('refuses a result without cautions', () => {
-    expect(() => renderHtml({ ...result, cautions: ['  '] }, NO_PLOTS)).toThrow(/cautions/);
+    expect(() => htmlOf({ ...result, cautions: ['  '] })).toThrow(/cautions/);
   });
 });
 
 describe('report, cutting sections', () => {
   const result = sampleResult();
-  const md = renderMarkdown(result);
-  const html = renderHtml(result, NO_PLOTS);
+  const md = markdownOf(result);
+  const html = htmlOf(result);
   const { cut_list, leather, setting_out, stock_plan } = result.cutting;
 
   it('has the cut list, leather, setting-out and stock plan sections in order, before the spec', () => {
@@ -191,20 +291,23 @@ describe('report, cutting sections', () => {
     expect(html).toContain('<h2 class="new-page">Stock plan</h2>');
   });
 
-  it('tables every part with its rough size, and every strap and hide', () => {
+  it('tables every part with its rough size and a total, and every strap and hide', () => {
     const rows = tableAfter(md, '## Cut list');
-    expect(rows).toHaveLength(cut_list.length);
+    expect(rows).toHaveLength(cut_list.length + 1);
     const axle = cut_list.find((c) => c.part === 'axle')!;
-    expect(rows.find((r) => r.startsWith('| axle |'))).toContain(`${axle.rough.length_mm.toFixed(1)} x ${axle.rough.width_mm.toFixed(1)} x ${axle.rough.thickness_mm.toFixed(1)}`);
+    const rough = [axle.rough.length_mm, axle.rough.width_mm, axle.rough.thickness_mm].map((v) => formatNumber(v, 'mm')).join(' x ');
+    expect(cellsOf(rows.find((r) => r.startsWith('| axle |'))!)[5]).toBe(rough);
+    expect(rows.at(-1)).toContain('**Total: rough volume with spares');
     expect(tableAfter(md, '### Straps and lashings')).toHaveLength(leather.items.length);
     expect(tableAfter(md, '### Hides to buy')[0]).toContain(`| ${leather.hides[0].hides} |`);
   });
 
   it('links the setting-out drawing in Markdown and puts it inline in HTML', () => {
     expect(md).toContain('![Wheel setting-out drawing](wheel-setting-out.svg)');
-    expect(html).toContain(`<span class="setting-out"><svg class="${scopeClass(settingOutSvg(result))}"`);
+    expect(html).toContain(`<figure class="setting-out"><svg class="${scopeClass(settingOutSvg(result))}"`);
     expect(html).not.toContain('<img');
-    expect(tableAfter(md, '## Wheel setting-out').find((r) => r.includes('between shoulders'))).toContain(setting_out.spoke_length_shoulders_mm.toFixed(1));
+    const row = tableAfter(md, '## Wheel setting-out').find((r) => r.includes('between shoulders'))!;
+    expect(cellsOf(row)).toEqual(['Spoke length between shoulders', formatNumber(setting_out.spoke_length_shoulders_mm, 'mm'), 'mm']);
   });
 
   it('does not inline a drawing that holds a script or an outside link', () => {
@@ -216,24 +319,24 @@ describe('report, cutting sections', () => {
 
   it('shows each group with its bound and gap, and each pattern as a text bar in Markdown', () => {
     const groups = tableAfter(md, '## Stock plan');
-    expect(groups).toHaveLength(stock_plan.groups.length);
+    expect(groups).toHaveLength(stock_plan.groups.length + 1);
+    expect(groups.at(-1)).toContain('**All groups**');
     stock_plan.groups.forEach((g, i) => {
       expect(groups[i]).toContain(formatNumber(g.plan.lower_bound, 'currency'));
       expect(groups[i]).toContain(formatPercent(g.plan.gap));
-      expect(tableAfter(md, `### Group ${i + 1}: ${g.species}, ${sectionText(g.section)} mm`)).toHaveLength(g.plan.patterns.length);
+      const heading = `### Group ${i + 1}: ${g.species}, ${sectionText(g.section)} mm`;
+      expect(tableAfter(md, heading)).toHaveLength(g.plan.patterns.length);
+      // One bar line per pattern, with as many part runs as cuts, in the block after the patterns.
+      const bars = fencedBlocks(md.slice(md.indexOf(heading)))[0];
+      const lines = bars.split('\n').filter((l) => /^\d+\.\d+ /.test(l));
+      expect(lines).toHaveLength(g.plan.patterns.length);
+      lines.forEach((l, k) => expect(l.split('|').length - 2).toBe(g.plan.patterns[k].cuts.length));
     });
-    const bars = [...md.matchAll(/^```stock-bars (\d+)\n([\s\S]*?)\n```$/gm)];
-    expect(bars.map((m) => Number(m[1]))).toEqual(stock_plan.groups.map((_g, i) => i));
-    // One bar line per pattern, with as many part runs as cuts.
-    const first = stock_plan.groups[0].plan.patterns;
-    const lines = bars[0][2].split('\n').filter((l) => /^\d+\.\d+ /.test(l));
-    expect(lines).toHaveLength(first.length);
-    lines.forEach((l, k) => expect(l.split('|').length - 2).toBe(first[k].cuts.length));
     expect(tableAfter(md, '### Parts no listed stock serves')[0]).toContain(stock_plan.unserved[0].part);
   });
 
   it('draws each pattern as an inline SVG bar in HTML, one rectangle per cut and one for the offcut', () => {
-    const svgs = [...html.matchAll(/<svg [^>]*class="stock-bar"[\s\S]*?<\/svg>/g)].map((m) => m[0]);
+    const svgs = [...html.matchAll(/<svg [^>]*class="axletree-drawing-[0-9a-z]+ stock-bar"[\s\S]*?<\/svg>/g)].map((m) => m[0]);
     const patterns = stock_plan.groups.flatMap((g) => g.plan.patterns);
     expect(svgs).toHaveLength(patterns.length);
     svgs.forEach((svg, i) => {
@@ -241,13 +344,13 @@ describe('report, cutting sections', () => {
       expect(svg.match(/<rect /g)).toHaveLength(p.cuts.length + (p.offcut_mm > 0 ? 1 : 0));
       expect(svg).toContain(`<title>offcut: ${formatNumber(p.offcut_mm, 'mm')} mm</title>`);
     });
-    expect(html).not.toContain('```stock-bars');
+    expect(html).not.toContain('```');
   });
 
   it('escapes part labels inside the SVG bars', () => {
     const r = sampleResult();
     r.cutting.stock_plan.groups[0].plan.patterns[0].cuts[0].label = '<script>x</script> & "q"';
-    const out = renderHtml(r, NO_PLOTS);
+    const out = htmlOf(r);
     expect(out).not.toMatch(/<script/i);
     expect(out).toContain('&#60;script&#62;x&#60;/script&#62; &#38; &#34;q&#34;');
   });

@@ -5,6 +5,7 @@ import { SEVERITY_COLOURS, toArgb } from '../src/render/severity-palette.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 import type { CheckResult } from '../src/core/result/check-result.ts';
 import { SHORT_CAUTION } from '../src/core/cautions.ts';
+import { SEVERITY_MEANING } from '../src/core/findings/severity.ts';
 import { BAR_FIRST_COLUMN } from '../src/render/sheets/stock-plan-sheet.ts';
 import { partLabels } from '../src/render/stock-bar.ts';
 import { OFFCUT_FILL, partFill } from '../src/render/stock-palette.ts';
@@ -91,35 +92,54 @@ describe('renderWorkbook', () => {
         if (row.getCell(1).value === name) {
           found = true;
           expect(row.getCell(2).value).toBe(fig.value);
-          expect(row.getCell(3).value).toBe(fig.unit);
+          expect(row.getCell(3).value).toBe(fig.unit || null); // an empty cell where the figure has no unit
         }
       });
       expect(found, name).toBe(true);
     }
   });
 
-  it('lists findings worst first with their values', async () => {
+  it('lists graded findings worst first with their raw values, subject in words and by id, fix, sources and working', async () => {
     const ws = sheet(await readBack(result), 'Findings');
-    expect(ws.getRow(2).getCell(1).value).toBe('Rule');
-    const rows = dataRows(ws);
-    expect(rows.map((r) => r.getCell(3).value)).toEqual(['fail', 'warning', 'advice', 'pass']);
+    expect(ws.getRow(2).getCell(1).value).toBe('No.');
+    const rows = dataRows(ws).filter((r) => typeof r.getCell(2).value === 'string');
+    expect(rows.map((r) => r.getCell(2).value).slice(0, 4)).toEqual(['fail', 'warning', 'advice', 'pass']);
 
     const warning = result.findings.find((f) => f.severity === 'warning')!;
-    const row = rows.find((r) => r.getCell(2).value === warning.code)!;
+    const row = rows.find((r) => r.getCell(4).value === warning.code)!;
     expect(row.values).toEqual([
       undefined, // exceljs rows are 1-based
-      warning.rule, warning.code, warning.severity, warning.subject, warning.value, warning.unit,
-      warning.limit, warning.utilisation, warning.message, warning.fix, warning.sources.join('; '), warning.working_text,
+      '2', warning.severity, warning.rule, warning.code, warning.subject_label, warning.value, warning.limit, warning.unit,
+      warning.utilisation, warning.message, warning.subject, undefined, warning.fix, warning.sources.join('; '), warning.working_text,
     ]);
-    expect(row.getCell(8).numFmt).toBe('0.0%');
-    expect(row.getCell(12).alignment?.wrapText).toBe(true);
+    expect(row.getCell(9).numFmt).toBe('0.0%');
+    expect(row.getCell(6).numFmt).toBe('0.0'); // newtons to a tenth; the cell keeps every digit
+    expect(row.getCell(15).alignment?.wrapText).toBe(true);
+  });
+
+  it('says what each severity means beside its count on Summary', async () => {
+    const ws = sheet(await readBack(result), 'Summary');
+    const meaning = new Map<unknown, unknown>();
+    ws.eachRow((row) => meaning.set(row.getCell(1).value, row.getCell(3).value));
+    for (const [s, text] of Object.entries(SEVERITY_MEANING)) expect(meaning.get(s), s).toBe(text);
+  });
+
+  it('keeps notes apart from the graded findings', async () => {
+    const r = sampleResult();
+    r.findings.push({ ...r.findings[0], severity: 'info', rule: 'balance.axle-position', subject_label: 'standing, crew as placed', utilisation: null, limit: null });
+    const ws = sheet(await readBack(r), 'Findings');
+    const values = dataRows(ws).map((x) => [x.getCell(1).value, x.getCell(2).value]);
+    const notesAt = values.findIndex(([first]) => String(first).startsWith('Notes'));
+    expect(values.slice(0, notesAt).map(([, s]) => s).filter(Boolean)).toEqual(['fail', 'warning', 'advice', 'pass']);
+    expect(values.slice(notesAt)).toContainEqual(['N1', 'info']);
   });
 
   it('fills severity cells by severity, fail red', async () => {
     const rows = dataRows(sheet(await readBack(result), 'Findings'));
-    const fail = rows.find((r) => r.getCell(3).value === 'fail')!;
-    expect(fillOf(fail.getCell(3))).toBe(toArgb(SEVERITY_COLOURS.fail.fill));
-    const fills = new Set(rows.map((r) => fillOf(r.getCell(3))));
+    const fail = rows.find((r) => r.getCell(2).value === 'fail')!;
+    expect(fillOf(fail.getCell(2))).toBe(toArgb(SEVERITY_COLOURS.fail.fill));
+    const graded = rows.filter((r) => ['fail', 'warning', 'advice', 'pass'].includes(String(r.getCell(2).value)));
+    const fills = new Set(graded.map((r) => fillOf(r.getCell(2))));
     expect(fills.size).toBe(4);
   });
 

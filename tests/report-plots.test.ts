@@ -4,9 +4,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { runCheck } from '../src/core/pipeline/run-check.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
-import { renderMarkdown } from '../src/render/report-md.ts';
-import { renderHtml } from '../src/render/report-html.ts';
-import { drawReportPlots, PLOTS_TITLE } from '../src/render/report-plots.ts';
+import { htmlOf, markdownOf } from './support/report-outputs.ts';
+import { drawReportPlots } from '../src/render/report-plots.ts';
+import { SECTIONS } from '../src/render/model/section-titles.ts';
 import { writeOutputs } from '../src/node/write-outputs.ts';
 import { readDemo, rulesData } from './support/fixtures.ts';
 
@@ -17,7 +17,7 @@ describe('plots in the report', () => {
   const p = prepareSpec(readDemo('demo-two-crew'), rulesData);
   if (!p.ok) throw new Error('demo does not prepare');
   const result = runCheck(p.spec, p.entries, rulesData);
-  const md = renderMarkdown(result);
+  const md = markdownOf(result);
   let dir = '';
   let written: string[] = [];
   let html = '';
@@ -25,7 +25,7 @@ describe('plots in the report', () => {
   beforeAll(async () => {
     dir = await mkdtemp(join(tmpdir(), 'axletree-plots-'));
     written = await writeOutputs(result, dir, join(dir, 'spec.yaml'));
-    html = renderHtml(result, await drawReportPlots(result));
+    html = htmlOf(result, await drawReportPlots(result));
   });
   afterAll(async () => {
     await rm(dir, { recursive: true, force: true });
@@ -36,7 +36,7 @@ describe('plots in the report', () => {
   });
 
   it('links each from report.md with its caption, under its own heading', () => {
-    expect(md).toContain(`\n## ${PLOTS_TITLE}\n`);
+    expect(md).toContain(`\n## ${SECTIONS.plots.title}\n`);
     for (const plot of result.plots!) {
       expect(md).toContain(`](plot-${plot.id}.svg)`);
       expect(md).toContain(plot.caption.slice(0, 30));
@@ -56,7 +56,7 @@ describe('plots in the report', () => {
 
   it('puts each inline in report.html, with no image links', () => {
     expect(html).not.toMatch(/<img/);
-    const inline = html.match(/<span class="plot"><svg/g) ?? [];
+    const inline = html.match(/<figure class="plot"><svg/g) ?? [];
     expect(inline).toHaveLength(result.plots!.length + result.ride!.cases.length * 3);
   });
 });

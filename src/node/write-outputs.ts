@@ -1,7 +1,8 @@
 import type { CheckResult } from '../core/result/check-result.ts';
 import { writeFileSet } from './write-file-set.ts';
-import { renderHtml } from '../render/report-html.ts';
-import { renderMarkdown } from '../render/report-md.ts';
+import { reportDocument } from '../render/model/report-document.ts';
+import { renderHtml } from '../render/html/render-html.ts';
+import { renderMarkdown } from '../render/markdown/render-markdown.ts';
 import { renderWorkbook } from '../render/workbook.ts';
 import { SETTING_OUT_SVG_FILE, settingOutSvg } from '../render/report-figures.ts';
 import { drawReportPlots } from '../render/report-plots.ts';
@@ -22,11 +23,13 @@ export function resultJson(result: CheckResult): string {
 
 /** Render everything first, then write each file atomically; returns the paths written. */
 export async function writeOutputs(result: CheckResult, dir: string, inputPath: string): Promise<string[]> {
+  // One report model for all three outputs, so the workbook, report.md and report.html cannot disagree.
+  const doc = reportDocument(result);
   const plots = await drawReportPlots(result);
   const files: [string, string | Uint8Array][] = [
-    [OUTPUT_FILES.workbook, await renderWorkbook(result)],
-    [OUTPUT_FILES.markdown, renderMarkdown(result)],
-    [OUTPUT_FILES.html, renderHtml(result, plots)],
+    [OUTPUT_FILES.workbook, await renderWorkbook(result, doc)],
+    [OUTPUT_FILES.markdown, renderMarkdown(doc)],
+    [OUTPUT_FILES.html, renderHtml(doc, plots)],
     [OUTPUT_FILES.json, resultJson(result)],
     [OUTPUT_FILES.settingOut, `${settingOutSvg(result).trim()}\n`],
     // The plots report.md links (plot-<id>.svg, ride-<case>-<plot>.svg); report.html holds them inline.

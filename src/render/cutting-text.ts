@@ -1,24 +1,21 @@
-import type { Size } from '../core/cutlist/size.ts';
 import type { CuttingPattern, CuttingPlan } from '../core/stock/cutting-types.ts';
-import { formatNumber, formatPercent } from './number-format.ts';
+import { formatNumber, formatPercent } from '../core/format/number-format.ts';
 
-// Plain-text forms of the cutting results, shared by the workbook and the
-// report so both say the same thing the same way.
+// Plain-text forms of the cutting results, shared by the report model and the
+// stock command so both say the same thing the same way.
 
-export function sizeText(s: Size): string {
-  return [s.length_mm, s.width_mm, s.thickness_mm].map((v) => formatNumber(v, 'mm')).join(' x ');
-}
+const count = (n: number) => formatNumber(n, 'count');
 
 export function sectionText(s: { width_mm: number; thickness_mm: number }): string {
   return `${formatNumber(s.width_mm, 'mm')} x ${formatNumber(s.thickness_mm, 'mm')}`;
 }
 
-/** Stock bought, shortest first: "1 x 2400.0 mm, 3 x 3000.0 mm". */
+/** Stock bought, shortest first: "1 x 2400 mm, 3 x 3000 mm". */
 export function boughtText(plan: CuttingPlan): string {
   if (plan.bought.length === 0) return 'none';
   return [...plan.bought]
     .sort((a, b) => a.length_mm - b.length_mm)
-    .map((b) => `${b.count} x ${formatNumber(b.length_mm, 'mm')} mm`)
+    .map((b) => `${count(b.count)} x ${formatNumber(b.length_mm, 'mm')} mm`)
     .join(', ');
 }
 
@@ -33,7 +30,7 @@ export function cutsText(p: CuttingPattern): string {
     if (last && last.label === c.label && last.length_mm === c.length_mm) last.n += 1;
     else runs.push({ ...c, n: 1 });
   }
-  return runs.map((r) => `${r.n > 1 ? `${r.n} x ` : ''}${r.label} (${formatNumber(r.length_mm, 'mm')} mm)`).join('; ');
+  return runs.map((r) => `${r.n > 1 ? `${count(r.n)} x ` : ''}${r.label} (${formatNumber(r.length_mm, 'mm')} mm)`).join('; ');
 }
 
 /** Said beside every table of groups, so "optimal" next to a gap does not read as a contradiction. */
@@ -46,21 +43,12 @@ export function minimisesText(plan: CuttingPlan): string {
   return plan.cost === null ? 'stock pieces' : 'cost';
 }
 
-/** The LP bound, counted in what the plan minimises. */
-export function boundText(plan: CuttingPlan): string {
-  return formatNumber(plan.lower_bound, 'currency');
-}
-
 export function gapText(plan: CuttingPlan): string {
   return formatPercent(plan.gap);
 }
 
 export function baselineText(plan: CuttingPlan): string {
   const { pieces_used, cost } = plan.baseline;
-  const pieces = `${pieces_used} ${pieces_used === 1 ? 'piece' : 'pieces'}`;
+  const pieces = `${count(pieces_used)} ${pieces_used === 1 ? 'piece' : 'pieces'}`;
   return cost === null ? pieces : `${pieces}, cost ${formatNumber(cost, 'currency')}`;
-}
-
-export function degreesList(values: readonly number[]): string {
-  return values.map((v) => formatNumber(v, '°')).join(', ');
 }

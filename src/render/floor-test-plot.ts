@@ -3,6 +3,7 @@
 import { dampedSineAt } from '../core/floor-test/damped-sine-fit.ts';
 import type { DropRecord, FloorTestEstimate } from '../core/floor-test/floor-test-types.ts';
 import { plotSvg } from './plots/plot-svg.ts';
+import { formatNumber, formatQuantity } from '../core/format/number-format.ts';
 
 export async function floorTestPlotSvg(record: DropRecord, e: FloorTestEstimate): Promise<string> {
   const { start_s, end_s } = e.free_vibration;
@@ -10,7 +11,7 @@ export async function floorTestPlotSvg(record: DropRecord, e: FloorTestEstimate)
   const fitted = dampedSineAt(e.fit, t.map((v) => v - start_s));
   return plotSvg({
     id: 'floor-test',
-    title: `Drop test: record and fitted damped sine (f_n ${e.natural_frequency_hz.toFixed(2)} Hz, damping ratio ${e.damping_ratio.toFixed(3)})`,
+    title: `Drop test: record and fitted damped sine (f_n ${formatQuantity(e.natural_frequency_hz, 'Hz')}, damping ratio ${formatNumber(e.damping_ratio)})`,
     caption: 'The drop record, the damped sine fitted to its free vibration, and the turning points the logarithmic decrement used.',
     xLabel: 'time (s)',
     yLabel: 'displacement (mm)',

@@ -23,16 +23,21 @@ export function ridePlotFile(c: RideCase, kind: RidePlotKind): string {
   return `ride-${c}-${kind}.svg`;
 }
 
+/** A ride plot's title and caption, from the case's title; the report shows them beside the plot. */
+export function ridePlotText(caseTitle: string, kind: RidePlotKind): { title: string; caption: string } {
+  const spec = RIDE_PLOTS.find((p) => p.kind === kind)!;
+  const heading = `${caseTitle.charAt(0).toUpperCase()}${caseTitle.slice(1)}`;
+  return { title: `${heading}: ${spec.title}`, caption: `${heading}: ${spec.title} over time, from the ride model.` };
+}
+
 /** The plot of one kind as data, or null where the series has no channel in its unit. */
 export function ridePlot(c: RideCase, title: string, series: RideSeries, kind: RidePlotKind): PlotData | null {
   const spec = RIDE_PLOTS.find((p) => p.kind === kind)!;
   const channels = series.channels.filter(spec.pick);
   if (channels.length === 0) return null;
-  const heading = `${title.charAt(0).toUpperCase()}${title.slice(1)}`;
   return {
     id: `ride-${c}-${kind}`,
-    title: `${heading}: ${spec.title}`,
-    caption: `${heading}: ${spec.title} over time, from the ride model.`,
+    ...ridePlotText(title, kind),
     xLabel: 'time (s)',
     yLabel: spec.yLabel,
     lines: channels.map((ch) => ({ label: ch.name, x: series.t_s, y: ch.values })),
@@ -40,9 +45,14 @@ export function ridePlot(c: RideCase, title: string, series: RideSeries, kind: R
   };
 }
 
+/** The kinds of plot the series can fill. */
+export function ridePlotKinds(series: RideSeries): RidePlotKind[] {
+  return RIDE_PLOTS.filter((p) => series.channels.some(p.pick)).map((p) => p.kind);
+}
+
 /** The names of the plots the series can fill. */
 export function ridePlotNames(c: RideCase, series: RideSeries): string[] {
-  return RIDE_PLOTS.filter((p) => series.channels.some(p.pick)).map((p) => ridePlotFile(c, p.kind));
+  return ridePlotKinds(series).map((k) => ridePlotFile(c, k));
 }
 
 /** Every plot the series can fill, with its file name, drawn to SVG. */

@@ -3,6 +3,9 @@ import { SEVERITIES, severityRank, type Finding, type Severity } from '../core/f
 /** Severities from worst to best, the order every report lists them in. */
 export const SEVERITIES_WORST_FIRST: readonly Severity[] = [...SEVERITIES].reverse();
 
+/** The severities that grade a build, worst first: all but info, which only informs. */
+export const GRADED_WORST_FIRST: readonly Severity[] = SEVERITIES_WORST_FIRST.filter((s) => s !== 'info');
+
 /** A copy of the findings, worst first; the core's order is kept within a severity. */
 export function findingsWorstFirst(findings: readonly Finding[]): Finding[] {
   return findings

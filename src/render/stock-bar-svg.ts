@@ -1,5 +1,5 @@
 import type { CuttingPattern } from '../core/stock/cutting-types.ts';
-import { formatNumber } from './number-format.ts';
+import { formatNumber } from '../core/format/number-format.ts';
 import { barSegments } from './stock-bar.ts';
 import { OFFCUT_FILL, partFill } from './stock-palette.ts';
 
@@ -37,7 +37,7 @@ export function stockBarSvg(p: CuttingPattern, longest_mm: number, labels: reado
     const x = s.from_mm * k;
     const w = s.length_mm * k;
     // An offcut too short for its words still shows its length.
-    const texts = s.label === null ? [`offcut ${formatNumber(s.length_mm, 'mm')} mm`, `${s.length_mm.toFixed(0)} mm`, s.length_mm.toFixed(0)] : [s.label];
+    const texts = s.label === null ? [`offcut ${formatNumber(s.length_mm, 'mm')} mm`, `${formatNumber(s.length_mm, 'mm')} mm`, formatNumber(s.length_mm, 'mm')] : [s.label];
     const fill = s.label === null ? OFFCUT_FILL : partFill(labels, s.label);
     const shown = fitText(texts, w);
     return [

@@ -1,4 +1,5 @@
 import type { StockPlanGroup } from '../core/cutlist/cutting-result.ts';
+import { formatNumber } from '../core/format/number-format.ts';
 import { barScale, barSegments } from './stock-bar.ts';
 
 /** Characters the longest stock of a group takes in a text bar. */
@@ -14,7 +15,7 @@ export function textBars(group: StockPlanGroup, groupNumber: number): string {
   const labels = [...new Set(patterns.flatMap((p) => p.cuts.map((c) => c.label)))];
   const letter = (label: string) => LETTERS[labels.indexOf(label) % LETTERS.length];
   const scale = barScale(Math.max(1, ...patterns.map((p) => p.stock_length_mm)), TEXT_BAR_CHARS);
-  const heads = patterns.map((p, k) => `${groupNumber}.${k + 1}  ${p.stock_length_mm} mm x ${p.count}`);
+  const heads = patterns.map((p, k) => `${groupNumber}.${k + 1}  ${formatNumber(p.stock_length_mm, 'mm')} mm x ${formatNumber(p.count, 'count')}`);
   const width = Math.max(0, ...heads.map((h) => h.length));
   const lines = patterns.map((p, k) => {
     const bar = barSegments(p)
@@ -26,5 +27,5 @@ export function textBars(group: StockPlanGroup, groupNumber: number): string {
     return `${heads[k].padEnd(width)}  ${bar}|`;
   });
   const legend = labels.map((l) => `${letter(l)} = ${l}`).join('; ');
-  return [...lines, '', `One character = ${scale} mm; dots are offcut. ${legend}`].join('\n');
+  return [...lines, '', `One character = ${formatNumber(scale, 'mm')} mm; dots are offcut. ${legend}`].join('\n');
 }

@@ -1,5 +1,7 @@
 import ExcelJS from 'exceljs';
 import type { CheckResult } from '../core/result/check-result.ts';
+import type { ReportDocument } from './model/document.ts';
+import { reportDocument } from './model/report-document.ts';
 import { addSummarySheet } from './sheets/summary-sheet.ts';
 import { addFindingsSheet } from './sheets/findings-sheet.ts';
 import { addMassBalanceSheet } from './sheets/mass-balance-sheet.ts';
@@ -13,23 +15,27 @@ import { addSpecSheet } from './sheets/spec-sheet.ts';
 import { addSourcesSheet } from './sheets/sources-sheet.ts';
 import { addSpecificationSheets } from './spec-workbook/spec-sheets.ts';
 
-/** The check result as an .xlsx workbook, returned as bytes; the caller writes it. */
-export async function renderWorkbook(result: CheckResult): Promise<Buffer> {
+/**
+ * The check result as an .xlsx workbook, returned as bytes; the caller writes
+ * it. The sheets' tables are the report model's, so the workbook says what the
+ * Markdown and HTML reports say; pass the model the reports were made from.
+ */
+export async function renderWorkbook(result: CheckResult, doc: ReportDocument = reportDocument(result)): Promise<Buffer> {
   const wb = new ExcelJS.Workbook();
   wb.creator = `${result.tool.name} ${result.tool.version}`;
-  wb.title = `Design-rule check: ${result.spec_name}`;
+  wb.title = doc.title;
   if (result.input !== undefined) addSpecificationSheets(wb, result.input, result.choices);
-  addSummarySheet(wb, result);
-  addFindingsSheet(wb, result);
-  addMassBalanceSheet(wb, result);
-  addLoadsSheet(wb, result);
-  addRideSheet(wb, result);
-  addCutListSheet(wb, result);
-  addLeatherSheet(wb, result);
-  addSettingOutSheet(wb, result);
-  addStockPlanSheet(wb, result);
-  addSpecSheet(wb, result);
-  addSourcesSheet(wb, result);
+  addSummarySheet(wb, doc);
+  addFindingsSheet(wb, doc);
+  addMassBalanceSheet(wb, doc);
+  addLoadsSheet(wb, doc);
+  addRideSheet(wb, doc);
+  addCutListSheet(wb, doc);
+  addLeatherSheet(wb, doc);
+  addSettingOutSheet(wb, doc);
+  addStockPlanSheet(wb, doc, result);
+  addSpecSheet(wb, doc);
+  addSourcesSheet(wb, doc);
   const bytes = await wb.xlsx.writeBuffer();
   return Buffer.from(bytes as ArrayBuffer);
 }

@@ -5,14 +5,14 @@ import { mkdtemp, readdir, readFile, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { renderWorkbook } from '../../src/render/workbook.ts';
-import { renderMarkdown } from '../../src/render/report-md.ts';
+import { htmlOf, markdownOf } from '../support/report-outputs.ts';
 import { drawReportPlots } from '../../src/render/report-plots.ts';
-import { renderHtml } from '../../src/render/report-html.ts';
 import { writeOutputs } from '../../src/node/write-outputs.ts';
 import { SHORT_CAUTION } from '../../src/core/cautions.ts';
 import type { CheckResult } from '../../src/core/result/check-result.ts';
 import { sampleResult } from '../fixtures/sample-result.ts';
 import { sampleRide } from '../fixtures/sample-ride.ts';
+import { caseHeading } from '../../src/render/model/ride-blocks.ts';
 
 function withRide(needed: number | null = null): CheckResult {
   return { ...sampleResult(), ride: sampleRide(needed) };
@@ -27,25 +27,27 @@ describe('the Ride sheet', () => {
     expect(names.indexOf('Ride')).toBe(names.indexOf('Loads') + 1);
     const ws = wb.getWorksheet('Ride')!;
     expect(String(ws.getRow(1).getCell(1).value)).toBe(SHORT_CAUTION);
+    // Each case's tables follow its heading; read the rows back under it.
     const rows: unknown[][] = [];
-    ws.eachRow((row, n) => {
-      if (n > 2) rows.push((row.values as unknown[]).slice(1));
-    });
-    const find = (c: string, item: string, quantity: string) => rows.find((r) => String(r[0]).endsWith(`(${c})`) && r[1] === item && r[2] === quantity)?.[3];
+    ws.eachRow((row) => rows.push((row.values as unknown[]).slice(1)));
+    const under = (heading: string) => {
+      const at = rows.findIndex((r) => r[0] === heading && r.length === 1);
+      expect(at, heading).toBeGreaterThan(0);
+      return rows.slice(at);
+    };
+    const first = (from: unknown[][], label: string) => from.find((r) => r[0] === label);
     for (const r of result.ride!.cases) {
-      for (const c of r.crew) {
-        expect(find(r.case, c.role, 'rise above standing')).toBe(c.rise_mm);
-        expect(find(r.case, c.role, 'time off the floor')).toBe(c.airborne_ms);
-        expect(find(r.case, c.role, 'floor dynamic load factor')).toBe(c.floor_dlf);
-      }
-      for (const w of r.wheels) expect(find(r.case, `${w.wheel} wheel`, 'ground dynamic load factor')).toBe(w.dlf);
-      expect(find(r.case, 'yoke', 'least force')).toBe(r.yokeForceMin_N);
-      expect(find(r.case, 'yoke', 'greatest force')).toBe(r.yokeForceMax_N);
-      expect(find(r.case, 'crew', 'cycles to fall below 10 %') ?? null).toBe(r.decayCycles);
+      const block = under(caseHeading(r));
+      for (const c of r.crew) expect(first(block, c.role)?.slice(1, 4)).toEqual([c.rise_mm, c.airborne_ms, c.floor_dlf]);
+      for (const w of r.wheels) expect(first(block, w.wheel)?.slice(1, 3)).toEqual([w.airborne_ms, w.dlf]);
+      expect(first(block, 'Yoke force, least')?.slice(1, 3)).toEqual([r.yokeForceMin_N, 'N']);
+      expect(first(block, 'Yoke force, greatest')?.slice(1, 3)).toEqual([r.yokeForceMax_N, 'N']);
+      const decay = block.find((x) => String(x[0]).startsWith('Cycles until'));
+      expect(decay?.[1]).toBe(r.decayCycles ?? 'not within the run');
     }
-    const needed = rows.find((r) => r[2] === 'damping ratio needed (tuner)');
-    expect(needed?.[3] ?? null).toBeNull(); // an empty cell
-    expect(String(needed?.[5])).toMatch(/no floor damping/);
+    const needed = first(rows, 'Floor damping ratio needed (tuner)');
+    expect(needed?.[1]).toBe('none');
+    expect(String(needed?.[3])).toMatch(/no floor damping/);
   });
 
   it('is left out when the ride model did not run', async () => {
@@ -57,7 +59,7 @@ describe('the Ride sheet', () => {
 
 describe('the ride section of the report', () => {
   const result = withRide(0.2);
-  const md = renderMarkdown(result);
+  const md = markdownOf(result);
 
   it('comes after the loads, with a table per case and the plots linked, keeping the cautions', () => {
     expect(md.indexOf('\n## Ride\n')).toBeGreaterThan(md.indexOf('\n## Loads\n'));
@@ -67,14 +69,14 @@ describe('the ride section of the report', () => {
       expect(md).toContain(`](ride-${r.case}-heights.svg)`);
       expect(md).toContain(`](ride-${r.case}-floor-forces.svg)`);
     }
-    expect(md).toMatch(/damping ratio of at least 0\.200/);
+    expect(md).toMatch(/\| Floor damping ratio needed \(tuner\) \| 0\.2 \|/);
     expect(md).toContain(SHORT_CAUTION);
   });
 
   it('HTML holds the plots inline, with no image links left', async () => {
-    const html = renderHtml(result, await drawReportPlots(result));
+    const html = htmlOf(result, await drawReportPlots(result));
     expect(html).not.toMatch(/<img/);
-    expect(html.match(/<span class="plot"><svg/g)).toHaveLength(result.ride!.cases.length * 3 + (result.plots?.length ?? 0));
+    expect(html.match(/<figure class="plot"><svg/g)).toHaveLength(result.ride!.cases.length * 3 + (result.plots?.length ?? 0));
     expect(html).toMatch(/<h2 class="new-page">Ride<\/h2>/);
   });
 });

@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readdir, readFile, rm } from 'node:fs/promises';
 import { join } from 'node:path';
 import { freshDir, REPO, runCli } from '../support/run-cli.ts';
+import { formatNumber } from '../../src/core/format/number-format.ts';
 
 const DEMO = join(REPO, 'specs', 'demo-two-crew.yaml');
 let dir: string;
@@ -31,7 +32,7 @@ describe('axletree ride', () => {
     const md = await readFile(join(outDir, 'ride.md'), 'utf8');
     expect(md).toMatch(/^# Ride model: /);
     expect(md).toContain('](ride-ridge-heights.svg)');
-    for (const crew of c.crew) expect(md).toContain(`| ${crew.role} | ${crew.rise_mm.toFixed(1)} |`);
+    for (const crew of c.crew) expect(md).toContain(`| ${crew.role} | ${formatNumber(crew.rise_mm, 'mm')} |`);
   });
 
   it('all three cases without --case', async () => {

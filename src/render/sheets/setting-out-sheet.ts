@@ -1,32 +1,22 @@
 import type ExcelJS from 'exceljs';
-import type { CheckResult } from '../../core/result/check-result.ts';
-import { numFmtForUnit } from '../number-format.ts';
-import { headlineCaution } from '../result-cautions.ts';
-import { DRAWING_NOTE, settingOutRows } from '../setting-out-rows.ts';
-import { addCautionRow, addHeaderRow, addHeading, setColumnWidths, sumOf, wrappedHeight } from './sheet-style.ts';
+import type { ReportDocument } from '../model/document.ts';
+import { sectionById, tableById } from '../model/find-table.ts';
+import { stepLine } from '../model/cell-text.ts';
+import { SETTING_OUT_SVG_FILE } from '../report-figures.ts';
+import { blocksOf, tablesSheet } from './report-sheet.ts';
+import { addHeading, addMergedLine } from './sheet-style.ts';
 
-const WIDTHS = [44, 14, 8, 60];
+/** Where the drawing is, since a spreadsheet cell cannot hold it. */
+export const DRAWING_NOTE = `The dimensioned drawing is in the report: inline in report.html, and as ${SETTING_OUT_SVG_FILE} beside report.md.`;
 
-export function addSettingOutSheet(wb: ExcelJS.Workbook, result: CheckResult): void {
-  const ws = wb.addWorksheet('Wheel setting-out');
-  setColumnWidths(ws, WIDTHS);
-  addCautionRow(ws, headlineCaution(result), WIDTHS.length, sumOf(WIDTHS));
-  const w = result.cutting.setting_out;
-  addHeaderRow(ws, ['Dimension (each wheel)', 'Value', 'Unit']);
-  for (const r of settingOutRows(w)) {
-    const row = ws.addRow([r.label, r.value ?? 'none (no tyre)', r.unit]);
-    if (r.value !== null) row.getCell(2).numFmt = numFmtForUnit(r.unit);
-  }
+/** Every dimension the wheelwright marks out, how they were found, and where the drawing is. */
+export function addSettingOutSheet(wb: ExcelJS.Workbook, doc: ReportDocument): void {
+  const { ws, widths } = tablesSheet(wb, 'Wheel setting-out', doc, [{ table: tableById(doc, 'setting-out') }]);
+  const basis = blocksOf(sectionById(doc, 'settingOut')?.blocks ?? [], 'working').flatMap((w) => w.steps.map(stepLine));
+  const line = (text: string) => addMergedLine(ws, text, widths);
   ws.addRow([]);
   addHeading(ws, 'Basis');
-  for (const line of w.basis) {
-    const row = ws.addRow([line]);
-    ws.mergeCells(row.number, 1, row.number, WIDTHS.length);
-    row.getCell(1).alignment = { wrapText: true, vertical: 'top' };
-    row.height = wrappedHeight([{ text: line, width: sumOf(WIDTHS) }]);
-  }
+  basis.forEach(line);
   ws.addRow([]);
-  const note = ws.addRow([DRAWING_NOTE]);
-  ws.mergeCells(note.number, 1, note.number, WIDTHS.length);
-  note.getCell(1).font = { italic: true };
+  line(DRAWING_NOTE).getCell(1).font = { italic: true };
 }

@@ -61,3 +61,12 @@ export function addHeading(ws: ExcelJS.Worksheet, text: string, size = 13): Exce
 export function sumOf(widths: readonly number[]): number {
   return widths.reduce((a, b) => a + b, 0);
 }
+
+/** A line of text merged across the sheet's columns, wrapped, the row tall enough for it. */
+export function addMergedLine(ws: ExcelJS.Worksheet, text: string, widths: readonly number[]): ExcelJS.Row {
+  const row = ws.addRow([text]);
+  ws.mergeCells(row.number, 1, row.number, widths.length);
+  row.getCell(1).alignment = { wrapText: true, vertical: 'top' };
+  row.height = wrappedHeight([{ text, width: sumOf(widths) }]);
+  return row;
+}

@@ -1,61 +1,50 @@
 import type ExcelJS from 'exceljs';
-import type { CheckResult } from '../../core/result/check-result.ts';
+import type { ReportDocument } from '../model/document.ts';
+import { sectionById, tableById } from '../model/find-table.ts';
+import { runsText } from '../model/runs-text.ts';
 import { SEVERITY_COLOURS } from '../severity-palette.ts';
-import { countBySeverity, SEVERITIES_WORST_FIRST } from '../severity-order.ts';
-import { cellNumber, numFmtForUnit } from '../number-format.ts';
-import { headlineCaution, requireCautions } from '../result-cautions.ts';
-import { addCautionRow, addHeaderRow, addHeading, setColumnWidths, solidFill, sumOf, wrappedHeight } from './sheet-style.ts';
+import { blocksOf, reportSheet } from './report-sheet.ts';
+import { addHeading, addMergedLine, solidFill, sumOf, wrappedHeight } from './sheet-style.ts';
+import { addModelTable } from './sheet-table.ts';
 
-const WIDTHS = [36, 22, 12, 50];
-
-export function addSummarySheet(wb: ExcelJS.Workbook, result: CheckResult): void {
-  const ws = wb.addWorksheet('Summary');
-  setColumnWidths(ws, WIDTHS);
-  const span = WIDTHS.length;
-  addCautionRow(ws, headlineCaution(result), span, sumOf(WIDTHS));
+/** The verdict, the cautions in full, what each severity means with its count, and the key figures. */
+export function addSummarySheet(wb: ExcelJS.Workbook, doc: ReportDocument): void {
+  const verdict = sectionById(doc, 'verdict');
+  const cautions = blocksOf(sectionById(doc, 'cautions')?.blocks ?? [], 'cautions').flatMap((b) => b.items);
+  if (!verdict?.badge || cautions.length === 0) throw new Error('the report has no verdict or no cautions; refusing to write its summary');
+  const severities = tableById(doc, 'severities');
+  const figures = tableById(doc, 'figures');
+  const { ws, widths } = reportSheet(wb, 'Summary', doc, [severities, figures], { widths: [24, 14, 60] });
   ws.addRow([]);
 
-  const title = ws.addRow([`Design-rule check: ${result.spec_name}`]);
-  ws.mergeCells(title.number, 1, title.number, span);
+  const title = addMergedLine(ws, doc.title, widths);
   title.getCell(1).font = { bold: true, size: 16 };
-  ws.addRow(['Checked by', `${result.tool.name} ${result.tool.version}`]);
+  title.height = 24;
+  for (const p of blocksOf(verdict.blocks, 'paragraph')) addMergedLine(ws, runsText(p.runs), widths);
   ws.addRow([]);
 
-  const verdict = ws.addRow(['Verdict', result.verdict.toUpperCase()]);
-  verdict.height = 40;
-  verdict.getCell(1).font = { bold: true, size: 16 };
-  verdict.getCell(1).alignment = { vertical: 'middle' };
-  const word = verdict.getCell(2);
+  const row = ws.addRow(['Verdict', verdict.badge.toUpperCase()]);
+  row.height = 40;
+  row.getCell(1).font = { bold: true, size: 16 };
+  row.getCell(1).alignment = { vertical: 'middle' };
+  const word = row.getCell(2);
   word.font = { bold: true, size: 28 };
-  word.fill = solidFill(SEVERITY_COLOURS[result.verdict].fill);
+  word.fill = solidFill(SEVERITY_COLOURS[verdict.badge].fill);
   word.alignment = { horizontal: 'center', vertical: 'middle' };
   ws.addRow([]);
 
   addHeading(ws, 'Cautions');
-  for (const caution of requireCautions(result)) {
-    const row = ws.addRow([caution]);
-    ws.mergeCells(row.number, 1, row.number, span);
-    const cell = row.getCell(1);
-    cell.font = { bold: true, size: 12 };
-    cell.fill = solidFill('#FFF2CC');
-    cell.alignment = { wrapText: true, vertical: 'top' };
-    row.height = wrappedHeight([{ text: caution, width: sumOf(WIDTHS) * 0.9 }]) + 4;
+  for (const caution of cautions) {
+    const line = addMergedLine(ws, caution, widths);
+    line.getCell(1).font = { bold: true, size: 12 };
+    line.getCell(1).fill = solidFill('#FFF2CC');
+    line.height = wrappedHeight([{ text: caution, width: sumOf(widths) * 0.9 }]) + 4;
   }
   ws.addRow([]);
 
-  addHeading(ws, 'Findings by severity');
-  const counts = countBySeverity(result.findings);
-  for (const s of SEVERITIES_WORST_FIRST) {
-    const row = ws.addRow([s, counts[s]]);
-    row.getCell(1).fill = solidFill(SEVERITY_COLOURS[s].fill);
-  }
-  ws.addRow(['total', result.findings.length]).getCell(1).font = { bold: true };
+  addHeading(ws, 'Findings by severity, and what each severity means');
+  addModelTable(ws, severities, widths);
   ws.addRow([]);
-
   addHeading(ws, 'Key figures');
-  addHeaderRow(ws, ['Figure', 'Value', 'Unit']);
-  for (const [name, fig] of Object.entries(result.figures)) {
-    const row = ws.addRow([name, cellNumber(fig.value), fig.unit]);
-    row.getCell(2).numFmt = numFmtForUnit(fig.unit);
-  }
+  addModelTable(ws, figures, widths);
 }

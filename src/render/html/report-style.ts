@@ -1,5 +1,5 @@
-import { SEVERITIES } from '../core/findings/finding.ts';
-import { SEVERITY_COLOURS } from './severity-palette.ts';
+import { SEVERITIES } from '../../core/findings/finding.ts';
+import { SEVERITY_COLOURS } from '../severity-palette.ts';
 
 // Badges: the word is always printed; the border keeps a badge visible when
 // printed without background colours.
@@ -26,7 +26,7 @@ h3 { font-size: 1.1em; margin: 1.2em 0 0.4em; }
 h4 { font-size: 1em; margin: 1em 0 0.3em; }
 h2.verdict { font-size: 1.8em; border-bottom: none; margin-top: 0.4em; }
 h2.verdict .badge { font-size: 1em; padding: 0.1em 0.6em; }
-h2.cautions + ul {
+ul.cautions {
   border: 2px solid #b45f06;
   background: #fff4e5;
   padding: 0.6em 0.8em 0.6em 2em;
@@ -47,18 +47,26 @@ th, td {
 }
 /* Numbers and badges stay whole; the last column (message, basis, note) takes
    the squeeze and may break anywhere, so a table never runs off the page. */
-td[style*="text-align:right"] { white-space: nowrap; }
+th.num, td.num { text-align: right; }
+td.num { white-space: nowrap; }
 td:last-child { overflow-wrap: anywhere; }
 th { background: #eee; text-align: left; }
-pre {
+tr.total td { font-weight: 700; }
+tr.muted td { color: #666; font-style: italic; }
+code, ol.working { font-family: Consolas, "DejaVu Sans Mono", monospace; }
+/* Working, one step a line: formula = with the numbers = result. The steps
+   keep their own indentation, which lines up continued equations. */
+ol.working {
+  list-style: none;
   background: #f6f6f6;
   border: 1px solid #ccc;
   padding: 0.5em;
-  white-space: pre-wrap;
-  overflow-wrap: anywhere;
   font-size: 0.85em;
+  overflow-wrap: anywhere;
 }
-code { font-family: Consolas, "DejaVu Sans Mono", monospace; }
+ol.working li { white-space: pre-wrap; }
+ol.working .result { font-weight: 700; }
+article.finding { margin: 0 0 1.2em; }
 .badge {
   display: inline-block;
   border: 1px solid #333;
@@ -71,8 +79,10 @@ code { font-family: Consolas, "DejaVu Sans Mono", monospace; }
   print-color-adjust: exact;
 }
 ${badgeRules}
-/* Drawings: the setting-out scales down to the page; stock bars keep their
-   lengths to one scale per group, caption at the left. */
+/* Figures: drawings and plots scale down to the page with their caption under
+   them; stock bars keep their lengths to one scale per group, caption at the left. */
+figure.drawing, figure.plot, figure.setting-out { margin: 0.5em 0 1em; }
+figure figcaption { font-style: italic; font-size: 0.9em; }
 .setting-out svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; }
 .drawing svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; break-inside: avoid; -webkit-print-color-adjust: exact; print-color-adjust: exact; }
 .plot svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; break-inside: avoid; }
@@ -89,7 +99,7 @@ hr { border: none; border-top: 1px solid #999; margin: 2em 0 0.5em; }
   h2, h3, h4 { break-after: avoid; }
   table { font-size: 8pt; }
   thead { display: table-header-group; }
-  tr, pre, figure { break-inside: avoid; }
-  pre { font-size: 7.5pt; }
+  tr, figure, ol.working li { break-inside: avoid; }
+  ol.working { font-size: 7.5pt; }
 }
 `;

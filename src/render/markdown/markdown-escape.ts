@@ -40,3 +40,13 @@ export function fencedBlock(text: string, info = 'text'): string {
   const fence = '`'.repeat(Math.max(3, longestRun + 1));
   return `${fence}${info}\n${text.replace(/\s+$/, '')}\n${fence}`;
 }
+
+/** Inline code that holds the text verbatim, whatever backticks it contains. */
+export function inlineCode(text: string): string {
+  const flat = text.replace(/\s*[\r\n]+\s*/g, ' ');
+  const longestRun = Math.max(0, ...(flat.match(/`+/g) ?? []).map((run) => run.length));
+  const fence = '`'.repeat(longestRun + 1);
+  // A space inside the fence keeps a leading or trailing backtick apart from it.
+  const pad = /^`|`$/.test(flat) ? ' ' : '';
+  return `${fence}${pad}${flat}${pad}${fence}`;
+}

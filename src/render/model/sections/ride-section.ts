@@ -1,0 +1,25 @@
+import type { CheckResult } from '../../../core/result/check-result.ts';
+import { ridePlotKinds } from '../../ride-plots.ts';
+import type { Section } from '../document.ts';
+import { caseHeading, rideCaseBlocks, rideDampingBlocks } from '../ride-blocks.ts';
+import { code, heading, paragraph } from '../runs.ts';
+import { section } from '../section-titles.ts';
+
+/** The ride model's cases, where it ran; the plots come from the result's thinned series. */
+export function rideSection(result: CheckResult): Section[] {
+  const ride = result.ride;
+  if (!ride) return [];
+  return [
+    section('ride', [
+      paragraph(
+        'The lumped ride model (mechanics note, section 8): the crew over a ridge across both tracks, a bump under one wheel, and a drop onto rigid ground. ',
+        'Heights are from the standing position; a dynamic load factor is the peak force over the standing force. The full time series come from ',
+        code('axletree ride'),
+        '.',
+      ),
+      heading(3, 'Floor damping'),
+      ...rideDampingBlocks({ needed: ride.floor_damping_ratio_needed, used: ride.floor_damping_ratio_used, working: ride.floor_damping_working }),
+      ...ride.cases.flatMap((c) => [heading(3, caseHeading(c)), ...rideCaseBlocks(c, ridePlotKinds(c.plot))]),
+    ]),
+  ];
+}
