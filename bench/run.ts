@@ -17,6 +17,7 @@ import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { benchFloor } from './floor-solver.ts';
 import { benchStockPlanner } from './stock-planner.ts';
 import { benchRide } from './ride.ts';
+import { benchStartup } from './startup.ts';
 
 /** The check: validation and every model and rule (the ride model and the stock planner included). */
 const TARGET_MS = 1000;
@@ -66,5 +67,6 @@ for (const file of readdirSync(specs).filter((f) => f.endsWith('.yaml'))) {
 }
 console.log('stock planner, OR-Library bin packing:');
 missed += await benchStockPlanner();
+missed += benchStartup();
 console.log(`heap used ${(process.memoryUsage().heapUsed / 2 ** 20).toFixed(1)} MiB`);
 process.exitCode = missed ? 1 : 0;

@@ -1,6 +1,28 @@
 #!/usr/bin/env node
-// Runs the TypeScript entry point through tsx, so `npx axletree` works from a checkout.
-import { register } from 'tsx/esm/api';
+// Runs the command built into dist/ (`npm ci` and `npm run build` make it)
+// while it is no older than the sources it was made from (dist/inputs.json);
+// otherwise runs the TypeScript source through tsx, so a checkout always runs
+// what it holds.
+import { existsSync, readFileSync, statSync } from 'node:fs';
 
-register();
-await import('../cli/main.ts');
+const dist = new URL('../dist/axletree.mjs', import.meta.url);
+
+/** True when every source of the bundle is no newer than the bundle. */
+function fresh() {
+  try {
+    const built = statSync(dist).mtimeMs;
+    const { inputs } = JSON.parse(readFileSync(new URL('../dist/inputs.json', import.meta.url), 'utf8'));
+    return inputs.every((path) => statSync(new URL(`../${path}`, import.meta.url)).mtimeMs <= built);
+  } catch {
+    return false;
+  }
+}
+
+if (fresh()) {
+  await import(dist.href);
+} else {
+  if (existsSync(dist)) process.stderr.write('axletree: dist/ is older than the source, so the source runs (slower to start); `npm run build` brings it up to date.\n');
+  const { register } = await import('tsx/esm/api');
+  register();
+  await import('../cli/main.ts');
+}

@@ -6,7 +6,7 @@ import type { Console } from './console.ts';
 /** The rules data, or undefined after reporting what is wrong with it. */
 export function loadData(con: Console): RulesData | undefined {
   try {
-    return loadRulesData(defaultRulesDir());
+    return loadRulesData(con.rulesDir ?? defaultRulesDir());
   } catch (e) {
     if (!(e instanceof RulesDataError)) throw e;
     con.err(`axletree: the rules data cannot be used: ${e.message}\n`);

@@ -1,8 +1,16 @@
 // The only module that touches the process: arguments in, exit code out.
 import { run } from './run.ts';
+import { EXIT } from './exit-codes.ts';
+import { faultLine } from './fault-line.ts';
 
-process.exitCode = await run(process.argv.slice(2), {
-  out: (s) => process.stdout.write(s),
-  err: (s) => process.stderr.write(s),
-  cwd: process.cwd(),
-});
+try {
+  process.exitCode = await run(process.argv.slice(2), {
+    out: (s) => process.stdout.write(s),
+    err: (s) => process.stderr.write(s),
+    cwd: process.cwd(),
+  });
+} catch (e) {
+  // run() answers its own faults; this catches what escapes even that.
+  process.stderr.write(faultLine(e));
+  process.exitCode = EXIT.fault;
+}

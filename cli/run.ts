@@ -1,98 +1,71 @@
-import { parseArgs } from 'node:util';
-import { checkCommand } from './commands/check.ts';
-import { newCommand } from './commands/new.ts';
-import { floorTestCommand } from './commands/floor-test.ts';
-import { rideCommand } from './commands/ride.ts';
-import { rulesCommand } from './commands/rules.ts';
-import { stockCommand } from './commands/stock.ts';
-import { EXIT, type Console } from './console.ts';
+// Picks the command, reads its arguments, runs it, and answers the exit code.
+// Loads only declarations: a command's code is imported when it runs, so
+// --version and --help load almost nothing.
+import { dashed, parseCommand } from './args.ts';
+import { nearest } from './args-nearest.ts';
+import { commandHelp, overview } from './args-help.ts';
+import type { Console } from './console.ts';
+import { COMMANDS } from './declarations/index.ts';
+import { EXIT } from './exit-codes.ts';
+import { faultLine } from './fault-line.ts';
+import { VERSION } from './version.ts';
 
-const USAGE = `axletree: design-rule checks for replica chariots
-
-usage:
-  axletree check <spec.yaml|spec.json|spec.xlsx> [--out DIR] [--json]
-      check a build specification; writes a workbook, a report (Markdown and
-      HTML) and result.json into DIR (default axletree-out/<spec name>/)
-  axletree new <file.xlsx|file.yaml> [--from SPEC] [--force]
-      write a fill-in specification: a workbook (one sheet per section, with
-      drop-downs and help) or a commented YAML file; blank, or holding the
-      values of SPEC; an existing file is replaced only with --force
-  axletree rules [--json]
-      list the rules with their limits and sources
-  axletree stock <instance.json> [--json]
-      plan the cutting of stock lengths into pieces with saw kerf, least
-      cost (or fewest stock pieces where no price is given)
-  axletree ride <spec.yaml|spec.json> [--case ridge|one-wheel|drop] [--out DIR] [--json]
-      run the ride model (all three cases, or the one named); writes the time
-      series (CSV), plots and a report into DIR (default
-      axletree-out/<spec name>/ride/); --json prints the results without
-      the long series
-  axletree floor-test <record.csv> --mass-kg M [--out DIR] [--json]
-      natural frequency, damping ratio and stiffness of a floor sample from a
-      drop test (CSV with time_s and displacement_mm); writes a report and a
-      plot into DIR (default axletree-out/<csv name>/)
-  axletree help
-`;
-
-const OPTIONS = {
-  out: { type: 'string' },
-  'mass-kg': { type: 'string' },
-  case: { type: 'string' },
-  json: { type: 'boolean', default: false },
-  from: { type: 'string' },
-  force: { type: 'boolean', default: false },
-  help: { type: 'boolean', short: 'h', default: false },
-} as const;
+/** Options of axletree itself, given before any command. */
+const TOP = { version: ['--version'], help: ['--help', '-h'] } as const;
 
 export async function run(argv: string[], con: Console): Promise<number> {
-  let parsed;
   try {
-    parsed = parseArgs({ args: argv, options: OPTIONS, allowPositionals: true, strict: true });
+    return await dispatch(argv, con);
   } catch (e) {
-    con.err(`axletree: ${(e as Error).message}\n\n${USAGE}`);
-    return EXIT.badInput;
+    con.err(faultLine(e));
+    return EXIT.fault;
   }
-  const [command, ...rest] = parsed.positionals;
-  const { values } = parsed;
-  if (values.help || command === 'help' || command === undefined) {
-    (command === undefined && !values.help ? con.err : con.out)(USAGE);
-    return command === undefined && !values.help ? EXIT.badInput : EXIT.ok;
+}
+
+async function dispatch(argv: string[], con: Console): Promise<number> {
+  const [first, ...rest] = argv;
+  if (first === undefined || (rest.length === 0 && (first === 'help' || (TOP.help as readonly string[]).includes(first)))) {
+    con.out(overview(COMMANDS));
+    return EXIT.ok;
   }
-  switch (command) {
-    case 'check':
-      if (rest.length !== 1) {
-        con.err(`axletree check: give exactly one specification file (got ${rest.length}).\n\n${USAGE}`);
-        return EXIT.badInput;
-      }
-      return checkCommand(rest[0], { out: values.out, json: values.json }, con);
-    case 'new':
-      if (rest.length !== 1) {
-        con.err(`axletree new: give exactly one file to write (got ${rest.length}).\n\n${USAGE}`);
-        return EXIT.badInput;
-      }
-      return newCommand(rest[0], { from: values.from, force: values.force }, con);
-    case 'rules':
-      return rulesCommand({ json: values.json }, con);
-    case 'stock':
-      if (rest.length !== 1) {
-        con.err(`axletree stock: give exactly one instance file (got ${rest.length}).\n\n${USAGE}`);
-        return EXIT.badInput;
-      }
-      return stockCommand(rest[0], { json: values.json }, con);
-    case 'ride':
-      if (rest.length !== 1) {
-        con.err(`axletree ride: give exactly one specification file (got ${rest.length}).\n\n${USAGE}`);
-        return EXIT.badInput;
-      }
-      return rideCommand(rest[0], { case: values.case, out: values.out, json: values.json }, con);
-    case 'floor-test':
-      if (rest.length !== 1) {
-        con.err(`axletree floor-test: give exactly one CSV record (got ${rest.length}).\n\n${USAGE}`);
-        return EXIT.badInput;
-      }
-      return floorTestCommand(rest[0], { massKg: values['mass-kg'], out: values.out, json: values.json }, con);
-    default:
-      con.err(`axletree: unknown command "${command}"; commands: check, new, ride, rules, stock, floor-test, help.\n\n${USAGE}`);
-      return EXIT.badInput;
+  if (rest.length === 0 && (TOP.version as readonly string[]).includes(first)) {
+    con.out(`axletree ${VERSION}\n`);
+    return EXIT.ok;
   }
+  if (first === 'help') return dispatch([...rest, '--help'], con);
+  if (first.startsWith('-')) return refuse('axletree', topOption(first, rest), con);
+  const decl = COMMANDS.find((c) => c.name === first);
+  if (!decl) {
+    const near = nearest(first, COMMANDS.map((c) => c.name));
+    return refuse('axletree', `unknown command "${first}"; ${near ? `did you mean ${near}?` : `commands: ${COMMANDS.map((c) => c.name).join(', ')}`}`, con);
+  }
+  const parsed = parseCommand(decl, rest, takersOf);
+  if (parsed.kind === 'refused') return refuse(`axletree ${decl.name}`, parsed.message, con);
+  if (parsed.kind === 'help') {
+    con.out(commandHelp(decl));
+    return EXIT.ok;
+  }
+  return decl.run(parsed.args, con);
+}
+
+/** What is wrong with an option given before the command (or beside --version / --help). */
+function topOption(option: string, rest: string[]): string {
+  const name = option.replace(/^--?/, '').replace(/=.*$/, '');
+  if (Object.hasOwn(TOP, name)) return `${option} takes nothing else (got ${rest.join(' ')})`;
+  const takers = takersOf(name);
+  if (takers.length) return `option ${dashed(name)} goes after the command, as in axletree ${takers[0]} ... ${dashed(name)}`;
+  const near = nearest(name, Object.keys(TOP));
+  return `unknown option ${option}; ${near ? `did you mean --${near}?` : 'give a command first (axletree help lists them)'}`;
+}
+
+/** The commands that take an option. */
+function takersOf(option: string): string[] {
+  const commands = COMMANDS.filter((c) => Object.hasOwn(c.options, option)).map((c) => c.name);
+  return Object.hasOwn(TOP, option) && option !== 'help' ? [...commands, `axletree itself (axletree --${option})`] : commands;
+}
+
+/** One line naming what is refused; no usage dump. */
+function refuse(who: string, message: string, con: Console): number {
+  con.err(`${who}: ${message}\n`);
+  return EXIT.badInput;
 }

@@ -2,6 +2,7 @@
 import { writeFileSync } from 'node:fs';
 import { specTypesSource } from './spec-types-source.ts';
 import { ruleIndexSource, RULES_DIR } from './rule-index-source.ts';
+import { writeValidators } from './validator-source.ts';
 
 const types = new URL('../src/core/spec/spec.types.ts', import.meta.url);
 writeFileSync(types, await specTypesSource());
@@ -9,3 +10,4 @@ console.log(`wrote ${types.pathname}`);
 const index = new URL('index.ts', RULES_DIR);
 writeFileSync(index, ruleIndexSource());
 console.log(`wrote ${index.pathname}`);
+for (const path of writeValidators()) console.log(`wrote ${path}`);

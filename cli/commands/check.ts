@@ -6,7 +6,8 @@ import { runCheck } from '../../src/core/pipeline/run-check.ts';
 import { RULES } from '../../src/core/rules/index.ts';
 import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
 import { prepareSpec } from '../../src/core/spec/prepare.ts';
-import { EXIT, type Console } from '../console.ts';
+import type { Console } from '../console.ts';
+import { EXIT, exitOfVerdict } from '../exit-codes.ts';
 import { formatIssues } from '../format-issues.ts';
 import { summary } from '../summary.ts';
 import { loadData } from '../load-data.ts';
@@ -50,5 +51,5 @@ export async function checkCommand(file: string, opts: CheckOptions, con: Consol
   } else {
     con.out(summary(result, written));
   }
-  return result.verdict === 'fail' ? EXIT.failed : EXIT.ok;
+  return exitOfVerdict(result.verdict);
 }

@@ -6,7 +6,8 @@ import { writeFileSet } from '../../src/node/write-file-set.ts';
 import { say } from '../../src/core/diagnostics/messages.ts';
 import { estimateFloorTest } from '../../src/core/floor-test/estimate-floor-test.ts';
 import { FloorTestError, type FloorTestEstimate } from '../../src/core/floor-test/floor-test-types.ts';
-import { EXIT, type Console } from '../console.ts';
+import type { Console } from '../console.ts';
+import { EXIT } from '../exit-codes.ts';
 import { formatIssues } from '../format-issues.ts';
 import { writeOrRefuse } from '../write-or-refuse.ts';
 

@@ -5,7 +5,8 @@ import { readSpec } from '../../src/node/read-spec.ts';
 import { choicesOf } from '../../src/render/spec-workbook/choice-lists.ts';
 import { specificationWorkbook, unplacedKeys } from '../../src/render/spec-workbook/spec-sheets.ts';
 import { specYaml } from '../../src/render/spec-yaml-template.ts';
-import { EXIT, type Console } from '../console.ts';
+import type { Console } from '../console.ts';
+import { EXIT } from '../exit-codes.ts';
 import { formatIssues } from '../format-issues.ts';
 import { loadData } from '../load-data.ts';
 

@@ -1,6 +1,7 @@
 import { RULES } from '../../src/core/rules/index.ts';
 import { isLimitData } from '../../src/core/data/rules-data.ts';
-import { EXIT, type Console } from '../console.ts';
+import type { Console } from '../console.ts';
+import { EXIT } from '../exit-codes.ts';
 import { loadData } from '../load-data.ts';
 
 export function rulesCommand(opts: { json: boolean }, con: Console): number {

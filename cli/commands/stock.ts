@@ -1,4 +1,5 @@
 import { resolve } from 'node:path';
+import { writeFileSet } from '../../src/node/write-file-set.ts';
 import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
 import { readSpec } from '../../src/node/read-spec.ts';
 import { baselineText, boughtText, BOUND_NOTE, cutsText, gapText } from '../../src/render/cutting-text.ts';
@@ -10,12 +11,22 @@ import { CuttingInputError } from '../../src/core/stock/cutting-problem.ts';
 import type { CuttingPlan } from '../../src/core/stock/cutting-types.ts';
 import { planCutting } from '../../src/core/stock/plan-cutting.ts';
 import { StockShortfallError } from '../../src/core/stock/stock-shortfall.ts';
-import { EXIT, type Console } from '../console.ts';
+import type { Console } from '../console.ts';
+import { EXIT } from '../exit-codes.ts';
 import { formatIssues } from '../format-issues.ts';
+import { writeOrRefuse } from '../write-or-refuse.ts';
+import { STOCK_FILES } from '../declarations/stock-files.ts';
 
-/** `axletree stock <instance.json> [--json]`: the stock plan of one plain cutting instance. */
-export async function stockCommand(file: string, opts: { json: boolean }, con: Console): Promise<number> {
-  const read = await readSpec(resolve(con.cwd, file), { workbooks: false });
+export interface StockOptions {
+  /** Also write the plan here, as JSON and as text. */
+  out?: string;
+  json: boolean;
+}
+
+/** `axletree stock <instance.json> [--out DIR] [--json]`: the stock plan of one plain cutting instance. */
+export async function stockCommand(file: string, opts: StockOptions, con: Console): Promise<number> {
+  const input = resolve(con.cwd, file);
+  const read = await readSpec(input, { workbooks: false });
   if (!read.ok) {
     // The reader's empty-file message speaks of specifications.
     const issues = read.issues.map((i) => (i.code === MESSAGES.fileEmpty.code ? issue([], 'stockInstanceEmpty', { path: file }) : i));
@@ -42,7 +53,24 @@ export async function stockCommand(file: string, opts: { json: boolean }, con: C
     }
     throw e;
   }
-  con.out(opts.json ? JSON.stringify(plan, null, 2) + '\n' : planTable(plan));
+  const json = JSON.stringify(plan, null, 2) + '\n';
+  const table = planTable(plan);
+  let written: string[] = [];
+  if (opts.out !== undefined) {
+    const files: [string, string][] = [[STOCK_FILES.json, json], [STOCK_FILES.text, table]];
+    const dir = resolve(con.cwd, opts.out);
+    const paths = await writeOrRefuse(() => writeFileSet(dir, files, input), con);
+    if (paths === null) return EXIT.badInput;
+    written = paths;
+  }
+  const where = written.length ? ['written:', ...written.map((w) => `  ${w}`)].join('\n') + '\n' : '';
+  // Standard output holds the plan alone; with --json, where the files went is said on standard error.
+  if (opts.json) {
+    con.out(json);
+    if (where) con.err(where);
+  } else {
+    con.out(table + where);
+  }
   return EXIT.ok;
 }
 

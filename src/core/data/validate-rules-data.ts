@@ -1,16 +1,14 @@
 // Checks assembled rules data against the JSON Schema and turns each schema
 // error into plain words: the key path and what is allowed there.
-import { Ajv2020, type ErrorObject } from 'ajv/dist/2020.js';
-import schema from './rules-data.schema.json' with { type: 'json' };
+import type { ErrorObject } from 'ajv/dist/2020.js';
+// The schema compiled to code by `npm run gen` (scripts/validator-source.ts holds ajv's options).
+import { validate } from './generated/rules-data-validator.js';
 
 export interface SchemaProblem {
   /** Key path from the root of the assembled data. */
   path: string[];
   message: string;
 }
-
-const ajv = new Ajv2020({ allErrors: true, verbose: true, strict: true });
-const validate = ajv.compile(schema);
 
 /** Every problem in the data; an empty list when it matches the schema. */
 export function schemaProblems(data: unknown): SchemaProblem[] {

@@ -1,12 +1,9 @@
-import { Ajv2020, type ErrorObject } from 'ajv/dist/2020.js';
+import type { ErrorObject } from 'ajv/dist/2020.js';
 import schema from './spec.schema.json' with { type: 'json' };
+// The schema compiled to code by `npm run gen` (scripts/validator-source.ts holds ajv's options).
+import { validate } from './generated/spec-validator.js';
 import { unitOfKey } from '../units/units.ts';
 import { issue, type InputIssue, type KeyPath } from './input-issue.ts';
-
-// Compiled once: validation is called for every spec and every round trip.
-const ajv = new Ajv2020({ allErrors: true, useDefaults: true, allowUnionTypes: true, strict: true, strictTypes: false, verbose: true });
-ajv.addKeyword({ keyword: 'x-default', schemaType: 'string' });
-const validate = ajv.compile(schema);
 
 export const SPEC_SCHEMA = schema;
 

@@ -1,10 +1,9 @@
-import { Ajv2020 } from 'ajv/dist/2020.js';
 import { issue, pathText, type InputIssue } from '../spec/input-issue.ts';
 import { schemaIssues } from '../spec/validate-schema.ts';
 import type { CuttingInstance, StockLength } from './cutting-types.ts';
 import schema from './instance.schema.json' with { type: 'json' };
-
-const validate = new Ajv2020({ allErrors: true, strict: true, verbose: true }).compile(schema);
+// The schema compiled to code by `npm run gen` (scripts/validator-source.ts holds ajv's options).
+import { validate } from './generated/instance-validator.js';
 
 export type CheckedInstance = { ok: true; instance: CuttingInstance } | { ok: false; issues: InputIssue[] };
 

@@ -1,0 +1,20 @@
+import { command } from '../args.ts';
+
+export const check = command({
+  name: 'check',
+  summary: 'check a build specification against every design rule',
+  positionals: [{ name: 'spec', what: 'specification file', help: 'the build specification: .yaml, .yml, .json, or .xlsx (a fill-in workbook from axletree new)' }],
+  options: {
+    out: { type: 'string', value: 'DIR', help: 'write the outputs into DIR (default axletree-out/<spec name>/)' },
+    json: { type: 'boolean', default: false, help: 'print result.json on standard output; the summary goes to standard error' },
+  },
+  about: `writes: a workbook (result.xlsx), a report (report.md and report.html, with
+plots and drawings) and result.json; nothing when the specification is
+refused. The specification file is never written to.`,
+  example: 'axletree check specs/demo-two-crew.yaml --out build/two-crew',
+  findings: 'the verdict is FAIL (a finding is beyond a hard limit, or the check could not show a part is safe); a verdict of ERROR exits 3',
+  async run({ positionals: [file], values }, con) {
+    const { checkCommand } = await import('../commands/check.ts');
+    return checkCommand(file, values, con);
+  },
+});

@@ -1,0 +1,11 @@
+// Every command, in the order the overview lists them. Declarations only:
+// a command's code is imported when it runs.
+import type { CommandDecl } from '../args.ts';
+import { check } from './check.ts';
+import { floorTest } from './floor-test.ts';
+import { newSpec } from './new.ts';
+import { ride } from './ride.ts';
+import { rules } from './rules.ts';
+import { stock } from './stock.ts';
+
+export const COMMANDS: readonly CommandDecl[] = [check, newSpec, rules, stock, ride, floorTest];

@@ -1,0 +1,72 @@
+// Bundles the command line (cli/main.ts) into a directory as JavaScript
+// modules: the entry axletree.mjs and a chunk per command, loaded when the
+// command runs. Used by scripts/build.ts (dist/) and by the test of the bundle.
+import { readFileSync, rmSync } from 'node:fs';
+import { relative } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import type { Plugin } from 'esbuild';
+
+const ROOT = fileURLToPath(new URL('..', import.meta.url));
+
+// Left to Node to load: HiGHS finds its WebAssembly beside its own file, and
+// odex is loaded through createRequire. The rest bundles cleanly (exceljs
+// and vega included; their output was compared with the unbundled run's).
+const EXTERNAL = ['highs', 'odex'];
+
+/**
+ * The bundle lives elsewhere than the sources, so a module that finds files
+ * from its own place (`new URL('../../rules', import.meta.url)`) would look in
+ * the wrong place. Each of our modules gets back its own URL, worked out from
+ * the bundle's (so the bundle must stay where it was built).
+ */
+function ownUrl(outdir: string): Plugin {
+  return {
+    name: 'own-import-meta-url',
+    setup(b) {
+      b.onLoad({ filter: /\.ts$/ }, (args) => {
+        if (args.path.includes('/node_modules/')) return undefined;
+        const text = readFileSync(args.path, 'utf8');
+        if (!text.includes('import.meta.url')) return undefined;
+        const fromOut = relative(outdir, args.path).split('\\').join('/');
+        return { contents: text.replaceAll('import.meta.url', `new URL(${JSON.stringify(fromOut)}, import.meta.url).href`), loader: 'ts' };
+      });
+    },
+  };
+}
+
+export interface Bundle {
+  /** The project's own files it was made from, from the repository root. */
+  inputs: string[];
+  files: number;
+  bytes: number;
+}
+
+/** Bundle into outdir (emptied first); undefined when esbuild is not installed. */
+export async function bundle(outdir: string): Promise<Bundle | undefined> {
+  const esbuild = await import('esbuild').catch(() => undefined);
+  if (!esbuild) return undefined;
+  rmSync(outdir, { recursive: true, force: true });
+  const result = await esbuild.build({
+    entryPoints: { axletree: 'cli/main.ts' },
+    absWorkingDir: ROOT,
+    bundle: true,
+    platform: 'node',
+    format: 'esm',
+    target: 'node20',
+    splitting: true,
+    outdir,
+    outExtension: { '.js': '.mjs' },
+    external: EXTERNAL,
+    // Bundled CommonJS packages call require(); an ES module has none of its own.
+    banner: { js: "import { createRequire as __axletreeRequire } from 'node:module'; const require = __axletreeRequire(import.meta.url);" },
+    plugins: [ownUrl(outdir)],
+    metafile: true,
+    logLevel: 'warning',
+  });
+  const outputs = Object.values(result.metafile.outputs);
+  return {
+    inputs: Object.keys(result.metafile.inputs).filter((p) => !p.includes('node_modules/')),
+    files: outputs.length,
+    bytes: outputs.reduce((n, o) => n + o.bytes, 0),
+  };
+}

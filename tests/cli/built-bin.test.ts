@@ -1,0 +1,43 @@
+// The command bundled as `npm run build` bundles it, run as a process: from a
+// directory of its own, so the dist/ other tests may be running is left alone.
+import { spawnSync } from 'node:child_process';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { bundle } from '../../scripts/bundle.ts';
+import { freshDir, REPO } from '../support/run-cli.ts';
+import pkg from '../../package.json' with { type: 'json' };
+
+// Inside node_modules, so the packages left out of the bundle are found as they are from dist/.
+const cache = join(REPO, 'node_modules', '.cache');
+let out: string;
+let work: string;
+beforeAll(async () => {
+  mkdirSync(cache, { recursive: true });
+  out = mkdtempSync(join(cache, 'axletree-bundle-'));
+  work = await freshDir('axletree-bundle-run-');
+  expect(await bundle(out)).toMatchObject({ files: expect.any(Number) });
+});
+afterAll(() => {
+  for (const dir of [out, work]) if (dir) rmSync(dir, { recursive: true, force: true });
+});
+
+const runBuilt = (...args: string[]) => spawnSync(process.execPath, [join(out, 'axletree.mjs'), ...args], { cwd: work, encoding: 'utf8', timeout: 60_000 });
+
+describe('the built command', () => {
+  it('prints its version and help', () => {
+    expect(runBuilt('--version')).toMatchObject({ status: 0, stdout: `axletree ${pkg.version}\n` });
+    expect(runBuilt('check', '--jsn')).toMatchObject({ status: 2, stderr: 'axletree check: unknown option --jsn; did you mean --json?\n' });
+  });
+
+  it('finds the rules data beside its sources and plans stock with the solver left out of the bundle', () => {
+    const rules = runBuilt('rules', '--json');
+    expect(rules.status).toBe(0);
+    expect(JSON.parse(rules.stdout).map((r: { id: string }) => r.id)).toContain('balance.yoke-lift');
+    writeFileSync(join(work, 'cuts.json'), JSON.stringify({ kerf_mm: 3, stock: [{ length_mm: 3000 }], pieces: [{ length_mm: 742, quantity: 5 }] }));
+    const stock = runBuilt('stock', 'cuts.json', '--json');
+    expect(stock.stderr).toBe('');
+    // 5 × (742 + 3) = 3725 mm > 3000 mm, and four fit one piece: two stock pieces.
+    expect(JSON.parse(stock.stdout).pieces_used).toBe(2);
+  });
+});
