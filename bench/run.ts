@@ -11,7 +11,6 @@ import { drawReportPlots } from '../src/render/report-plots.ts';
 import { renderMarkdown } from '../src/render/markdown/render-markdown.ts';
 import { renderWorkbook } from '../src/render/workbook.ts';
 import { runCheck } from '../src/core/pipeline/run-check.ts';
-import { RULES } from '../src/core/rules/index.ts';
 import { loadLpSolver } from '../src/node/load-lp-solver.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { benchFloor } from './floor-solver.ts';

@@ -2,7 +2,6 @@ import { settingOutSvg } from '../src/render/report-figures.ts';
 import { beforeAll, describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
 import { runCheck } from '../src/core/pipeline/run-check.ts';
-import { RULES } from '../src/core/rules/index.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
 import type { CheckResult } from '../src/core/result/check-result.ts';
 import type { LpSolver } from '../src/core/stock/cutting-types.ts';

@@ -25,7 +25,7 @@ function sheet(wb: ExcelJS.Workbook, name: string): ExcelJS.Worksheet {
 /** Every cell's text on a sheet, in reading order. */
 function texts(ws: ExcelJS.Worksheet): string[] {
   const out: string[] = [];
-  ws.eachRow((row) => row.eachCell((cell) => out.push(String(cell.value))));
+  ws.eachRow((row) => row.eachCell((cell) => out.push(cell.text)));
   return out;
 }
 
@@ -129,7 +129,7 @@ describe('renderWorkbook', () => {
     r.findings.push({ ...r.findings[0], severity: 'info', rule: 'balance.axle-position', subject_label: 'standing, crew as placed', utilisation: null, limit: null });
     const ws = sheet(await readBack(r), 'Findings');
     const values = dataRows(ws).map((x) => [x.getCell(1).value, x.getCell(2).value]);
-    const notesAt = values.findIndex(([first]) => String(first).startsWith('Notes'));
+    const notesAt = values.findIndex(([first]) => typeof first === 'string' && first.startsWith('Notes'));
     expect(values.slice(0, notesAt).map(([, s]) => s).filter(Boolean)).toEqual(['fail', 'warning', 'advice', 'pass']);
     expect(values.slice(notesAt)).toContainEqual(['N1', 'info']);
   });
@@ -138,7 +138,7 @@ describe('renderWorkbook', () => {
     const rows = dataRows(sheet(await readBack(result), 'Findings'));
     const fail = rows.find((r) => r.getCell(2).value === 'fail')!;
     expect(fillOf(fail.getCell(2))).toBe(toArgb(SEVERITY_COLOURS.fail.fill));
-    const graded = rows.filter((r) => ['fail', 'warning', 'advice', 'pass'].includes(String(r.getCell(2).value)));
+    const graded = rows.filter((r) => ['fail', 'warning', 'advice', 'pass'].includes(r.getCell(2).text));
     const fills = new Set(graded.map((r) => fillOf(r.getCell(2))));
     expect(fills.size).toBe(4);
   });
@@ -183,7 +183,7 @@ describe('renderWorkbook', () => {
   it('lists every source by id with its citation', async () => {
     const rows = dataRows(sheet(await readBack(result), 'Sources'));
     expect(rows.map((r) => r.getCell(1).value)).toEqual(result.sources.map((s) => s.id));
-    rows.forEach((r, i) => expect(String(r.getCell(2).value)).toContain(result.sources[i].citation));
+    rows.forEach((r, i) => expect(r.getCell(2).text).toContain(result.sources[i].citation));
   });
 
   it('refuses a result without cautions', async () => {

@@ -3,7 +3,6 @@ import { readSpec } from '../../src/node/read-spec.ts';
 import { OutputIsInputError } from '../../src/node/atomic-write.ts';
 import { resultJson, writeOutputs } from '../../src/node/write-outputs.ts';
 import { runCheck } from '../../src/core/pipeline/run-check.ts';
-import { RULES } from '../../src/core/rules/index.ts';
 import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
 import { prepareSpec } from '../../src/core/spec/prepare.ts';
 import type { Console } from '../console.ts';

@@ -44,10 +44,10 @@ export function loadRulesData(dir: string): RulesData {
   if (problems.length > 0) throw new RulesDataError(problems);
 
   const data = {
-    sources: tables.sources?.doc.toJS() ?? null,
-    species: tables.species?.doc.toJS() ?? null,
-    leathers: tables.leathers?.doc.toJS() ?? null,
-    grounds: tables.grounds?.doc.toJS() ?? null,
+    sources: (tables.sources?.doc.toJS() as unknown) ?? null,
+    species: (tables.species?.doc.toJS() as unknown) ?? null,
+    leathers: (tables.leathers?.doc.toJS() as unknown) ?? null,
+    grounds: (tables.grounds?.doc.toJS() as unknown) ?? null,
     limits: limits.values,
     params: params.values,
   };

@@ -93,7 +93,10 @@ function splitFields(line: string): { text: string; column: number }[] {
     if (line[i] === '"') {
       i++;
       while (i < line.length) {
-        if (line[i] === '"' && line[i + 1] === '"') (text += '"'), (i += 2);
+        if (line[i] === '"' && line[i + 1] === '"') {
+          text += '"';
+          i += 2;
+        }
         else if (line[i] === '"') {
           i++;
           break;

@@ -37,5 +37,5 @@ export async function renderWorkbook(result: CheckResult, doc: ReportDocument = 
   addSpecSheet(wb, doc);
   addSourcesSheet(wb, doc);
   const bytes = await wb.xlsx.writeBuffer();
-  return Buffer.from(bytes as ArrayBuffer);
+  return Buffer.from(bytes);
 }

@@ -72,8 +72,14 @@ describe('wheel drawing', () => {
   it('everything stays on the sheet, for small and large wheels', () => {
     for (const raw of [readDemo('demo-two-crew'), deepMerge(readDemo('demo-two-crew'), { wheels: { diameter_mm: 1400, spokes: 12, felloe: { pieces: 6, bend_radius_mm: undefined } } })]) {
       const { svg: s } = drawing(raw);
-      for (const m of s.matchAll(/\b(x|x1|x2|cx)="([-\d.]+)"/g)) expect(Number(m[2]), m[0]).toBeGreaterThanOrEqual(0), expect(Number(m[2]), m[0]).toBeLessThanOrEqual(210);
-      for (const m of s.matchAll(/\b(y|y1|y2|cy)="([-\d.]+)"/g)) expect(Number(m[2]), m[0]).toBeGreaterThanOrEqual(0), expect(Number(m[2]), m[0]).toBeLessThanOrEqual(297);
+      for (const m of s.matchAll(/\b(x|x1|x2|cx)="([-\d.]+)"/g)) {
+        expect(Number(m[2]), m[0]).toBeGreaterThanOrEqual(0);
+        expect(Number(m[2]), m[0]).toBeLessThanOrEqual(210);
+      }
+      for (const m of s.matchAll(/\b(y|y1|y2|cy)="([-\d.]+)"/g)) {
+        expect(Number(m[2]), m[0]).toBeGreaterThanOrEqual(0);
+        expect(Number(m[2]), m[0]).toBeLessThanOrEqual(297);
+      }
     }
   });
 });

@@ -38,10 +38,10 @@ describe('model parameters', () => {
   for (const demo of ['demo-two-crew', 'demo-rear-axle', 'teaching-flawed']) {
     it(`${demo}: every parameter a model reads is one it declares`, () => {
       const reads = new Map<string, Set<string>>();
-      let graph: ModelGraph | undefined;
-      const data = recordingData(() => graph, reads);
+      const holder: { graph?: ModelGraph } = {};
+      const data = recordingData(() => holder.graph, reads);
       const spec = prepared(readDemo(demo));
-      graph = new ModelGraph(MODELS, { spec, data, ride: true });
+      const graph = (holder.graph = new ModelGraph(MODELS, { spec, data, ride: true }));
       runRules(RULES, spec, data, new Analysis(spec, data, undefined, { graph }));
       for (const m of MODELS) graph.get(m.id);
       expect(reads.size).toBeGreaterThan(3);

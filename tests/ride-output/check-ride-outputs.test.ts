@@ -26,7 +26,7 @@ describe('the Ride sheet', () => {
     const names = wb.worksheets.map((w) => w.name);
     expect(names.indexOf('Ride')).toBe(names.indexOf('Loads') + 1);
     const ws = wb.getWorksheet('Ride')!;
-    expect(String(ws.getRow(1).getCell(1).value)).toBe(SHORT_CAUTION);
+    expect(ws.getRow(1).getCell(1).text).toBe(SHORT_CAUTION);
     // Each case's tables follow its heading; read the rows back under it.
     const rows: unknown[][] = [];
     ws.eachRow((row) => rows.push((row.values as unknown[]).slice(1)));

@@ -36,7 +36,7 @@ function pointerToPath(pointer: string): string[] {
 
 function shown(data: unknown): string {
   if (data === undefined) return 'nothing';
-  const text = JSON.stringify(data) ?? String(data);
+  const text = JSON.stringify(data) ?? typeof data;
   return text.length > 60 ? text.slice(0, 57) + '...' : text;
 }
 

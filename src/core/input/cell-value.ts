@@ -10,7 +10,7 @@ export function plainValue(v: ExcelJS.CellValue): Plain {
   if (v === null || v === undefined) return undefined;
   if (typeof v === 'string' || typeof v === 'number' || typeof v === 'boolean') return v;
   if (v instanceof Date) return v.toISOString().slice(0, 10);
-  if ('result' in v) return plainValue(v.result as ExcelJS.CellValue);
+  if ('result' in v) return plainValue(v.result);
   if ('formula' in v || 'sharedFormula' in v) return undefined;
   if ('richText' in v) return v.richText.map((t) => t.text).join('');
   if ('text' in v) return String(v.text);

@@ -29,7 +29,7 @@ export function parseSpecText(text: string, format: string, path = 'input'): Rea
       }),
     };
   }
-  const raw = doc.toJS({ maxAliasCount: 100 });
+  const raw: unknown = doc.toJS({ maxAliasCount: 100 });
   if (raw === null || raw === undefined) return { ok: false, issues: [issue([], 'fileEmpty', { path })] };
   return { ok: true, raw, locate: (p, key) => locate(doc, lines, p, key) };
 }

@@ -115,5 +115,5 @@ export interface LegacyContext {
 
 /** A rule: metadata plus one function, typed by the models, limits, parameters and messages it names. */
 export function defineRule<N extends ModelId, L extends string = never, P extends string = never, M extends string = string>(spec: RuleSpec<N, L, P, M>): Rule {
-  return spec as unknown as Rule;
+  return spec;
 }

@@ -32,7 +32,7 @@ export class ModelGraph {
     if (this.#computing.includes(id)) throw new Error(`models need each other in a circle: ${[...this.#computing, id].join(' -> ')}`);
     this.#computing.push(id);
     try {
-      const value = def.compute(this.view(def.needs, `model "${id}"`) as never, this.inputs) as ModelValues[K];
+      const value = def.compute(this.view(def.needs, `model "${id}"`), this.inputs) as ModelValues[K];
       this.#done.set(id, value);
       this.computed.push(id);
       return value;

@@ -125,4 +125,4 @@ export const lashingDemandsDef = defineModel({
 });
 
 /** Every model, in no particular order: the graph finds the order from their needs. */
-export const MODELS: readonly ModelDef[] = [massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, floorBumpDef, memberCasesDef, cuttingDef, lashingDemandsDef] as unknown as readonly ModelDef[];
+export const MODELS: readonly ModelDef[] = [massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, floorBumpDef, memberCasesDef, cuttingDef, lashingDemandsDef];

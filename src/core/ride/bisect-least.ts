@@ -13,7 +13,7 @@ export interface LeastValue {
 }
 
 export function bisectLeast(holds: (x: number) => boolean, lo: number, hi: number, relTol = 1e-3): LeastValue {
-  let evaluations = 2;
+  const evaluations = 2;
   if (holds(lo)) return { value: lo, atLower: true, evaluations: 1 };
   if (!holds(hi)) return { value: null, atLower: false, evaluations };
   const inner = bisectInside(holds, lo, hi, relTol);

@@ -2,7 +2,6 @@ import { ruleLimit } from '../data/rule-limit.ts';
 import type { RulesData } from '../data/rules-data.ts';
 import { leastOnGrid } from './bisect-least.ts';
 import type { RideInput } from './ride-build.ts';
-import { rideParam } from './ride-data.ts';
 import { RIDE_CASES, rideCaseOf } from './ride-model.ts';
 import type { RideCase, RideResult } from './ride-types.ts';
 import { meetsRideRules, type CrewLimits } from './ride-verdict.ts';

@@ -48,7 +48,7 @@ function specEntries(spec: unknown, given: unknown, computed: Set<string>): Spec
       out.push(entry);
       return;
     }
-    for (const [k, v] of Object.entries(node as object)) {
+    for (const [k, v] of Object.entries(node)) {
       const key = Array.isArray(node) ? Number(k) : k;
       const u = typeof key === 'string' ? (unitOfKey(key)?.symbol ?? '') : unit;
       walk(v, (user as Record<string, unknown> | undefined)?.[k], [...path, key], u);

@@ -6,6 +6,9 @@ import { unitOfKey } from '../units/units.ts';
 
 type Node = Record<string, unknown>;
 
+/** A schema node's description, or nothing. */
+const describedAs = (n: Node | undefined): string | undefined => (typeof n?.description === 'string' ? n.description : undefined);
+
 /** The rules-data tables a key's values are chosen from. */
 export type ChoiceTable = 'species' | 'leathers' | 'grounds';
 
@@ -91,7 +94,7 @@ export function labelOf(path: readonly string[]): string {
 
 // The schema names the rules file a key's values come from; that file is the list.
 function choicesOf(n: Node): ChoiceTable | undefined {
-  const file = /rules\/(?:materials\/)?(species|leathers|grounds)\.yaml/.exec(String(n.description ?? ''));
+  const file = /rules\/(?:materials\/)?(species|leathers|grounds)\.yaml/.exec((describedAs(n) ?? ''));
   return file?.[1] as ChoiceTable | undefined;
 }
 
@@ -126,7 +129,7 @@ function field(raw: Node, path: string[], required: boolean): Field {
     ...(n.default !== undefined ? { default: n.default } : {}),
     computedDefault: n['x-default'] === 'computed',
     required,
-    help: String(n.description ?? item.description ?? ''),
+    help: (describedAs(n) ?? describedAs(item) ?? ''),
   };
 }
 
@@ -152,7 +155,7 @@ function table(n: Node, path: string[], required: boolean): Table {
     path,
     key: path.join('.'),
     label: labelOf(path),
-    help: String(n.description ?? ''),
+    help: (describedAs(n) ?? ''),
     fields,
     required,
     ...(typeof n.minItems === 'number' ? { minItems: n.minItems } : {}),
@@ -168,12 +171,12 @@ function sheetName(key: string): string {
 /** Every section of the specification, in schema order; the top-level scalars first, as General. */
 export function specSections(): Section[] {
   const required = new Set(ROOT.required as string[]);
-  const general: Section = { sheet: GENERAL_SHEET, path: [], help: String(ROOT.description ?? ''), required: true, fields: [], tables: [] };
+  const general: Section = { sheet: GENERAL_SHEET, path: [], help: (describedAs(ROOT) ?? ''), required: true, fields: [], tables: [] };
   const sections: Section[] = [general];
   for (const [key, raw] of Object.entries(ROOT.properties as Record<string, Node>)) {
     const n = resolve(raw);
     const req = required.has(key);
-    const section: Section = { sheet: sheetName(key), path: [key], help: String(n.description ?? ''), required: req, fields: [], tables: [] };
+    const section: Section = { sheet: sheetName(key), path: [key], help: (describedAs(n) ?? ''), required: req, fields: [], tables: [] };
     if (isTable(n)) section.tables.push(table(n, [], req));
     else if (isObject(n)) walkObject(n, [], section.fields, section.tables, true);
     else {

@@ -10,7 +10,7 @@ export type CheckedInstance = { ok: true; instance: CuttingInstance } | { ok: fa
 /** A plain cutting instance checked against its schema, then for what the schema cannot say. */
 export function checkCuttingInstance(raw: unknown): CheckedInstance {
   if (!validate(raw)) return { ok: false, issues: schemaIssues(validate.errors ?? [], schema) };
-  const instance = raw as unknown as CuttingInstance;
+  const instance = raw as CuttingInstance;
   const issues = [...stockIssues(instance.stock), ...pieceIssues(instance)];
   if (issues.length === 0) issues.push(...shortage(instance));
   return issues.length ? { ok: false, issues } : { ok: true, instance };

@@ -108,7 +108,7 @@ export class PatternMaster {
   /** A MIP over every pattern generated so far, then back to the LP. */
   mip(seconds: number, start: Bin[] | null): Bin[] | null {
     const { model, T, lp } = this;
-    const zeros = Array(T).fill(0);
+    const zeros = new Array<number>(T).fill(0);
     model.changeColsBounds({ kind: 'range', from: 0, to: T - 1 }, zeros, zeros);
     runMip(lp, model, seconds, this.p.step, start ? [...zeros, ...this.counts(start)] : undefined);
     const x = feasibleValues(lp, model);
@@ -144,9 +144,17 @@ export class PatternMaster {
   private column(pat: Pattern): LpColumn {
     const rows: number[] = [];
     const values: number[] = [];
-    pat.counts.forEach((c, i) => c > 0 && (rows.push(i), values.push(c)));
+    pat.counts.forEach((c, i) => {
+      if (c > 0) {
+        rows.push(i);
+        values.push(c);
+      }
+    });
     const r = this.availRow[pat.stock];
-    if (r >= 0) (rows.push(r), values.push(1));
+    if (r >= 0) {
+      rows.push(r);
+      values.push(1);
+    }
     const s = this.p.stocks[pat.stock];
     return { cost: s.weight, upper: s.available, rows, values };
   }

@@ -20,7 +20,10 @@ export function thinPoints(x: readonly number[], y: readonly number[], columns: 
   };
   for (const p of pts) {
     const c = Math.min(columns - 1, Math.floor(((p[0] - lo) / span) * columns));
-    if (c !== current) flush(), (current = c);
+    if (c !== current) {
+      flush();
+      current = c;
+    }
     bucket.push(p);
   }
   flush();

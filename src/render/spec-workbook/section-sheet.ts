@@ -28,7 +28,7 @@ export function addSectionSheet(wb: ExcelJS.Workbook, section: Section, value: u
   title.getCell(2).value = section.help || `The ${section.path.join('.') || 'top-level'} keys of the specification.`;
   ws.mergeCells(1, 2, 1, WIDTHS.length);
   title.getCell(2).alignment = { wrapText: true, vertical: 'top' };
-  title.height = wrappedHeight([{ text: String(title.getCell(2).value), width: WIDTHS.slice(1).reduce((a, b) => a + b, 0) }]);
+  title.height = wrappedHeight([{ text: title.getCell(2).text, width: WIDTHS.slice(1).reduce((a, b) => a + b, 0) }]);
   if (section.fields.length) {
     addHeaderRow(ws, ['Key', 'Label', 'Value', 'Unit', 'Default', 'Help']); // appended: row 2
     section.fields.forEach((f, i) => addFieldRow(ws, 3 + i, f, valueAt(value, f.path), listRange));

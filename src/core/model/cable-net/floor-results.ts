@@ -68,7 +68,7 @@ export function crewResults(floor: FloorNet, sag: ArrayLike<number>, crew: reado
     if (factored) {
       const unit = new Float64Array(n);
       for (const { node, w } of c.weights) unit[node] += w;
-      const dSag = weightedSum(centre, K!.solve(unit));
+      const dSag = weightedSum(centre, K.solve(unit));
       tangent = 1 / dSag;
     }
     return { role: c.role, load_N: c.load_N, sag_mm: s, secantStiffness_N_per_mm: c.load_N / s, tangentStiffness_N_per_mm: tangent };

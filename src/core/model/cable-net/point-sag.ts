@@ -23,7 +23,7 @@ const sortedCache = new WeakMap<CableNet, Map<Family, Strap[]>>();
 /** The net's straps of one family in order across, computed once per net. */
 function sorted(net: CableNet, family: Family): Strap[] {
   let byFamily = sortedCache.get(net);
-  if (!byFamily) sortedCache.set(net, (byFamily = new Map()));
+  if (!byFamily) sortedCache.set(net, (byFamily = new Map<Family, Strap[]>()));
   let list = byFamily.get(family);
   if (!list) byFamily.set(family, (list = net.straps.filter((t) => t.family === family).sort((a, b) => a.cross - b.cross)));
   return list;

@@ -1,6 +1,6 @@
 import type { CutListItem, HideNeed, LeatherItem } from '../../../core/cutlist/cutting-result.ts';
 import type { CheckResult } from '../../../core/result/check-result.ts';
-import type { Section, TableBlock } from '../document.ts';
+import type { Cell, Section, TableBlock } from '../document.ts';
 import { blank, dimsCell, left, numberCell, right, row, textCell } from '../cells.ts';
 import { heading } from '../runs.ts';
 import { section } from '../section-titles.ts';
@@ -20,7 +20,7 @@ function cutListTable(items: readonly CutListItem[]): TableBlock {
   const volume = items.reduce((s, c) => s + c.volume_m3 * (c.quantity + c.spares), 0);
   const mass = items.reduce((s, c) => s + c.mass_kg * c.quantity, 0);
   if (items.length > 0) {
-    rows.push(row([textCell('Total: rough volume with spares; finished mass of the parts fitted'), ...Array(7).fill(blank), numberCell(volume, 'm³'), numberCell(mass, 'kg'), blank], { total: true }));
+    rows.push(row([textCell('Total: rough volume with spares; finished mass of the parts fitted'), ...new Array<Cell>(7).fill(blank), numberCell(volume, 'm³'), numberCell(mass, 'kg'), blank], { total: true }));
   }
   const columns = [
     left('Part'), right('Qty', { unit: 'count' }), right('Spares', { unit: 'count' }), left('Species'),
