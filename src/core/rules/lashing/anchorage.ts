@@ -63,7 +63,8 @@ export const lashingAnchorage = defineRule({
         working: [
           ...working,
           step('the turns given hold T_tail·e^(2π·mu·turns)', `${num(tail.value)} × e^(2π × ${num(mu.value)} × ${num(given)})`, capstanHold(tail.value, mu.value, given), 'N'),
-          step('utilisation = turns needed / turns given', `${num(need)} / ${num(given)}`, given > 0 ? need / given : null, '1'),
+          ...(lim.hard === null ? [] : [step('least turns = hard level × turns needed', `${num(lim.hard)} × ${num(need)}`, lim.hard * need, '1')]),
+          step('turns needed / turns given', `${num(need)} / ${num(given)}`, given > 0 ? need / given : null, '1'),
         ],
       });
     }

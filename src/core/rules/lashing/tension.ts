@@ -56,7 +56,8 @@ export const lashingTension = defineRule({
           "the strands hold their pretension until the members part, the joint force after; the whole force is taken by the strands, the safe side; T_pre is the builder's estimate",
           wet ? step(`f_t = f_t,dry × wet factor (${l.material}, wet)`, `${num(dry)} × ${num(wf)}`, ft, 'MPa') : step(`f_t (${l.material}, dry)`, '', ft, 'MPa'),
           step('capacity = 2·n·b·t·f_t / SF', `2 × ${l.wraps} × ${num(l.width_mm)} × ${num(l.thickness_mm)} × ${num(ft)} / ${num(sf.value)}`, capacity, 'N'),
-          step('utilisation = strand pull / capacity', `${num(pull)} / ${num(capacity)}`, pull / capacity, '1'),
+          ...(lim.hard === null ? [] : [step('limit = hard level × capacity', `${num(lim.hard)} × ${num(capacity)}`, lim.hard * capacity, 'N')]),
+          step('strand pull / capacity', `${num(pull)} / ${num(capacity)}`, pull / capacity, '1'),
         ],
       });
     }
