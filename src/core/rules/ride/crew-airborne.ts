@@ -47,7 +47,8 @@ export const crewAirborne = defineRule({
       const r = rides[which];
       const sources = rideSourceIds(ctx.data, ctx.spec, which);
       r.crew.forEach((c, i) => {
-        const where = { subject: `crew.${i}`, label: c.role, load_case: which, sources };
+        // A crew member once in each road case: the case qualifies the subject.
+        const where = { subject: `crew.${i}.${which}`, label: `${c.role}, ${r.title}`, load_case: which, sources };
         if (![c.airborne_ms, c.lift_mm, c.floor_dlf].every(Number.isFinite)) {
           ctx.report({
             ...where,
