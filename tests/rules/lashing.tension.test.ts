@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { deepMerge, findingsOf, readDemo, rulesData } from '../support/fixtures.ts';
+import { deepMerge, findingsOf, fractionHitting, readDemo, rulesData, withParams } from '../support/fixtures.ts';
 
 const RULE = 'lashing.tension';
 const demo = readDemo('demo-two-crew');
@@ -15,8 +15,11 @@ function divisorHitting(x: number, v: number): number {
 describe(RULE, () => {
   it('passes for the central-axle demo, driven dry', async () => {
     const found = await findingsOf(RULE, demo);
-    expect(found.map((f) => f.subject)).toEqual(['lashing, pole-to-axle', 'lashing, pole-to-yoke', 'lashing, axle-to-floor']);
+    expect(found.map((f) => f.subject)).toEqual(['joint.pole-to-axle', 'joint.pole-to-yoke', 'joint.axle-to-floor']);
+    expect(found.map((f) => f.subject_label)).toEqual(['pole-to-axle lashing', 'pole-to-yoke lashing', 'axle-to-floor lashing']);
     expect(found.every((f) => f.severity === 'pass')).toBe(true);
+    // The limit's source, the method's, the leather's and the load factors' (rules/limits/lashing.yaml, leathers.yaml, load-cases.yaml).
+    expect(found[0].sources).toEqual(expect.arrayContaining(['design-basis-lashings', 'from-memory']));
   });
 
   it('hand calculation: capacity 2·n·b·t·f_t / SF, strand pull the larger of the joint force and 2·n·T_pre', async () => {
@@ -27,12 +30,17 @@ describe(RULE, () => {
       { joint: 'axle-to-floor', material: 'rawhide', width_mm: 12, thickness_mm: 3, wraps: 8 },
     ];
     const [f] = await findingsOf(RULE, deepMerge(demo, { lashings }));
-    expect(f.subject).toBe('lashing, pole-to-axle');
+    expect(f.subject).toBe('joint.pole-to-axle');
     // At 20 MPa over SF 4: 2 × 12 × 16 × 3 × 20 / 4 = 5760 N (hand calculation);
     // its strands hold their own pretension, 2 × 12 × 110 = 2640 N, more than any joint force.
     expect(f.limit).toBeCloseTo(5760, 9);
+    expect(f.params.capacity as number).toBeCloseTo(5760, 9);
     expect(f.value).toBe(2640);
+    expect(f.utilisation!).toBeCloseTo(2640 / 5760, 12);
+    expect(f.params.case).toBe('its own pretension');
+    expect(f.load_case).toBeNull();
     expect(f.severity).toBe('pass');
+    expect(f.working.find((s) => s.formula.startsWith('capacity'))!.result!).toBeCloseTo(5760, 9);
   });
 
   it('fails where the wraps are too few for the bump rebound of the box', async () => {
@@ -41,6 +49,7 @@ describe(RULE, () => {
     expect(f.limit).toBeCloseTo(720, 9);
     expect(f.value!).toBeGreaterThan(1600);
     expect(f.severity).toBe('fail');
+    expect(f.load_case).toBe('bump');
     expect(f.working_text).toContain('apart = (k_bump − 1)·m·g');
   });
 
@@ -52,6 +61,7 @@ describe(RULE, () => {
     expect(wet.limit!).toBeCloseTo(dry.limit! * rulesData.leathers.rawhide.wet_strength_factor.value, 9);
     expect(wet.limit!).toBeCloseTo(1152, 9); // 2 × 8 × 12 × 3 × 8 MPa / 4
     expect(wet.severity).toBe('fail');
+    expect(wet.params.state).toBe('wet');
   });
 
   it('boundary: a strand pull equal to the capacity is within it', async () => {
@@ -66,13 +76,30 @@ describe(RULE, () => {
     expect(over.severity).toBe('fail');
   });
 
+  it('boundary: the hard level of the utilisation limit scales the capacity', async () => {
+    // 8 wraps: capacity 2 × 8 × 12 × 3 × 20 / 4 = 2880 N (hand calculation); a level of value / 2880 puts the limit on the value.
+    const raw = deepMerge(demo, axleToFloor(8));
+    const [f] = await findingsOf(RULE, raw);
+    expect(f.params.capacity).toBe(2880);
+    // The least level whose limit is not below the value (no double may hit it exactly).
+    const hit = fractionHitting(f.value!, 2880);
+    const level = hit * 2880 < f.value! ? hit * (1 + Number.EPSILON) : hit;
+    const [at] = await findingsOf(RULE, raw, { 'utilisation.hard': level });
+    expect(at.limit!).toBeGreaterThanOrEqual(at.value!);
+    expect(at.limit! - at.value!).toBeLessThan(1e-9);
+    expect(at.severity).toBe('pass');
+    const [over] = await findingsOf(RULE, raw, { 'utilisation.hard': level * 0.999999 });
+    expect(over.severity).toBe('fail');
+  });
+
   it('a joint whose force is not known is a warning, not a pass', async () => {
     // A floor solver stopped after one step leaves the corner forces unknown.
-    const data = structuredClone(rulesData);
-    data.params['floor.solver'].max_iterations.value = 1;
+    const data = withParams('floor.solver', { max_iterations: 1 });
     const raw = deepMerge(demo, { lashings: [{ joint: 'frame-corners', material: 'rawhide', width_mm: 12, thickness_mm: 3, wraps: 10 }] });
     const [f] = await findingsOf(RULE, raw, {}, data);
     expect(f.severity).toBe('warning');
-    expect(f.message).toMatch(/did not converge/);
+    expect(f.code).toBe(2503);
+    expect(f.message).toContain('could not be found');
+    expect(f.working_text).toMatch(/did not converge/);
   });
 });

@@ -1,3 +1,4 @@
+import { formatNumber } from '../format/number-format.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import type { FloorResult, RailPull } from './floor-result.ts';
 import { jointForce, type JointForce } from './joint-force.ts';
@@ -30,7 +31,7 @@ export function cornerDemand(spec: CheckedSpecification, floor: FloorResult | un
     for (const side of ['left', 'right'] as const) {
       const along = rail(end) / 2;
       const across = rail(side) / 2;
-      cases.push(jointForce(`${end}-${side}`, `${end}-${side} corner, crew weight × ${floor.factor} on the strap floor`, { along, across }, [
+      cases.push(jointForce(`${end}-${side}`, `${end}-${side} corner, crew weight × ${formatNumber(floor.factor)} on the strap floor`, { along, across }, [
         `along = T_${end} / 2 = ${f1(rail(end))} / 2 = ${f1(along)} N (half the strap pull on the ${end} rail)`,
         `across = T_${side} / 2 = ${f1(rail(side))} / 2 = ${f1(across)} N (half the strap pull on the ${side} rail)`,
       ]));

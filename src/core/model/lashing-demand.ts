@@ -187,8 +187,3 @@ function placeholderBump(data: RulesData): { value: number; source: string } {
   const f = loadFactor(data, 'bump_dynamic_factor');
   return { value: f.value, source: `placeholder bump_dynamic_factor ${f.value}: ${f.source}` };
 }
-
-/** The sources of the load factors the demands use, for a finding's source line. */
-export function demandSources(data: RulesData, bump: { value: number; source: string } = placeholderBump(data)): string {
-  return `bump factor ${bump.value.toFixed(2)}: ${bump.source}; stopping shock: ${loadFactor(data, 'stopping_shock_factor').source}`;
-}

@@ -1,4 +1,4 @@
-import { ruleLimit } from '../data/rule-limit.ts';
+import { limitLevel } from '../data/param.ts';
 import type { RulesData } from '../data/rules-data.ts';
 import { leastOnGrid } from './bisect-least.ts';
 import type { RideInput } from './ride-build.ts';
@@ -23,9 +23,10 @@ export interface DampingNeeded {
   working: string;
 }
 
+/** The crew rule's hard levels: beyond them the rule fails, so the tuner must keep within them. */
 export const crewLimits = (data: RulesData): CrewLimits => ({
-  maxAirborne_ms: ruleLimit(data, 'ride.crew-airborne', 'max_airborne_ms'),
-  maxRise_mm: ruleLimit(data, 'ride.crew-airborne', 'max_rise_mm'),
+  airborne_ms: limitLevel(data, 'ride.crew-airborne', 'airborne_ms', 'hard'),
+  rise_mm: limitLevel(data, 'ride.crew-airborne', 'rise_mm', 'hard'),
 });
 
 /** Floor damping ratios tried in turn before bisecting between the last that fails and the first that holds. */
@@ -33,7 +34,7 @@ export const DAMPING_GRID: readonly number[] = [0.02, 0.05, 0.1, 0.15, 0.2, 0.3,
 
 export function floorDampingNeeded(i: RideInput, grid: readonly number[] = DAMPING_GRID, tolerance = 5e-3): DampingNeeded {
   const limits = crewLimits(i.data);
-  const maxCycles = ruleLimit(i.data, 'ride.decay', 'max_cycles').value;
+  const maxCycles = limitLevel(i.data, 'ride.decay', 'cycles', 'hard');
   let simulations = 0;
   // The drop first: the decay most often decides, and a failing case ends the trial.
   const order: RideCase[] = ['drop', ...RIDE_CASES.filter((c) => c !== 'drop')];

@@ -63,7 +63,7 @@ export function torsionConstant(b: number, h: number): number {
 }
 
 /** A measured floor's damping ratio, when the specification names one. */
-function measuredFloorDamping(spec: CheckedSpecification): { value: number; source: string } | null {
+export function measuredFloorDamping(spec: CheckedSpecification): { value: number; source: string } | null {
   const m = (spec.floor_straps as { measured?: { damping_ratio?: number; source?: string } }).measured;
   return m?.damping_ratio !== undefined ? { value: m.damping_ratio, source: `measured floor${m.source ? `: ${m.source}` : ''} (floor_straps.measured)` } : null;
 }
@@ -72,7 +72,7 @@ export function floorDampingOf(i: RideInput): { value: number; source: string } 
   const measured = measuredFloorDamping(i.spec);
   if (measured) return measured;
   const l = rideParam(i.data, 'ride.supports', 'floor_damping_ratio');
-  return { value: l.value, source: `ride.supports.floor_damping_ratio, rules/limits/ride.yaml: ${l.source}` };
+  return { value: l.value, source: `ride.supports.floor_damping_ratio, rules/parameters/ride.yaml: ${l.source}` };
 }
 
 export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): BuiltRide {

@@ -1,4 +1,3 @@
-import type { Limit } from '../data/rules-data.ts';
 import type { CrewRide, RideCase, RideResult } from './ride-types.ts';
 
 // What the ride rules judge, written once so the rules and the damping tuner
@@ -8,15 +7,16 @@ import type { CrewRide, RideCase, RideResult } from './ride-types.ts';
 // same test a builder makes on a floor sample; on the road the crew's motion
 // also carries the chariot's pitching on the yoke, which the floor does not govern.
 
+/** The most time off the floor and the highest rise above it the crew rule allows. */
 export interface CrewLimits {
-  maxAirborne_ms: Limit;
-  maxRise_mm: Limit;
+  airborne_ms: number;
+  rise_mm: number;
 }
 
 export const ROAD_CASES: readonly RideCase[] = ['ridge', 'one-wheel'];
 
 /** The crew member is off the floor too long or too high. */
-export const crewLeaves = (c: CrewRide, l: CrewLimits) => c.airborne_ms > l.maxAirborne_ms.value || c.lift_mm > l.maxRise_mm.value;
+export const crewLeaves = (c: CrewRide, l: CrewLimits) => c.airborne_ms > l.airborne_ms || c.lift_mm > l.rise_mm;
 
 /** The motion takes more than the allowed cycles to fall below the fraction (or never does in the run). */
 export const decaysSlowly = (r: RideResult, maxCycles: number) => r.decayCycles === null || !(r.decayCycles <= maxCycles);

@@ -6,7 +6,8 @@ import type { CheckedSpecification } from '../../spec/spec.types.ts';
 // through which the team moves the chariot and the box rides on the running
 // gear; a lashing is the only fastening the vocabulary can describe there.
 // Advised: joints that joinery (mortise, peg, bent rail) may hold instead,
-// which the specification cannot show.
+// which the specification cannot show. The reasons are words only: a
+// finding's message takes its numbers from params.
 
 export interface JointNeed {
   level: 'required' | 'advised' | 'none';
@@ -23,12 +24,12 @@ export function jointNeed(joint: Joint, spec: CheckedSpecification): JointNeed {
       // The box always bears on the axle (axle.bearing_span_mm; the axle lies under the floor).
       return { level: 'required', why: 'the box rests on the axle at its two bearings: unheld, a bump lifts it off and a hard stop slides it forward, crew and all' };
     case 'pole-to-floor':
-      return { level: 'advised', why: `the pole is fixed under the floor at x = ${spec.pole.rear_x_mm} mm and carries the box's share of the pull there` };
+      return { level: 'advised', why: "the pole is fixed under the floor at its rear end and carries the box's share of the pull there" };
     case 'frame-corners':
       return { level: 'advised', why: `the strap floor pulls the rails inwards at ${jointedCorners(spec)}` };
     case 'siding-to-frame':
       return spec.box.siding_mass_kg > 0
-        ? { level: 'advised', why: `the siding (${spec.box.siding_mass_kg} kg) rides on the frame` }
+        ? { level: 'advised', why: 'the siding rides on the frame' }
         : { level: 'none', why: 'the specification has no siding' };
   }
 }

@@ -1,34 +1,77 @@
-import { makeFinding } from '../../engine/make-finding.ts';
-import type { Finding } from '../../findings/finding.ts';
-import type { JointDemand } from '../../model/lashing-demand.ts';
+import type { RulesData } from '../../data/rules-data.ts';
+import type { WorkingStep } from '../../findings/finding.ts';
+import type { JointForce } from '../../model/joint-force.ts';
+import type { Joint, JointDemand } from '../../model/lashing-demand.ts';
+import { loadFactor } from '../../model/load-factors.ts';
+import type { MessageSpec, Report } from '../../pipeline/define-rule.ts';
+import { num, step } from '../../pipeline/step.ts';
+import type { DynamicFactor } from '../../ride/dynamic-factors.ts';
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
 
-// What the lashing rules share: how a lashing is named and sized in a finding,
-// and the finding for a joint whose force could not be found.
+// What the lashing rules share: how a lashed joint is named in a finding, the
+// working and sources of its force, and the finding for a joint whose force
+// could not be found.
 
 export type Lashing = CheckedSpecification['lashings'][number];
 
-export const lashingSize = (l: Lashing) => `${l.width_mm} × ${l.thickness_mm}`;
+/** The stable id of a joint (a specification lashes each joint at most once). */
+export const jointSubject = (joint: Joint) => `joint.${joint}`;
 
-export const lashingSubject = (l: Lashing) => `lashing, ${l.joint}`;
+export const lashingLabel = (l: Lashing) => `${l.joint} lashing`;
 
-/** A lashing the model could not load is not a pass: say so. */
-export function demandUnknown(rule: string, l: Lashing, d: JointDemand): Finding {
-  return makeFinding(rule, {
-    severity: 'warning',
-    subject: lashingSubject(l),
-    value: null,
-    unit: 'N',
-    limit: null,
-    message: 'lashingDemandUnknown',
-    params: { joint: l.joint, why: d.unknown ?? 'no reason given' },
-    fix: 'Fix what stops the model (see its own finding), then check again.',
-    source: 'mechanics note, section 7',
-    working: `${d.joint}: ${d.where}\n${d.unknown}`,
-  });
+/** The lashing in words, for the working. */
+export const lashingText = (l: Lashing) => `${l.wraps} wraps of ${l.material} ${num(l.width_mm, 'mm')} × ${num(l.thickness_mm, 'mm')} mm`;
+
+// The cases of the joint forces by their ids, in words without numbers (the
+// titles carry the factors; the working shows them).
+const CASE_NAMES: Readonly<Record<string, string>> = { draught: 'draught', braking: 'braking with the stopping shock', bump: 'bump', turn: 'the design turn' };
+
+/** The governing case in words for a message; the corners are loaded over the bump. */
+export const caseName = (d: JointDemand, gov: JointForce): string => (d.joint === 'frame-corners' ? `${gov.id} corner over the bump` : (CASE_NAMES[gov.id] ?? gov.id));
+
+/** The load case a joint's governing force belongs to: the corners are loaded in the bump case only. */
+export const loadCaseOf = (d: JointDemand, gov: JointForce | undefined): string | null => (gov === undefined ? null : d.joint === 'frame-corners' ? 'bump' : gov.id);
+
+/** The governing case's own working, then every case's value of the measure, so it can be seen in context. */
+export function forceWorking(d: JointDemand, gov: JointForce | undefined, measure: 'shear_N' | 'held_N'): (WorkingStep | string)[] {
+  if (!gov) return ['no load reaches this joint'];
+  const what = measure === 'shear_N' ? 'force in the contact face' : 'force held by the fastening';
+  return [...gov.working.split('\n'), ...d.cases.map((c) => step(`${what}, ${c.title}`, '', c[measure], 'N'))];
 }
 
-/** One line listing every case's value of a measure, so the governing one can be seen in context. */
-export function caseList(d: JointDemand, measure: 'shear_N' | 'held_N'): string {
-  return `all cases: ${d.cases.map((c) => `${c.id} ${c[measure].toFixed(1)} N`).join(', ')}`;
+/** Ids of the sources of the load factors the joint forces use: the bump factor (the ride model's, or the placeholder) and the stopping shock. */
+export function demandSourceIds(data: RulesData, bump: DynamicFactor): string[] {
+  const bumpIds = bump.from === null ? loadFactor(data, 'bump_dynamic_factor').sources : ['design-basis-ride'];
+  return [...bumpIds, ...loadFactor(data, 'stopping_shock_factor').sources];
+}
+
+/** The bump factor the forces use, and where it came from, as a line of working. */
+export const bumpLine = (bump: DynamicFactor) => `bump factor k_bump = ${num(bump.value)}: ${bump.source}`;
+
+export const DEMAND_UNKNOWN: MessageSpec = { code: 2503, text: 'The force on the {joint} lashing could not be found, so it is not checked; the working says why.' };
+
+/**
+ * The lashings whose joint force was found, each with its demand, in the
+ * specification's order; for each of the others a warning is reported as the
+ * iteration reaches it.
+ */
+export function* loadedLashings(lashings: readonly Lashing[], demands: Record<Joint, JointDemand>, report: (r: Report<never, 'demandUnknown'>) => void): Generator<{ l: Lashing; d: JointDemand }> {
+  for (const l of lashings) {
+    const d = demands[l.joint];
+    if (d.unknown === null) yield { l, d };
+    else report(demandUnknown(l, d));
+  }
+}
+
+/** A lashing the model could not load is not a pass: it says so, as a warning. */
+export function demandUnknown(l: Lashing, d: JointDemand): Report<never, 'demandUnknown'> {
+  return {
+    subject: jointSubject(l.joint),
+    label: lashingLabel(l),
+    message: 'demandUnknown',
+    params: { joint: l.joint },
+    severity: 'warning',
+    fix: 'Fix what stops the model (see its own finding), then check again.',
+    working: [`${d.joint}: ${d.where}`, `not found: ${d.unknown ?? 'no reason given'}`],
+  };
 }

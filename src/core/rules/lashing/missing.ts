@@ -1,51 +1,75 @@
-import { makeFinding } from '../../engine/make-finding.ts';
-import type { Rule } from '../../engine/rule.ts';
-import type { Finding } from '../../findings/finding.ts';
 import { governing } from '../../model/joint-force.ts';
-import { demandSources, JOINTS } from '../../model/lashing-demand.ts';
+import { JOINTS } from '../../model/lashing-demand.ts';
+import { defineRule } from '../../pipeline/define-rule.ts';
+import { num } from '../../pipeline/step.ts';
 import { jointNeed } from './joint-needs.ts';
-import { caseList, lashingSize } from './lashed-joint.ts';
+import { bumpLine, caseName, demandSourceIds, forceWorking, jointSubject, lashingText, loadCaseOf } from './lashed-joint.ts';
 
-export const lashingMissing: Rule = {
+export const lashingMissing = defineRule({
   id: 'lashing.missing',
   title: 'Joints left unlashed',
   checks: 'Every joint this construction needs held is lashed: the pole to the axle and to the yoke and the box to the axle must be; the pole to the floor, the frame corners and the siding are advised, since joinery may hold them instead.',
   kind: 'check',
-  limits: [],
+  method: ['design-basis-lashings'],
+  needs: ['lashingDemands', 'bumpFactors'],
+  limits: {},
+  params: [],
+  messages: {
+    present: { code: 2531, text: 'The {joint} joint is lashed: {wraps:wraps} of {material}, {width:1} × {thickness:mm}.' },
+    missing: { code: 2532, text: 'The {joint} joint is not lashed, but {why}; it must pass {force:N} ({case}).' },
+    advised: { code: 2533, text: 'No lashing is given for the {joint} joint; {why}. Whatever holds it, lashing or joinery, must pass {force:N} ({case}); this check cannot see joinery.' },
+    missingUnknown: { code: 2534, text: 'The {joint} joint is not lashed, but {why}; the force it must pass was not found here (the working says why).' },
+    advisedUnknown: { code: 2535, text: 'No lashing is given for the {joint} joint; {why}. Whatever holds it, lashing or joinery, must pass a force not found here (the working says why); this check cannot see joinery.' },
+  },
   run(ctx) {
-    const out: Finding[] = [];
+    const { spec } = ctx;
+    const bump = ctx.models.bumpFactors.crew;
     for (const joint of JOINTS) {
-      const need = jointNeed(joint, ctx.spec);
-      const lashing = ctx.spec.lashings.find((l) => l.joint === joint);
+      const need = jointNeed(joint, spec);
+      const lashing = spec.lashings.find((l) => l.joint === joint);
       if (need.level === 'none' && !lashing) continue;
-      const d = ctx.analysis.lashingDemands[joint];
+      const d = ctx.models.lashingDemands[joint];
       const gov = d.unknown === null ? governing(d.cases, 'held_N') : undefined;
-      const force = gov ? `${gov.held_N.toFixed(0)} N` : `a force not found here (${d.unknown ?? 'no load reaches it'})`;
-      const severity = lashing ? 'pass' : need.level === 'required' ? 'fail' : 'advice';
-      out.push(makeFinding(this.id, {
-        severity,
-        subject: `joint, ${joint}`,
+      const common = {
+        subject: jointSubject(joint),
+        label: `${joint} joint`,
         value: gov?.held_N ?? null,
         unit: 'N',
-        limit: null,
-        message: lashing ? 'lashingPresent' : severity === 'fail' ? 'lashingMissing' : 'lashingAdvised',
-        params: lashing
-          ? { joint, wraps: lashing.wraps, material: lashing.material, size: lashingSize(lashing) }
-          : { joint, why: need.why, value: force, case: gov?.title ?? 'unknown case' },
-        fix: lashing
-          ? 'None needed; lashing.tension and lashing.slip check it.'
-          : severity === 'fail'
-            ? `Lash the ${joint} joint and list it under lashings, so that its strength is checked.`
-            : `Lash the ${joint} joint and list it under lashings, or make sure its joinery holds the force shown.`,
-        source: `mechanics note, section 7; ${demandSources(ctx.data, ctx.analysis.bumpFactors.crew)}`,
-        working: [
-          `${joint}: ${d.where}`,
-          `needed: ${need.level} (${need.why})`,
-          lashing ? `lashed: ${lashing.wraps} wraps of ${lashing.material} ${lashingSize(lashing)} mm` : 'not lashed',
-          ...(gov ? [gov.working, caseList(d, 'held_N')] : [d.unknown ?? 'no load reaches this joint']),
-        ].join('\n'),
-      }));
+        sources: demandSourceIds(ctx.data, bump),
+        load_case: loadCaseOf(d, gov),
+      };
+      const working = [
+        `${joint}: ${d.where}`,
+        `needed: ${need.level} (${need.why})`,
+        ...(joint === 'pole-to-floor' ? [`the pole's rear end at x = ${num(spec.pole.rear_x_mm, 'mm')} mm`] : []),
+        ...(joint === 'siding-to-frame' ? [`the siding: ${num(spec.box.siding_mass_kg, 'kg')} kg`] : []),
+        lashing ? `lashed: ${lashingText(lashing)}` : 'not lashed',
+        bumpLine(bump),
+        ...(d.unknown === null ? forceWorking(d, gov, 'held_N') : [`not found: ${d.unknown}`]),
+      ];
+      if (lashing) {
+        ctx.report({
+          ...common,
+          message: 'present',
+          params: { joint, wraps: lashing.wraps, material: lashing.material, width: lashing.width_mm, thickness: lashing.thickness_mm },
+          severity: 'pass',
+          fix: 'None needed; lashing.tension and lashing.slip check it.',
+          working,
+        });
+        continue;
+      }
+      const required = need.level === 'required';
+      const known = gov !== undefined;
+      ctx.report({
+        ...common,
+        message: required ? (known ? 'missing' : 'missingUnknown') : known ? 'advised' : 'advisedUnknown',
+        params: { joint, why: need.why, ...(gov ? { force: gov.held_N, case: caseName(d, gov) } : {}) },
+        severity: required ? 'fail' : 'advice',
+        fix: required
+          ? `Lash the ${joint} joint and list it under lashings, so that its strength is checked.`
+          : `Lash the ${joint} joint and list it under lashings, or make sure its joinery holds the force shown.`,
+        working,
+      });
     }
-    return out;
   },
-};
+});

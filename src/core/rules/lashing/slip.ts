@@ -1,52 +1,59 @@
-import { gradeUpper, makeFinding } from '../../engine/make-finding.ts';
-import type { Rule } from '../../engine/rule.ts';
 import { governing } from '../../model/joint-force.ts';
 import { slipCapacity } from '../../model/lashing-capacity.ts';
-import { demandSources } from '../../model/lashing-demand.ts';
-import { caseList, demandUnknown, lashingSize, lashingSubject } from './lashed-joint.ts';
+import { defineRule } from '../../pipeline/define-rule.ts';
+import { num, step } from '../../pipeline/step.ts';
+import { withinLimit } from '../within-limit.ts';
+import { bumpLine, caseName, DEMAND_UNKNOWN, demandSourceIds, forceWorking, jointSubject, lashingLabel, lashingText, loadCaseOf, loadedLashings } from './lashed-joint.ts';
 
-const f1 = (v: number) => v.toFixed(1);
-
-export const lashingSlip: Rule = {
+export const lashingSlip = defineRule({
   id: 'lashing.slip',
   title: 'Lashed joints sliding',
   checks: "Each lashed joint's largest force in the contact face against the friction of the clamp its wraps make, mu × 2 n T_pre, with the builder's estimated pretension.",
   kind: 'check',
-  limits: ['friction_wood_on_wood', 'advisory_fraction'],
+  method: ['design-basis-lashings'],
+  needs: ['lashingDemands', 'bumpFactors'],
+  limits: { utilisation: { direction: 'max', unit: 'of the clamp friction mu·2·n·T_pre' } },
+  params: ['friction_wood_on_wood'],
+  messages: {
+    within: { code: 2511, text: "The {joint} lashing clamps with {capacity:N} of friction against at most {value:N} of sliding force ({case}), with the builder's estimated pretension of {pre:N} per wrap." },
+    over: { code: 2512, text: "The {joint} joint may slip: {value:N} of sliding force ({case}) against {capacity:N} of clamp friction; the advisory limit is {advisory:N} and the hard limit {hard:N}, with the builder's estimated pretension of {pre:N} per wrap." },
+    demandUnknown: DEMAND_UNKNOWN,
+  },
   run(ctx) {
-    const mu = ctx.limit('friction_wood_on_wood');
-    const adv = ctx.limit('advisory_fraction');
-    return ctx.spec.lashings.map((l) => {
-      const d = ctx.analysis.lashingDemands[l.joint];
-      if (d.unknown !== null) return demandUnknown(this.id, l, d);
+    const mu = ctx.param('friction_wood_on_wood');
+    const lim = ctx.limit('utilisation');
+    const bump = ctx.models.bumpFactors.crew;
+    for (const { l, d } of loadedLashings(ctx.spec.lashings, ctx.models.lashingDemands, (r) => ctx.report(r))) {
       const capacity = slipCapacity(mu.value, l.wraps, l.pretension_N);
-      const advN = adv.value * capacity;
       const gov = governing(d.cases, 'shear_N');
       const V = gov?.shear_N ?? 0;
-      const severity = gradeUpper(V, advN, capacity);
-      const hard = severity === 'fail';
-      const limitN = hard ? capacity : advN;
-      return makeFinding(this.id, {
-        severity,
-        subject: lashingSubject(l),
+      const level = (name: string, v: number | null) => (v === null ? [] : [step(`${name} limit = fraction × clamp friction`, `${num(v)} × ${num(capacity)}`, v * capacity, 'N')]);
+      ctx.report({
+        subject: jointSubject(l.joint),
+        label: lashingLabel(l),
+        message: { pass: 'within', warning: 'over', fail: 'over' },
+        params: { joint: l.joint, case: gov ? caseName(d, gov) : 'no load', capacity, pre: l.pretension_N },
         value: V,
         unit: 'N',
-        limit: limitN,
-        message: severity === 'pass' ? 'lashingSlipWithin' : 'lashingSlipOver',
-        params: { joint: l.joint, value: V.toFixed(0), case: gov?.title ?? 'no load', limit: (severity === 'pass' ? capacity : limitN).toFixed(0), level: hard ? 'hard' : 'advisory', pre: l.pretension_N },
-        fix: severity === 'pass'
+        against: { limit: 'utilisation', times: capacity },
+        sources: [...mu.sources, ...demandSourceIds(ctx.data, bump)],
+        load_case: loadCaseOf(d, gov),
+        fix: withinLimit(V, lim, capacity)
           ? 'None needed; the clamp relies on the pretension: retighten leather that has stretched.'
           : 'Add wraps or lay them tighter (rawhide laid wet shrinks tight as it dries), notch or peg the joint so it cannot slide, or measure the friction of your own timber.',
-        source: `${mu.source}; ${adv.source}; ${demandSources(ctx.data, ctx.analysis.bumpFactors.crew)}`,
         working: [
-          `${l.joint}: ${d.where}; ${l.wraps} wraps of ${l.material} ${lashingSize(l)} mm at an estimated ${l.pretension_N} N each`,
-          ...(gov ? [gov.working, caseList(d, 'shear_N')] : ['no load reaches this joint']),
-          `slip capacity = mu·2·n·T_pre = ${mu.value} × 2 × ${l.wraps} × ${l.pretension_N} N = ${f1(capacity)} N (the friction of the members' own weight on each other is not counted, the safe side: a bump unloads it)`,
-          `limits: advisory ${adv.value} × ${f1(capacity)} = ${f1(advN)} N, hard ${f1(capacity)} N`,
+          `${l.joint}: ${d.where}; ${lashingText(l)} at an estimated ${num(l.pretension_N, 'N')} N each`,
+          bumpLine(bump),
+          ...forceWorking(d, gov, 'shear_N'),
+          step('V, the largest force in the contact face', '', V, 'N'),
+          step('clamp friction = mu·2·n·T_pre', `${num(mu.value)} × 2 × ${l.wraps} × ${num(l.pretension_N)}`, capacity, 'N'),
+          "the friction of the members' own weight on each other is not counted, the safe side: a bump unloads it",
+          ...level('advisory', lim.advisory),
+          ...level('hard', lim.hard),
           ...(ctx.spec.operation.wet ? ['driven wet: leather and rawhide slacken when wet, so the estimated pretension may not hold'] : []),
-          `utilisation = ${f1(V)} / ${f1(limitN)} = ${(V / limitN).toFixed(3)}`,
-        ].join('\n'),
+          step('utilisation = V / clamp friction', `${num(V)} / ${num(capacity)}`, V / capacity, '1'),
+        ],
       });
-    });
+    }
   },
-};
+});

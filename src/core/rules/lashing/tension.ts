@@ -1,55 +1,65 @@
-import { makeFinding } from '../../engine/make-finding.ts';
-import type { Rule } from '../../engine/rule.ts';
 import { governing } from '../../model/joint-force.ts';
 import { strandPull, tensileCapacity } from '../../model/lashing-capacity.ts';
-import { demandSources } from '../../model/lashing-demand.ts';
-import { caseList, demandUnknown, lashingSize, lashingSubject } from './lashed-joint.ts';
+import { defineRule } from '../../pipeline/define-rule.ts';
+import { num, step } from '../../pipeline/step.ts';
+import { withinLimit } from '../within-limit.ts';
+import { bumpLine, caseName, DEMAND_UNKNOWN, demandSourceIds, forceWorking, jointSubject, lashingLabel, lashingText, loadCaseOf, loadedLashings } from './lashed-joint.ts';
 
-const f1 = (v: number) => v.toFixed(1);
-
-export const lashingTension: Rule = {
+export const lashingTension = defineRule({
   id: 'lashing.tension',
   title: 'Lashing strength',
   checks: "Each lashing's largest joint force, or its own pretension where that is more, against the strands' tensile capacity 2 n b t f_t / SF, at the wet strength where the chariot is driven wet.",
   kind: 'check',
-  limits: ['safety_factor'],
+  method: ['design-basis-lashings'],
+  needs: ['lashingDemands', 'bumpFactors'],
+  limits: { utilisation: { direction: 'max', unit: 'of the tensile capacity 2 n b t f_t / SF' } },
+  params: ['safety_factor'],
+  messages: {
+    within: { code: 2501, text: 'The {joint} lashing carries at most {value:N} ({case}), {share:%} of its tensile capacity of {capacity:N} at the {state} strength.' },
+    over: { code: 2502, text: 'The {joint} lashing would carry {value:N} ({case}), more than its limit of {limit:N}: its tensile capacity at the {state} strength with a safety factor of {sf:1} is {capacity:N}.' },
+    demandUnknown: DEMAND_UNKNOWN,
+  },
   run(ctx) {
-    const sf = ctx.limit('safety_factor');
+    const sf = ctx.param('safety_factor');
+    const lim = ctx.limit('utilisation');
     const wet = ctx.spec.operation.wet;
-    return ctx.spec.lashings.map((l) => {
-      const d = ctx.analysis.lashingDemands[l.joint];
-      if (d.unknown !== null) return demandUnknown(this.id, l, d);
+    const bump = ctx.models.bumpFactors.crew;
+    for (const { l, d } of loadedLashings(ctx.spec.lashings, ctx.models.lashingDemands, (r) => ctx.report(r))) {
       const leather = ctx.data.leathers[l.material];
       const dry = leather.tensile_strength_MPa.value;
-      const ft = wet ? dry * leather.wet_strength_factor.value : dry;
+      const wf = leather.wet_strength_factor.value;
+      const ft = wet ? dry * wf : dry;
       const capacity = tensileCapacity(l, ft, sf.value);
       const gov = governing(d.cases, 'held_N');
       const F = gov?.held_N ?? 0;
       const pull = strandPull(F, l.wraps, l.pretension_N);
-      const severity = pull > capacity ? 'fail' : 'pass';
       const byPretension = pull > F;
-      const state = wet ? 'wet' : 'dry';
-      return makeFinding(this.id, {
-        severity,
-        subject: lashingSubject(l),
+      ctx.report({
+        subject: jointSubject(l.joint),
+        label: lashingLabel(l),
+        message: { pass: 'within', fail: 'over' },
+        params: { joint: l.joint, case: byPretension || !gov ? 'its own pretension' : caseName(d, gov), state: wet ? 'wet' : 'dry', capacity, share: pull / capacity, sf: sf.value },
         value: pull,
         unit: 'N',
-        limit: capacity,
-        message: severity === 'pass' ? 'lashingTensionWithin' : 'lashingTensionOver',
-        params: { joint: l.joint, value: pull.toFixed(0), case: byPretension ? 'its own pretension' : gov!.title, state, limit: capacity.toFixed(0), sf: sf.value },
-        fix: severity === 'pass'
+        against: { limit: 'utilisation', times: capacity },
+        sources: [...sf.sources, ...leather.tensile_strength_MPa.sources, ...(wet ? leather.wet_strength_factor.sources : []), ...demandSourceIds(ctx.data, bump)],
+        load_case: byPretension ? null : loadCaseOf(d, gov),
+        fix: withinLimit(pull, lim, capacity)
           ? 'None needed; test strips of your own hide to confirm the strength.'
           : `Add wraps, use a wider or thicker strap or a stronger leather${wet ? ', or keep the lashing dry' : ''}; ${byPretension ? 'or lay the wraps less tight' : 'or take part of the load with a peg or notch'}.`,
-        source: `${sf.source}; strength: ${leather.tensile_strength_MPa.source}${wet ? `; wet: ${leather.wet_strength_factor.source}` : ''}; ${demandSources(ctx.data, ctx.analysis.bumpFactors.crew)}`,
         working: [
-          `${l.joint}: ${d.where}; ${l.wraps} wraps of ${l.material} ${lashingSize(l)} mm`,
-          ...(gov ? [gov.working, caseList(d, 'held_N')] : ['no load reaches this joint']),
-          `strand pull = max(F, 2·n·T_pre) = max(${f1(F)}, 2 × ${l.wraps} × ${l.pretension_N}) = ${f1(pull)} N (the strands hold their pretension until the members part, the joint force after; the whole force is taken by the strands, the safe side; T_pre is the builder's estimate)`,
-          wet ? `f_t = ${dry} MPa × wet factor ${leather.wet_strength_factor.value} = ${f1(ft)} MPa (${l.material}, wet)` : `f_t = ${dry} MPa (${l.material}, dry)`,
-          `capacity = 2·n·b·t·f_t / SF = 2 × ${l.wraps} × ${l.width_mm} mm × ${l.thickness_mm} mm × ${f1(ft)} MPa / ${sf.value} = ${f1(capacity)} N`,
-          `utilisation = ${f1(pull)} / ${f1(capacity)} = ${(pull / capacity).toFixed(3)}`,
-        ].join('\n'),
+          `${l.joint}: ${d.where}; ${lashingText(l)}`,
+          bumpLine(bump),
+          ...forceWorking(d, gov, 'held_N'),
+          step('F, the largest force held', '', F, 'N'),
+          step('strand pull = max(F, 2·n·T_pre)', `max(${num(F)}, 2 × ${l.wraps} × ${num(l.pretension_N)})`, pull, 'N'),
+          "the strands hold their pretension until the members part, the joint force after; the whole force is taken by the strands, the safe side; T_pre is the builder's estimate",
+          wet ? step(`f_t = f_t,dry × wet factor (${l.material}, wet)`, `${num(dry)} × ${num(wf)}`, ft, 'MPa') : step(`f_t (${l.material}, dry)`, '', ft, 'MPa'),
+          step('capacity = 2·n·b·t·f_t / SF', `2 × ${l.wraps} × ${num(l.width_mm)} × ${num(l.thickness_mm)} × ${num(ft)} / ${num(sf.value)}`, capacity, 'N'),
+          ...(lim.hard === null ? [] : [step('limit = hard level × capacity', `${num(lim.hard)} × ${num(capacity)}`, lim.hard * capacity, 'N')]),
+          step('strand pull / capacity', `${num(pull)} / ${num(capacity)}`, pull / capacity, '1'),
+        ],
       });
-    });
+    }
   },
-};
+});

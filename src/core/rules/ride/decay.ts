@@ -1,35 +1,60 @@
 import { param } from '../../data/param.ts';
-import { makeFinding } from '../../engine/make-finding.ts';
-import type { Rule } from '../../engine/rule.ts';
-import { decaysSlowly } from '../../ride/ride-verdict.ts';
-import { rideSources, rideWorking } from './ride-working.ts';
+import { defineRule } from '../../pipeline/define-rule.ts';
+import { num, step } from '../../pipeline/step.ts';
+import { withinLimit } from '../within-limit.ts';
+import { notRunMessage, rideNotRun, rideSourceIds, rideWorking } from './ride-working.ts';
 
-export const rideDecay: Rule = {
+export const rideDecay = defineRule({
   id: 'ride.decay',
   title: 'How fast the crew stop bouncing',
-  checks: "After the drop test, the cycles until the crew's motion falls below 10 % of its first amplitude, against three cycles (common practice).",
+  checks: "After the drop test, the cycles until the crew's motion falls below a fraction of its first amplitude (ride.inputs.decay_fraction), against the cycles allowed.",
   kind: 'check',
   worst: 'warning',
-  limits: ['max_cycles'],
-  run(ctx) {
-    const max = ctx.limit('max_cycles');
-    const fraction = param(ctx.data, 'ride.inputs', 'decay_fraction');
-    const r = ctx.analysis.ride.drop;
-    const slow = decaysSlowly(r, max.value);
-    const need = slow ? ctx.analysis.floorDampingNeeded : null;
-    const needed = need === null ? '' : need.ratio === null ? 'no floor damping ratio up to 1 meets the ride rules' : `a floor damping ratio of ${need.ratio.toFixed(3)} would meet the ride rules`;
-    const cycles = r.decayCycles;
-    return [makeFinding(this.id, {
-      severity: slow ? 'warning' : 'pass',
-      subject: `crew, ${r.title}`,
-      value: cycles,
-      unit: 'cycles',
-      limit: max.value,
-      message: slow ? 'rideDecaySlow' : 'rideDecayWithin',
-      params: { value: cycles === null ? 'more than the run holds' : cycles.toFixed(2), limit: max.value, fraction: (fraction.value * 100).toFixed(0), zeta: r.floorDamping.value, zetaSource: r.floorDamping.source.split(':')[0], needed },
-      fix: slow ? `Damp the floor more: ${needed}; measure a floor sample with axletree floor-test and name it in the specification.` : 'None needed.',
-      source: `${max.source}; ${rideSources(r)}`,
-      working: [...rideWorking(r), `crew decay: ${r.crew.map((c) => `${c.role} ${c.decay_cycles === null ? 'not within the run' : c.decay_cycles.toFixed(2)}`).join(', ')} cycles to ${(fraction.value * 100).toFixed(0)} % (from the largest turning point after the wheels first touch; log-interpolated between turning points); a linear single-degree system needs ζ ≥ 0.121 for ${max.value} cycles${need ? `\ntuner: ${need.working}` : ''}`].join('\n'),
-    })];
+  method: ['design-basis-ride'],
+  needs: ['ride', 'floorDampingNeeded'],
+  limits: { cycles: { direction: 'max', unit: 'cycles', levels: { hard: 'warning' } } },
+  params: [],
+  messages: {
+    within: { code: 2811, text: "After the drop test the crew's motion falls below {fraction:%} of its first amplitude in {value:1} cycles (limit {limit:1}); floor damping ratio {zeta:1} ({zetaSource})." },
+    slow: { code: 2812, text: "After the drop test the crew's motion takes {value:1} cycles to fall below {fraction:%} of its first amplitude, more than {limit:1}; floor damping ratio {zeta:1} ({zetaSource})." },
+    unsettled: { code: 2813, text: "After the drop test the crew's motion does not fall below {fraction:%} of its first amplitude within the run; floor damping ratio {zeta:1} ({zetaSource})." },
+    notRun: notRunMessage(2814, "how fast the crew's motion dies out"),
   },
-};
+  run(ctx) {
+    const rides = ctx.models.ride;
+    if (rides === null) return ctx.report(rideNotRun());
+    const lim = ctx.limit('cycles');
+    const fraction = param(ctx.data, 'ride.inputs', 'decay_fraction');
+    const r = rides.drop;
+    const cycles = r.decayCycles;
+    const slow = cycles === null || !withinLimit(cycles, lim);
+    // The tuner runs many simulations: it is asked only where the decay is slow.
+    const need = slow ? ctx.models.floorDampingNeeded : null;
+    const allowed = (lim.hard ?? lim.advisory)!;
+    const delta = Math.log(1 / fraction.value) / allowed;
+    const zetaLinear = delta / Math.sqrt(4 * Math.PI ** 2 + delta ** 2);
+    const common = {
+      subject: 'ride.drop',
+      label: `crew, ${r.title}`,
+      params: { fraction: fraction.value, zeta: r.floorDamping.value, zetaSource: r.floorDamping.source.split(':')[0] },
+      sources: [...fraction.sources, ...rideSourceIds(ctx.data, ctx.spec, 'drop')],
+      load_case: 'drop',
+      fix: need === null
+        ? 'None needed.'
+        : `Damp the floor more: ${need.ratio === null ? `no floor damping ratio up to ${num(need.grid[need.grid.length - 1])} meets the ride rules` : `a floor damping ratio of ${num(need.ratio)} would meet the ride rules`}; measure a floor sample with axletree floor-test and name it in the specification.`,
+      working: [
+        ...rideWorking(r),
+        ...r.crew.map((c) => (c.decay_cycles === null ? `${c.role}: not below the fraction within the run` : step(`${c.role}: cycles to fall below the fraction`, '', c.decay_cycles, '1'))),
+        'from the largest turning point after the wheels first touch; log-interpolated between turning points',
+        step('δ = ln(1 / fraction) / N, a linear single-degree system decaying in the cycles allowed', `ln(1 / ${num(fraction.value)}) / ${num(allowed)}`, delta, '1'),
+        step('it needs ζ ≥ δ / √(4π² + δ²)', `${num(delta)} / √(4π² + ${num(delta)}²)`, zetaLinear, '1'),
+        ...(need ? [`tuner: ${need.working}`] : []),
+      ],
+    };
+    if (cycles === null) {
+      ctx.report({ ...common, message: 'unsettled', unit: 'cycles', severity: 'warning' });
+      return;
+    }
+    ctx.report({ ...common, message: { pass: 'within', warning: 'slow' }, value: cycles, unit: 'cycles', against: { limit: 'cycles' } });
+  },
+});

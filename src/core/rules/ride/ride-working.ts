@@ -1,9 +1,51 @@
-import type { RideResult } from '../../ride/ride-types.ts';
+import { param } from '../../data/param.ts';
+import type { RulesData } from '../../data/rules-data.ts';
+import type { MessageSpec, Report } from '../../pipeline/define-rule.ts';
+import { measuredFloorDamping } from '../../ride/ride-build.ts';
+import { groundContact } from '../../ride/ride-data.ts';
+import type { RideCase, RideResult } from '../../ride/ride-types.ts';
+import type { CheckedSpecification } from '../../spec/spec.types.ts';
+
+// What the ride rules share: the ride model's working and the sources of its
+// data, and the finding for a run in which the ride model was not started.
 
 /** The ride model's parameters and method, for a finding's working. */
 export function rideWorking(r: RideResult): string[] {
-  return [`ride model (mechanics note, section 8), ${r.title}:`, ...r.working, `integration: ${r.method}, ${r.steps} steps`];
+  return [`ride model (design basis, section 8), ${r.title}:`, ...r.working, `integration: ${r.method}, ${r.steps} steps`];
 }
 
-/** Sources of the ride model's data, for a finding's source line. */
-export const rideSources = (r: RideResult) => [...new Set(r.sources)].join('; ');
+/** Ids of the sources of the ride model's parameters this build reads in one case (rules/parameters/ride.yaml). */
+export function rideSourceIds(data: RulesData, spec: CheckedSpecification, which: RideCase): string[] {
+  const read: [string, string][] = [
+    ['ride.wheel-contact', spec.wheels.tyre ? 'stiffness_tyred' : 'stiffness_bare'],
+    ['ride.wheel-contact', 'damping_ratio'],
+    ['ride.supports', 'yoke_pad_stiffness'],
+    ['ride.supports', 'yoke_damping_ratio'],
+    ['ride.supports', 'shear_modulus_ratio'],
+    ['ride.supports', 'legs_stiffness'],
+    // A measured floor's damping comes from the specification, not the data.
+    ...(measuredFloorDamping(spec) ? [] : [['ride.supports', 'floor_damping_ratio'] as [string, string]]),
+    ['ride.inputs', 'duration_s'],
+    ['ride.inputs', 'sample_interval_s'],
+  ];
+  // The drop test falls on rigid ground.
+  const ground = which === 'drop' ? null : groundContact(data, spec.operation.ground);
+  const ids = read.flatMap(([g, n]) => param(data, g, n).sources);
+  if (ground) ids.push(...ground.k.sources, ...ground.zeta.sources);
+  return [...new Set(ids)];
+}
+
+/** The message of a ride rule's finding where the ride model was not run; the rule names what goes unchecked. */
+export const notRunMessage = (code: number, what: string): MessageSpec => ({ code, text: `The ride model was not run (a statics-only run), so ${what} is not checked.` });
+
+/** Not run is not a pass: advice that the rule could not look. */
+export function rideNotRun(): Report<never, 'notRun'> {
+  return {
+    subject: 'ride.model',
+    label: 'ride model',
+    message: 'notRun',
+    severity: 'advice',
+    fix: 'Run the full check (with the ride model) to have this checked.',
+    working: ['the ride model runs only in a full check with a crew aboard; this run did not start it'],
+  };
+}
