@@ -25,7 +25,7 @@ function sheet(wb: ExcelJS.Workbook, name: string): ExcelJS.Worksheet {
 /** Every cell's text on a sheet, in reading order. */
 function texts(ws: ExcelJS.Worksheet): string[] {
   const out: string[] = [];
-  ws.eachRow((row) => row.eachCell((cell) => out.push(cell.text)));
+  ws.eachRow((row) => row.eachCell((cell) => out.push(cell.value === null ? '' : cell.text)));
   return out;
 }
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { deepMerge, findingsOf, fractionHitting, readDemo, rulesData } from '../support/fixtures.ts';
-import { bySubject } from '../support/limit-boundary.ts';
+import { bySubjectId } from '../support/member-support.ts';
 
 const RULE = 'bend.radius';
 const ash = rulesData.species['white-ash'].steam_bend_ratio;
@@ -23,7 +23,7 @@ describe(RULE, () => {
   });
 
   it('fails a felloe bent without a strap, against the unsupported figure', async () => {
-    const f = bySubject('felloe')(await findingsOf(RULE, deepMerge(readDemo('demo-rear-axle'), { wheels: { felloe: { bend_strap: false } } })));
+    const f = bySubjectId('part.felloe')(await findingsOf(RULE, deepMerge(readDemo('demo-rear-axle'), { wheels: { felloe: { bend_strap: false } } })));
     expect(f.severity).toBe('fail');
     expect(f.message_key).toBe('tight');
     expect(f.limit).toBe(ash.unsupported!.value);
@@ -33,7 +33,7 @@ describe(RULE, () => {
   it('fails frame corners bent tight: (180 − 42/2) / 42 is below 4.5', async () => {
     // The central-axle demo with a 42 mm wide white-ash frame bent at 180 mm, against a strap (demo data).
     const raw = deepMerge(readDemo('demo-two-crew'), { box: { floor: { frame: { species: 'white-ash', width_mm: 42, bend_radius_mm: 180, bend_strap: true } } } });
-    const f = bySubject('frame')(await findingsOf(RULE, raw));
+    const f = bySubjectId('part.frame')(await findingsOf(RULE, raw));
     expect(f.subject).toBe('part.frame');
     expect(f.value).toBeCloseTo(159 / 42, 12);
     expect(f.severity).toBe('fail');
@@ -43,7 +43,7 @@ describe(RULE, () => {
 
   it('a species with no bending figure is a warning, not a pass', async () => {
     expect(rulesData.species['black-ash'].steam_bend_ratio.supported).toBeNull();
-    const f = bySubject('pole')(await findingsOf(RULE, deepMerge(readDemo('demo-rear-axle'), { pole: { species: 'black-ash' } })));
+    const f = bySubjectId('part.pole')(await findingsOf(RULE, deepMerge(readDemo('demo-rear-axle'), { pole: { species: 'black-ash' } })));
     expect(f.severity).toBe('warning');
     expect(f).toMatchObject({ code: 2403, message_key: 'noData', limit: null, utilisation: null });
     expect(f.value).toBeCloseTo(968 / 64, 12);
@@ -55,7 +55,7 @@ describe(RULE, () => {
     const found = await findingsOf(RULE, raw);
     expect(found.map((f) => [f.subject, f.subject_label])).toEqual([['part.pole', 'pole'], ['part.frame', 'floor frame front rail']]);
     // Frame: R_i = 150 − 40/2 = 130 mm over the width in plan 40 mm.
-    const frame = bySubject('frame')(found);
+    const frame = bySubjectId('part.frame')(found);
     expect(frame.value).toBeCloseTo(130 / 40, 12);
     expect(frame.limit).toBe(rulesData.species['american-elm'].steam_bend_ratio.unsupported!.value);
     expect(frame.params.strap).toBe('bent without a strap');
@@ -64,7 +64,7 @@ describe(RULE, () => {
 
   it('boundary: a ratio equal to the limit passes, a hair below fails', async () => {
     const raw = readDemo('demo-rear-axle');
-    const pick = bySubject('felloe');
+    const pick = bySubjectId('part.felloe');
     const f = pick(await findingsOf(RULE, raw));
     const m = fractionHitting(f.value!, ash.supported!.value);
     const at = pick(await findingsOf(RULE, raw, { 'radius_ratio.hard': m }));

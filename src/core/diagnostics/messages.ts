@@ -1,6 +1,7 @@
-// Every message the tool can say, each with a stable code, in one table, so
+// The messages of reading and the commands, each with a stable code, in one table, so
 // wording is reviewed in one place and codes never change meaning.
-// 1xxx: the specification as read; 2xxx: findings of the rules.
+// 1xxx: the specification as read; 29xx: the floor-test record. Each rule
+// holds its own findings' templates (2xxx) beside its code.
 
 export const MESSAGES = {
   // Reading and schema
@@ -56,72 +57,6 @@ export const MESSAGES = {
   stockShortLength: { code: 1205, text: 'not enough stock available: the {count} pieces of {value} mm or longer need {need} mm of stock with their kerfs, but the available stock that holds them totals {have} mm.' },
   stockShortCount: { code: 1206, text: 'not enough stock available: there are {count} pieces of {value} mm or longer, but the available stock that holds them can yield at most {have} of them.' },
   stockShortPlan: { code: 1207, text: 'not enough stock available: {reason}.' },
-  // Findings (2xxx); rules fill the parameters.
-  yokeLifts: { code: 2001, text: 'The yoke lifts off the horses in the case "{case}": the pole pulls up with {value} N.' },
-  yokePresses: { code: 2002, text: 'The yoke presses down in every load case; least pole load {value} N ({case}).' },
-  horseLoadOver: { code: 2011, text: 'Each horse carries {value} N on the yoke in "{case}", {pct} % of its body weight; the {level} limit is {limitPct} %.' },
-  horseLoadWithin: { code: 2012, text: 'Each horse carries at most {value} N on the yoke ({case}), {pct} % of its body weight, within the advisory {limitPct} %.' },
-  balanceNote: { code: 2021, text: 'The loaded centre of mass stands {value} mm {side} the axle; moving the axle 50 mm forward changes the static pole load by {fwd} N, 50 mm back by {back} N.' },
-  // Turning (26xx)
-  turnTooTight: { code: 2601, text: 'The planned turn of {radius} m is too tight: the yoke path must be wider than the pole reach of {reach} m, or the chariot cannot follow it.' },
-  turnReachOk: { code: 2602, text: 'The planned turn of {radius} m is wider than the pole reach of {reach} m.' },
-  innerWheelBackward: { code: 2611, text: 'In the planned turn the inner wheel runs backwards (path radius {inner} m; outer {outer} m; speed ratio {ratio}): it scrubs sideways instead of rolling.' },
-  innerWheelForward: { code: 2612, text: 'In the planned turn both wheels roll forward: inner path {inner} m, outer {outer} m, speed ratio {ratio}.' },
-  rolloverOver: { code: 2621, text: 'The design turn needs {value} m/s² of lateral acceleration, {pct} % of the rollover threshold; the {level} limit is {limitPct} %. The tightest turn at this speed is {tightest} m; this turn is within the advisory limit up to {speed} km/h.' },
-  rolloverWithin: { code: 2622, text: 'The design turn needs {value} m/s² of lateral acceleration, {pct} % of the rollover threshold, within the advisory {limitPct} %. The tightest turn at this speed is {tightest} m; this turn stays within the advisory limit up to {speed} km/h.' },
-  slideOver: { code: 2631, text: 'The design turn needs {value} m/s² sideways on {ground} (mu = {mu}), above the {level} limit of {limit} m/s²; {order}.' },
-  slideWithin: { code: 2632, text: 'The design turn needs {value} m/s² sideways on {ground} (mu = {mu}), within the advisory limit of {limit} m/s²; {order}.' },
-  innerWheelLight: { code: 2641, text: 'In the design turn the inner wheel keeps only {share} % of its static load ({inner} N; outer {outer} N): it is close to lifting.' },
-  innerWheelLifts: { code: 2643, text: 'In the design turn the inner wheel lifts: the load transfer leaves it {inner} N ({share} % of static; outer {outer} N).' },
-  wheelLoads: { code: 2642, text: 'In the design turn the outer wheel carries {outer} N and the inner {inner} N ({share} % of static); lateral forces {outerLat} N and {innerLat} N.' },
-  // Strap floor (22xx)
-  floorTensionOver: { code: 2201, text: 'The largest strap tension in "{case}" is {tension} N, a stress of {value} MPa at {where}: {pct} % of the design strength {strength} MPa; the {level} limit is {limitPct} %.' },
-  floorTensionWithin: { code: 2202, text: 'The largest strap tension in "{case}" is {tension} N, a stress of {value} MPa at {where}: {pct} % of the design strength {strength} MPa.' },
-  floorNotSolved: { code: 2203, text: 'The floor model did not settle in "{case}" ({reason}), so its tensions and sags cannot be trusted; see floor.convergence.' },
-  floorSagOver: { code: 2211, text: '{role} sags the floor {value} mm standing, more than the advisory {limit} mm.' },
-  floorSagWithin: { code: 2212, text: '{role} sags the floor {value} mm standing, within the advisory {limit} mm.' },
-  floorStrikes: { code: 2213, text: 'The floor sags {value} mm over the {part} in "{case}" and reaches it: the {part}\'s top is {limit} mm below the floor top.' },
-  floorClears: { code: 2214, text: 'The floor sags at most {value} mm over the {part} ({case}), clear of its top {limit} mm below the floor top.' },
-  floorConverged: { code: 2221, text: 'The floor model settled in "{case}" in {iterations} Newton steps: largest out-of-balance force {value} N, tolerance {limit} N.' },
-  floorNotConverged: { code: 2222, text: 'The floor model did not settle in "{case}": after {iterations} Newton steps the largest out-of-balance force is {value} N against the tolerance {limit} N ({reason}).' },
-  floorStiffnessNote: { code: 2231, text: 'Under {role} ({load} N standing) the floor sags {sag} mm: secant stiffness {value} N/mm, tangent stiffness {tangent} N/mm.' },
-  // Timber members (23xx)
-  memberWithin: { code: 2301, text: '{part}, {mode}: {value} {unit}, within the design capacity {limit} {unit}; governing case "{case}" ({basis}), utilisation {util}.' },
-  memberOver: { code: 2302, text: '{part}, {mode}: {value} {unit} exceeds the design capacity {limit} {unit} in "{case}" ({basis}); utilisation {util}.' },
-  memberNotChecked: { code: 2303, text: '{part}: not checked: {reason}.' },
-  // Steam bends (24xx)
-  bendWithin: { code: 2401, text: '{part}: bend radius over thickness {value} ({radius} mm / {thickness} mm) is not below the {species} limit {limit} {strap}.' },
-  bendTight: { code: 2402, text: '{part}: bend radius over thickness {value} ({radius} mm / {thickness} mm) is below the {species} limit {limit} {strap}: expect the outer face to break or the inner face to buckle.' },
-  bendNoData: { code: 2403, text: '{part}: no steam-bending figure is held for {species} {strap}; the ratio {value} ({radius} mm / {thickness} mm) cannot be confirmed.' },
-  // Lashings (25xx)
-  lashingTensionWithin: { code: 2501, text: 'The {joint} lashing carries at most {value} N ({case}); its tensile capacity at the {state} strength is {limit} N.' },
-  lashingTensionOver: { code: 2502, text: 'The {joint} lashing would carry {value} N ({case}), more than its tensile capacity of {limit} N at the {state} strength with a safety factor of {sf}.' },
-  lashingDemandUnknown: { code: 2503, text: 'The force on the {joint} lashing could not be found: {why}. It is not checked.' },
-  lashingSlipWithin: { code: 2511, text: 'The {joint} lashing clamps with {limit} N of friction against at most {value} N of sliding force ({case}), with the builder\'s estimated pretension of {pre} N per wrap.' },
-  lashingSlipOver: { code: 2512, text: 'The {joint} joint may slip: {value} N of sliding force ({case}) against the {level} limit of {limit} N of clamp friction, with the builder\'s estimated pretension of {pre} N per wrap.' },
-  anchorageWithin: { code: 2521, text: 'Each end of the {joint} lashing needs {value} full turns round a member before it is tucked; {limit} are given.' },
-  anchorageShort: { code: 2522, text: 'Each end of the {joint} lashing needs {value} full turns round a member before it is tucked to hold the strap\'s breaking pull; only {limit} are given.' },
-  anchorageNote: { code: 2523, text: 'Each end of the {joint} lashing needs at least {value} full turns round a member before it is tucked to hold the strap\'s breaking pull of {pull} N; give anchor_turns to have it checked.' },
-  lashingPresent: { code: 2531, text: 'The {joint} joint is lashed: {wraps} wraps of {material}, {size} mm.' },
-  lashingMissing: { code: 2532, text: 'The {joint} joint is not lashed, but {why}; it must pass {value} ({case}).' },
-  lashingAdvised: { code: 2533, text: 'No lashing is given for the {joint} joint; {why}. Whatever holds it, lashing or joinery, must pass {value} ({case}); this check cannot see joinery.' },
-  // Ride (28xx)
-  rideCrewStays: { code: 2801, text: '{role} stays on the floor over the {case}: off it {value} ms in all (limit {limit} ms), at most {lift} mm above it (limit {liftLimit} mm); peak floor force {dlf} × their weight.' },
-  rideCrewLeaves: { code: 2802, text: '{role} leaves the floor over the {case}: off it {value} ms in all (limit {limit} ms), at most {lift} mm above it (limit {liftLimit} mm); peak floor force {dlf} × their weight on landing.' },
-  rideNotComputed: { code: 2803, text: 'The ride model could not be run for the {case}: {why}.' },
-  rideDecayWithin: { code: 2811, text: 'After the drop test the crew\'s motion falls below {fraction} % of its first amplitude in {value} cycles (limit {limit}); floor damping ratio {zeta} ({zetaSource}).' },
-  rideDecaySlow: { code: 2812, text: 'After the drop test the crew\'s motion takes {value} cycles to fall below {fraction} % of its first amplitude, more than {limit}; floor damping ratio {zeta} ({zetaSource}); {needed}.' },
-  rideYokeHolds: { code: 2821, text: 'Over the {case} the yoke force stays between {value} N and {max} N (standing {static} N): the pole never pulls the yoke up on the necks.' },
-  rideYokeLifts: { code: 2822, text: 'Over the {case} the yoke force falls to {value} N (standing {static} N, peak {max} N): the pole pulls the yoke up on the necks.' },
-  // Stock and cutting (27xx)
-  stockNoSpecies: { code: 2701, text: 'No {species} stock is listed, so {parts} cannot be planned: buy {buy}.' },
-  stockNoSection: { code: 2702, text: '{part}: {reason}; buy {buy}.' },
-  stockTooLong: { code: 2703, text: '{part}: {reason}; buy {buy}.' },
-  stockAllServed: { code: 2704, text: 'Every part of the cut list is cut from the listed stock ({groups} groups by species and section).' },
-  stockPlanGroup: { code: 2711, text: '{species} {section} mm: buy {bought}{cost}; {cuts} cut, {waste} % waste; {proof}.{note}' },
-  bentBlanks: { code: 2721, text: '{part}: cut {blanks} blank{plural} ({quantity} + {spares} spare at {good} % good bends), {size} mm rough, from straight-grained {species} free of knots and run-out.' },
-  sidingNotListed: { code: 2731, text: 'The siding is given only as a mass ({mass} kg), so its parts are not in the cut list or the stock plan.' },
-  sidingExtraParts: { code: 2732, text: 'The siding is given as a mass ({mass} kg); the {parts} under stock.extra_parts {are} in the cut list and the stock plan.' },
   // Floor test (29xx): `axletree floor-test`, the record as read and the estimate.
   floorCsvEmpty: { code: 2901, text: '{path} holds no header row; a floor-test record starts with a header naming time_s and displacement_mm, then one row per sample.' },
   floorCsvColumn: { code: 2902, text: 'the header has no column {column}; found: {found}.' },

@@ -1,5 +1,5 @@
 import type { Param, RulesData } from '../data/rules-data.ts';
-import type { Combination, Finding, WorkingStep } from '../findings/finding.ts';
+import type { Combination, WorkingStep } from '../findings/finding.ts';
 import type { Severity } from '../findings/severity.ts';
 import type { Params } from '../format/template.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
@@ -100,17 +100,6 @@ export interface Rule {
   params: readonly string[];
   messages: Readonly<Record<string, MessageSpec>>;
   run(ctx: RuleContext<ModelId, string, string, string>): void;
-  /** Older rules return their findings whole; they are carried over as they are. */
-  legacy?: (ctx: LegacyContext) => Finding[];
-}
-
-/** What an older rule reads: everything at once. */
-export interface LegacyContext {
-  spec: CheckedSpecification;
-  data: RulesData;
-  /** The models by name (an Analysis). */
-  analysis: unknown;
-  limit(name: string): Param;
 }
 
 /** A rule: metadata plus one function, typed by the models, limits, parameters and messages it names. */

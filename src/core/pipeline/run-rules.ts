@@ -1,4 +1,3 @@
-import { ruleLimit } from '../data/rule-limit.ts';
 import type { RulesData } from '../data/rules-data.ts';
 import { Analysis } from '../engine/analysis.ts';
 import type { Finding } from '../findings/finding.ts';
@@ -41,8 +40,7 @@ export function runRules(rules: readonly Rule[], spec: CheckedSpecification, dat
   for (const rule of rules) {
     const mine: Finding[] = [];
     try {
-      if (rule.legacy) mine.push(...rule.legacy({ spec, data, analysis, limit: (name) => ruleLimit(data, rule.id, name) }));
-      else rule.run(ruleContext(rule, spec, data, analysis.graph, mine));
+      rule.run(ruleContext(rule, spec, data, analysis.graph, mine));
       out.push(...mine);
     } catch (e) {
       out.push(errorFinding(rule, e));
