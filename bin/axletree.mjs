@@ -4,6 +4,12 @@
 // otherwise runs the TypeScript source through tsx, so a checkout always runs
 // what it holds.
 import { existsSync, readFileSync, statSync } from 'node:fs';
+import { setFlagsFromString } from 'node:v8';
+
+// A check allocates many short-lived arrays (the ride model, the plots): a
+// larger young generation collects them less often (measured: about 4 % of a
+// demo check's time).
+setFlagsFromString('--max-semi-space-size=32');
 
 const dist = new URL('../dist/axletree.mjs', import.meta.url);
 

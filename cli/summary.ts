@@ -5,7 +5,8 @@ import { SHORT_CAUTION } from '../src/core/cautions.ts';
 /** The terminal summary: verdict, counts, the worst findings, where files went. */
 export function summary(result: CheckResult, written: string[], show = 6): string {
   const counts = SEVERITIES.map((s) => `${result.findings.filter((f) => f.severity === s).length} ${s}`).join(', ');
-  const worst = result.findings.filter((f) => f.severity !== 'pass').slice(0, show);
+  // Notes (info) inform; the worst graded findings come first in the result.
+  const worst = result.findings.filter((f) => f.severity !== 'pass' && f.severity !== 'info').slice(0, show);
   const lines = [
     `${result.spec_name}`,
     `verdict: ${result.verdict.toUpperCase()}  (${counts})`,

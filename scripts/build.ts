@@ -6,6 +6,8 @@
 import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { bundle } from './bundle.ts';
+import { defaultRulesDir } from '../src/node/load-rules-data.ts';
+import { writeRulesSnapshot } from '../src/node/rules-data-snapshot.ts';
 
 const DIST = new URL('../dist/', import.meta.url);
 const made = await bundle(fileURLToPath(DIST));
@@ -15,5 +17,7 @@ if (!made) {
 } else {
   // Changes in node_modules come with `npm ci` or `npm install`, which build again.
   writeFileSync(new URL('inputs.json', DIST), JSON.stringify({ inputs: made.inputs }, null, 1) + '\n');
+  // The rules data parsed once, used while the YAML files stay as they are.
+  writeRulesSnapshot(defaultRulesDir(), fileURLToPath(new URL('rules-data.json', DIST)));
   console.log(`build: dist/axletree.mjs and ${made.files - 1} chunks, ${(made.bytes / 2 ** 20).toFixed(1)} MiB, from ${made.inputs.length} project files`);
 }

@@ -5,7 +5,7 @@ import { renderHtml } from '../render/html/render-html.ts';
 import { renderMarkdown } from '../render/markdown/render-markdown.ts';
 import { renderWorkbook } from '../render/workbook.ts';
 import { SETTING_OUT_SVG_FILE, settingOutSvg } from '../render/report-figures.ts';
-import { drawReportPlots } from '../render/report-plots.ts';
+import { drawHere, drawReportPlots, type PlotDrawer } from '../render/report-plots.ts';
 import { drawingOutputs } from '../render/report-drawings.ts';
 
 export const OUTPUT_FILES = {
@@ -22,12 +22,13 @@ export function resultJson(result: CheckResult): string {
 }
 
 /** Render everything first, then write each file atomically; returns the paths written. */
-export async function writeOutputs(result: CheckResult, dir: string, inputPath: string): Promise<string[]> {
+export async function writeOutputs(result: CheckResult, dir: string, inputPath: string, draw: PlotDrawer = drawHere): Promise<string[]> {
   // One report model for all three outputs, so the workbook, report.md and report.html cannot disagree.
   const doc = reportDocument(result);
-  const plots = await drawReportPlots(result);
+  // The plots are drawn (perhaps in another thread) while the workbook is made.
+  const [plots, workbook] = await Promise.all([drawReportPlots(result, draw), renderWorkbook(result, doc)]);
   const files: [string, string | Uint8Array][] = [
-    [OUTPUT_FILES.workbook, await renderWorkbook(result, doc)],
+    [OUTPUT_FILES.workbook, workbook],
     [OUTPUT_FILES.markdown, renderMarkdown(doc)],
     [OUTPUT_FILES.html, renderHtml(doc, plots)],
     [OUTPUT_FILES.json, resultJson(result)],

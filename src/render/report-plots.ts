@@ -4,16 +4,26 @@
 // same SVG inline. Drawing is asynchronous (vega), so the plots are drawn
 // once, before the renderers run, and handed to the HTML renderer by file name.
 
+import type { PlotData } from '../core/plots/plot-data.ts';
 import type { CheckResult } from '../core/result/check-result.ts';
 import { plotFile, plotSvg } from './plots/plot-svg.ts';
-import { ridePlotFiles } from './ride-plots.ts';
+import { ridePlotList } from './ride-plots.ts';
 
 /** SVG text by the file name report.md links. */
 export type ReportPlots = ReadonlyMap<string, string>;
 
+/** Draws plots to SVG text, file by file: in this thread, or handed to another. */
+export type PlotDrawer = (plots: readonly (readonly [string, PlotData])[]) => Promise<[string, string][]>;
+
+/** Every plot the report links, with the file name it is written under. */
+export function reportPlotList(result: CheckResult): [string, PlotData][] {
+  return [...(result.plots ?? []).map((p): [string, PlotData] => [plotFile(p), p]), ...(result.ride?.cases ?? []).flatMap((c) => ridePlotList(c.case, c.title, c.plot))];
+}
+
+/** Draws in this thread. */
+export const drawHere: PlotDrawer = (plots) => Promise.all(plots.map(async ([file, plot]): Promise<[string, string]> => [file, `${await plotSvg(plot)}\n`]));
+
 /** Every plot the report links, drawn to SVG. */
-export async function drawReportPlots(result: CheckResult): Promise<ReportPlots> {
-  const own = await Promise.all((result.plots ?? []).map(async (p): Promise<[string, string]> => [plotFile(p), `${await plotSvg(p)}\n`]));
-  const ride = await Promise.all((result.ride?.cases ?? []).map((c) => ridePlotFiles(c.case, c.title, c.plot)));
-  return new Map([...own, ...ride.flat()]);
+export async function drawReportPlots(result: CheckResult, draw: PlotDrawer = drawHere): Promise<ReportPlots> {
+  return new Map(await draw(reportPlotList(result)));
 }

@@ -55,9 +55,13 @@ export function ridePlotNames(c: RideCase, series: RideSeries): string[] {
   return ridePlotKinds(series).map((k) => ridePlotFile(c, k));
 }
 
+/** Every plot the series can fill, with its file name. */
+export function ridePlotList(c: RideCase, title: string, series: RideSeries): [string, PlotData][] {
+  const plots = RIDE_PLOTS.map((p) => [ridePlotFile(c, p.kind), ridePlot(c, title, series, p.kind)] as const);
+  return plots.filter((p): p is readonly [string, PlotData] => p[1] !== null).map(([f, p]) => [f, p]);
+}
+
 /** Every plot the series can fill, with its file name, drawn to SVG. */
 export async function ridePlotFiles(c: RideCase, title: string, series: RideSeries): Promise<[string, string][]> {
-  const plots = RIDE_PLOTS.map((p) => [ridePlotFile(c, p.kind), ridePlot(c, title, series, p.kind)] as const);
-  const drawn = plots.filter((p): p is readonly [string, PlotData] => p[1] !== null);
-  return Promise.all(drawn.map(async ([file, plot]): Promise<[string, string]> => [file, `${await plotSvg(plot)}\n`]));
+  return Promise.all(ridePlotList(c, title, series).map(async ([file, plot]): Promise<[string, string]> => [file, `${await plotSvg(plot)}\n`]));
 }

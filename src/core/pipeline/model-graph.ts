@@ -25,6 +25,11 @@ export class ModelGraph {
     return this.#computing[this.#computing.length - 1];
   }
 
+  /** A model's value if something has already asked for it, without computing it. */
+  peek<K extends ModelId>(id: K): ModelValues[K] | undefined {
+    return this.#done.get(id) as ModelValues[K] | undefined;
+  }
+
   get<K extends ModelId>(id: K): ModelValues[K] {
     if (this.#done.has(id)) return this.#done.get(id) as ModelValues[K];
     const def = this.#defs.get(id);

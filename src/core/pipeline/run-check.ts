@@ -37,7 +37,8 @@ export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data:
   const findings = runRules(options.rules ?? RULES, spec, data, analysis);
   // Worst first, keeping rule order within a severity.
   const ordered = findings.map((f, i) => ({ f, i })).sort((a, b) => severityRank(b.f.severity) - severityRank(a.f.severity) || a.i - b.i).map((x) => x.f);
-  const damping = analysis.graph.get('floorDampingNeeded');
+  // The floor-damping tuner runs only where a ride rule asked for it (the motion decays too slowly).
+  const damping = analysis.graph.peek('floorDampingNeeded') ?? null;
   const ride = analysis.graph.get('ride');
   return {
     tool: { name: pkg.name, version: pkg.version },
@@ -51,7 +52,7 @@ export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data:
     cutting: analysis.cutting,
     scene: buildScene(analysis),
     plots: reportPlots(analysis),
-    ...(ride && damping ? { ride: rideSummary(ride, damping.ratio, floorDampingOf(rideInput(analysis)), damping.working) } : {}),
+    ...(ride ? { ride: rideSummary(ride, damping, floorDampingOf(rideInput(analysis))) } : {}),
     spec_as_checked: entries,
     choices: choicesOf(data),
     sources: usedSources(spec, data, findings),

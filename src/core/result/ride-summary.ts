@@ -2,6 +2,7 @@
 // without its full time series (the ride command writes that as CSV), with
 // the series thinned for the plots in the workbook's report.
 
+import type { DampingNeeded } from '../ride/damping-tuner.ts';
 import { RIDE_CASES, type RideCase, type RideResult, type RideSeries } from '../ride/ride-types.ts';
 
 /** Samples kept per channel for the report's plots: about one per pixel column of a plot. */
@@ -17,25 +18,24 @@ export type RideCaseSummary = Omit<RideResult, 'series'> & {
 
 export interface RideSummary {
   cases: RideCaseSummary[];
-  /** The least floor damping ratio that meets the decay rule and keeps the crew on the floor over the design bump; null where no damping does. */
-  floor_damping_ratio_needed: number | null;
+  /**
+   * The least floor damping ratio that meets the decay rule and keeps the crew
+   * on the floor over the design bump; null where no damping does. Absent where
+   * the tuner did not run: it runs only when the decay rule finds the motion
+   * dies out too slowly.
+   */
+  floor_damping_ratio_needed?: number | null;
   /** The floor damping ratio the cases were run with, and where it came from. */
   floor_damping_ratio_used?: { value: number; source: string };
   /** How the tuner found the damping needed: bounds, tolerance, runs. */
   floor_damping_working?: string;
 }
 
-export function rideSummary(
-  ride: Record<RideCase, RideResult>,
-  dampingNeeded: number | null,
-  dampingUsed?: { value: number; source: string },
-  dampingWorking?: string,
-): RideSummary {
+export function rideSummary(ride: Record<RideCase, RideResult>, needed: DampingNeeded | null, dampingUsed?: { value: number; source: string }): RideSummary {
   return {
     cases: RIDE_CASES.filter((c) => ride[c] !== undefined).map((c) => rideCaseSummary(ride[c])),
-    floor_damping_ratio_needed: dampingNeeded,
+    ...(needed ? { floor_damping_ratio_needed: needed.ratio, floor_damping_working: needed.working } : {}),
     ...(dampingUsed ? { floor_damping_ratio_used: dampingUsed } : {}),
-    ...(dampingWorking ? { floor_damping_working: dampingWorking } : {}),
   };
 }
 

@@ -10,7 +10,7 @@ export function rideFigures(a: Analysis): Record<string, Figure> {
   if (!a.hasRide) return {};
   const road = ROAD_CASES.map((c) => a.ride[c]);
   const crew = road.flatMap((r) => r.crew);
-  const need = a.floorDampingNeeded;
+  const need = a.graph.peek('floorDampingNeeded');
   return {
     ride_crew_rise_max: { value: Math.max(...crew.map((c) => c.rise_mm)), unit: 'mm' },
     ride_crew_airborne: { value: Math.max(...crew.map((c) => c.airborne_ms)), unit: 'ms' },
@@ -18,6 +18,6 @@ export function rideFigures(a: Analysis): Record<string, Figure> {
     ride_wheel_dlf: { value: a.bumpFactors.wheel.value, unit: '1' },
     ride_yoke_force_min: { value: Math.min(...road.map((r) => r.yokeForceMin_N)), unit: 'N' },
     drop_decay_cycles: { value: a.ride.drop.decayCycles ?? NaN, unit: 'cycles' },
-    floor_damping_ratio_needed: { value: need.ratio ?? NaN, unit: '1' },
+    ...(need ? { floor_damping_ratio_needed: { value: need.ratio ?? NaN, unit: '1' } } : {}),
   };
 }

@@ -50,7 +50,7 @@ export function plotSpec(plot: PlotData, size = { width: PLOT_WIDTH, height: PLO
   const dash = { field: 'label', type: 'nominal', title: null, sort: labels, scale: { domain: labels, range: dashes }, legend } as const;
   const x = { field: 'x', type: 'quantitative', title: plot.xLabel, ...xScale(plot) } as const;
   const y = { field: 'y', type: 'quantitative', title: plot.yLabel } as const;
-  const lineRows: Row[] = drawn.flatMap((l) => thinPoints(l.x, l.y, 2 * size.width).map(([px, py], order) => ({ label: l.label, x: px, y: py, order })));
+  const lineRows: Row[] = drawn.flatMap((l) => thinPoints(l.x, l.y, size.width / 2).map(([px, py], order) => ({ label: l.label, x: px, y: py, order })));
   const dotRows: Row[] = dots.flatMap((l) => l.x.map((px, i) => ({ label: l.label, x: px, y: l.y[i] })));
   const yRules: Row[] = plot.rules.filter((r) => r.axis === 'y').map((r) => ({ label: r.label, y: r.value }));
   const xRules: Row[] = plot.rules.filter((r) => r.axis === 'x').map((r) => ({ label: r.label, x: r.value }));
