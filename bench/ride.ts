@@ -3,7 +3,8 @@
 // relative tolerance 1e-10 on the crew's rise. Returns the count of missed targets.
 import { performance } from 'node:perf_hooks';
 import type { RulesData } from '../src/core/data/rules-data.ts';
-import { Analysis, rideInput } from '../src/core/engine/analysis.ts';
+import { ModelGraph } from '../src/core/pipeline/model-graph.ts';
+import { MODELS } from '../src/core/pipeline/models.ts';
 import { rideCaseOf } from '../src/core/ride/ride-model.ts';
 import type { CheckedSpecification } from '../src/core/spec/spec.types.ts';
 import { rideByOdex } from '../src/node/ride-odex.ts';
@@ -14,7 +15,7 @@ const WARM = 5;
 const RUNS = 21;
 
 export function benchRide(spec: CheckedSpecification, data: RulesData): number {
-  const input = rideInput(new Analysis(spec, data));
+  const input = new ModelGraph(MODELS, { spec, data, ride: true }).get('rideInput');
   void input.floorStatic; // the floor is solved once, outside the timing
   for (let i = 0; i < WARM; i++) rideCaseOf(input, 'ridge');
   const times: number[] = [];

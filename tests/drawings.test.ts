@@ -1,7 +1,7 @@
 import { buildScene } from '../src/core/result/scene-of.ts';
 import { drawingsOf } from '../src/render/report-drawings.ts';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { Analysis } from '../src/core/engine/analysis.ts';
+import { Analysis } from './support/analysis.ts';
 import { reportDrawings } from '../src/render/drawings/report-drawings.ts';
 import { inlineSvg } from '../src/render/inline-svg.ts';
 import { runCheck } from '../src/core/pipeline/run-check.ts';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../src/core/engine/analysis.ts';
+import { Analysis } from './support/analysis.ts';
 import { cornerDemand } from '../src/core/model/corner-demand.ts';
 import type { FloorResult } from '../src/core/model/floor-result.ts';
 import { governing } from '../src/core/model/joint-force.ts';

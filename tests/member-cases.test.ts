@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../src/core/engine/analysis.ts';
+import { Analysis } from './support/analysis.ts';
 import { crewAt } from '../src/core/model/load-cases.ts';
 import { massModel } from '../src/core/model/mass-model.ts';
 import { poleLoad } from '../src/core/model/pole-load.ts';

@@ -4,10 +4,10 @@ import { ridePlotFiles } from '../../src/render/ride-plots.ts';
 import { rideMarkdown } from '../../src/render/ride-report-md.ts';
 import { writeFileSet } from '../../src/node/write-file-set.ts';
 import { CAUTIONS } from '../../src/core/cautions.ts';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { ModelGraph } from '../../src/core/pipeline/model-graph.ts';
 import { floorDampingOf } from '../../src/core/ride/ride-build.ts';
 import { RIDE_CASES, rideCaseOf } from '../../src/core/ride/ride-model.ts';
-import { rideInput } from '../../src/core/engine/analysis.ts';
+import { MODELS } from '../../src/core/pipeline/models.ts';
 import type { RideCase, RideResult } from '../../src/core/ride/ride-types.ts';
 import type { Console } from '../console.ts';
 import { EXIT } from '../exit-codes.ts';
@@ -36,14 +36,14 @@ export async function rideCommand(file: string, opts: RideOptions, con: Console)
   const got = await readPreparedSpec(file, input, data, con);
   if (!got) return EXIT.badInput;
   const { prepared } = got;
-  const analysis = new Analysis(prepared.spec, data);
+  const rideIn = new ModelGraph(MODELS, { spec: prepared.spec, data, ride: true }).get('rideInput');
   const cases = opts.case ? [opts.case as RideCase] : [...RIDE_CASES];
-  const results = cases.map((c) => rideCaseOf(rideInput(analysis), c));
+  const results = cases.map((c) => rideCaseOf(rideIn, c));
   const plots = new Map(await Promise.all(results.map(async (r) => [r.case, await ridePlotFiles(r.case, r.title, r.series)] as const)));
   const report = rideMarkdown({
     specName: prepared.spec.name,
     cases: results,
-    floorDampingUsed: floorDampingOf(rideInput(analysis)),
+    floorDampingUsed: floorDampingOf(rideIn),
     plots: (c) => (plots.get(c) ?? []).map(([name]) => name),
     csv: rideCsvFile,
     cautions: CAUTIONS,

@@ -1,5 +1,5 @@
 import { limitLevel } from './data/param.ts';
-import type { Analysis } from './engine/analysis.ts';
+import type { ModelView } from './pipeline/define-model.ts';
 import type { Figure } from './result/figure.ts';
 import { G, UNITS } from './units/units.ts';
 import { tightestYokeRadius } from './model/turn.ts';
@@ -7,8 +7,11 @@ import { memberFigures } from './model/members/member-figures.ts';
 import { floorFigures } from './model/cable-net/floor-figures.ts';
 import { rideFigures } from './ride/ride-figures.ts';
 
+/** The models the named figures read. */
+export type FiguresView = ModelView<'mass' | 'loadCases' | 'staticCase' | 'turn' | 'floorStatic' | 'floorBump' | 'ride' | 'bumpFactors' | 'cutting'>;
+
 /** The named figures of a check; later families add theirs here. */
-export function figures(a: Analysis): Record<string, Figure> {
+export function figures(a: FiguresView): Record<string, Figure> {
   const cases = a.loadCases;
   const stat = cases.find((c) => c.id === 'static')!;
   const yoke = cases.map((c) => c.yoke_load_N);
@@ -36,7 +39,7 @@ export function figures(a: Analysis): Record<string, Figure> {
 // Timber volume is rough (as bought and cut), spares included. The stock cost is
 // in the currency of stock.lumber's prices; it is 0 where no stock has a price
 // (the plan then minimises the count of pieces instead).
-function cuttingFigures(a: Analysis): Record<string, Figure> {
+function cuttingFigures(a: ModelView<'cutting'>): Record<string, Figure> {
   const { cut_list, stock_plan } = a.cutting;
   const volume = cut_list.reduce((sum, c) => sum + c.volume_m3 * (c.quantity + c.spares), 0);
   return {
@@ -49,7 +52,7 @@ function cuttingFigures(a: Analysis): Record<string, Figure> {
 
 // Rollover figures use the rolling assembly with the crew as placed. Where no
 // steady turn exists, the path radii are reported as 0 (turn.pole-reach says why).
-function turnFigures(a: Analysis): Record<string, Figure> {
+function turnFigures(a: ModelView<'turn'>): Record<string, Figure> {
   const t = a.turn;
   const advisory = limitLevel(a.data, 'turn.rollover', 'lateral_fraction', 'advisory');
   return {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 describe('the cutting result on the analysis', () => {

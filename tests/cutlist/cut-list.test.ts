@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { prepareSpec } from '../../src/core/spec/prepare.ts';
 import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 

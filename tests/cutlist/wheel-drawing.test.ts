@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { wheelDrawing } from '../../src/render/drawings/wheel-drawing.ts';
 import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 

@@ -2,9 +2,9 @@
 import { describe, expect, it } from 'vitest';
 import { prepareSpec } from '../../src/core/spec/prepare.ts';
 import { readDemo, rulesData } from '../support/fixtures.ts';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { floorDampingOf } from '../../src/core/ride/ride-build.ts';
-import { rideInput } from '../../src/core/engine/analysis.ts';
+import { rideInput } from '../support/analysis.ts';
 
 function withMeasured(measured: unknown) {
   const raw = readDemo('demo-two-crew') as Record<string, any>;

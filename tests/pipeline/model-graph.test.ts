@@ -4,7 +4,7 @@ import { ModelGraph } from '../../src/core/pipeline/model-graph.ts';
 import { MODELS } from '../../src/core/pipeline/models.ts';
 import { runCheck } from '../../src/core/pipeline/run-check.ts';
 import { RULES } from '../../src/core/rules/index.ts';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { runRules } from '../../src/core/pipeline/run-rules.ts';
 import { prepareSpec } from '../../src/core/spec/prepare.ts';
 import { prepared, readDemo, rulesData } from '../support/fixtures.ts';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { RulesData } from '../../src/core/data/rules-data.ts';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { ModelGraph } from '../../src/core/pipeline/model-graph.ts';
 import { MODELS } from '../../src/core/pipeline/models.ts';
 import type { ModelId } from '../../src/core/pipeline/model-values.ts';

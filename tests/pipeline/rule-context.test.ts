@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { RulesData } from '../../src/core/data/rules-data.ts';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { defineRule } from '../../src/core/pipeline/define-rule.ts';
 import { runRules } from '../../src/core/pipeline/run-rules.ts';
 import { prepared, readDemo, rulesData } from '../support/fixtures.ts';

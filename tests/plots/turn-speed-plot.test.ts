@@ -1,7 +1,7 @@
 import { limitLevel } from '../../src/core/data/param.ts';
 import { describe, expect, it } from 'vitest';
 import type { RulesData } from '../../src/core/data/rules-data.ts';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { turnSpeedPlot, TURN_SPEED_SAMPLES } from '../../src/core/plots/turn-speed-plot.ts';
 import { G, UNITS } from '../../src/core/units/units.ts';
 import { dataWithGround, findingsOf, handSpec, prepared } from '../support/fixtures.ts';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis, rideInput } from '../../src/core/engine/analysis.ts';
+import { Analysis, rideInput } from '../support/analysis.ts';
 import { rideCaseOf } from '../../src/core/ride/ride-model.ts';
 import { buildRide } from '../../src/core/ride/ride-build.ts';
 import { energy, stateSize } from '../../src/core/ride/ride-system.ts';

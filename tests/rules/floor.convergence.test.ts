@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { G } from '../../src/core/units/units.ts';
 import { deepMerge, findingsOf, withParams, fractionHitting, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { deepMerge, findingsOf, prepared, readDemo, rulesData } from '../support/fixtures.ts';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import type { Finding } from '../../src/core/findings/finding.ts';
 
 const RULE = 'floor.sag';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { formatNumber, formatQuantity } from '../../src/core/format/number-format.ts';
 import { deepMerge, findingsOf, fractionHitting, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 

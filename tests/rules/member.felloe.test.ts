@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Analysis } from '../../src/core/engine/analysis.ts';
+import { Analysis } from '../support/analysis.ts';
 import { hankinson } from '../../src/core/model/timber/hankinson.ts';
 import { felloeRunoutDeg } from '../../src/core/rules/member/felloe.ts';
 import { dataWithGround, deepMerge, rulesData, findingsOf, handSpec, prepared, readDemo } from '../support/fixtures.ts';

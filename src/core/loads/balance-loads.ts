@@ -1,7 +1,7 @@
-import type { Analysis } from '../engine/analysis.ts';
+import type { ModelView } from '../pipeline/define-model.ts';
 import type { LoadEntry } from './load-entry.ts';
 
-export function balanceLoads(a: Analysis): LoadEntry[] {
+export function balanceLoads(a: ModelView<'loadCases'>): LoadEntry[] {
   return a.loadCases.flatMap((c) => [
     { group: 'balance', item: 'pole on the yoke', case: c.id, quantity: 'vertical force', value: c.pole_load_N, unit: 'N' },
     { group: 'balance', item: 'yoke on each horse', case: c.id, quantity: 'vertical force', value: c.per_horse_N, unit: 'N' },

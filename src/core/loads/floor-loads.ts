@@ -1,4 +1,4 @@
-import type { Analysis } from '../engine/analysis.ts';
+import type { ModelView } from '../pipeline/define-model.ts';
 import type { FloorResult } from '../model/floor-result.ts';
 import type { LoadEntry } from './load-entry.ts';
 
@@ -12,6 +12,6 @@ function floorCase(r: FloorResult, name: string): LoadEntry[] {
   ];
 }
 
-export function floorLoads(a: Analysis): LoadEntry[] {
+export function floorLoads(a: ModelView<'floorStatic' | 'floorBump'>): LoadEntry[] {
   return [...floorCase(a.floorStatic, 'crew standing'), ...floorCase(a.floorBump, `bump, × ${a.floorBump.factor}`)];
 }

@@ -1,7 +1,7 @@
-import type { Analysis } from '../engine/analysis.ts';
+import type { ModelView } from '../pipeline/define-model.ts';
 import type { LoadEntry } from './load-entry.ts';
 
-export function memberLoads(a: Analysis): LoadEntry[] {
+export function memberLoads(a: ModelView<'memberCases'>): LoadEntry[] {
   return a.memberCases.flatMap((c) => [
     { group: 'member', item: 'more loaded wheel', case: c.title, quantity: 'vertical ground force', value: c.wheel_N, unit: 'N' },
     { group: 'member', item: 'more loaded wheel', case: c.title, quantity: 'lateral ground force', value: c.wheelLateral_N, unit: 'N' },

@@ -1,7 +1,7 @@
-import type { Analysis } from '../engine/analysis.ts';
+import type { ModelView } from '../pipeline/define-model.ts';
 import type { LoadEntry } from './load-entry.ts';
 
-export function turnLoads(a: Analysis): LoadEntry[] {
+export function turnLoads(a: ModelView<'turn'>): LoadEntry[] {
   const t = a.turn;
   if (!t.steady) return [];
   const entry = (item: string, quantity: string, value: number, unit = 'N'): LoadEntry => ({ group: 'turn', item, case: 'design turn', quantity, value, unit });

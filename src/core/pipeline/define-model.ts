@@ -13,6 +13,16 @@ export interface ModelInputs {
   ride: boolean;
 }
 
+/** The models a function names, with the specification and the data: what an output reads. */
+export type ModelView<N extends ModelId> = { readonly [K in N]: ModelValues[K] } & Pick<ModelInputs, 'spec' | 'data'>;
+
+/** The models with the specification and the data beside them, each model still computed on first read. */
+export function withInputs<N extends ModelId>(models: { readonly [K in N]: ModelValues[K] }, inputs: ModelInputs): ModelView<N> {
+  return new Proxy(models as ModelView<N>, {
+    get: (target, key) => (key === 'spec' ? inputs.spec : key === 'data' ? inputs.data : Reflect.get(target, key)),
+  });
+}
+
 /** A parameter a model reads, as `group.name` of rules/parameters. */
 export type ParamKey = `${string}.${string}`;
 

@@ -1,4 +1,8 @@
 import type { CuttingResult } from '../cutlist/cutting-result.ts';
+import type { LoadEntry } from '../loads/load-entry.ts';
+import type { PlotData } from '../plots/plot-data.ts';
+import type { BuildScene } from '../result/build-scene.ts';
+import type { Figure } from '../result/figure.ts';
 import type { FloorModel } from '../model/cable-net/floor-model.ts';
 import type { JointDemand, Joint } from '../model/lashing-demand.ts';
 import type { LoadCaseResult } from '../model/load-case-result.ts';
@@ -44,6 +48,14 @@ export interface ModelValues {
   cutting: CuttingResult;
   /** The force each lashed joint must pass, case by case. */
   lashingDemands: Record<Joint, JointDemand>;
+  /** The named figures of the result. */
+  figures: Record<string, Figure>;
+  /** Every load the models computed, by part and case (the Loads sheet). */
+  loads: LoadEntry[];
+  /** What the drawings of the build are made from. */
+  scene: BuildScene;
+  /** The balance and turn plots as data. */
+  plots: PlotData[];
 }
 
 export type ModelId = keyof ModelValues;

@@ -9,7 +9,11 @@ import { turnModel } from '../model/turn.ts';
 import { floorDampingNeeded } from '../ride/damping-tuner.ts';
 import { crewFloorFactor, wheelFactor, yokeIncrease } from '../ride/dynamic-factors.ts';
 import { rideCases } from '../ride/ride-model.ts';
-import { defineModel, type ModelDef } from './define-model.ts';
+import { defineModel, withInputs, type ModelDef } from './define-model.ts';
+import { figures } from '../figures.ts';
+import { collectLoads } from '../loads/collect-loads.ts';
+import { reportPlots } from '../plots/report-plots.ts';
+import { buildScene } from '../result/scene-of.ts';
 
 // Every model of a check, with what it reads. The pipeline computes only the
 // models the requested rules and outputs need, each once.
@@ -124,5 +128,38 @@ export const lashingDemandsDef = defineModel({
   compute: ({ mass, loadCases, turn, floorBump, bumpFactors }, { spec, data }) => lashingDemands({ spec, data, mass, cases: loadCases, turn, floorBump, bump: bumpFactors.crew }),
 });
 
+// The outputs: what the result carries besides the findings.
+
+export const figuresDef = defineModel({
+  id: 'figures',
+  needs: ['mass', 'loadCases', 'staticCase', 'turn', 'floorStatic', 'floorBump', 'ride', 'bumpFactors', 'cutting'],
+  params: TIMBER_STIFFNESS, // the pole's Euler load
+  compute: (m, i) => figures(withInputs(m, i)),
+});
+
+export const loadsDef = defineModel({
+  id: 'loads',
+  needs: ['loadCases', 'turn', 'floorStatic', 'floorBump', 'memberCases', 'lashingDemands'],
+  params: [],
+  compute: (m, i) => collectLoads(withInputs(m, i)),
+});
+
+export const sceneDef = defineModel({
+  id: 'scene',
+  needs: ['floorStatic', 'mass', 'staticCase', 'turn'],
+  params: [],
+  compute: (m, i) => buildScene(withInputs(m, i)),
+});
+
+export const plotsDef = defineModel({
+  id: 'plots',
+  needs: ['turn'],
+  params: [],
+  compute: (m, i) => reportPlots(withInputs(m, i)),
+});
+
 /** Every model, in no particular order: the graph finds the order from their needs. */
-export const MODELS: readonly ModelDef[] = [massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, floorBumpDef, memberCasesDef, cuttingDef, lashingDemandsDef];
+export const MODELS: readonly ModelDef[] = [
+  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, floorBumpDef, memberCasesDef, cuttingDef, lashingDemandsDef,
+  figuresDef, loadsDef, sceneDef, plotsDef,
+];

@@ -2,14 +2,9 @@ import pkg from '../../../package.json' with { type: 'json' };
 import { CAUTIONS } from '../cautions.ts';
 import { choicesOf } from '../data/choices.ts';
 import type { RulesData } from '../data/rules-data.ts';
-import { Analysis, rideInput } from '../engine/analysis.ts';
-import { figures } from '../figures.ts';
 import { severityRank, verdictOf } from '../findings/severity.ts';
-import { collectLoads } from '../loads/collect-loads.ts';
-import { reportPlots } from '../plots/report-plots.ts';
 import type { CheckResult } from '../result/check-result.ts';
 import { rideSummary } from '../result/ride-summary.ts';
-import { buildScene } from '../result/scene-of.ts';
 import { floorDampingOf } from '../ride/ride-build.ts';
 import { RULES } from '../rules/index.ts';
 import { usedSources } from '../sources.ts';
@@ -17,6 +12,8 @@ import type { SpecEntry } from '../spec/spec-entry.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import type { LpSolver } from '../stock/cutting-types.ts';
 import type { Rule } from './define-rule.ts';
+import { ModelGraph } from './model-graph.ts';
+import { MODELS } from './models.ts';
 import { runRules } from './run-rules.ts';
 
 export interface RunOptions {
@@ -31,28 +28,30 @@ export interface RunOptions {
 /**
  * The whole check of a prepared specification: pure, no I/O. Every command
  * and every front end calls this and hands the result to the renderers.
+ * Each model is computed once, when a rule or an output first needs it.
  */
 export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data: RulesData, options: RunOptions = {}): CheckResult {
-  const analysis = new Analysis(spec, data, options.lp, { ride: options.ride ?? true });
-  const findings = runRules(options.rules ?? RULES, spec, data, analysis);
+  const graph = new ModelGraph(MODELS, { spec, data, lp: options.lp, ride: options.ride ?? true });
+  const findings = runRules(options.rules ?? RULES, spec, data, graph);
   // Worst first, keeping rule order within a severity.
   const ordered = findings.map((f, i) => ({ f, i })).sort((a, b) => severityRank(b.f.severity) - severityRank(a.f.severity) || a.i - b.i).map((x) => x.f);
   // The floor-damping tuner runs only where a ride rule asked for it (the motion decays too slowly).
-  const damping = analysis.graph.peek('floorDampingNeeded') ?? null;
-  const ride = analysis.graph.get('ride');
+  const damping = graph.peek('floorDampingNeeded') ?? null;
+  const ride = graph.get('ride');
+  const mass = graph.get('mass');
   return {
     tool: { name: pkg.name, version: pkg.version },
     spec_name: spec.name,
     verdict: verdictOf(findings.map((f) => f.severity)),
-    figures: figures(analysis),
+    figures: { ...graph.get('figures'), ...(damping ? { floor_damping_ratio_needed: { value: damping.ratio ?? NaN, unit: '1' } } : {}) },
     findings: ordered,
-    mass: { parts: analysis.mass.parts, rolling_mass_kg: analysis.mass.rolling.mass_kg, yoke_mass_kg: analysis.mass.yoke.mass_kg, total_mass_kg: analysis.mass.total.mass_kg },
-    balance: { cases: analysis.loadCases },
-    loads: collectLoads(analysis),
-    cutting: analysis.cutting,
-    scene: buildScene(analysis),
-    plots: reportPlots(analysis),
-    ...(ride ? { ride: rideSummary(ride, damping, floorDampingOf(rideInput(analysis))) } : {}),
+    mass: { parts: mass.parts, rolling_mass_kg: mass.rolling.mass_kg, yoke_mass_kg: mass.yoke.mass_kg, total_mass_kg: mass.total.mass_kg },
+    balance: { cases: graph.get('loadCases') },
+    loads: graph.get('loads'),
+    cutting: graph.get('cutting'),
+    scene: graph.get('scene'),
+    plots: graph.get('plots'),
+    ...(ride ? { ride: rideSummary(ride, damping, floorDampingOf(graph.get('rideInput'))) } : {}),
     spec_as_checked: entries,
     choices: choicesOf(data),
     sources: usedSources(spec, data, findings),

@@ -1,5 +1,6 @@
 import type { RulesData } from '../data/rules-data.ts';
-import { Analysis } from '../engine/analysis.ts';
+import { ModelGraph } from './model-graph.ts';
+import { MODELS } from './models.ts';
 import type { Finding } from '../findings/finding.ts';
 import { renderTemplate } from '../format/template.ts';
 import { CORE_MESSAGES } from '../diagnostics/core-messages.ts';
@@ -35,12 +36,13 @@ export function errorFinding(rule: Rule, e: unknown): Finding {
 }
 
 /** Every rule's findings, in rule order; a rule that throws gives an error finding instead. */
-export function runRules(rules: readonly Rule[], spec: CheckedSpecification, data: RulesData, analysis = new Analysis(spec, data)): Finding[] {
+export function runRules(rules: readonly Rule[], spec: CheckedSpecification, data: RulesData, graph: ModelGraph | { graph: ModelGraph } = new ModelGraph(MODELS, { spec, data, ride: true })): Finding[] {
+  const models = graph instanceof ModelGraph ? graph : graph.graph;
   const out: Finding[] = [];
   for (const rule of rules) {
     const mine: Finding[] = [];
     try {
-      rule.run(ruleContext(rule, spec, data, analysis.graph, mine));
+      rule.run(ruleContext(rule, spec, data, models, mine));
       out.push(...mine);
     } catch (e) {
       out.push(errorFinding(rule, e));

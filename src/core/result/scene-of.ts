@@ -1,8 +1,8 @@
-import type { Analysis } from '../engine/analysis.ts';
+import type { ModelView } from '../pipeline/define-model.ts';
 import type { BuildScene } from './build-scene.ts';
 
 /** The drawings' data from the models of one check. */
-export function buildScene(a: Analysis): BuildScene {
+export function buildScene(a: ModelView<'floorStatic' | 'mass' | 'staticCase' | 'turn'>): BuildScene {
   const f = a.floorStatic;
   const { mass_kg, x_mm, z_mm } = a.mass.rolling;
   return {

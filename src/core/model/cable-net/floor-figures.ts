@@ -1,9 +1,9 @@
-import type { Analysis } from '../../engine/analysis.ts';
+import type { ModelView } from '../../pipeline/define-model.ts';
 import type { Figure } from '../../result/figure.ts';
 
 // The strap floor's named figures. NaN where the floor was not solved
 // (floor.convergence says why).
-export function floorFigures(a: Analysis): Record<string, Figure> {
+export function floorFigures(a: ModelView<'floorStatic' | 'floorBump'>): Record<string, Figure> {
   const stat = a.floorStatic;
   const bump = a.floorBump;
   return {

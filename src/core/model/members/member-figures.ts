@@ -1,5 +1,5 @@
 import { ruleParam } from '../../data/param.ts';
-import type { Analysis } from '../../engine/analysis.ts';
+import type { ModelView } from '../../pipeline/define-model.ts';
 import type { Figure } from '../../result/figure.ts';
 import { stiffness05 } from '../timber/design-strength.ts';
 import { timberPart } from '../timber/timber-part.ts';
@@ -9,7 +9,7 @@ import { poleCantilever, poleEulerLoad, rootMoment } from './pole-cantilever.ts'
 // Member figures with the crew as placed, standing, no dynamic factor: the
 // axle's bending stress at the bearing, the pole's at its root, and the
 // pole's Euler load as a strut (5th-percentile modulus, member.pole's K).
-export function memberFigures(a: Analysis): Record<string, Figure> {
+export function memberFigures(a: ModelView<'staticCase' | 'mass'>): Record<string, Figure> {
   const stat = a.staticCase;
   const arm = axleArm(a.spec);
   const pole = poleCantilever(a.spec, a.mass.layout);

@@ -1,17 +1,17 @@
-import type { RulesData } from '../data/rules-data.ts';
-import type { CheckedSpecification } from '../spec/spec.types.ts';
-import type { LpSolver } from '../stock/cutting-types.ts';
-import type { RideInput } from '../ride/ride-build.ts';
-import { ModelGraph } from '../pipeline/model-graph.ts';
-import { MODELS } from '../pipeline/models.ts';
-import type { BumpFactors, ModelValues } from '../pipeline/model-values.ts';
+import type { RulesData } from '../../src/core/data/rules-data.ts';
+import type { CheckedSpecification } from '../../src/core/spec/spec.types.ts';
+import type { LpSolver } from '../../src/core/stock/cutting-types.ts';
+import type { RideInput } from '../../src/core/ride/ride-build.ts';
+import { ModelGraph } from '../../src/core/pipeline/model-graph.ts';
+import { MODELS } from '../../src/core/pipeline/models.ts';
+import type { BumpFactors, ModelValues } from '../../src/core/pipeline/model-values.ts';
 
 export type { BumpFactors };
 
 /**
- * The models of one check behind named getters, for the code that reads
- * several models at once (figures, drawings' scene, loads, plots). Rules read
- * models through their context instead, which shows them only what they name.
+ * The models of one check behind named getters, for tests that look at
+ * several models of one build. The pipeline, the rules and the outputs read
+ * models through the graph instead, each naming what it reads.
  */
 export class Analysis {
   readonly graph: ModelGraph;
