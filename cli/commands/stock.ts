@@ -3,7 +3,7 @@ import { writeFileSet } from '../../src/node/write-file-set.ts';
 import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
 import { readSpec } from '../../src/node/read-spec.ts';
 import { baselineText, boughtText, BOUND_NOTE, cutsText, gapText } from '../../src/render/cutting-text.ts';
-import { formatNumber } from '../../src/render/number-format.ts';
+import { formatNumber } from '../../src/core/format/number-format.ts';
 import { MESSAGES } from '../../src/core/diagnostics/messages.ts';
 import { issue } from '../../src/core/spec/input-issue.ts';
 import { checkCuttingInstance } from '../../src/core/stock/check-instance.ts';
