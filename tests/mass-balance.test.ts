@@ -82,12 +82,20 @@ describe('load on the horses, hand calculation', () => {
     expect(cases).toHaveLength(9);
   });
 
-  it('rolling resistance: R = (A + h_y C_rr m g)/(L + h_y C_rr), checked against the moment balance it solves', () => {
-    const data = dataWithGround('hand-rigid', 0.1);
+  it('rolling resistance in two parts, each with its own arm, checked against the statics of the wheel and the chariot', () => {
+    // Soil 0.1 at the reference wheel of 1200 mm (rules/parameters/rolling.yaml), scaled to this 900 mm wheel
+    // (Morin: inversely with the diameter); the hub's journal friction 0.08 (Bourne after Morin).
+    const data = dataWithGround('hand-rigid', 0.1, 0.08);
     const R = staticPoleLoad(spec, data).pole_N;
-    const F = 0.1 * (137 * G - R); // resistance from the weight left on the wheels
-    // moments about the ground contact: sum m g (x - x_a) + h_y F = R L
-    expect(R * L).toBeCloseTo(moment + 0.53 * F, 9);
+    const N = 137 * G - R; // the weight left on the wheels
+    const Cs = (0.1 * 1200) / 900;
+    const Fs = Cs * N; // the soil's resistance: the normal force acts ahead of the contact, so the ground's resultant passes through the hub
+    const Fb = ((0.08 * 0.035) / 0.45) * N; // the hub's friction torque mu·N·r_j, held by a ground force F_b·r at the rim
+    const T = Fs + Fb; // the team's pull at constant speed (horizontal balance)
+    // Moments about the contact point: R·L + r·F_s (the offset normal force, e·N = r·F_s) = Σ m g (x − x_a) + h_y·T
+    expect(R * L + 0.45 * Fs).toBeCloseTo(moment + 0.53 * T, 9);
+    // The old single arm (all of it at h_y) gives a larger pole load: it hid yoke lift.
+    expect((moment + 0.53 * (Cs + (0.08 * 0.035) / 0.45) * 137 * G) / (L + 0.53 * (Cs + (0.08 * 0.035) / 0.45))).toBeGreaterThan(R);
   });
 });
 
@@ -105,12 +113,13 @@ describe('differential checks (mechanics note, section 3)', () => {
     }
   });
 
-  it('with rolling resistance the same move raises it by m_crew*g*d/(L + h_y*C_rr)', () => {
-    const data = dataWithGround('hand-rigid', 0.08);
+  it('with rolling resistance the same move raises it by m_crew*g*d/(L + c), c = (h_y − r)·C_s + h_y·C_b', () => {
+    const data = dataWithGround('hand-rigid', 0.08, 0.08);
     const s = handSpec();
     s.crew[0].x_mm += 100;
     const R1 = staticPoleLoad(prepared(s, data), data).pole_N - staticPoleLoad(base, data).pole_N;
-    expect(R1).toBeCloseTo((80 * G * 0.1) / (L + 0.53 * 0.08), 9);
+    const c = (0.53 - 0.45) * ((0.08 * 1200) / 900) + 0.53 * ((0.08 * 0.035) / 0.45);
+    expect(R1).toBeCloseTo((80 * G * 0.1) / (L + c), 9);
   });
 
   it('adding a point load m at x raises the pole load by m*g*(x - x_a)/L', () => {

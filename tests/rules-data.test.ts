@@ -111,7 +111,7 @@ describe('rules data as shipped', () => {
     ids.every((id) => {
       const e = data.sources[id];
       if (e.kind === 'from-memory' || e.kind === 'common-practice') return true;
-      return /\b(table|section|clause|chapter|equation|problem|page|abstract)\b/i.test(e.where ?? '');
+      return /\b(table|section|clause|chapter|equation|problem|page|abstract|question)\b/i.test(e.where ?? '');
     });
 
   it('gives every material and ground value a source that cites a table or is marked', () => {
@@ -275,7 +275,7 @@ describe('loading broken rules data', () => {
     const err = loadError(dir);
     expect(err.message).toContain(`${file}:${lineOf(file, 'Paved Road:')}: Paved Road: key "Paved Road" is not allowed`);
     expect(err.message).toMatch(/lower case words joined by hyphens/);
-    expect(err.message).toContain('turf.lateral_frction: unknown key "lateral_frction": allowed keys are name, rolling_resistance, lateral_friction');
+    expect(err.message).toContain('turf.lateral_frction: unknown key "lateral_frction": allowed keys are name, lateral_friction, soil_resistance');
     expect(err.message).toContain('turf: missing key "lateral_friction"');
   });
 

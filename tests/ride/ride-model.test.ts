@@ -77,7 +77,7 @@ describe('the ride model', () => {
     expect(f.crew.value).toBeGreaterThanOrEqual(1);
     expect(a.floorBump.factor).toBe(f.crew.value);
     expect(a.floorBump.factorSource).toContain('ride model');
-    const bump = a.memberCases.find((c) => c.id === 'bump')!;
+    const bump = a.memberCases.find((c) => c.id === 'rough-ground')!;
     expect(bump.gravityFactor).toBe(f.wheel.value);
     expect(bump.sources.join(' ')).toContain('ride model');
     const crewFactor = Math.max(...a.ride.ridge.crew.map((c) => c.floor_dlf), ...a.ride['one-wheel'].crew.map((c) => c.floor_dlf));

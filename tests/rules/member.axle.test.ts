@@ -17,7 +17,7 @@ describe(RULE, () => {
     // Hand calculation (design basis, section 6): a = (1640 − 940)/2 = 350 mm, r = 470 mm,
     // W = 78 × 72²/6 mm³ at the bearing; the outer wheel's loads from the turn model, the bump's from the ride model's wheel factor.
     const a = new Analysis(prepared(readDemo('demo-two-crew')), rulesData);
-    const bump = a.memberCases.find((c) => c.id === 'bump')!;
+    const bump = a.memberCases.find((c) => c.id === 'rough-ground')!;
     const turnM = a.turn.outerWheel * 350 + a.turn.outerLateral * 470;
     const bumpM = bump.wheel_N * 350;
     expect(stepsOf(f, 'a = (t − s)/2')[0].result).toBe(350);

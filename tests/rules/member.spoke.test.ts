@@ -26,8 +26,8 @@ describe(RULE, () => {
     const a = new Analysis(prepared(raw, rigid), rigid);
     const found = await findingsOf(RULE, raw, {}, rigid);
     const c = crushing(found);
-    const bump = a.memberCases.find((x) => x.id === 'bump')!;
-    expect(c.load_case).toBe('bump');
+    const bump = a.memberCases.find((x) => x.id === 'rough-ground')!;
+    expect(c.load_case).toBe('rough-ground');
     expect(c.value).toBeCloseTo(bump.wheel_N / (35 * 30), 9);
     expect(governingStep(c, 'σ_c = N_w/A').result).toBeCloseTo(bump.wheel_N / (35 * 30), 9);
     // Euler: E_0.05 = 12000 × (1 − 1.645 × 0.22) (Wood Handbook Table 5-3a, 12 %), I_min = 35 × 30³/12, K = 1.

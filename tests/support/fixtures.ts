@@ -7,10 +7,15 @@ import type { CheckedSpecification } from '../../src/core/spec/spec.types.ts';
 
 export const rulesData: RulesData = loadRulesData(defaultRulesDir());
 
-/** The real data with one more ground type of the given rolling resistance. */
-export function dataWithGround(id: string, rollingResistance: number): RulesData {
+/**
+ * The real data with one more ground type of the given soil resistance, and
+ * the hub's journal friction set (0 by default: a hand calculation without
+ * rolling resistance unless it asks for one).
+ */
+export function dataWithGround(id: string, soilResistance: number, journalFriction = 0): RulesData {
   const src = { sources: ['demo-data'], source: 'test fixture' };
-  return { ...rulesData, grounds: { ...rulesData.grounds, [id]: { name: id, rolling_resistance: { value: rollingResistance, ...src }, lateral_friction: { value: 0.5, ...src } } } };
+  const withGround = { ...rulesData, grounds: { ...rulesData.grounds, [id]: { name: id, soil_resistance: { value: soilResistance, ...src }, lateral_friction: { value: 0.5, ...src } } } };
+  return withParams('rolling', { journal_friction: journalFriction }, withGround);
 }
 
 export function readDemo(name: string): Record<string, unknown> {

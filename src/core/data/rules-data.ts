@@ -79,7 +79,8 @@ export interface Leather {
 
 export interface Ground {
   name: string;
-  rolling_resistance: Sourced;
+  /** The ground's share of the rolling resistance at the reference wheel diameter (rules/parameters/rolling.yaml). */
+  soil_resistance: Sourced;
   lateral_friction: Sourced;
 }
 

@@ -1,3 +1,4 @@
+import { rollingResistance } from './rolling-resistance.ts';
 import type { Limit, RulesData } from '../data/rules-data.ts';
 import type { LoadCaseResult } from './load-case-result.ts';
 import type { PartMass } from './part-mass.ts';
@@ -106,7 +107,8 @@ function poleCases(joint: 'pole-to-axle' | 'pole-to-yoke', i: DemandInput, k: Fa
   const worst = (list: Vertical[]) => list.reduce((w, c) => (vertical(c) > vertical(w) ? c : w));
   const of = (m: Motion) => i.cases.filter((c) => motionOf(c) === m);
   const m = i.mass.rolling.mass_kg;
-  const Crr = i.data.grounds[spec.operation.ground].rolling_resistance.value;
+  // The pull at constant speed: the soil's and the hub's resistance together (design basis, section 3).
+  const Crr = rollingResistance(spec, i.data).total;
   const A = spec.operation.acceleration_g * G;
   const B = spec.operation.braking_g * G;
   const out: JointForce[] = [];
@@ -116,7 +118,7 @@ function poleCases(joint: 'pole-to-axle' | 'pole-to-yoke', i: DemandInput, k: Fa
   const axleMax = Math.max(...accel.map((c) => c.axle_load_N));
   const pull = m * A + Crr * axleMax;
   out.push(jointForce('draught', `draught, accelerating at ${spec.operation.acceleration_g} g`, { along: pull, normal: vertical(acc) }, [
-    `along = m·a + C_rr·N_axle = ${f1(m)} kg × ${f3(A)} m/s² + ${Crr} × ${f1(axleMax)} N = ${f1(pull)} N (the largest axle load of the accelerating cases)`,
+    `along = m·a + (C_s + C_b)·N_axle = ${f1(m)} kg × ${f3(A)} m/s² + ${f3(Crr)} × ${f1(axleMax)} N = ${f1(pull)} N (the largest axle load of the accelerating cases)`,
     `normal = ${vText(acc)}`,
   ]));
 
@@ -146,7 +148,7 @@ function poleCases(joint: 'pole-to-axle' | 'pole-to-yoke', i: DemandInput, k: Fa
     const side = (m * turn.lateralAccel * arm) / turn.reach;
     const rrTurn = Crr * placed.axle;
     out.push(jointForce('turn', `design turn at ${spec.operation.speed_kmh} km/h`, { along: rrTurn, across: side, normal: vertical(placed) }, [
-      `along = C_rr·N_axle = ${Crr} × ${f1(placed.axle)} N = ${f1(rrTurn)} N`,
+      `along = (C_s + C_b)·N_axle = ${f3(Crr)} × ${f1(placed.axle)} N = ${f1(rrTurn)} N`,
       `across = m·a_lat·|x_g − x_a| / L = ${f1(m)} kg × ${f3(turn.lateralAccel)} m/s² × ${f3(arm)} m / ${f3(turn.reach)} m = ${f1(side)} N (the side pull that holds the heading)`,
       `normal = ${vText(placed)}`,
     ]));

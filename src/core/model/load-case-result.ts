@@ -8,4 +8,7 @@ export interface LoadCaseResult {
   per_horse_N: number;
   axle_load_N: number;
   working: string;
+  /** The pole load with the EQU factors (design basis, section 2): what the yoke-lift check compares. */
+  pole_load_equ_N: number;
+  working_equ: string;
 }

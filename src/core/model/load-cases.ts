@@ -4,10 +4,16 @@ import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { G } from '../units/units.ts';
 import { massModel, type MassModel } from './mass-model.ts';
 import { poleLoad } from './pole-load.ts';
+import { rollingResistance } from './rolling-resistance.ts';
+import { combinationFactors } from './combination-factors.ts';
+import { equilibriumInertia, equilibriumWeight } from './equilibrium-factors.ts';
+import { num, step, stepText } from '../findings/working.ts';
 
-// The longitudinal load cases of the mechanics note, section 3: the crew as
-// placed and at both ends of the usable floor, each standing still,
-// accelerating and braking. Taking every combination is the safe side.
+// The longitudinal load cases (design basis, section 3): the crew as placed
+// and at both ends of the usable floor, each standing still, accelerating and
+// braking. Taking every combination is the safe side. Each case's pole load
+// is given as it is (characteristic: the load on each horse) and with the EQU
+// factors (equilibrium: whether the yoke lifts).
 
 type CrewPosition = LoadCaseResult['crew_position'];
 
@@ -51,10 +57,22 @@ export function yokeLoads(spec: CheckedSpecification, data: RulesData, model: Ma
     yokeX_mm: spec.pole.yoke_x_mm,
     yokeZ_mm: spec.pole.yoke_height_mm,
     accel_g,
-    rollingResistance: data.grounds[spec.operation.ground].rolling_resistance.value,
+    resistance: rollingResistance(spec, data),
   });
   const yoke_N = r.pole_N + model.yoke.mass_kg * G;
   return { pole: r, yoke_N, perHorse_N: yoke_N / spec.team.horses };
+}
+
+/** The pole load with the EQU factors on each weight and on the inertia. */
+export function equilibriumPoleLoad(spec: CheckedSpecification, data: RulesData, model: MassModel, accel_g: number) {
+  const f = combinationFactors(data);
+  const rolling = model.parts.filter((p) => p.group === 'rolling');
+  const parts = rolling.map((p) => ({ ...p, factor: equilibriumWeight(p, spec.axle.x_mm, f) }));
+  const cgZ = model.rolling.z_mm;
+  const accelFactor = equilibriumInertia(accel_g, spec.pole.yoke_height_mm > cgZ, f);
+  const r = poleLoad({ parts, axleX_mm: spec.axle.x_mm, yokeX_mm: spec.pole.yoke_x_mm, yokeZ_mm: spec.pole.yoke_height_mm, accel_g, accelFactor, resistance: rollingResistance(spec, data) });
+  const factors = [`weights ahead of the axle × ${f.gammaGstb} (own weight) or left out (crew, loads); behind it × ${f.gammaGdst} (own weight) or × ${f.gammaQdst} (crew, loads); inertia × ${accelFactor}`];
+  return { pole_N: r.pole_N, working: [...factors, ...r.working.map(stepText)].join('\n') };
 }
 
 /** The pole load for a spec as it stands (crew as placed, no acceleration). */
@@ -64,10 +82,12 @@ export function staticPoleLoad(spec: CheckedSpecification, data: RulesData, mode
 
 export function loadCases(spec: CheckedSpecification, data: RulesData): LoadCaseResult[] {
   const out: LoadCaseResult[] = [];
+  const resistance = rollingResistance(spec, data);
   for (const crew of CREW) {
     const model = massModel(crewAt(spec, crew.pos), data);
     for (const motion of motions(spec)) {
       const { pole: r, yoke_N: yoke, perHorse_N: perHorse } = yokeLoads(spec, data, model, motion.accel);
+      const equ = equilibriumPoleLoad(spec, data, model, motion.accel);
       const id = crew.id ? (motion.id === 'static' ? crew.id : `${crew.id}-${motion.id}`) : motion.id;
       out.push({
         id,
@@ -78,7 +98,9 @@ export function loadCases(spec: CheckedSpecification, data: RulesData): LoadCase
         yoke_load_N: yoke,
         per_horse_N: perHorse,
         axle_load_N: r.axle_N,
-        working: `${r.working}\nR_yoke = R_pole + m_yoke·g = ${r.pole_N.toFixed(1)} + ${model.yoke.mass_kg.toFixed(2)} kg × ${G} = ${yoke.toFixed(1)} N; per horse ${yoke.toFixed(1)} / ${spec.team.horses} = ${perHorse.toFixed(1)} N`,
+        working: [...resistance.working, ...r.working, step('R_yoke = R_pole + m_yoke·g', `${num(r.pole_N)} + ${num(model.yoke.mass_kg)} × ${num(G)}`, yoke, 'N'), step('per horse = R_yoke / n', `${num(yoke)} / ${spec.team.horses}`, perHorse, 'N')].map(stepText).join('\n'),
+        pole_load_equ_N: equ.pole_N,
+        working_equ: equ.working,
       });
     }
   }

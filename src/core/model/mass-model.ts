@@ -68,10 +68,10 @@ export function massModel(spec: CheckedSpecification, data: RulesData): MassMode
     parts.push({ part: `lashing, ${l.joint}`, group: place.group, mass_kg: mass, x_mm: place.x, y_mm: place.y, z_mm: place.z, measured: false, basis: `${l.wraps} wraps × ${fmt(place.wrapPerimeter, 0)} mm + tails = ${fmt(length, 0)} mm × ${l.width_mm} × ${l.thickness_mm} mm × ${density} kg/m³ (${l.material})` });
   }
   for (const c of spec.crew) {
-    parts.push({ part: `crew, ${c.role}`, group: 'rolling', mass_kg: c.mass_kg, x_mm: c.x_mm, y_mm: c.y_mm, z_mm: lay.floorTopZ + c.cg_height_mm, measured: true, basis: `given ${c.mass_kg} kg, centre of mass ${c.cg_height_mm} mm above the floor` });
+    parts.push({ part: `crew, ${c.role}`, group: 'rolling', variable: true, mass_kg: c.mass_kg, x_mm: c.x_mm, y_mm: c.y_mm, z_mm: lay.floorTopZ + c.cg_height_mm, measured: true, basis: `given ${c.mass_kg} kg, centre of mass ${c.cg_height_mm} mm above the floor` });
   }
   for (const l of spec.loads) {
-    parts.push({ part: `load, ${l.name}`, group: 'rolling', mass_kg: l.mass_kg, x_mm: l.x_mm, y_mm: l.y_mm, z_mm: l.z_mm, measured: true, basis: `given ${l.mass_kg} kg` });
+    parts.push({ part: `load, ${l.name}`, group: 'rolling', variable: true, mass_kg: l.mass_kg, x_mm: l.x_mm, y_mm: l.y_mm, z_mm: l.z_mm, measured: true, basis: `given ${l.mass_kg} kg` });
   }
   const rolling = totals(parts.filter((p) => p.group === 'rolling'));
   const yoke = totals(parts.filter((p) => p.group === 'yoke'));

@@ -1,35 +1,47 @@
 import type { RulesData } from '../data/rules-data.ts';
-import type { LoadCaseResult } from './load-case-result.ts';
+import type { Combination } from '../findings/finding.ts';
+import { num } from '../findings/working.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { G } from '../units/units.ts';
-import { staticPoleLoad } from './load-cases.ts';
 import { bumpFactorSources } from './bump-sources.ts';
+import { combinationFactors, type CombinationFactors } from './combination-factors.ts';
+import type { LoadCaseResult } from './load-case-result.ts';
+import { staticPoleLoad } from './load-cases.ts';
 import { loadFactor } from './load-factors.ts';
 import { massModel, type MassModel } from './mass-model.ts';
+import { rollingResistance } from './rolling-resistance.ts';
 import type { Duration } from './timber/load-duration.ts';
+import { strengthFactor } from './timber/strength-factors.ts';
 import type { TurnModel } from './turn.ts';
 
-// The load cases the timber members are checked in (issue: static, bump, the
-// design turn, braking), each with its load-duration class (mechanics note,
-// section 1). Each case is the envelope over the crew positions of the
-// balance load cases: the largest wheel load and the largest pole load, which
-// may come from different positions (the safe side).
+// The load cases the timber members are checked in, each a load combination
+// of EN 1990 (design basis, section 2): the fundamental combination
+// 1.35 G + 1.5 Q_lead + 1.5 psi_0 Q_other for strength, the accidental one
+// (every action x 1.0, gamma_M 1.0) for the stone strike and the stopping
+// shock. G is the vehicle's own weight (the chariot without its crew), Q the
+// crew's weight; the leading action of a case is its own (rough ground, the
+// turn, the motion). Each case is the envelope over the crew positions of the
+// balance load cases: the largest wheel load and the largest pole load,
+// which may come from different positions (the safe side).
 
-export type MemberCaseId = 'dead' | 'standing' | 'bump' | 'turn' | 'accelerating' | 'braking' | 'stopping-shock';
+export type MemberCaseId = 'dead' | 'static' | 'rough-ground' | 'turn' | 'accelerating' | 'braking' | 'stone' | 'stopping-shock';
 
 export interface MemberCase {
   id: MemberCaseId;
   title: string;
+  combination: Combination;
   duration: Duration;
-  /** Vertical ground load on the more loaded wheel, N. */
+  /** The material partial factor of the combination (timber). */
+  gammaM: number;
+  /** Design vertical ground load on the more loaded wheel, N. */
   wheel_N: number;
-  /** Lateral ground force on that wheel, N. */
+  /** Design lateral ground force on that wheel, N. */
   wheelLateral_N: number;
-  /** Vertical force between the pole and the yoke, magnitude, N. */
+  /** Design vertical force between the pole and the yoke, magnitude, N. */
   pole_N: number;
-  /** Force along the pole at the yoke: positive pushes (braking), negative pulls (draught), N. */
+  /** Design force along the pole at the yoke: positive pushes (braking), negative pulls (draught), N. */
   poleAxial_N: number;
-  /** Factor on the parts' own weight (the bump factor in the bump case, else 1). */
+  /** Factor on the parts' own weight (the dynamic factor in the rough-ground and stone cases, else 1). */
   gravityFactor: number;
   working: string;
   /** Sources of the factors this case applies, as text. */
@@ -38,98 +50,197 @@ export interface MemberCase {
   sourceIds: string[];
 }
 
-const f = (v: number, d = 1) => v.toFixed(d);
-
-interface Envelope {
-  wheel_N: number;
-  pole_N: number;
-  working: string;
+interface Pair {
+  /** The own weight's part (the chariot without its crew). */
+  G: number;
+  /** The crew's part (total less own weight). */
+  Q: number;
 }
 
-function envelope(list: readonly { title: string; axle_N: number; pole_N: number }[]): Envelope {
-  const byWheel = list.reduce((w, c) => (c.axle_N > w.axle_N ? c : w));
-  const byPole = list.reduce((w, c) => (Math.abs(c.pole_N) > Math.abs(w.pole_N) ? c : w));
+/** The largest wheel load (per wheel) and pole load over a set of balance cases, split into own weight and crew. */
+function envelope(list: readonly LoadCaseResult[], dead: { wheel: number; pole: number }): { wheel: Pair; pole: Pair; titles: string } {
+  const byWheel = list.reduce((w, c) => (c.axle_load_N > w.axle_load_N ? c : w));
+  const byPole = list.reduce((w, c) => (Math.abs(c.pole_load_N) > Math.abs(w.pole_load_N) ? c : w));
   return {
-    wheel_N: byWheel.axle_N / 2,
-    pole_N: Math.abs(byPole.pole_N),
-    working: `N_w = axle load / 2 = ${f(byWheel.axle_N)} / 2 = ${f(byWheel.axle_N / 2)} N (${byWheel.title}); |R_pole| = ${f(Math.abs(byPole.pole_N))} N (${byPole.title})`,
+    wheel: { G: dead.wheel, Q: byWheel.axle_load_N / 2 - dead.wheel },
+    pole: { G: dead.pole, Q: Math.abs(byPole.pole_load_N) - dead.pole },
+    titles: `wheel: ${byWheel.title}; pole: ${byPole.title}`,
   };
 }
 
-const standingPole = (cases: readonly LoadCaseResult[]) => envelope(asLoads(cases.filter((c) => c.accel_g === 0))).pole_N;
-
-const asLoads = (cases: readonly LoadCaseResult[]) => cases.map((c) => ({ title: c.title, axle_N: c.axle_load_N, pole_N: c.pole_load_N }));
-
-/** The bump case's factor and where it came from; without one, the placeholder bump_dynamic_factor. */
-export interface BumpInput {
-  /** `from`: the ride case the factor came from, null or absent for the placeholder. */
+/** The dynamic factors of a case and where they came from. */
+export interface DynamicInput {
+  /** `from`: the ride case the factor came from, null or absent for a bound from the data. */
   factor: { value: number; source: string; from?: string | null };
-  /** The ride model's largest yoke force above the standing one, N: added to the worst standing pole load when that gives more. */
+  /** The ride model's largest yoke force above the standing one, N; null without a ride. */
   yokeIncrease_N: number | null;
 }
 
-export function memberCases(spec: CheckedSpecification, data: RulesData, mass: MassModel, cases: readonly LoadCaseResult[], turn: TurnModel, bumpIn?: BumpInput): MemberCase[] {
-  const m = mass.rolling.mass_kg;
-  const Crr = data.grounds[spec.operation.ground].rolling_resistance.value;
-  const standingCases = cases.filter((c) => c.accel_g === 0);
-  const accelCases = cases.filter((c) => c.accel_g > 0);
-  const brakeCases = cases.filter((c) => c.accel_g < 0);
+const fund = (f: CombinationFactors, g: number, q: number) => f.gammaGsup * g + f.gammaQ * q;
 
-  const noCrew = { ...spec, crew: [] };
-  const dead = staticPoleLoad(noCrew, data, massModel(noCrew, data));
-  const standing = envelope(asLoads(standingCases));
+export function memberCases(spec: CheckedSpecification, data: RulesData, mass: MassModel, cases: readonly LoadCaseResult[], turn: TurnModel, routine?: DynamicInput, stone?: DynamicInput): MemberCase[] {
+  const f = combinationFactors(data);
+  const gammaM = strengthFactor(data, 'gamma_M').value;
+  const comboIds = f.sources;
+  const m = mass.rolling.mass_kg;
+  const rr = rollingResistance(spec, data);
+  const noCrew = { ...spec, crew: [], loads: [] };
+  const deadLoad = staticPoleLoad(noCrew, data, massModel(noCrew, data));
+  const dead = { wheel: deadLoad.axle_N / 2, pole: Math.abs(deadLoad.pole_N) };
+  const standingCases = cases.filter((c) => c.accel_g === 0);
+  const stand = envelope(standingCases, dead);
   const placeholder = loadFactor(data, 'bump_dynamic_factor');
-  const bump = bumpIn?.factor ?? { value: placeholder.value, source: `placeholder bump_dynamic_factor ${placeholder.value}: ${placeholder.source}` };
-  // The pole carries what the yoke feels: with a ride model, the worst standing pole load plus the ride's
-  // largest rise of the yoke force over standing (the wheel factor does not reach the pole); without one, the factor.
-  const stand = standingPole(cases);
-  const rideYoke = bumpIn?.yokeIncrease_N ?? null;
-  const bumpPole = rideYoke !== null ? stand + Math.max(0, rideYoke) : stand * bump.value;
-  const poleText = rideYoke !== null ? `|R_pole| = standing ${f(stand)} + the ride model's largest yoke force above standing ${f(Math.max(0, rideYoke))} = ${f(bumpPole)} N` : `|R_pole| = ${f(stand)} × ${bump.value.toFixed(2)} = ${f(bumpPole)} N`;
-  const bumpIds = bumpFactorSources(data, bumpIn?.factor.from);
-  const shock = loadFactor(data, 'stopping_shock_factor');
-  const asPlaced = cases.find((c) => c.id === 'static')!;
+  const bound = { value: placeholder.value, source: `placeholder bump_dynamic_factor ${placeholder.value}: ${placeholder.source}`, from: null };
+  const rough = routine ?? { factor: bound, yokeIncrease_N: null };
+  const strike = stone ?? rough;
+  const G_ = num(f.gammaGsup);
+  const Q_ = num(f.gammaQ);
+  const fundText = (what: string, p: Pair, extra = 0, extraName = '') => `${what}: ${G_} × ${num(p.G)} + ${Q_} × ${num(p.Q)}${extra ? ` + ${Q_} × ${num(extra)} (${extraName})` : ''} = ${num(fund(f, p.G, p.Q) + f.gammaQ * extra)} N`;
+
+  // A dynamic case: the wheel carries phi x the static load; the increment (phi - 1) x (G + Q) is its leading action.
+  const dynamicCase = (id: 'rough-ground' | 'stone', d: DynamicInput): MemberCase => {
+    const phi = d.factor.value;
+    const acc = id === 'stone';
+    const incWheel = (phi - 1) * (stand.wheel.G + stand.wheel.Q);
+    const incPole = d.yokeIncrease_N !== null ? Math.max(0, d.yokeIncrease_N) : (phi - 1) * (stand.pole.G + stand.pole.Q);
+    const wheel = acc ? stand.wheel.G + stand.wheel.Q + incWheel : fund(f, stand.wheel.G, f.psi0Crew * stand.wheel.Q) + f.gammaQ * incWheel;
+    const pole = acc ? stand.pole.G + stand.pole.Q + incPole : fund(f, stand.pole.G, f.psi0Crew * stand.pole.Q) + f.gammaQ * incPole;
+    const poleWhat = d.yokeIncrease_N !== null ? "the ride model's largest yoke force above standing" : `(φ − 1) × the standing pole load`;
+    const working = acc
+      ? `accidental (every action × 1.0, γ_M = ${f.gammaMaccidental}): N_w = φ × (G + Q) = ${num(phi)} × ${num(stand.wheel.G + stand.wheel.Q)} = ${num(wheel)} N; |R_pole| = ${num(stand.pole.G + stand.pole.Q)} + ${num(incPole)} (${poleWhat}) = ${num(pole)} N; φ from ${d.factor.source}`
+      : `fundamental, the rough ground leading (γ_G ${G_}, γ_Q ${Q_}, ψ_0 of the crew ${num(f.psi0Crew)}): ${fundText('N_w', { G: stand.wheel.G, Q: f.psi0Crew * stand.wheel.Q }, incWheel, `(φ − 1)(G + Q), φ = ${num(phi)}`)}; ${fundText('|R_pole|', { G: stand.pole.G, Q: f.psi0Crew * stand.pole.Q }, incPole, poleWhat)}; φ from ${d.factor.source}`;
+    return {
+      id,
+      title: acc ? `stone struck at the design speed (φ = ${num(phi)})` : `routine rough ground (φ = ${num(phi)})`,
+      combination: acc ? 'accidental' : 'fundamental',
+      duration: acc ? 'instantaneous' : 'short',
+      gammaM: acc ? f.gammaMaccidental : gammaM,
+      wheel_N: wheel,
+      wheelLateral_N: 0,
+      pole_N: pole,
+      poleAxial_N: 0,
+      gravityFactor: phi,
+      sources: [d.factor.source],
+      sourceIds: [...bumpFactorSources(data, d.factor.from), ...(acc ? ['en-1990-6-11', 'en-1995-1-1-2-4-1'] : comboIds)],
+      working: `${working}; own weight G from the chariot without its crew, crew Q the rest (${stand.titles})`,
+    };
+  };
 
   const out: MemberCase[] = [
-    { id: 'dead', title: 'dead load alone (no crew)', duration: 'permanent', wheel_N: dead.axle_N / 2, wheelLateral_N: 0, pole_N: Math.abs(dead.pole_N), poleAxial_N: 0, gravityFactor: 1, sources: [], sourceIds: [], working: `the chariot without its crew: N_w = ${f(dead.axle_N)} / 2 = ${f(dead.axle_N / 2)} N; |R_pole| = ${f(Math.abs(dead.pole_N))} N` },
-    { id: 'standing', title: 'standing with the crew (worst crew position)', duration: 'short', wheel_N: standing.wheel_N, wheelLateral_N: 0, pole_N: standing.pole_N, poleAxial_N: 0, gravityFactor: 1, sources: [], sourceIds: [], working: standing.working },
-    { id: 'bump', title: `bump (standing × ${bump.value.toFixed(2)})`, duration: 'instantaneous', wheel_N: standing.wheel_N * bump.value, wheelLateral_N: 0, pole_N: bumpPole, poleAxial_N: 0, gravityFactor: bump.value, sources: [bump.source], sourceIds: bumpIds, working: `standing loads × bump factor ${bump.value.toFixed(2)} (${bump.source}): N_w = ${f(standing.wheel_N * bump.value)} N; ${poleText}` },
     {
-      id: 'turn',
-      title: `outer wheel in the design turn (${spec.operation.turn_radius_m} m at ${spec.operation.speed_kmh} km/h)`,
-      duration: 'short',
-      wheel_N: turn.outerWheel,
-      wheelLateral_N: turn.outerLateral,
-      pole_N: Math.abs(asPlaced.pole_load_N),
+      id: 'dead',
+      title: 'own weight alone (no crew)',
+      combination: 'fundamental',
+      duration: 'permanent',
+      gammaM,
+      wheel_N: f.gammaGsup * dead.wheel,
+      wheelLateral_N: 0,
+      pole_N: f.gammaGsup * dead.pole,
       poleAxial_N: 0,
       gravityFactor: 1,
       sources: [],
-      sourceIds: ['design-basis-turning'],
-      working: `a_lat = ${f(turn.lateralAccel, 3)} m/s²; N_o = N/2 + m·a_lat·h_g/t = ${f(turn.wheelsLoad / 2)} + ${f(turn.loadTransfer)} = ${f(turn.outerWheel)} N; lateral ground force F_lat = ${f(turn.outerLateral)} N${turn.steady ? '' : ' (no steady turn: the pole reach is longer than the turn radius)'}`,
+      sourceIds: comboIds,
+      working: `fundamental, own weight only: N_w = ${G_} × ${num(dead.wheel)} = ${num(f.gammaGsup * dead.wheel)} N; |R_pole| = ${G_} × ${num(dead.pole)} = ${num(f.gammaGsup * dead.pole)} N`,
     },
+    {
+      id: 'static',
+      title: 'standing with the crew (worst crew position)',
+      combination: 'fundamental',
+      duration: 'short',
+      gammaM,
+      wheel_N: fund(f, stand.wheel.G, stand.wheel.Q),
+      wheelLateral_N: 0,
+      pole_N: fund(f, stand.pole.G, stand.pole.Q),
+      poleAxial_N: 0,
+      gravityFactor: 1,
+      sources: [],
+      sourceIds: comboIds,
+      working: `fundamental, the crew leading: ${fundText('N_w', stand.wheel)}; ${fundText('|R_pole|', stand.pole)} (${stand.titles})`,
+    },
+    dynamicCase('rough-ground', rough),
   ];
 
+  // The turn: the outer wheel's share of the crew-as-placed load plus the transfer, the transfer and the lateral force leading.
+  const placed = cases.find((c) => c.id === 'static')!;
+  const half = { G: dead.wheel, Q: placed.axle_load_N / 2 - dead.wheel };
+  const outer = fund(f, half.G, f.psi0Crew * half.Q) + f.gammaQ * turn.loadTransfer;
+  out.push({
+    id: 'turn',
+    title: `outer wheel in the design turn (${spec.operation.turn_radius_m} m at ${spec.operation.speed_kmh} km/h)`,
+    combination: 'fundamental',
+    duration: 'short',
+    gammaM,
+    wheel_N: outer,
+    wheelLateral_N: f.gammaQ * turn.outerLateral,
+    pole_N: fund(f, dead.pole, Math.abs(placed.pole_load_N) - dead.pole),
+    poleAxial_N: 0,
+    gravityFactor: 1,
+    sources: [],
+    sourceIds: ['design-basis-turning', ...comboIds],
+    working: `fundamental, the turn leading: a_lat = ${num(turn.lateralAccel)} m/s²; ${fundText('N_outer', { G: half.G, Q: f.psi0Crew * half.Q }, turn.loadTransfer, 'the load transfer m·a_lat·h_g/t')}; F_lat = ${Q_} × ${num(turn.outerLateral)} = ${num(f.gammaQ * turn.outerLateral)} N${turn.steady ? '' : ' (no steady turn: the pole reach is longer than the turn radius)'}`,
+  });
+
+  // The motion cases: their change from standing leads; the pull or push along the pole is the motion's own.
+  const motion = (id: 'accelerating' | 'braking', list: readonly LoadCaseResult[], axial: number, axialText: string) => {
+    const env = envelope(list, dead);
+    const dWheel = Math.max(0, env.wheel.G + env.wheel.Q - (stand.wheel.G + stand.wheel.Q));
+    const dPole = Math.max(0, env.pole.G + env.pole.Q - (stand.pole.G + stand.pole.Q));
+    out.push({
+      id,
+      title: `${id} at ${id === 'accelerating' ? spec.operation.acceleration_g : spec.operation.braking_g} g (worst crew position)`,
+      combination: 'fundamental',
+      duration: 'short',
+      gammaM,
+      wheel_N: fund(f, stand.wheel.G, f.psi0Crew * stand.wheel.Q) + f.gammaQ * dWheel,
+      wheelLateral_N: 0,
+      pole_N: fund(f, stand.pole.G, f.psi0Crew * stand.pole.Q) + f.gammaQ * dPole,
+      poleAxial_N: f.gammaQ * axial,
+      gravityFactor: 1,
+      sources: [],
+      sourceIds: [...rr.sources, ...comboIds],
+      working: `fundamental, the ${id === 'accelerating' ? 'acceleration' : 'braking'} leading: ${fundText('N_w', { G: stand.wheel.G, Q: f.psi0Crew * stand.wheel.Q }, dWheel, 'the change from standing')}; ${fundText('|R_pole|', { G: stand.pole.G, Q: f.psi0Crew * stand.pole.Q }, dPole, 'the change from standing')}; ${axialText}, × ${Q_} = ${num(f.gammaQ * axial)} N (${env.titles})`,
+    });
+  };
+  const accelCases = cases.filter((c) => c.accel_g > 0);
+  const brakeCases = cases.filter((c) => c.accel_g < 0);
   if (accelCases.length > 0) {
-    const env = envelope(asLoads(accelCases));
     const a = spec.operation.acceleration_g;
     const axleMax = Math.max(...accelCases.map((c) => c.axle_load_N));
-    const pull = m * a * G + Crr * axleMax;
-    out.push({ id: 'accelerating', title: `accelerating at ${a} g (worst crew position)`, duration: 'short', wheel_N: env.wheel_N, wheelLateral_N: 0, pole_N: env.pole_N, poleAxial_N: -pull, gravityFactor: 1, sources: [], sourceIds: data.grounds[spec.operation.ground].rolling_resistance.sources, working: `${env.working}; draught T = m·a·g + C_rr·N = ${f(m)} kg × ${a} × ${G} + ${Crr} × ${f(axleMax)} N = ${f(pull)} N` });
+    const pull = m * a * G + rr.total * axleMax;
+    motion('accelerating', accelCases, -pull, `draught T = m·a·g + (C_s + C_b)·N = ${num(m)} × ${a} × ${num(G)} + ${num(rr.total)} × ${num(axleMax)} = ${num(pull)} N`);
   }
   if (brakeCases.length > 0) {
     const b = spec.operation.braking_g;
     const push = m * b * G;
-    const env = envelope(asLoads(brakeCases));
-    out.push({ id: 'braking', title: `braking at ${b} g (worst crew position)`, duration: 'short', wheel_N: env.wheel_N, wheelLateral_N: 0, pole_N: env.pole_N, poleAxial_N: push, gravityFactor: 1, sources: [], sourceIds: [], working: `${env.working}; design braking force through the pole T = m·b·g = ${f(m)} kg × ${b} × ${G} = ${f(push)} N` });
-    // The pole load is linear in the acceleration, so the shock case scales the
-    // braking change from standing, position by position.
+    motion('braking', brakeCases, push, `braking force through the pole T = m·b·g = ${num(m)} × ${b} × ${num(G)} = ${num(push)} N`);
+  }
+  out.push(dynamicCase('stone', strike));
+  if (brakeCases.length > 0) {
+    // The stopping shock: an accidental deceleration; the pole load is linear in the acceleration, so the braking change from standing scales.
+    const shock = loadFactor(data, 'stopping_shock_factor');
+    const b = spec.operation.braking_g;
     const shocked = brakeCases.map((c) => {
       const still = standingCases.find((s) => s.crew_position === c.crew_position)!;
       const pole = still.pole_load_N + shock.value * (c.pole_load_N - still.pole_load_N);
-      return { title: c.title.replace(/^braking at [^,]+/, `stopping shock at ${f(shock.value * b, 2)} g`), pole_N: pole, axle_N: still.axle_load_N + still.pole_load_N - pole };
+      return { ...c, pole_load_N: pole, axle_load_N: still.axle_load_N + still.pole_load_N - pole };
     });
-    const sEnv = envelope(shocked);
-    out.push({ id: 'stopping-shock', title: `stopping shock (${shock.value} × the braking force)`, duration: 'instantaneous', wheel_N: sEnv.wheel_N, wheelLateral_N: 0, pole_N: sEnv.pole_N, poleAxial_N: shock.value * push, gravityFactor: 1, sources: [shock.source], sourceIds: shock.sources, working: `deceleration stopping_shock_factor ${shock.value} × ${b} g: R_pole = R_standing + ${shock.value} × (R_braking − R_standing); ${sEnv.working}; T = ${shock.value} × ${f(push)} = ${f(shock.value * push)} N` });
+    const env = envelope(shocked, dead);
+    const push = shock.value * m * b * G;
+    out.push({
+      id: 'stopping-shock',
+      title: `stopping shock (${num(shock.value)} × the braking force)`,
+      combination: 'accidental',
+      duration: 'instantaneous',
+      gammaM: f.gammaMaccidental,
+      wheel_N: env.wheel.G + env.wheel.Q,
+      wheelLateral_N: 0,
+      pole_N: env.pole.G + env.pole.Q,
+      poleAxial_N: push,
+      gravityFactor: 1,
+      sources: [shock.source],
+      sourceIds: [...shock.sources, 'en-1990-6-11', 'en-1995-1-1-2-4-1'],
+      working: `accidental (every action × 1.0, γ_M = ${f.gammaMaccidental}): deceleration ${num(shock.value)} × ${b} g; R_pole = R_standing + ${num(shock.value)} × (R_braking − R_standing): N_w = ${num(env.wheel.G + env.wheel.Q)} N, |R_pole| = ${num(env.pole.G + env.pole.Q)} N; T = ${num(push)} N`,
+    });
   }
   return out;
 }

@@ -1,50 +1,52 @@
+import type { WorkingStep } from '../findings/finding.ts';
+import { num, step } from '../findings/working.ts';
 import { G, mm } from '../units/units.ts';
 import type { PartMass } from './part-mass.ts';
+import type { RollingResistance } from './rolling-resistance.ts';
 
 // Vertical force the pole puts on the yoke, from moments about the wheels'
-// ground contact (mechanics note, section 3). The rolling resistance depends
-// on the weight left on the wheels, m*g - R; solving for R directly instead of
-// iterating gives R = (A + h_y*C_rr*m*g) / (L + h_y*C_rr).
+// ground contact (design basis, section 3). The rolling resistance depends
+// on the weight left on the wheels, N = m*g - R; its two parts act with
+// their own arms (rolling-resistance.ts), so with c = (h_y - r)*C_s + h_y*C_b
+// solving for R directly gives R = (A + c*m*g) / (L + c).
 
 export interface PoleLoadInput {
-  /** Rolling assembly parts, crew and loads included (mm, kg). */
-  parts: readonly PartMass[];
+  /** Rolling assembly parts, crew and loads included (mm, kg); each with its weight factor (1 unfactored). */
+  parts: readonly (PartMass & { factor?: number })[];
   axleX_mm: number;
   yokeX_mm: number;
   yokeZ_mm: number;
   /** Longitudinal acceleration in g; braking negative. */
   accel_g: number;
-  rollingResistance: number;
+  /** Factor on the inertia term (1 unfactored). */
+  accelFactor?: number;
+  resistance: RollingResistance;
 }
 
 export interface PoleLoad {
   pole_N: number;
   axle_N: number;
-  /** Rolling resistance force at the ground, N. */
+  /** Rolling resistance force at the ground (soil and hub), N: the pull needed at constant speed. */
   resistance_N: number;
-  working: string;
+  working: WorkingStep[];
 }
 
-const f = (v: number, d = 1) => v.toFixed(d);
-
 export function poleLoad(i: PoleLoadInput): PoleLoad {
-  const m = i.parts.reduce((s, p) => s + p.mass_kg, 0);
-  const hg = mm(i.parts.reduce((s, p) => s + p.mass_kg * p.z_mm, 0) / m);
+  const w = (p: (typeof i.parts)[number]) => p.mass_kg * (p.factor ?? 1);
+  const m = i.parts.reduce((s, p) => s + w(p), 0);
+  const hg = mm(i.parts.reduce((s, p) => s + w(p) * p.z_mm, 0) / m);
   const xa = mm(i.axleX_mm);
   const L = mm(i.yokeX_mm) - xa;
   const hy = mm(i.yokeZ_mm);
-  const a = i.accel_g * G;
-  const Crr = i.rollingResistance;
-  const gravityMoment = i.parts.reduce((s, p) => s + p.mass_kg * G * (mm(p.x_mm) - xa), 0);
+  const a = i.accel_g * G * (i.accelFactor ?? 1);
+  const c = i.resistance.couple_m;
+  const gravityMoment = i.parts.reduce((s, p) => s + w(p) * G * (mm(p.x_mm) - xa), 0);
   const inertiaMoment = m * a * (hy - hg);
-  const resistanceMoment = hy * Crr * m * G;
-  const pole = (gravityMoment + inertiaMoment + resistanceMoment) / (L + hy * Crr);
+  const pole = (gravityMoment + inertiaMoment + c * m * G) / (L + c);
   const axle = m * G - pole;
   const working = [
-    'R_pole = [Σ m_i·g·(x_i − x_a) + m·a·(h_y − h_g) + h_y·C_rr·m·g] / (L + h_y·C_rr)',
-    `       = [${f(gravityMoment)} N·m + ${f(m)} kg × ${f(a, 3)} m/s² × (${f(hy, 3)} − ${f(hg, 3)}) m + ${f(hy, 3)} m × ${Crr} × ${f(m * G)} N] / (${f(L, 3)} m + ${f(hy, 3)} m × ${Crr})`,
-    `       = ${f(pole)} N`,
-    `axle load = m·g − R_pole = ${f(m * G)} − ${f(pole)} = ${f(axle)} N`,
-  ].join('\n');
-  return { pole_N: pole, axle_N: axle, resistance_N: Crr * axle, working };
+    step('R_pole = [Σ m_i·g·(x_i − x_a) + m·a·(h_y − h_g) + c·m·g] / (L + c)', `[${num(gravityMoment)} + ${num(m)} × ${num(a)} × (${num(hy)} − ${num(hg)}) + ${num(c)} × ${num(m * G)}] / (${num(L)} + ${num(c)})`, pole, 'N'),
+    step('axle load = m·g − R_pole', `${num(m * G)} − ${num(pole)}`, axle, 'N'),
+  ];
+  return { pole_N: pole, axle_N: axle, resistance_N: i.resistance.total * axle, working };
 }

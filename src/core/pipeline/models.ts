@@ -10,6 +10,8 @@ import { floorDampingNeeded } from '../ride/damping-tuner.ts';
 import { crewFloorFactor, wheelFactor, yokeIncrease } from '../ride/dynamic-factors.ts';
 import { rideCases } from '../ride/ride-model.ts';
 import { defineModel, withInputs, type ModelDef } from './define-model.ts';
+import { COMBINATION_PARAMS } from '../model/combination-factors.ts';
+import { ROLLING_PARAMS } from '../model/rolling-resistance.ts';
 import { figures } from '../figures.ts';
 import { collectLoads } from '../loads/collect-loads.ts';
 import { reportPlots } from '../plots/report-plots.ts';
@@ -19,6 +21,8 @@ import { buildScene } from '../result/scene-of.ts';
 // models the requested rules and outputs need, each once.
 
 const TIMBER = ['timber-strength.fifth_percentile_z', 'timber-strength.gamma_M'] as const;
+/** The balance reads the rolling resistance and the EQU factors. */
+const BALANCE = [...ROLLING_PARAMS, ...COMBINATION_PARAMS] as const;
 /** The 5th-percentile stiffness of a timber part (the pole's bending spring in the ride model). */
 const TIMBER_STIFFNESS = ['timber-strength.fifth_percentile_z', 'timber-strength.cov_moe', 'timber-strength.min_moisture_credit_pct'] as const;
 /** Everything a run of the ride model reads (the ground's own stiffness and damping follow the specification's ground). */
@@ -27,6 +31,7 @@ const RIDE = [
   'ride.wheel-contact.stiffness_bare', 'ride.wheel-contact.stiffness_tyred', 'ride.wheel-contact.damping_ratio',
   'ride.supports.yoke_pad_stiffness', 'ride.supports.yoke_damping_ratio', 'ride.supports.shear_modulus_ratio', 'ride.supports.legs_stiffness', 'ride.supports.floor_damping_ratio',
   ...TIMBER_STIFFNESS,
+  ...ROLLING_PARAMS,
 ] as const;
 const CUTTING = ['bend_end_allowance_mm', 'bend_good_fraction', 'nave_tenon_fraction', 'felloe_tenon_fraction', 'linchpin_diameter_fraction', 'linchpin_length_factor', 'hide_waste_factor'].map((n) => `cutlist.${n}` as const);
 
@@ -40,7 +45,7 @@ export const massDef = defineModel({
 export const loadCasesDef = defineModel({
   id: 'loadCases',
   needs: [],
-  params: [],
+  params: BALANCE,
   compute: (_, { spec, data }) => loadCases(spec, data),
 });
 
@@ -110,7 +115,7 @@ export const floorBumpDef = defineModel({
 export const memberCasesDef = defineModel({
   id: 'memberCases',
   needs: ['mass', 'loadCases', 'turn', 'bumpFactors'],
-  params: ['load-cases.bump_dynamic_factor', 'load-cases.braking_strut_factor', 'load-cases.stopping_shock_factor', ...TIMBER],
+  params: ['load-cases.bump_dynamic_factor', 'load-cases.stopping_shock_factor', ...TIMBER, ...BALANCE],
   compute: ({ mass, loadCases, turn, bumpFactors }, { spec, data }) => memberCases(spec, data, mass, loadCases, turn, { factor: bumpFactors.wheel, yokeIncrease_N: bumpFactors.yokeIncrease_N }),
 });
 
@@ -124,7 +129,7 @@ export const cuttingDef = defineModel({
 export const lashingDemandsDef = defineModel({
   id: 'lashingDemands',
   needs: ['mass', 'loadCases', 'turn', 'floorBump', 'bumpFactors'],
-  params: ['load-cases.stopping_shock_factor'],
+  params: ['load-cases.stopping_shock_factor', ...ROLLING_PARAMS],
   compute: ({ mass, loadCases, turn, floorBump, bumpFactors }, { spec, data }) => lashingDemands({ spec, data, mass, cases: loadCases, turn, floorBump, bump: bumpFactors.crew }),
 });
 
@@ -154,7 +159,7 @@ export const sceneDef = defineModel({
 export const plotsDef = defineModel({
   id: 'plots',
   needs: ['turn'],
-  params: [],
+  params: BALANCE, // the horse-load plot solves the balance at each crew position
   compute: (m, i) => reportPlots(withInputs(m, i)),
 });
 

@@ -1,8 +1,8 @@
 import { isLimitData, type Param, type RulesData } from '../data/rules-data.ts';
 import { ruleParam } from '../data/param.ts';
-import type { Finding, WorkingStep } from '../findings/finding.ts';
+import type { Finding } from '../findings/finding.ts';
 import { severityRank, type Severity } from '../findings/severity.ts';
-import { formatQuantity } from '../format/number-format.ts';
+import { stepOf, stepText } from '../findings/working.ts';
 import { renderTemplate, type Params } from '../format/template.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import type { Report, ResolvedLimit, Rule, RuleContext } from './define-rule.ts';
@@ -25,17 +25,6 @@ export function resolveLimit(rule: Rule, data: RulesData, name: string): Resolve
     hard: d.hard?.value ?? null,
     sources: [...(d.advisory?.sources ?? []), ...(d.hard?.sources ?? [])],
   };
-}
-
-export function stepOf(s: WorkingStep | string): WorkingStep {
-  return typeof s === 'string' ? { formula: s, substituted: '', result: null, unit: '' } : s;
-}
-
-/** A step as one line: `formula = substituted = result unit`. */
-export function stepText(s: WorkingStep): string {
-  const parts = [s.formula, s.substituted].filter((p) => p !== '');
-  if (s.result !== null) parts.push(formatQuantity(s.result, s.unit));
-  return parts.join(' = ');
 }
 
 const finite = (what: string, v: number | null | undefined, rule: string) => {

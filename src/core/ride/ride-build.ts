@@ -1,3 +1,4 @@
+import { rollingResistance } from '../model/rolling-resistance.ts';
 import type { RulesData } from '../data/rules-data.ts';
 import type { FloorResult } from '../model/floor-result.ts';
 import type { MassModel } from '../model/mass-model.ts';
@@ -133,7 +134,8 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
   });
 
   const speed = which === 'drop' ? 0 : spec.operation.speed_kmh * UNITS.kmh.si;
-  const Crr = data.grounds[spec.operation.ground]?.rolling_resistance.value ?? 0;
+  // The draught's couple about the contact: each part of the rolling resistance with its own arm (design basis, section 3).
+  const couple = rollingResistance(spec, data).couple_m;
   const hy = mm(spec.pole.yoke_height_mm);
   const r = mm(lay.wheelRadius);
   const bump = { height: o.bumpHeight ?? mm(spec.operation.bump_height_mm), length: o.bumpLength ?? mm(spec.operation.bump_length_mm) };
@@ -152,7 +154,7 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
     inputEnd = (lead + env.end) / speed;
     // just past each kink, so a step never starts on its left-hand value
     breaks = [(lead + env.start) / speed + 1e-9, inputEnd + 1e-9];
-    working.push(`road: ${which === 'ridge' ? 'a ridge across both tracks' : 'a bump under the left wheel'}, raised cosine ${f(bump.height * 1000)} mm high and ${f(bump.length * 1000, 0)} mm long, the rigid wheel's envelope (r = ${f(r * 1000, 0)} mm) ${f((env.end - env.start) * 1000, 0)} mm long, at ${spec.operation.speed_kmh} km/h; draught couple h_y·C_rr = ${f(hy, 3)} m × ${Crr}`);
+    working.push(`road: ${which === 'ridge' ? 'a ridge across both tracks' : 'a bump under the left wheel'}, raised cosine ${f(bump.height * 1000)} mm high and ${f(bump.length * 1000, 0)} mm long, the rigid wheel's envelope (r = ${f(r * 1000, 0)} mm) ${f((env.end - env.start) * 1000, 0)} mm long, at ${spec.operation.speed_kmh} km/h; draught couple (h_y − r)·C_s + h_y·C_b = ${f(couple, 4)} m`);
   } else {
     working.push(`drop test: released at rest with every point ${f(spec.operation.drop_height_mm, 0)} mm above its standing position, onto rigid ground`);
   }
@@ -166,7 +168,7 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
     ],
     yoke: { x: mm(spec.pole.yoke_x_mm), k: yoke.k, c: cy, kRoll, cRoll, oneSided: which === 'drop', ramp: Math.max(i.staticCase.pole_load_N, 1) / yoke.k },
     crew,
-    draughtArm: which === 'drop' ? 0 : hy * Crr,
+    draughtArm: which === 'drop' ? 0 : couple,
     road,
   };
   const periods = [

@@ -30,14 +30,14 @@ export const axleMember = defineRule({
         lat > 0
           ? step(`M = N_w·${armName} + F_lat·r`, `${num(c.wheel_N)} × ${num(arm)} + ${num(lat)} × ${num(g.wheelRadius)}`, M, 'N·mm')
           : step(`M = N_w·${armName}`, `${num(c.wheel_N)} × ${num(arm)}`, M, 'N·mm');
-      return strengthCheck(c, mode, M / W, bending, bending.design(c.duration), [moment, step(`σ = M/${Wname}`, `${num(M)} / ${num(W)}`, M / W, 'MPa')]);
+      return strengthCheck(c, mode, M / W, bending, bending.design(c.duration, c.gammaM), [moment, step(`σ = M/${Wname}`, `${num(M)} / ${num(W)}`, M / W, 'MPa')]);
     };
     const checks: CaseCheck[] = ctx.models.memberCases.flatMap((c) => {
       const tau = (g.bearing.shearFactor * c.wheel_N) / g.bearing.area;
       return [
         bendingAt(c, 'bending at the bearing', 'a', g.a, 'W_bearing', g.bearing.W),
         bendingAt(c, 'bending at the nave', 'L_nave/2', g.naveArm, 'W_nave', g.spindle.W),
-        strengthCheck(c, 'shear at the bearing', tau, shear, shear.design(c.duration), [step('τ = 1.5·N_w/A', `${num(g.bearing.shearFactor)} × ${num(c.wheel_N)} / ${num(g.bearing.area)}`, tau, 'MPa')]),
+        strengthCheck(c, 'shear at the bearing', tau, shear, shear.design(c.duration, c.gammaM), [step('τ = 1.5·N_w/A', `${num(g.bearing.shearFactor)} × ${num(c.wheel_N)} / ${num(g.bearing.area)}`, tau, 'MPa')]),
       ];
     });
     ctx.report(

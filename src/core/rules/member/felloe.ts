@@ -38,7 +38,7 @@ export const felloeMember = defineRule({
     const span = (2 * Math.PI * Rm) / w.spokes;
     const S = rectangle(w.felloe.width_mm, w.felloe.depth_mm);
     const checks: CaseCheck[] = ctx.models.memberCases.map((c) => {
-      const fm = bending.design(c.duration);
+      const fm = bending.design(c.duration, c.gammaM);
       const Mc = centreLoadMoment(c.wheel_N, span);
       return strengthCheck(c, 'bending between spokes', Mc / S.W, bending, fm, [step('M = N_w·span/4', `${num(c.wheel_N)} × ${num(span)}/4`, Mc, 'N·mm'), step('σ = M/W', `${num(Mc)} / ${num(S.W)}`, Mc / S.W, 'MPa')]);
     });

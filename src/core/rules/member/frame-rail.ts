@@ -53,13 +53,13 @@ export const frameRailMember = defineRule({
     const T0 = spec.floor_straps.pretension_N;
     const loaded = stat.rails.filter((r) => r.total_N > 0);
     const cases: { info: CaseInfo; pulls: (rail: RailPull) => Pulls }[] = [
-      { info: { id: 'pretension', title: 'strap pretension alone', duration: 'permanent', sourceIds: [], working: `each strap end pulls T_0 on its rail (T_0 = ${num(T0)} N, pitch ${num(pitch)} mm)` }, pulls: (r) => r.pulls.map((p) => ({ ...p, force_N: T0 })) },
-      { info: { id: 'standing', title: 'crew standing (strap-floor model, factor 1)', duration: 'short', sourceIds: [], working: `each strap end's pull from the floor model (${stat.iterations} iterations, residual ${num(stat.residual_N)} N)` }, pulls: (r) => r.pulls },
-      { info: { id: 'bump', title: `bump (strap-floor model, factor ${num(bump.factor)})`, duration: 'instantaneous', sourceIds: bumpFactorSources(data, ctx.models.bumpFactors.crew.from), working: `the floor model with the crew's weight × ${num(bump.factor)} (${bump.factorSource})` }, pulls: (r) => bump.rails.find((b) => b.rail === r.rail)!.pulls },
+      { info: { id: 'pretension', title: 'strap pretension alone', combination: 'characteristic', gammaM: bending.gammaM, duration: 'permanent', sourceIds: [], working: `each strap end pulls T_0 on its rail (T_0 = ${num(T0)} N, pitch ${num(pitch)} mm)` }, pulls: (r) => r.pulls.map((p) => ({ ...p, force_N: T0 })) },
+      { info: { id: 'standing', title: 'crew standing (strap-floor model, factor 1)', combination: 'characteristic', gammaM: bending.gammaM, duration: 'short', sourceIds: [], working: `each strap end's pull from the floor model (${stat.iterations} iterations, residual ${num(stat.residual_N)} N)` }, pulls: (r) => r.pulls },
+      { info: { id: 'rough-ground', title: `rough ground (strap-floor model, factor ${num(bump.factor)})`, combination: 'characteristic', gammaM: bending.gammaM, duration: 'instantaneous', sourceIds: bumpFactorSources(data, ctx.models.bumpFactors.crew.from), working: `the floor model with the crew's weight × ${num(bump.factor)} (${bump.factorSource})` }, pulls: (r) => bump.rails.find((b) => b.rail === r.rail)!.pulls },
     ];
     const checks: CaseCheck[] = [];
     for (const c of cases) {
-      const fm = bending.design(c.info.duration);
+      const fm = bending.design(c.info.duration, c.info.gammaM);
       for (const rail of loaded) {
         const pulls = c.pulls(rail);
         const total = pulls.reduce((sum, p) => sum + p.force_N, 0);

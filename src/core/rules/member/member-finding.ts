@@ -1,4 +1,4 @@
-import type { WorkingStep } from '../../findings/finding.ts';
+import type { Combination, WorkingStep } from '../../findings/finding.ts';
 import type { Params } from '../../format/template.ts';
 import type { DesignValue, TimberStrength } from '../../model/timber/design-strength.ts';
 import type { Duration } from '../../model/timber/load-duration.ts';
@@ -18,6 +18,9 @@ export type Working = WorkingStep | string;
 export interface CaseInfo {
   id: string;
   title: string;
+  /** The load combination (design basis, section 2) and its material factor. */
+  combination: Combination;
+  gammaM: number;
   duration: Duration;
   working: string;
   /** Catalogue ids of the factors the case applies. */
@@ -83,7 +86,7 @@ export function memberReport<M extends string>(i: MemberCheck<M>): Report<'utili
   const working: Working[] = [...i.intro];
   let lastCase = '';
   for (const c of i.checks) {
-    if (c.memberCase.id !== lastCase) working.push(`${c.memberCase.title} [${c.memberCase.duration}]: ${c.memberCase.working}`);
+    if (c.memberCase.id !== lastCase) working.push(`${c.memberCase.title} [${c.memberCase.combination}, ${c.memberCase.duration}]: ${c.memberCase.working}`);
     lastCase = c.memberCase.id;
     working.push(`${c.mode}:`, ...c.steps, step('utilisation = demand / capacity', `${num(c.demand)} / ${num(c.capacity)}`, ratio(c), '1'));
   }
@@ -97,6 +100,7 @@ export function memberReport<M extends string>(i: MemberCheck<M>): Report<'utili
     unit: i.unit,
     against: { limit: 'utilisation', times: gov.capacity },
     load_case: gov.memberCase.id,
+    combination: gov.memberCase.combination,
     fix: gov.demand > limit ? i.fix : PASS_FIX,
     sources: [...i.sources, ...gov.memberCase.sourceIds, ...gov.sources],
     working,

@@ -32,7 +32,7 @@ export const poleMember = defineRule({
     const S = g.section;
     const cases = ctx.models.memberCases.filter((c) => c.id !== 'turn');
     const checks: CaseCheck[] = cases.map((c) => {
-      const fm = bending.design(c.duration);
+      const fm = bending.design(c.duration, c.gammaM);
       const Mr = rootMoment(g, c.pole_N, c.poleAxial_N);
       const sm = Mr / S.W;
       const sa = Math.abs(c.poleAxial_N) / S.area;
@@ -47,7 +47,7 @@ export const poleMember = defineRule({
       let capacity = fm.value;
       if (c.poleAxial_N > 0) {
         // EN 1995-1-1 eq. 6.19: (σ_c/f_c)² + σ_m/f_m ≤ 1, as the bending strength left.
-        const fc = compression.design(c.duration);
+        const fc = compression.design(c.duration, c.gammaM);
         capacity = fm.value * (1 - (sa / fc.value) ** 2);
         steps.push(
           step('σ_c = T/A', `${num(T)} / ${num(S.area)}`, sa, 'MPa'),

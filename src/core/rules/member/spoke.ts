@@ -61,7 +61,7 @@ export const spokeMember = defineRule({
     const crush: CaseCheck[] = [];
     const buckle: CaseCheck[] = [];
     for (const c of ctx.models.memberCases) {
-      const fc = compression.design(c.duration);
+      const fc = compression.design(c.duration, c.gammaM);
       const sigma = c.wheel_N / S.area;
       crush.push(strengthCheck(c, 'crushing along the grain', sigma, compression, fc, [step('σ_c = N_w/A', `${num(c.wheel_N)} / ${num(S.area)}`, sigma, 'MPa')]));
       // The buckling resistance follows the same design strength: k_c·f_c,0,d·A against the wheel load.

@@ -29,7 +29,7 @@ export const yokeMember = defineRule({
     const checks: CaseCheck[] = ctx.models.memberCases
       .filter((c) => c.id !== 'turn')
       .map((c) => {
-        const fm = bending.design(c.duration);
+        const fm = bending.design(c.duration, c.gammaM);
         const wc = w * c.gravityFactor;
         const Mc = centreLoadMoment(c.pole_N, s) + uniformLoadMoment(wc, s);
         return strengthCheck(c, 'bending between the necks', Mc / S.W, bending, fm, [

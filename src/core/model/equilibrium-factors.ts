@@ -1,0 +1,20 @@
+import type { CombinationFactors } from './combination-factors.ts';
+import type { PartMass } from './part-mass.ts';
+
+// The EQU set applied to the yoke's balance (design basis, section 2): about
+// the wheels' contact, a weight ahead of the axle presses the yoke down
+// (stabilising), one behind lifts it (destabilising). Permanent weights take
+// 1.1 where they destabilise and 0.9 where they stabilise; the crew and
+// loads take 1.5 where they destabilise and are left out where they help.
+
+export function equilibriumWeight(p: PartMass, axleX_mm: number, f: CombinationFactors): number {
+  const helps = p.x_mm >= axleX_mm;
+  if (p.variable) return helps ? 0 : f.gammaQdst;
+  return helps ? f.gammaGstb : f.gammaGdst;
+}
+
+/** The inertia's factor: 1.5 where it lifts the yoke (braking with the yoke above the centre of mass), else left out. */
+export function equilibriumInertia(accel_g: number, yokeAboveCg: boolean, f: CombinationFactors): number {
+  const lifts = yokeAboveCg ? accel_g < 0 : accel_g > 0;
+  return lifts ? f.gammaQdst : 0;
+}
