@@ -16,7 +16,7 @@ const kStop = loadFactor(data, 'stopping_shock_factor').value;
 const demandsOf = (raw: unknown) => new Analysis(prepared(raw, data), data).lashingDemands;
 const byId = <T extends { id: string }>(cases: T[], id: string) => cases.find((c) => c.id === id)!;
 // v = 15 km/h = 4.1667 m/s on R_y = 12 m, L = 2.25 m: R_a = √(144 − 5.0625) = 11.787 m,
-// a_lat = v² R_a / R_y² = 1.4211 m/s² (mechanics note, section 4).
+// a_lat = v² R_a / R_y² = 1.4211 m/s² (design basis, section 4).
 const aLat = ((15 / 3.6) ** 2 * Math.sqrt(144 - 2.25 ** 2)) / 144;
 
 describe('lashing demands', () => {
@@ -34,19 +34,24 @@ describe('lashing demands', () => {
     const m = 20 + 8 + 2 * 10 + 9 + 80; // 137 kg
     const axle = d['pole-to-axle'].cases;
     expect(byId(axle, 'draught').along_N).toBeCloseTo(m * 0.2 * G, 9);
-    expect(byId(axle, 'braking').along_N).toBeCloseTo(m * 0.3 * G * kStop, 9);
-    expect(byId(d['pole-to-yoke'].cases, 'braking').along_N).toBeCloseTo(m * 0.3 * G * kStop, 9);
+    expect(byId(axle, 'braking').along_N).toBeCloseTo(m * 0.3 * G, 9);
+    expect(byId(axle, 'stopping-shock').along_N).toBeCloseTo(m * 0.3 * G * kStop, 9);
+    expect(byId(d['pole-to-yoke'].cases, 'stopping-shock').along_N).toBeCloseTo(m * 0.3 * G * kStop, 9);
+    // Fundamental cases take 1.5 on the action, accidental ones 1.0 (EN 1990 eq. 6.10 and 6.11).
+    expect([byId(axle, 'braking').combination, byId(axle, 'braking').gamma]).toEqual(['fundamental', 1.5]);
+    expect([byId(axle, 'stopping-shock').combination, byId(axle, 'stopping-shock').gamma]).toEqual(['accidental', 1]);
+    expect([byId(axle, 'stone').combination, byId(axle, 'stone').gamma]).toEqual(['accidental', 1]);
   });
 
-  it('the bump case multiplies the largest standing pole load', () => {
+  it('the rough-ground case multiplies the largest standing pole load', () => {
     // Moments about the axle, L = 2.25 m: pole 9 kg 1.0 m ahead; the crew at the
     // front of the usable floor (500 − 150 = 350 mm) is 0.1 m ahead: R = 17 g / 2.25.
     const R = (17 * G) / 2.25;
-    expect(byId(d['pole-to-axle'].cases, 'bump').normal_N).toBeCloseTo(kBump * R, 6);
+    expect(byId(d['pole-to-axle'].cases, 'rough-ground').normal_N).toBeCloseTo(kBump * R, 6);
     // At the yoke the yoke's own 4 kg counts too, R_yoke = R + 4 g.
-    expect(byId(d['pole-to-yoke'].cases, 'bump').normal_N).toBeCloseTo(kBump * (R + 4 * G), 6);
+    expect(byId(d['pole-to-yoke'].cases, 'rough-ground').normal_N).toBeCloseTo(kBump * (R + 4 * G), 6);
     // Its sense is not known: all of it is held by the lashing.
-    expect(byId(d['pole-to-axle'].cases, 'bump').held_N).toBeCloseTo(kBump * R, 6);
+    expect(byId(d['pole-to-axle'].cases, 'rough-ground').held_N).toBeCloseTo(kBump * R, 6);
   });
 
   it('in the turn the pole carries the side pull m·a_lat·(x_g − x_a)/L', () => {
@@ -56,15 +61,16 @@ describe('lashing demands', () => {
     expect(byId(d['pole-to-axle'].cases, 'turn').across_N).toBeCloseTo((137 * aLat * (xg - 250)) / 1000 / 2.25, 9);
   });
 
-  it('the box joints carry the box and its crew: inertia in the face, the bump rebound apart', () => {
+  it('the box joints carry the box and its crew: inertia in the face, the rough-ground rebound apart', () => {
     const m = 20 + 80; // the measured box and the crew
     for (const joint of ['pole-to-floor', 'axle-to-floor'] as const) {
       const c = d[joint].cases;
       expect(byId(c, 'draught').along_N).toBeCloseTo(m * 0.2 * G, 9);
-      expect(byId(c, 'braking').shear_N).toBeCloseTo(m * 0.3 * G * kStop, 9);
-      expect(byId(c, 'braking').apart_N).toBe(0); // the weight presses the seat
-      expect(byId(c, 'bump').normal_N).toBeCloseTo(kBump * m * G, 9);
-      expect(byId(c, 'bump').apart_N).toBeCloseTo((kBump - 1) * m * G, 9);
+      expect(byId(c, 'braking').shear_N).toBeCloseTo(m * 0.3 * G, 9);
+      expect(byId(c, 'stopping-shock').shear_N).toBeCloseTo(m * 0.3 * G * kStop, 9);
+      expect(byId(c, 'stopping-shock').apart_N).toBe(0); // the weight presses the seat
+      expect(byId(c, 'rough-ground').normal_N).toBeCloseTo(kBump * m * G, 9);
+      expect(byId(c, 'rough-ground').apart_N).toBeCloseTo((kBump - 1) * m * G, 9);
       expect(byId(c, 'turn').across_N).toBeCloseTo(m * aLat, 9);
     }
   });
@@ -74,8 +80,8 @@ describe('lashing demands', () => {
     const s = handSpec();
     delete s.box.mass_kg;
     s.box.siding_mass_kg = 10;
-    const braking = byId(demandsOf(s)['siding-to-frame'].cases, 'braking');
-    expect(braking.shear_N).toBeCloseTo(10 * 0.3 * G * kStop, 9);
+    const shock = byId(demandsOf(s)['siding-to-frame'].cases, 'stopping-shock');
+    expect(shock.shear_N).toBeCloseTo(10 * 0.3 * G * kStop, 9);
   });
 
   it('the governing case is the largest of the chosen measure', () => {

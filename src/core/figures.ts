@@ -1,4 +1,4 @@
-import { limitLevel } from './data/param.ts';
+import { lateralLimits } from './model/turn-limits.ts';
 import type { ModelView } from './pipeline/define-model.ts';
 import type { Figure } from './result/figure.ts';
 import { G, UNITS } from './units/units.ts';
@@ -54,7 +54,8 @@ function cuttingFigures(a: ModelView<'cutting'>): Record<string, Figure> {
 // steady turn exists, the path radii are reported as 0 (turn.pole-reach says why).
 function turnFigures(a: ModelView<'turn'>): Record<string, Figure> {
   const t = a.turn;
-  const advisory = limitLevel(a.data, 'turn.rollover', 'lateral_fraction', 'advisory');
+  const allowed = lateralLimits(a.data, t).rollover;
+  const advisory = (allowed.advisory ?? allowed.hard)!;
   return {
     ssf: { value: t.ssf, unit: '1' },
     rollover_accel: { value: t.rolloverAccel, unit: 'm/s²' },
@@ -62,6 +63,6 @@ function turnFigures(a: ModelView<'turn'>): Record<string, Figure> {
     inner_wheel_path_radius: { value: t.steady ? t.innerRadius : 0, unit: 'm' },
     lateral_accel_design: { value: t.lateralAccel, unit: 'm/s²' },
     rollover_speed_at_turn: { value: t.steady ? t.rolloverSpeed / UNITS.kmh.si : 0, unit: 'km/h' },
-    min_turn_radius_at_speed: { value: tightestYokeRadius(t.speed, advisory * t.rolloverAccel, t.reach), unit: 'm' },
+    min_turn_radius_at_speed: { value: tightestYokeRadius(t.speed, advisory, t.reach), unit: 'm' },
   };
 }

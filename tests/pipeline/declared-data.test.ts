@@ -37,7 +37,7 @@ describe('declared data', () => {
   it('an advisory level beyond the hard level is refused', () => {
     const limits = structuredClone(rulesData.limits);
     const l = limits['turn.rollover'].lateral_fraction as { advisory: { value: number } };
-    l.advisory.value = 0.9;
-    expect(declaredDataProblems({ ...rulesData, limits }, MODELS, RULES).map((p) => p.message)).toEqual([expect.stringContaining('the advisory level 0.9 lies beyond the hard level 0.75')]);
+    l.advisory.value = 1.1;
+    expect(declaredDataProblems({ ...rulesData, limits }, MODELS, RULES).map((p) => p.message)).toEqual([expect.stringContaining('the advisory level 1.1 lies beyond the hard level 1')]);
   });
 });

@@ -38,10 +38,13 @@ describe('lateral acceleration over speed in the planned turn', () => {
     const [f] = await findingsOf('turn.rollover', handSpec(), {}, rulesData);
     const dot = plot!.lines.find((l) => l.style === 'dots')!;
     expect(dot.x).toEqual([15]);
-    expect(dot.y[0]).toBeCloseTo(f.value!, 10);
-    // The rule prints the advisory limit; the plot draws the same line.
+    // The rule compares 1.5 a_lat with 0.9 g·SSF (EQU); the plot draws the unfactored a_lat and each limit as
+    // the a_lat it allows: level × 0.9 / 1.5 × g·SSF (EN 1990 Table A1.2(A)).
+    expect(dot.y[0]).toBeCloseTo(f.params.lateral as number, 10);
+    expect(f.value!).toBeCloseTo(1.5 * dot.y[0], 10);
     expect(f.severity).toBe('pass');
-    expect(plot!.rules.find((r) => r.label === 'advisory limit, turn.rollover')!.value).toBeCloseTo(f.params.advisory as number, 10);
+    expect(plot!.rules.find((r) => r.label === 'advisory limit, turn.rollover')!.value).toBeCloseTo((f.params.advisory as number) / 1.5, 10);
+    expect(plot!.rules.find((r) => r.label === 'hard limit, turn.rollover')!.value).toBeCloseTo(f.limit! / 1.5, 10);
   });
 
   it('crosses the rollover threshold g·SSF at the rollover speed R_y √(g SSF / R_a)', () => {
@@ -65,11 +68,11 @@ describe('lateral acceleration over speed in the planned turn', () => {
     expect(curve.x.at(-1)).toBeCloseTo(Math.min(60, Math.max(22.5, 1.15 * firstSpeed)), 9);
   });
 
-  it('draws the sliding threshold μg and leaves out a hard sliding line that would lie on it', () => {
+  it('draws the sliding threshold μg and the sliding limits as the a_lat they allow, level × 0.9/1.5 × μg', () => {
     const mu = rulesData.grounds[a.spec.operation.ground].lateral_friction.value;
     expect(plot!.rules.find((r) => r.label === 'sliding threshold μg')!.value).toBeCloseTo(mu * G, 10);
-    expect(limitLevel(rulesData, 'turn.sliding', 'lateral_fraction', 'hard')).toBe(1);
-    expect(plot!.rules.some((r) => r.label === 'hard limit, turn.sliding')).toBe(false);
+    const hard = limitLevel(rulesData, 'turn.sliding', 'lateral_fraction', 'hard');
+    expect(plot!.rules.find((r) => r.label === 'hard limit, turn.sliding')!.value).toBeCloseTo((hard * 0.9 * mu * G) / 1.5, 10);
   });
 
   it('approaches v²/R for a turn far wider than the reach', () => {

@@ -3,13 +3,19 @@ import { G } from '../../src/core/units/units.ts';
 import { deepMerge, findingsOf, fractionHitting, readDemo, rulesData } from '../support/fixtures.ts';
 
 const RULE = 'turn.sliding';
+// Equilibrium (EQU), EN 1990 Table A1.2(A): 1.5 × a_lat against 0.9 × mu·g.
+const GQ = 1.5;
+const GSTB = 0.9;
 
 describe(RULE, () => {
   it('passes at 20 km/h on a 15 m turn on turf', async () => {
     const [f] = await findingsOf(RULE, readDemo('demo-two-crew'));
     expect(f.severity).toBe('pass');
-    expect(f.limit).toBeCloseTo(1.0 * rulesData.grounds.turf.lateral_friction.value * G, 9);
-    expect(f.params.advisory as number).toBeCloseTo(0.7 * rulesData.grounds.turf.lateral_friction.value * G, 9);
+    expect(f.combination).toBe('equilibrium');
+    const muG = rulesData.grounds.turf.lateral_friction.value * G;
+    expect(f.value).toBeCloseTo(GQ * (f.params.lateral as number), 12);
+    expect(f.limit).toBeCloseTo(1.0 * GSTB * muG, 9);
+    expect(f.params.advisory as number).toBeCloseTo(0.8 * GSTB * muG, 9);
   });
 
   it('fails when the turn needs more than the ground gives', async () => {
@@ -21,7 +27,7 @@ describe(RULE, () => {
   it('boundary: equal to the hard limit is within it', async () => {
     const raw = deepMerge(readDemo('demo-two-crew'), { operation: { ground: 'packed-earth' } });
     const [probe] = await findingsOf(RULE, raw);
-    const slide = rulesData.grounds['packed-earth'].lateral_friction.value * G;
+    const slide = GSTB * rulesData.grounds['packed-earth'].lateral_friction.value * G;
     const frac = fractionHitting(probe.value!, slide);
     const [f] = await findingsOf(RULE, raw, { 'lateral_fraction.advisory': frac, 'lateral_fraction.hard': frac });
     expect(f.severity).toBe('pass');

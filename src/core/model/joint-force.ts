@@ -8,6 +8,9 @@
 export interface JointForce {
   id: string;
   title: string;
+  /** The load combination the case is checked in, and the factor on its forces there (design basis, section 2). */
+  combination: 'fundamental' | 'accidental';
+  gamma: number;
   along_N: number;
   across_N: number;
   /** Magnitude of the force normal to the contact face. */
@@ -31,8 +34,13 @@ export interface ForceParts {
 
 const f1 = (v: number) => v.toFixed(1);
 
-/** A joint force from its parts; `lines` say where each part comes from. */
-export function jointForce(id: string, title: string, p: ForceParts, lines: string[]): JointForce {
+/** The combination a joint's case belongs to: the stone and the stopping shock are accidental, the rest fundamental. */
+export function caseCombination(id: string): 'fundamental' | 'accidental' {
+  return id === 'stone' || id === 'stopping-shock' ? 'accidental' : 'fundamental';
+}
+
+/** A joint force from its parts (characteristic, as the action gives them); `lines` say where each part comes from. */
+export function jointForce(id: string, title: string, p: ForceParts, lines: string[], gammaQ = 1.5): JointForce {
   const along = p.along ?? 0;
   const across = p.across ?? 0;
   const normal = Math.abs(p.normal ?? 0);
@@ -43,7 +51,8 @@ export function jointForce(id: string, title: string, p: ForceParts, lines: stri
     `in the contact face √(along² + across²) = √(${f1(along)}² + ${f1(across)}²) = ${f1(shear)} N`,
     `held by the fastening √(along² + across² + apart²) = √(${f1(along)}² + ${f1(across)}² + ${f1(apart)}²) = ${f1(held)} N`,
   ];
-  return { id, title, along_N: along, across_N: across, normal_N: normal, apart_N: apart, shear_N: shear, held_N: held, working: [`${title}:`, ...[...lines, ...sums].map((l) => `  ${l}`)].join('\n') };
+  const combination = caseCombination(id);
+  return { id, title, combination, gamma: combination === 'accidental' ? 1 : gammaQ, along_N: along, across_N: across, normal_N: normal, apart_N: apart, shear_N: shear, held_N: held, working: [`${title}:`, ...[...lines, ...sums].map((l) => `  ${l}`)].join('\n') };
 }
 
 /** The case with the largest value of a measure, or undefined for none. */

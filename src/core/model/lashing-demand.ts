@@ -39,8 +39,10 @@ export interface DemandInput {
   turn: TurnModel;
   /** The strap floor under the bump factor; undefined where no floor model ran. */
   floorBump: FloorResult | undefined;
-  /** The bump factor and its source (the ride model's crew floor factor); without it, the placeholder. */
+  /** The routine rough ground's factor and its source (the ride model's crew floor factor); without it, the placeholder. */
   bump?: { value: number; source: string };
+  /** The stone strike's factor (an accidental case); without it, the routine factor. */
+  stone?: { value: number; source: string };
 }
 
 // Parts of the rolling assembly that are not carried by the box: the running
@@ -55,11 +57,13 @@ const f3 = (v: number) => v.toFixed(3);
 
 interface Factors {
   bump: { value: number; source: string };
+  stone: { value: number; source: string };
   shock: Limit;
 }
 
 export function lashingDemands(i: DemandInput): Record<Joint, JointDemand> {
-  const k: Factors = { bump: i.bump ?? placeholderBump(i.data), shock: loadFactor(i.data, 'stopping_shock_factor') };
+  const bump = i.bump ?? placeholderBump(i.data);
+  const k: Factors = { bump, stone: i.stone ?? bump, shock: loadFactor(i.data, 'stopping_shock_factor') };
   const boxParts = i.mass.parts.filter((p) => p.group === 'rolling' && !RUNNING_GEAR.has(p.part));
   const corners = cornerDemand(i.spec, i.floorBump);
   const siding = i.spec.box.siding_mass_kg;
@@ -130,17 +134,24 @@ function poleCases(joint: 'pole-to-axle' | 'pole-to-yoke', i: DemandInput, k: Fa
     const scale = (at: number, rest: number) => rest + k.shock.value * (at - rest);
     return { title: c.title.replace(/^braking at [^,]+/, `stopping shock at ${(k.shock.value * spec.operation.braking_g).toFixed(2)} g`), pole: scale(c.pole_load_N, still.pole_load_N), yoke: scale(c.yoke_load_N, still.yoke_load_N), axle: scale(c.axle_load_N, still.axle_load_N) };
   });
+  const braking = worst(of('braking').map(asVertical));
+  out.push(jointForce('braking', `braking at ${spec.operation.braking_g} g`, { along: m * B, normal: vertical(braking) }, [
+    `along = m·b = ${f1(m)} kg × ${f3(B)} m/s² = ${f1(m * B)} N (rolling resistance, which helps, not counted)`,
+    `normal = ${vText(braking)}`,
+  ]));
   const brk = worst(shocked);
   const hold = m * B * k.shock.value;
-  out.push(jointForce('braking', `braking at ${spec.operation.braking_g} g with the stopping shock`, { along: hold, normal: vertical(brk) }, [
+  out.push(jointForce('stopping-shock', `stopping shock, ${k.shock.value} × the braking`, { along: hold, normal: vertical(brk) }, [
     `along = m·b·k_stop = ${f1(m)} kg × ${f3(B)} m/s² × ${k.shock.value} = ${f1(hold)} N (rolling resistance, which helps, not counted)`,
     `with R = R_standing + k_stop × (R_braking − R_standing), normal = ${vText(brk)}`,
   ]));
 
   const stat = worst(standing.map(asVertical));
-  out.push(jointForce('bump', `bump, standing load × ${k.bump.value.toFixed(2)}`, { normal: k.bump.value * vertical(stat) }, [
-    `normal = k_bump × ${vText(stat)}: ${k.bump.value.toFixed(3)} × ${f1(vertical(stat))} = ${f1(k.bump.value * vertical(stat))} N`,
-  ]));
+  for (const [id, phi, name] of [['rough-ground', k.bump, 'rough ground'], ['stone', k.stone, 'stone strike']] as const) {
+    out.push(jointForce(id, `${name}, standing load × ${phi.value.toFixed(2)}`, { normal: phi.value * vertical(stat) }, [
+      `normal = φ × ${vText(stat)}: ${phi.value.toFixed(3)} × ${f1(vertical(stat))} = ${f1(phi.value * vertical(stat))} N`,
+    ]));
+  }
 
   if (turn.steady && turn.lateralAccel > 0) {
     const placed = asVertical(i.cases.find((c) => c.id === 'static')!);
@@ -169,15 +180,18 @@ function carriedCases(c: Carried, i: DemandInput, k: Factors): JointForce[] {
   const A = spec.operation.acceleration_g * G;
   const B = spec.operation.braking_g * G;
   const seated = [`normal = m·g = ${f1(c.kg)} kg × ${G} = ${f1(W)} N, pressing the seat (apart 0)`];
-  const kb = k.bump.value;
+  const bumped = (id: 'rough-ground' | 'stone', phi: { value: number }, name: string) =>
+    jointForce(id, `${name}, weight × ${phi.value.toFixed(2)}`, { normal: phi.value * W, apart: Math.max(0, phi.value - 1) * W }, [
+      c.basis,
+      `normal = φ·m·g = ${phi.value.toFixed(3)} × ${f1(c.kg)} kg × ${G} = ${f1(phi.value * W)} N, pressing the seat`,
+      `apart = (φ − 1)·m·g = ${f1(Math.max(0, phi.value - 1))} × ${f1(W)} = ${f1(Math.max(0, phi.value - 1) * W)} N (the rebound, the weight not counted off)`,
+    ]);
   const out: JointForce[] = [
     jointForce('draught', `draught, accelerating at ${spec.operation.acceleration_g} g`, { along: c.kg * A, normal: W, apart: 0 }, [c.basis, `along = m·a = ${f1(c.kg)} kg × ${f3(A)} m/s² = ${f1(c.kg * A)} N`, ...seated]),
-    jointForce('braking', `braking at ${spec.operation.braking_g} g with the stopping shock`, { along: c.kg * B * k.shock.value, normal: W, apart: 0 }, [c.basis, `along = m·b·k_stop = ${f1(c.kg)} kg × ${f3(B)} m/s² × ${k.shock.value} = ${f1(c.kg * B * k.shock.value)} N`, ...seated]),
-    jointForce('bump', `bump, weight × ${kb.toFixed(2)}`, { normal: kb * W, apart: Math.max(0, kb - 1) * W }, [
-      c.basis,
-      `normal = k_bump·m·g = ${kb.toFixed(3)} × ${f1(c.kg)} kg × ${G} = ${f1(kb * W)} N, pressing the seat`,
-      `apart = (k_bump − 1)·m·g = ${f1(Math.max(0, kb - 1))} × ${f1(W)} = ${f1(Math.max(0, kb - 1) * W)} N (the rebound, the weight not counted off)`,
-    ]),
+    jointForce('braking', `braking at ${spec.operation.braking_g} g`, { along: c.kg * B, normal: W, apart: 0 }, [c.basis, `along = m·b = ${f1(c.kg)} kg × ${f3(B)} m/s² = ${f1(c.kg * B)} N`, ...seated]),
+    jointForce('stopping-shock', `stopping shock, ${k.shock.value} × the braking`, { along: c.kg * B * k.shock.value, normal: W, apart: 0 }, [c.basis, `along = m·b·k_stop = ${f1(c.kg)} kg × ${f3(B)} m/s² × ${k.shock.value} = ${f1(c.kg * B * k.shock.value)} N`, ...seated]),
+    bumped('rough-ground', k.bump, 'rough ground'),
+    bumped('stone', k.stone, 'stone strike'),
   ];
   if (turn.steady && turn.lateralAccel > 0) {
     out.push(jointForce('turn', `design turn at ${spec.operation.speed_kmh} km/h`, { across: c.kg * turn.lateralAccel, normal: W, apart: 0 }, [c.basis, `across = m·a_lat = ${f1(c.kg)} kg × ${f3(turn.lateralAccel)} m/s² = ${f1(c.kg * turn.lateralAccel)} N`, ...seated]));

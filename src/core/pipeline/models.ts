@@ -138,7 +138,7 @@ export const lashingDemandsDef = defineModel({
 export const figuresDef = defineModel({
   id: 'figures',
   needs: ['mass', 'loadCases', 'staticCase', 'turn', 'floorStatic', 'floorBump', 'ride', 'bumpFactors', 'cutting'],
-  params: TIMBER_STIFFNESS, // the pole's Euler load
+  params: [...TIMBER_STIFFNESS, ...COMBINATION_PARAMS], // the pole's Euler load; the turn's limits in equilibrium
   compute: (m, i) => figures(withInputs(m, i)),
 });
 
@@ -159,7 +159,7 @@ export const sceneDef = defineModel({
 export const plotsDef = defineModel({
   id: 'plots',
   needs: ['turn'],
-  params: BALANCE, // the horse-load plot solves the balance at each crew position
+  params: BALANCE, // the horse-load plot solves the balance at each crew position; the turn's limits in equilibrium
   compute: (m, i) => reportPlots(withInputs(m, i)),
 });
 

@@ -4,7 +4,7 @@ import { rollover } from '../rules/turn/rollover.ts';
 import { sliding } from '../rules/turn/sliding.ts';
 import { UNITS } from '../units/units.ts';
 import type { PlotData } from './plot-data.ts';
-import { limitLevel } from '../data/param.ts';
+import { lateralLimits } from '../model/turn-limits.ts';
 
 // Lateral acceleration at the axle over team speed for the planned turn
 // (mechanics note, section 4: a = v² R_a / R_y²), against the rollover
@@ -27,8 +27,9 @@ export function turnSpeedPlot(t: TurnModel, data: RulesData): PlotData | null {
   const firstSpeed = t.yokeRadius * Math.sqrt(first / t.axleRadius);
   const top = Math.min(MOST_SPAN * t.speed, Math.max(LEAST_SPAN * t.speed, PAST_THRESHOLD * firstSpeed));
   const v = Array.from({ length: TURN_SPEED_SAMPLES }, (_, i) => (top * i) / (TURN_SPEED_SAMPLES - 1));
-  const fraction = (ruleId: string, level: 'advisory' | 'hard') => limitLevel(data, ruleId, 'lateral_fraction', level);
-  const slideHard = fraction(sliding.id, 'hard');
+  // Each limit as the lateral acceleration it allows, unfactored (the checks themselves are in equilibrium, EQU).
+  const allowed = lateralLimits(data, t);
+  const line = (label: string, value: number | null, kind: 'hard' | 'advisory') => (value === null ? [] : [{ label, axis: 'y' as const, value, kind }]);
   return {
     id: 'turn-speed',
     title: `Lateral acceleration over speed on the ${t.yokeRadius} m turn`,
@@ -41,12 +42,11 @@ export function turnSpeedPlot(t: TurnModel, data: RulesData): PlotData | null {
     ],
     rules: [
       { label: 'rollover threshold g·SSF', axis: 'y', value: t.rolloverAccel, kind: 'threshold' },
-      { label: `hard limit, ${rollover.id}`, axis: 'y', value: fraction(rollover.id, 'hard') * t.rolloverAccel, kind: 'hard' },
-      { label: `advisory limit, ${rollover.id}`, axis: 'y', value: fraction(rollover.id, 'advisory') * t.rolloverAccel, kind: 'advisory' },
+      ...line(`hard limit, ${rollover.id}`, allowed.rollover.hard, 'hard'),
+      ...line(`advisory limit, ${rollover.id}`, allowed.rollover.advisory, 'advisory'),
       { label: 'sliding threshold μg', axis: 'y', value: t.slideAccel, kind: 'threshold' },
-      // At a fraction of one the hard limit is the threshold line itself.
-      ...(slideHard === 1 ? [] : [{ label: `hard limit, ${sliding.id}`, axis: 'y' as const, value: slideHard * t.slideAccel, kind: 'hard' as const }]),
-      { label: `advisory limit, ${sliding.id}`, axis: 'y', value: fraction(sliding.id, 'advisory') * t.slideAccel, kind: 'advisory' },
+      ...line(`hard limit, ${sliding.id}`, allowed.sliding.hard, 'hard'),
+      ...line(`advisory limit, ${sliding.id}`, allowed.sliding.advisory, 'advisory'),
     ],
   };
 }

@@ -33,6 +33,7 @@ export const axlePosition = defineRule({
       severity: 'info',
       sources: trial.sources,
       load_case: 'static',
+      combination: 'characteristic',
       fix: 'Move the axle towards the floor centre to take weight off the horses, towards the rear edge to put weight on them.',
       working: [
         step('x_g − x_a', `${num(rolling.x_mm, 'mm')} − ${num(spec.axle.x_mm, 'mm')}`, d, 'mm'),

@@ -32,6 +32,8 @@ export const horseLoad = defineRule({
         unit: 'N',
         against: { limit: 'load_fraction', times: weight },
         load_case: c.id,
+        // The limit is a share of the horse's weight under the loads as they are.
+        combination: 'characteristic',
         fix: 'Move the axle forward (towards the floor centre), move the crew or load back, or lighten the pole and yoke; confirm any limit with an equine professional.',
         working: [
           ...c.working.split('\n'),

@@ -24,19 +24,30 @@ export const lashingText = (l: Lashing) => `${l.wraps} wraps of ${l.material} ${
 
 // The cases of the joint forces by their ids, in words without numbers (the
 // titles carry the factors; the working shows them).
-const CASE_NAMES: Readonly<Record<string, string>> = { draught: 'draught', braking: 'braking with the stopping shock', bump: 'bump', turn: 'the design turn' };
+const CASE_NAMES: Readonly<Record<string, string>> = { draught: 'draught', braking: 'braking', 'stopping-shock': 'the stopping shock', 'rough-ground': 'rough ground', stone: 'the stone strike', turn: 'the design turn' };
 
 /** The governing case in words for a message; the corners are loaded over the bump. */
 export const caseName = (d: JointDemand, gov: JointForce): string => (d.joint === 'frame-corners' ? `${gov.id} corner over the bump` : (CASE_NAMES[gov.id] ?? gov.id));
 
 /** The load case a joint's governing force belongs to: the corners are loaded in the bump case only. */
-export const loadCaseOf = (d: JointDemand, gov: JointForce | undefined): string | null => (gov === undefined ? null : d.joint === 'frame-corners' ? 'bump' : gov.id);
+export const loadCaseOf = (d: JointDemand, gov: JointForce | undefined): string | null => (gov === undefined ? null : d.joint === 'frame-corners' ? 'rough-ground' : gov.id);
+
+/** A case's design value of a measure: the force times the case's factor (1.5 fundamental, 1.0 accidental). */
+export const designValue = (c: JointForce, measure: 'shear_N' | 'held_N') => c.gamma * c[measure];
+
+/** The case with the largest design value of a measure, or undefined for none. */
+export function governingDesign(cases: readonly JointForce[], measure: 'shear_N' | 'held_N'): JointForce | undefined {
+  return cases.reduce<JointForce | undefined>((w, c) => (w === undefined || designValue(c, measure) > designValue(w, measure) ? c : w), undefined);
+}
 
 /** The governing case's own working, then every case's value of the measure, so it can be seen in context. */
 export function forceWorking(d: JointDemand, gov: JointForce | undefined, measure: 'shear_N' | 'held_N'): (WorkingStep | string)[] {
   if (!gov) return ['no load reaches this joint'];
   const what = measure === 'shear_N' ? 'force in the contact face' : 'force held by the fastening';
-  return [...gov.working.split('\n'), ...d.cases.map((c) => step(`${what}, ${c.title}`, '', c[measure], 'N'))];
+  return [
+    ...gov.working.split('\n'),
+    ...d.cases.map((c) => step(`design ${what}, ${c.title} (${c.combination}, × ${num(c.gamma)})`, `${num(c.gamma)} × ${num(c[measure])}`, designValue(c, measure), 'N')),
+  ];
 }
 
 /** Ids of the sources of the load factors the joint forces use: the bump factor (the ride model's, or the placeholder) and the stopping shock. */

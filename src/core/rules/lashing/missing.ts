@@ -1,9 +1,8 @@
-import { governing } from '../../model/joint-force.ts';
 import { JOINTS } from '../../model/lashing-demand.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num } from '../../pipeline/step.ts';
 import { jointNeed } from './joint-needs.ts';
-import { bumpLine, caseName, demandSourceIds, forceWorking, jointSubject, lashingText, loadCaseOf } from './lashed-joint.ts';
+import { bumpLine, caseName, demandSourceIds, designValue, forceWorking, governingDesign, jointSubject, lashingText, loadCaseOf } from './lashed-joint.ts';
 
 export const lashingMissing = defineRule({
   id: 'lashing.missing',
@@ -29,14 +28,15 @@ export const lashingMissing = defineRule({
       const lashing = spec.lashings.find((l) => l.joint === joint);
       if (need.level === 'none' && !lashing) continue;
       const d = ctx.models.lashingDemands[joint];
-      const gov = d.unknown === null ? governing(d.cases, 'held_N') : undefined;
+      const gov = d.unknown === null ? governingDesign(d.cases, 'held_N') : undefined;
       const common = {
         subject: jointSubject(joint),
         label: `${joint} joint`,
-        value: gov?.held_N ?? null,
+        value: gov ? designValue(gov, 'held_N') : null,
         unit: 'N',
         sources: demandSourceIds(ctx.data, bump),
         load_case: loadCaseOf(d, gov),
+        combination: gov?.combination ?? null,
       };
       const working = [
         `${joint}: ${d.where}`,

@@ -1,14 +1,13 @@
-import { governing } from '../../model/joint-force.ts';
 import { slipCapacity } from '../../model/lashing-capacity.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
 import { withinLimit } from '../within-limit.ts';
-import { bumpLine, caseName, DEMAND_UNKNOWN, demandSourceIds, forceWorking, jointSubject, lashingLabel, lashingText, loadCaseOf, loadedLashings } from './lashed-joint.ts';
+import { bumpLine, caseName, DEMAND_UNKNOWN, demandSourceIds, designValue, forceWorking, governingDesign, jointSubject, lashingLabel, lashingText, loadCaseOf, loadedLashings } from './lashed-joint.ts';
 
 export const lashingSlip = defineRule({
   id: 'lashing.slip',
   title: 'Lashed joints sliding',
-  checks: "Each lashed joint's largest force in the contact face against the friction of the clamp its wraps make, mu × 2 n T_pre, with the builder's estimated pretension.",
+  checks: "Each lashed joint's largest design force in the contact face (× 1.5 in the fundamental combination, × 1.0 for the stone and the stopping shock) against the friction of the clamp its wraps make, mu × 2 n T_pre, with the builder's estimated pretension.",
   kind: 'check',
   method: ['design-basis-lashings'],
   needs: ['lashingDemands', 'bumpFactors'],
@@ -25,8 +24,8 @@ export const lashingSlip = defineRule({
     const bump = ctx.models.bumpFactors.crew;
     for (const { l, d } of loadedLashings(ctx.spec.lashings, ctx.models.lashingDemands, (r) => ctx.report(r))) {
       const capacity = slipCapacity(mu.value, l.wraps, l.pretension_N);
-      const gov = governing(d.cases, 'shear_N');
-      const V = gov?.shear_N ?? 0;
+      const gov = governingDesign(d.cases, 'shear_N');
+      const V = gov ? designValue(gov, 'shear_N') : 0;
       const level = (name: string, v: number | null) => (v === null ? [] : [step(`${name} limit = fraction × clamp friction`, `${num(v)} × ${num(capacity)}`, v * capacity, 'N')]);
       ctx.report({
         subject: jointSubject(l.joint),
@@ -38,6 +37,7 @@ export const lashingSlip = defineRule({
         against: { limit: 'utilisation', times: capacity },
         sources: [...mu.sources, ...demandSourceIds(ctx.data, bump)],
         load_case: loadCaseOf(d, gov),
+        combination: gov?.combination ?? null,
         fix: withinLimit(V, lim, capacity)
           ? 'None needed; the clamp relies on the pretension: retighten leather that has stretched.'
           : 'Add wraps or lay them tighter (rawhide laid wet shrinks tight as it dries), notch or peg the joint so it cannot slide, or measure the friction of your own timber.',
@@ -45,7 +45,7 @@ export const lashingSlip = defineRule({
           `${l.joint}: ${d.where}; ${lashingText(l)} at an estimated ${num(l.pretension_N, 'N')} N each`,
           bumpLine(bump),
           ...forceWorking(d, gov, 'shear_N'),
-          step('V, the largest force in the contact face', '', V, 'N'),
+          step('V_d, the largest design force in the contact face', '', V, 'N'),
           step('clamp friction = mu·2·n·T_pre', `${num(mu.value)} × 2 × ${l.wraps} × ${num(l.pretension_N)}`, capacity, 'N'),
           "the friction of the members' own weight on each other is not counted, the safe side: a bump unloads it",
           ...level('advisory', lim.advisory),

@@ -27,6 +27,7 @@ export const innerWheel = defineRule({
       unit: 'm',
       against: { limit: 'inner_radius_m' },
       load_case: 'turn',
+      combination: null,
       fix: 'Plan a wider turn; a turn this tight can only be made at a walk, with the inner wheel dragged round.',
       working: [
         step('R_inner = R_a − t/2', `${num(t.axleRadius)} − ${num(t.track)}/2`, t.innerRadius, 'm'),

@@ -26,6 +26,7 @@ export const poleReach = defineRule({
       unit: 'm',
       against: { limit: 'margin_m' },
       load_case: 'turn',
+      combination: null,
       fix: 'Plan a wider turn, or shorten the pole (move the yoke back or the axle forward).',
       working: [
         step('L = x_y − x_a (horizontal axle-to-yoke reach)', '', t.reach, 'm'),

@@ -30,6 +30,7 @@ export const wheelLoad = defineRule({
       unit: 'of static',
       against: { limit: 'inner_share' },
       load_case: 'turn',
+      combination: 'characteristic',
       fix: 'Slow down or widen the turn; widen the track or lower the crew. The member rules use these loads for the design turn.',
       working: [
         step('dN = m·a_lat·h_g / t', `${num(t.mass)} × ${num(t.lateralAccel)} × ${num(t.cgHeight)} / ${num(t.track)}`, t.loadTransfer, 'N'),
