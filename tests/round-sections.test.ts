@@ -144,7 +144,7 @@ describe('one form of section, no more and no less', () => {
   });
 
   it("the form messages' codes are their own: none is a code of the shared table", () => {
-    const shared = new Set(Object.values(MESSAGES).map((m) => m.code));
+    const shared = new Set<number>(Object.values(MESSAGES).map((m) => m.code));
     const own = Object.values(FORM_MESSAGES).map((m) => m.code);
     expect(own.filter((c) => shared.has(c))).toEqual([]);
     expect(new Set(own).size).toBe(own.length);
