@@ -1,12 +1,13 @@
 import type { RulesData } from '../data/rules-data.ts';
 import type { Layout } from '../model/layout.ts';
+import { axleBar } from '../model/spec-sections.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { cutlistFactor } from './cutlist-factors.ts';
 import { fmt, prism, type PartDemand } from './part-demand.ts';
 
 // Axle, linchpins, pole and yoke. The pole's length is its developed centre
 // line (straight run under the floor, the bend, the rise to the yoke), as in
-// the mass model.
+// the mass model. A round axle is listed by its diameter.
 
 export function draughtParts(spec: CheckedSpecification, data: RulesData, lay: Layout): PartDemand[] {
   const { axle, pole, yoke } = spec;
@@ -15,18 +16,26 @@ export function draughtParts(spec: CheckedSpecification, data: RulesData, lay: L
     const s = prism(length, width, thickness);
     return { part, quantity: 1, species: p.species, grade: p.grade ?? spec.stock.grade, orientation, finished: s.size, blank: s.size, volume_mm3: s.volume, volumeBasis: `${fmt(length)} × ${fmt(width)} × ${fmt(thickness)} mm`, steamBent: false, round: false };
   };
-  const out = [straight('axle', axle, axle.length_mm, axle.width_mm, axle.height_mm)];
+  const ab = axleBar(spec);
+  const axleRow = straight(ab.round ? `axle, round bar ${ab.width} mm diameter` : 'axle', axle, axle.length_mm, ab.width, ab.depth);
+  if (ab.round) {
+    axleRow.round = true;
+    axleRow.volume_mm3 = axle.length_mm * ab.area;
+    axleRow.volumeBasis = `round, π/4 × ${fmt(ab.width)}² × ${fmt(axle.length_mm)} mm`;
+    axleRow.blankBasis = `turned or shaved round from a square billet ${ab.width} mm on the side`;
+  }
+  const out = [axleRow];
 
   const dFrac = cutlistFactor(data, 'linchpin_diameter_fraction');
   const lFactor = cutlistFactor(data, 'linchpin_length_factor');
-  const d = dFrac.value * Math.min(axle.width_mm, axle.height_mm);
-  const L = lFactor.value * axle.height_mm;
+  const d = dFrac.value * Math.min(ab.width, ab.depth);
+  const L = lFactor.value * ab.depth;
   out.push({
     ...straight('linchpin', axle, L, d, d),
     quantity: 2,
     round: true,
     volume_mm3: (Math.PI / 4) * d * d * L,
-    volumeBasis: `round, π/4 × ${fmt(d)}² × ${fmt(L)} mm: diameter ${dFrac.value} × the axle's smaller side ${Math.min(axle.width_mm, axle.height_mm)} mm (${dFrac.source}); length ${lFactor.value} × the axle height ${axle.height_mm} mm (${lFactor.source}); same species as the axle (an assumption: an iron pin serves as well)`,
+    volumeBasis: `round, π/4 × ${fmt(d)}² × ${fmt(L)} mm: diameter ${dFrac.value} × the axle's smaller side ${Math.min(ab.width, ab.depth)} mm (${dFrac.source}); length ${lFactor.value} × the axle height ${ab.depth} mm (${lFactor.source}); same species as the axle (an assumption: an iron pin serves as well)`,
   });
 
   if (!lay.pole.ok) throw new Error('the pole path has no solution; the specification checks should have refused it');

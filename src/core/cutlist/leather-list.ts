@@ -2,6 +2,7 @@ import type { RulesData } from '../data/rules-data.ts';
 import { jointPlace, lashingLength, LASHING_TAIL_MM } from '../model/lashing-geometry.ts';
 import type { Layout } from '../model/layout.ts';
 import { strapRuns } from '../model/strap-runs.ts';
+import { tyreOf } from '../model/tyre.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { cutlistFactor, usableHide } from './cutlist-factors.ts';
 import type { HideNeed, LeatherItem } from './cutting-result.ts';
@@ -47,17 +48,18 @@ export function leatherList(spec: CheckedSpecification, data: RulesData, lay: La
       basis: `(${l.wraps} wraps${anchor ? ` + 2 ends × ${anchor} anchor turns, each taken at the wrap's perimeter, the safe side` : ''}) × ${fmt(place.wrapPerimeter)} mm round both members + 2 tails × ${LASHING_TAIL_MM} mm (common practice) = ${fmt(length)} mm; a strip this long is cut spirally round the hide or joined (common practice)`,
     });
   }
-  const tyre = spec.wheels.tyre;
-  if (tyre && wheel.tyreLength !== null) {
+  // An iron tyre is the smith's work, not cut from a hide: the wheel setting-out gives its length.
+  const tyre = tyreOf(spec);
+  if (tyre !== null && tyre.kind === 'rawhide' && wheel.tyreLength !== null) {
     items.push({
       item: 'tyre',
       material: tyre.material,
       quantity: 2,
-      width_mm: tyre.width_mm,
-      thickness_mm: tyre.thickness_mm,
+      width_mm: tyre.width,
+      thickness_mm: tyre.thickness,
       length_mm: wheel.tyreLength,
-      area_m2: 2 * wheel.tyreLength * tyre.width_mm * M2_PER_MM2,
-      basis: `one a wheel, π × (${spec.wheels.diameter_mm} − ${tyre.thickness_mm}) = ${fmt(wheel.tyreLength)} mm at mid-thickness (see the wheel setting-out)`,
+      area_m2: 2 * wheel.tyreLength * tyre.width * M2_PER_MM2,
+      basis: `one a wheel, π × (${spec.wheels.diameter_mm} − ${tyre.thickness}) = ${fmt(wheel.tyreLength)} mm at mid-thickness (see the wheel setting-out)`,
     });
   }
   return { items, hides: hideNeeds(items, data) };

@@ -1,5 +1,6 @@
 import type { RulesData } from '../data/rules-data.ts';
 import type { Layout } from '../model/layout.ts';
+import { tyreOf } from '../model/tyre.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { cutlistFactor } from './cutlist-factors.ts';
 import { fmt } from './part-demand.ts';
@@ -59,7 +60,8 @@ export function wheelGeometry(spec: CheckedSpecification, data: RulesData, lay: 
   const lcm = (n * p) / gcd(n, p);
   const offset = 180 / lcm;
   const joints = Array.from({ length: p }, (_, j) => offset + (j * 360) / p);
-  const t = w.tyre?.thickness_mm;
+  const tyre = tyreOf(spec);
+  const t = tyre === null ? undefined : tyre.thickness;
   const tyreLength = t === undefined ? null : Math.PI * (w.diameter_mm - t);
   const lines = [
     `undished wheel, spokes in one plane; angles clockwise on the wheel face from the centre line of spoke 1`,
@@ -76,7 +78,9 @@ export function wheelGeometry(spec: CheckedSpecification, data: RulesData, lay: 
     `felloe joints and their dowels (at mid-depth, radius ${fmt(lay.felloeInner + w.felloe.depth_mm / 2)} mm) at 180°/lcm(${n}, ${p}) = ${fmt(offset, 3)}° + j × 360°/${p}, ${fmt(offset, 3)}° from the nearest spoke${n % p === 0 ? ', midway between two spokes' : ` (${n} spokes do not divide among ${p} pieces evenly)`}`,
     t === undefined
       ? 'no tyre'
-      : `tyre cut to its mid-thickness circumference π (D − t) = π × (${w.diameter_mm} − ${t}) = ${fmt(tyreLength!)} mm, the length a strip keeps when bent round (rawhide laid on wet shrinks tight as it dries); no lap or lacing allowance included`,
+      : tyre!.kind === 'iron'
+        ? `iron tyre: its mid-thickness circumference π (D − t) = π × (${w.diameter_mm} − ${t}) = ${fmt(tyreLength!)} mm as it sits on the wheel; the smith forges it shorter by the shrink allowance, which is not included`
+        : `tyre cut to its mid-thickness circumference π (D − t) = π × (${w.diameter_mm} − ${t}) = ${fmt(tyreLength!)} mm, the length a strip keeps when bent round (rawhide laid on wet shrinks tight as it dries); no lap or lacing allowance included`,
   ];
   return {
     tread: lay.wheelRadius,

@@ -1,4 +1,5 @@
 import type { CheckedSpecification } from '../spec/spec.types.ts';
+import { frameBar } from './spec-sections.ts';
 
 // The steam-bent parts of a build and the numbers the bend check needs
 // (design basis, section 6). The thickness is the part's dimension in the
@@ -33,7 +34,8 @@ export function bentParts(spec: CheckedSpecification): BentPart[] {
   }
   const frame = spec.box.floor.frame;
   if (frame.bend_radius_mm !== undefined) {
-    out.push({ id: 'frame', part: 'floor frame front rail', key: 'box.floor.frame.bend_radius_mm', species: frame.species, givenRadius: frame.bend_radius_mm, measuredOn: 'centre line', thickness: frame.width_mm, thicknessName: 'width in plan', innerRadius: frame.bend_radius_mm - frame.width_mm / 2, strap: frame.bend_strap });
+    const bar = frameBar(spec);
+    out.push({ id: 'frame', part: 'floor frame front rail', key: 'box.floor.frame.bend_radius_mm', species: frame.species, givenRadius: frame.bend_radius_mm, measuredOn: 'centre line', thickness: bar.width, thicknessName: bar.round ? 'diameter' : 'width in plan', innerRadius: frame.bend_radius_mm - bar.width / 2, strap: frame.bend_strap });
   }
   return out;
 }

@@ -1,5 +1,7 @@
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { polePath, type PolePathResult } from './pole-path.ts';
+import { axleBar, frameBar } from './spec-sections.ts';
+import { tyreThickness } from './tyre.ts';
 
 // Heights and lengths of the assembly in the side elevation, in mm, derived
 // once from the specification. The floor's inner span runs x = 0..depth; the
@@ -24,15 +26,16 @@ export interface Layout {
 }
 
 export function stackHeight(spec: Pick<CheckedSpecification, 'wheels' | 'axle' | 'pole' | 'box'>): number {
-  return spec.wheels.diameter_mm / 2 + spec.axle.height_mm / 2 + spec.pole.height_mm + spec.box.floor.frame.thickness_mm;
+  return spec.wheels.diameter_mm / 2 + axleBar(spec).depth / 2 + spec.pole.height_mm + frameBar(spec).depth;
 }
 
 export function layout(spec: CheckedSpecification): Layout {
   const r = spec.wheels.diameter_mm / 2;
   const floorTopZ = spec.box.floor.height_mm;
-  const frameZ = floorTopZ - spec.box.floor.frame.thickness_mm / 2;
-  const poleZ = floorTopZ - spec.box.floor.frame.thickness_mm - spec.pole.height_mm / 2;
-  const felloeOuter = r - (spec.wheels.tyre?.thickness_mm ?? 0);
+  const frameDepth = frameBar(spec).depth;
+  const frameZ = floorTopZ - frameDepth / 2;
+  const poleZ = floorTopZ - frameDepth - spec.pole.height_mm / 2;
+  const felloeOuter = r - tyreThickness(spec);
   const felloeInner = felloeOuter - spec.wheels.felloe.depth_mm;
   return {
     wheelRadius: r,

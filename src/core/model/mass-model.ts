@@ -5,6 +5,8 @@ import { speciesDensity } from './species-density.ts';
 import { strapRuns } from './strap-runs.ts';
 import { layout, type Layout } from './layout.ts';
 import { jointPlace, lashingLength } from './lashing-geometry.ts';
+import { axleBar, frameBar } from './spec-sections.ts';
+import { tyreMass } from './tyre-mass.ts';
 
 // Mass and centre of mass of every part (mechanics note, section 2). Lengths
 // in mm, volumes in m^3, masses in kg.
@@ -47,7 +49,8 @@ export function massModel(spec: CheckedSpecification, data: RulesData): MassMode
 
   const parts: PartMass[] = [];
   parts.push(...boxParts(spec, data, lay, timber));
-  parts.push(measured(timber('axle', spec.axle.species, spec.axle.length_mm * spec.axle.width_mm * spec.axle.height_mm, { x: spec.axle.x_mm, y: 0, z: lay.axleZ }, 'rolling', `${spec.axle.length_mm} × ${spec.axle.width_mm} × ${spec.axle.height_mm} mm`), spec.axle.mass_kg));
+  const axle = axleBar(spec);
+  parts.push(measured(timber('axle', spec.axle.species, spec.axle.length_mm * axle.area, { x: spec.axle.x_mm, y: 0, z: lay.axleZ }, 'rolling', axle.round ? `${spec.axle.length_mm} mm × π/4 × ${axle.width}² mm²` : `${spec.axle.length_mm} × ${axle.width} × ${axle.depth} mm`), spec.axle.mass_kg));
   const wheel = wheelMass(spec, data, lay, rho);
   for (const side of [1, -1]) {
     const at = { x: spec.axle.x_mm, y: (side * spec.wheels.track_mm) / 2, z: lay.axleZ };
@@ -86,13 +89,15 @@ type TimberFn = (part: string, species: string, volMm3: number, at: { x: number;
 function boxParts(spec: CheckedSpecification, data: RulesData, lay: Layout, timber: TimberFn): PartMass[] {
   const floor = spec.box.floor;
   const f = floor.frame;
-  const a = floor.depth_mm + f.width_mm;
-  const b = floor.width_mm + f.width_mm;
+  const bar = frameBar(spec);
+  const a = floor.depth_mm + bar.width;
+  const b = floor.width_mm + bar.width;
   const rc = f.bend_radius_mm ?? 0;
   const railLength = 2 * (a + b) - (4 - Math.PI) * rc; // two quarter-circle corners replace 2 x 2rc of straight rail
   const centre = { x: floor.depth_mm / 2, y: 0 };
+  const section = bar.round ? `π/4 × ${bar.width}² mm²` : `${bar.width} × ${bar.depth} mm`;
   const parts: PartMass[] = [
-    timber('floor frame', f.species, railLength * f.width_mm * f.thickness_mm, { ...centre, z: lay.frameZ }, 'rolling', `${fmt(railLength, 0)} mm of rail × ${f.width_mm} × ${f.thickness_mm} mm`),
+    timber('floor frame', f.species, railLength * bar.area, { ...centre, z: lay.frameZ }, 'rolling', `${fmt(railLength, 0)} mm of ${bar.round ? 'round bar' : 'rail'} × ${section}`),
   ];
   const s = spec.floor_straps;
   const runs = strapRuns(spec);
@@ -113,7 +118,7 @@ function wheelMass(spec: CheckedSpecification, data: RulesData, lay: Layout, rho
   const nave = (Math.PI / 4) * (w.nave.diameter_mm ** 2 - w.nave.bore_mm ** 2) * w.nave.length_mm * M3_PER_MM3 * rho(w.nave.species);
   const spokes = w.spokes * lay.spokeLength * w.spoke.width_mm * w.spoke.thickness_mm * M3_PER_MM3 * rho(w.spoke.species);
   const felloe = Math.PI * (lay.felloeOuter ** 2 - lay.felloeInner ** 2) * w.felloe.width_mm * M3_PER_MM3 * rho(w.felloe.species);
-  const tyre = w.tyre ? Math.PI * (lay.wheelRadius ** 2 - lay.felloeOuter ** 2) * w.tyre.width_mm * M3_PER_MM3 * data.leathers[w.tyre.material].density_kg_per_m3.value : 0;
-  const mass = nave + spokes + felloe + tyre;
-  return { mass, basis: `nave ${fmt(nave)} + ${w.spokes} spokes of ${fmt(lay.spokeLength, 0)} mm ${fmt(spokes)} + felloe ${fmt(felloe)}${w.tyre ? ` + tyre ${fmt(tyre)}` : ''} = ${fmt(mass)} kg` };
+  const tyre = tyreMass(spec, data, lay);
+  const mass = nave + spokes + felloe + (tyre === null ? 0 : tyre.mass);
+  return { mass, basis: `nave ${fmt(nave)} + ${w.spokes} spokes of ${fmt(lay.spokeLength, 0)} mm ${fmt(spokes)} + felloe ${fmt(felloe)}${tyre ? ` + ${tyre.basis}` : ''} = ${fmt(mass)} kg` };
 }

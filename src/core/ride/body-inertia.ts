@@ -2,6 +2,7 @@ import type { PartMass } from '../model/part-mass.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import type { Layout } from '../model/layout.ts';
 import { mm } from '../units/units.ts';
+import { frameBar } from '../model/spec-sections.ts';
 
 // The rolling assembly without its crew as one rigid body (mechanics note,
 // section 8): mass, centre of mass and the pitch and roll inertias about it,
@@ -43,8 +44,9 @@ export function frameOwn(m: number, a: number, b: number): Own {
 }
 
 function ownInertia(p: PartMass, spec: CheckedSpecification, lay: Layout): Own {
-  const depth = mm(spec.box.floor.depth_mm + spec.box.floor.frame.width_mm);
-  const width = mm(spec.box.floor.width_mm + spec.box.floor.frame.width_mm);
+  const rail = frameBar(spec).width;
+  const depth = mm(spec.box.floor.depth_mm + rail);
+  const width = mm(spec.box.floor.width_mm + rail);
   const m = p.mass_kg;
   if (p.part.startsWith('wheel')) {
     const r = mm((lay.felloeInner + lay.felloeOuter) / 2);

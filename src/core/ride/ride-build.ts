@@ -3,6 +3,7 @@ import type { RulesData } from '../data/rules-data.ts';
 import type { FloorResult } from '../model/floor-result.ts';
 import type { MassModel } from '../model/mass-model.ts';
 import { poleCantilever } from '../model/members/pole-cantilever.ts';
+import { tyreOf, wheelBuild } from '../model/tyre.ts';
 import { characteristicValue } from '../model/timber/characteristic.ts';
 import type { LoadCaseResult } from '../model/load-case-result.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
@@ -90,7 +91,7 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
   const damp = o.undamped ? 0 : 1;
 
   // Wheels: the wheel's own radial stiffness in series with the ground (none in the drop test: rigid ground).
-  const build = spec.wheels.tyre ? 'tyred' : 'bare';
+  const build = wheelBuild(spec);
   const wheel = { k: lim('ride.wheel-contact', `stiffness_${build}`), zeta: lim('ride.wheel-contact', 'damping_ratio') };
   const ground = which === 'drop' ? null : groundContact(data, spec.operation.ground);
   if (ground) sources.push(`ride.ground-contact.${spec.operation.ground}: ${ground.k.source}`, `ride.ground-damping.${spec.operation.ground}: ${ground.zeta.source}`);
@@ -98,7 +99,8 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
   const wheelMass = i.staticCase.axle_load_N / 2 / G;
   const cw = damp * 2 * wheel.zeta * Math.sqrt(wheel.k * wheelMass);
   const cg = ground ? damp * 2 * ground.zeta.value * Math.sqrt(ground.k.value * wheelMass) : 0;
-  working.push(`wheel (${build}) k = ${f(wheel.k / 1e3, 0)} kN/m, ζ = ${wheel.zeta}, c = 2ζ√(k·N_w/g) = ${f(cw, 0)} N·s/m${ground ? `, in series with ${spec.operation.ground} k = ${f(ground.k.value / 1e3, 0)} kN/m, ζ = ${ground.zeta.value}, c = ${f(cg, 0)} N·s/m: together ${f(contact.k / 1e3, 0)} kN/m` : which === 'drop' ? ' on rigid ground' : ` (${spec.operation.ground} not in ride.ground-contact: taken as rigid)`}`);
+  const iron = tyreOf(spec)?.kind === 'iron' ? ', an iron tyre taken as the bare wheel: no iron-tyred stiffness is held' : '';
+  working.push(`wheel (${build}${iron}) k = ${f(wheel.k / 1e3, 0)} kN/m, ζ = ${wheel.zeta}, c = 2ζ√(k·N_w/g) = ${f(cw, 0)} N·s/m${ground ? `, in series with ${spec.operation.ground} k = ${f(ground.k.value / 1e3, 0)} kN/m, ζ = ${ground.zeta.value}, c = ${f(cg, 0)} N·s/m: together ${f(contact.k / 1e3, 0)} kN/m` : which === 'drop' ? ' on rigid ground' : ` (${spec.operation.ground} not in ride.ground-contact: taken as rigid)`}`);
   const wheelAt = (side: 'left' | 'right', y: number) => ({
     side, y, k: contact.k, c: cw, kWheel: wheel.k, kGround: ground ? ground.k.value : Infinity, cGround: cg, ramp: (wheelMass * G) / wheel.k,
   });

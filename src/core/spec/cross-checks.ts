@@ -1,6 +1,9 @@
 import type { RulesData } from '../data/rules-data.ts';
 import { layout } from '../model/layout.ts';
+import { frameBar } from '../model/spec-sections.ts';
 import type { CheckedSpecification } from './spec.types.ts';
+import { formIssues } from './form-checks.ts';
+import { formIssue } from './form-messages.ts';
 import { issue, type InputIssue, type KeyPath } from './input-issue.ts';
 
 // Checks across fields that a JSON Schema cannot express. They run on a spec
@@ -9,7 +12,8 @@ import { issue, type InputIssue, type KeyPath } from './input-issue.ts';
 export function crossChecks(spec: CheckedSpecification, data: RulesData): InputIssue[] {
   const out: InputIssue[] = [];
   knownNames(spec, data, out);
-  if (out.length) return out; // geometry below needs the materials to exist
+  out.push(...formIssues(spec));
+  if (out.length) return out; // geometry below needs the materials to exist and the sections in one form
   geometry(spec, out);
   uniqueness(spec, out);
   return out;
@@ -35,8 +39,9 @@ function knownNames(spec: CheckedSpecification, data: RulesData, out: InputIssue
   const wantLeather: [KeyPath, string][] = [
     [['floor_straps', 'material'], spec.floor_straps.material],
     ...spec.lashings.map((l, i): [KeyPath, string] => [['lashings', i, 'material'], l.material]),
-    ...(spec.wheels.tyre ? [[['wheels', 'tyre', 'material'], spec.wheels.tyre.material] as [KeyPath, string]] : []),
+    ...(spec.wheels.tyre?.material !== undefined ? [[['wheels', 'tyre', 'material'], spec.wheels.tyre.material] as [KeyPath, string]] : []),
   ];
+  if (spec.wheels.tyre?.kind === 'rawhide' && spec.wheels.tyre.material === undefined) out.push(formIssue(['wheels', 'tyre', 'material'], 'tyreMaterialMissing', { allowed: leathers.join(', ') }));
   for (const [path, value] of wantLeather) {
     if (!(value in data.leathers)) out.push(issue(path, 'unknownLeather', { value, allowed: leathers.join(', ') }));
   }
@@ -48,7 +53,7 @@ function knownNames(spec: CheckedSpecification, data: RulesData, out: InputIssue
 function geometry(spec: CheckedSpecification, out: InputIssue[]): void {
   const { floor } = spec.box;
   const { depth_mm: depth, width_mm: width } = floor;
-  const fw = floor.frame.width_mm;
+  const fw = frameBar(spec).width;
   if (spec.axle.x_mm < 0 || spec.axle.x_mm > depth) out.push(issue(['axle', 'x_mm'], 'axleOutsideFloor', { value: spec.axle.x_mm, max: depth }));
   spec.crew.forEach((c, i) => {
     const who = `crew member "${c.role}"`;

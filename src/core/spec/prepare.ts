@@ -4,6 +4,7 @@ import { stackHeight } from '../model/layout.ts';
 import { unitOfKey } from '../units/units.ts';
 import { convertUnitStrings } from './convert-units.ts';
 import { crossChecks } from './cross-checks.ts';
+import { formIssues } from './form-checks.ts';
 import { issue, pathText, type InputIssue } from './input-issue.ts';
 import type { CheckedSpecification } from './spec.types.ts';
 import { validateSchema } from './validate-schema.ts';
@@ -27,7 +28,8 @@ export function prepareSpec(raw: unknown, data: RulesData): Prepared {
   if (unitIssues.length || schemaIssues.length) return { ok: false, issues: [...unitIssues, ...schemaIssues] };
   const spec = work as unknown as CheckedSpecification;
   const computed = new Set<string>();
-  if ((raw as { box: { floor: { height_mm?: unknown } } }).box.floor.height_mm === undefined) {
+  // The stack reads the frame's and the axle's sections: a section in neither form or both is left to the cross-field checks to report.
+  if ((raw as { box: { floor: { height_mm?: unknown } } }).box.floor.height_mm === undefined && formIssues(spec).length === 0) {
     spec.box.floor.height_mm = stackHeight(spec);
     computed.add('box.floor.height_mm');
   }

@@ -45,7 +45,7 @@ export interface BuildSpecification {
        */
       width_mm: number | string;
       /**
-       * Top of the floor above the ground. Default: wheel radius + half the axle height + pole height + frame thickness.
+       * Top of the floor above the ground. Default: wheel radius + half the axle height (or diameter) + pole height + frame thickness (or diameter).
        */
       height_mm?: number | string;
       /**
@@ -65,16 +65,23 @@ export interface BuildSpecification {
          */
         width_mm?: number | string;
       };
+      /**
+       * The floor frame: rails of rectangular section (width_mm and thickness_mm) or bars of round section (diameter_mm); give exactly one of the two forms.
+       */
       frame: {
         species: Species;
         /**
-         * Rail width in plan.
+         * Rail width in plan (rectangular rails; give with thickness_mm, or give diameter_mm instead).
          */
-        width_mm: number | string;
+        width_mm?: number | string;
         /**
-         * Rail depth, vertical.
+         * Rail depth, vertical (rectangular rails; give with width_mm, or give diameter_mm instead).
          */
-        thickness_mm: number | string;
+        thickness_mm?: number | string;
+        /**
+         * Diameter of round-section bars (bent round rods, as in New Kingdom Egyptian bodies): give instead of width_mm and thickness_mm.
+         */
+        diameter_mm?: number | string;
         /**
          * Radius, on the rail's centre line, of the two front corners of a frame whose front rail is steam-bent round them; the rear corners are jointed. Omit for a frame with four jointed corners.
          */
@@ -103,6 +110,9 @@ export interface BuildSpecification {
      */
     mass_kg?: number | string;
   };
+  /**
+   * The axle: rectangular (width_mm and height_mm) or round (diameter_mm); give exactly one of the two forms.
+   */
   axle: {
     /**
      * Axle centre line: 0 = under the rear edge of the floor; depth/2 = central.
@@ -114,13 +124,17 @@ export interface BuildSpecification {
      */
     length_mm: number | string;
     /**
-     * A length in the unit of its key; a string with another unit is converted.
+     * Width, front to back (rectangular axle; give with height_mm, or give diameter_mm instead).
      */
-    width_mm: number | string;
+    width_mm?: number | string;
     /**
-     * A length in the unit of its key; a string with another unit is converted.
+     * Depth, vertical (rectangular axle; give with width_mm, or give diameter_mm instead).
      */
-    height_mm: number | string;
+    height_mm?: number | string;
+    /**
+     * Diameter of a round axle: give instead of width_mm and height_mm.
+     */
+    diameter_mm?: number | string;
     /**
      * Distance between the box's two bearings on the axle.
      */
@@ -201,16 +215,30 @@ export interface BuildSpecification {
        */
       bend_strap?: boolean;
     };
+    /**
+     * A tyre round each felloe. kind rawhide (a hide or leather band, named by material) or iron (a forged band, its mass from the density of iron); none, or no tyre key, for a bare felloe.
+     */
     tyre?: {
-      material: Leather;
       /**
-       * A length in the unit of its key; a string with another unit is converted.
+       * none, rawhide (also a leather tyre: material names which) or iron. Default rawhide, the tyre this key held before kinds were added.
        */
-      width_mm: number | string;
+      kind?: 'none' | 'rawhide' | 'iron';
       /**
-       * A length in the unit of its key; a string with another unit is converted.
+       * For a rawhide or leather tyre: a leather or rawhide id from rules/materials/leathers.yaml. Not given for an iron tyre.
        */
-      thickness_mm: number | string;
+      material?: string;
+      /**
+       * Axial width of the tyre.
+       */
+      width_mm?: number | string;
+      /**
+       * Radial thickness of the tyre; the felloe lies inside it.
+       */
+      thickness_mm?: number | string;
+      /**
+       * The compression a tyre shrunk on (hot iron, or hide put on wet) leaves in each spoke, in N. Where given, the felloe ring model treats the spokes as staying in compression. Omit where unknown.
+       */
+      pre_compression_N?: number | string;
     };
     /**
      * Measured mass of one wheel; overrides the computed mass.
@@ -551,7 +579,7 @@ export interface CheckedSpecification {
        */
       width_mm: number;
       /**
-       * Top of the floor above the ground. Default: wheel radius + half the axle height + pole height + frame thickness.
+       * Top of the floor above the ground. Default: wheel radius + half the axle height (or diameter) + pole height + frame thickness (or diameter).
        */
       height_mm: number;
       /**
@@ -571,16 +599,23 @@ export interface CheckedSpecification {
          */
         width_mm: number;
       };
+      /**
+       * The floor frame: rails of rectangular section (width_mm and thickness_mm) or bars of round section (diameter_mm); give exactly one of the two forms.
+       */
       frame: {
         species: CheckedSpecies;
         /**
-         * Rail width in plan.
+         * Rail width in plan (rectangular rails; give with thickness_mm, or give diameter_mm instead).
          */
-        width_mm: number;
+        width_mm?: number;
         /**
-         * Rail depth, vertical.
+         * Rail depth, vertical (rectangular rails; give with width_mm, or give diameter_mm instead).
          */
-        thickness_mm: number;
+        thickness_mm?: number;
+        /**
+         * Diameter of round-section bars (bent round rods, as in New Kingdom Egyptian bodies): give instead of width_mm and thickness_mm.
+         */
+        diameter_mm?: number;
         /**
          * Radius, on the rail's centre line, of the two front corners of a frame whose front rail is steam-bent round them; the rear corners are jointed. Omit for a frame with four jointed corners.
          */
@@ -609,6 +644,9 @@ export interface CheckedSpecification {
      */
     mass_kg?: number;
   };
+  /**
+   * The axle: rectangular (width_mm and height_mm) or round (diameter_mm); give exactly one of the two forms.
+   */
   axle: {
     /**
      * Axle centre line: 0 = under the rear edge of the floor; depth/2 = central.
@@ -620,13 +658,17 @@ export interface CheckedSpecification {
      */
     length_mm: number;
     /**
-     * A length in the unit of its key; a string with another unit is converted.
+     * Width, front to back (rectangular axle; give with height_mm, or give diameter_mm instead).
      */
-    width_mm: number;
+    width_mm?: number;
     /**
-     * A length in the unit of its key; a string with another unit is converted.
+     * Depth, vertical (rectangular axle; give with width_mm, or give diameter_mm instead).
      */
-    height_mm: number;
+    height_mm?: number;
+    /**
+     * Diameter of a round axle: give instead of width_mm and height_mm.
+     */
+    diameter_mm?: number;
     /**
      * Distance between the box's two bearings on the axle.
      */
@@ -707,16 +749,30 @@ export interface CheckedSpecification {
        */
       bend_strap: boolean;
     };
+    /**
+     * A tyre round each felloe. kind rawhide (a hide or leather band, named by material) or iron (a forged band, its mass from the density of iron); none, or no tyre key, for a bare felloe.
+     */
     tyre?: {
-      material: CheckedLeather;
       /**
-       * A length in the unit of its key; a string with another unit is converted.
+       * none, rawhide (also a leather tyre: material names which) or iron. Default rawhide, the tyre this key held before kinds were added.
        */
-      width_mm: number;
+      kind: 'none' | 'rawhide' | 'iron';
       /**
-       * A length in the unit of its key; a string with another unit is converted.
+       * For a rawhide or leather tyre: a leather or rawhide id from rules/materials/leathers.yaml. Not given for an iron tyre.
        */
-      thickness_mm: number;
+      material?: string;
+      /**
+       * Axial width of the tyre.
+       */
+      width_mm?: number;
+      /**
+       * Radial thickness of the tyre; the felloe lies inside it.
+       */
+      thickness_mm?: number;
+      /**
+       * The compression a tyre shrunk on (hot iron, or hide put on wet) leaves in each spoke, in N. Where given, the felloe ring model treats the spokes as staying in compression. Omit where unknown.
+       */
+      pre_compression_N?: number;
     };
     /**
      * Measured mass of one wheel; overrides the computed mass.

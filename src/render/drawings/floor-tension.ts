@@ -1,6 +1,7 @@
 import type { BuildScene } from '../../core/result/build-scene.ts';
 import { esc, n3, SvgSheet, type Pt } from './svg-sheet.ts';
 import { FloorOutline } from '../../core/model/cable-net/outline.ts';
+import { frameBar } from '../../core/model/spec-sections.ts';
 import type { StrapTension } from '../../core/model/cable-net/floor-results.ts';
 import type { Family } from '../../core/model/cable-net/net.ts';
 import { fitScale, SHEET_WIDTH, svgDocument, type Drawing } from './drawing.ts';
@@ -21,7 +22,7 @@ export function floorTension(a: BuildScene): Drawing {
   const { spec } = a;
   const floor = spec.box.floor;
   const m = a.floor;
-  const outline = new FloorOutline(floor.depth_mm, floor.width_mm, floor.frame.bend_radius_mm ?? 0, floor.frame.width_mm);
+  const outline = new FloorOutline(floor.depth_mm, floor.width_mm, floor.frame.bend_radius_mm ?? 0, frameBar(spec).width);
   const families = (['front-to-back', 'side-to-side'] as const).filter((f) => m.straps.some((st) => st.family === f));
   const panels = Math.max(1, families.length);
   const s = Math.max(

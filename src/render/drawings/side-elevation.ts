@@ -1,5 +1,6 @@
 import type { BuildScene } from '../../core/result/build-scene.ts';
 import { dimAttrs, n3, SvgSheet, type Pt } from './svg-sheet.ts';
+import { axleBar, frameBar } from '../../core/model/spec-sections.ts';
 import { fitScale, FONT, scaleBarLength, SHEET_WIDTH, svgDocument, type Drawing } from './drawing.ts';
 
 // The build seen from its left side, to scale: ground, wheel, axle end-on,
@@ -20,9 +21,10 @@ export function sideElevation(a: BuildScene): Drawing {
   const { spec } = a;
   const lay = a.layout;
   const r = lay.wheelRadius;
-  const frame = spec.box.floor.frame;
+  const frame = frameBar(spec);
+  const axle = axleBar(spec);
   const depth = spec.box.floor.depth_mm;
-  const xMin = Math.min(spec.axle.x_mm - r, -frame.width_mm, spec.pole.rear_x_mm);
+  const xMin = Math.min(spec.axle.x_mm - r, -frame.width, spec.pole.rear_x_mm);
   const xMax = spec.pole.yoke_x_mm + spec.yoke.width_mm / 2;
   const crewTop = Math.max(0, ...spec.crew.map((c) => lay.floorTopZ + c.cg_height_mm));
   const zMax = Math.max(2 * r, spec.pole.yoke_height_mm + spec.yoke.height_mm / 2, lay.floorTopZ + spec.box.siding_height_mm, crewTop);
@@ -40,11 +42,12 @@ export function sideElevation(a: BuildScene): Drawing {
   sheet.raw(`<circle class="wheel" cx="${n3(hub[0])}" cy="${n3(hub[1])}" r="${n3(r / s)}" data-diameter="${n3(2 * r)}"/>`);
   sheet.circle(hub, lay.felloeInner / s, 'felloe');
   sheet.circle(hub, spec.wheels.nave.diameter_mm / 2 / s, 'nave');
-  sheet.rect(hub[0] - spec.axle.width_mm / 2 / s, hub[1] - spec.axle.height_mm / 2 / s, spec.axle.width_mm / s, spec.axle.height_mm / s, 'axle');
+  if (axle.round) sheet.circle(hub, axle.width / 2 / s, 'axle');
+  else sheet.rect(hub[0] - axle.width / 2 / s, hub[1] - axle.depth / 2 / s, axle.width / s, axle.depth / s, 'axle');
 
   // Frame rails in section at the rear and front, the floor between them, the siding above.
-  const [fx0, fz0] = P(-frame.width_mm, lay.floorTopZ);
-  sheet.rect(fx0, fz0, (depth + 2 * frame.width_mm) / s, frame.thickness_mm / s, 'frame');
+  const [fx0, fz0] = P(-frame.width, lay.floorTopZ);
+  sheet.rect(fx0, fz0, (depth + 2 * frame.width) / s, frame.depth / s, 'frame');
   sheet.rect(ox, oy - (lay.floorTopZ + spec.box.siding_height_mm) / s, depth / s, spec.box.siding_height_mm / s, 'hidden');
 
   drawPole(a, sheet, P, s);

@@ -1,5 +1,6 @@
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
 import { layout } from '../layout.ts';
+import { axleBar } from '../spec-sections.ts';
 import type { FloorNet } from './floor-net.ts';
 import { pointWeights, weightedSum } from './point-sag.ts';
 
@@ -29,8 +30,9 @@ export function underFloorParts(spec: CheckedSpecification): UnderFloorPart[] {
   const out: UnderFloorPart[] = [];
   const poleX: [number, number] = [Math.max(0, pole.rear_x_mm), Math.min(depth, pole.root_x_mm)];
   if (poleX[1] > poleX[0]) out.push({ part: 'pole', clearance_mm: lay.floorTopZ - (lay.poleZ + pole.height_mm / 2), x: poleX, y: [-pole.width_mm / 2, pole.width_mm / 2] });
-  const axleX: [number, number] = [Math.max(0, axle.x_mm - axle.width_mm / 2), Math.min(depth, axle.x_mm + axle.width_mm / 2)];
-  if (axleX[1] > axleX[0]) out.push({ part: 'axle', clearance_mm: lay.floorTopZ - (lay.axleZ + axle.height_mm / 2), x: axleX, y: [-width / 2, width / 2] });
+  const ax = axleBar(spec);
+  const axleX: [number, number] = [Math.max(0, axle.x_mm - ax.width / 2), Math.min(depth, axle.x_mm + ax.width / 2)];
+  if (axleX[1] > axleX[0]) out.push({ part: 'axle', clearance_mm: lay.floorTopZ - (lay.axleZ + ax.depth / 2), x: axleX, y: [-width / 2, width / 2] });
   return out;
 }
 

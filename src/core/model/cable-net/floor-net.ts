@@ -2,6 +2,7 @@ import type { RulesData } from '../../data/rules-data.ts';
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
 import { buildNet, type CableNet, type StrapLine } from './net.ts';
 import { FloorOutline } from './outline.ts';
+import { frameBar } from '../spec-sections.ts';
 
 // The strap floor of a specification as a cable net. Straps lie at the pitch,
 // centred in the frame, as many as fit (the same count the mass model uses).
@@ -38,7 +39,7 @@ export function floorNodeCount(spec: CheckedSpecification, refine = 1): number {
 export function floorNet(spec: CheckedSpecification, data: RulesData, refine = 1): FloorNet {
   const { floor } = spec.box;
   const s = spec.floor_straps;
-  const outline = new FloorOutline(floor.depth_mm, floor.width_mm, floor.frame.bend_radius_mm ?? 0, floor.frame.width_mm);
+  const outline = new FloorOutline(floor.depth_mm, floor.width_mm, floor.frame.bend_radius_mm ?? 0, frameBar(spec).width);
   const EA = data.leathers[s.material].modulus_MPa.value * s.width_mm * s.thickness_mm;
   const fbY = strapPositions(floor.width_mm, s.pitch_mm, -floor.width_mm / 2);
   const ssX = strapPositions(floor.depth_mm, s.pitch_mm);

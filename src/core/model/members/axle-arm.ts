@@ -1,5 +1,6 @@
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
-import { rectangle, round, type Section } from '../sections.ts';
+import { round, type Section } from '../sections.ts';
+import { axleSection } from '../spec-sections.ts';
 
 // The axle arm outboard of the box (mechanics note, section 6). Each wheel
 // bears at its mid-plane, a = (t - s)/2 outboard of the box's bearing; the
@@ -23,7 +24,7 @@ export function axleArm(spec: CheckedSpecification): AxleArm {
     a: (spec.wheels.track_mm - spec.axle.bearing_span_mm) / 2,
     naveArm: spec.wheels.nave.length_mm / 2,
     wheelRadius: spec.wheels.diameter_mm / 2,
-    bearing: rectangle(spec.axle.width_mm, spec.axle.height_mm),
+    bearing: axleSection(spec),
     spindle: round(spec.wheels.nave.bore_mm),
   };
 }

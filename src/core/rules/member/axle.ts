@@ -37,7 +37,7 @@ export const axleMember = defineRule({
       return [
         bendingAt(c, 'bending at the bearing', 'a', g.a, 'W_bearing', g.bearing.W),
         bendingAt(c, 'bending at the nave', 'L_nave/2', g.naveArm, 'W_nave', g.spindle.W),
-        strengthCheck(c, 'shear at the bearing', tau, shear, shear.design(c.duration, c.gammaM), [step('τ = 1.5·N_w/A', `${num(g.bearing.shearFactor)} × ${num(c.wheel_N)} / ${num(g.bearing.area)}`, tau, 'MPa')]),
+        strengthCheck(c, 'shear at the bearing', tau, shear, shear.design(c.duration, c.gammaM), [step(`τ = ${g.bearing.formulas.shearFactor}·N_w/A`, `${num(g.bearing.shearFactor)} × ${num(c.wheel_N)} / ${num(g.bearing.area)}`, tau, 'MPa')]),
       ];
     });
     ctx.report(
@@ -51,9 +51,9 @@ export const axleMember = defineRule({
           step('a = (t − s)/2', `(${num(spec.wheels.track_mm)} − ${num(spec.axle.bearing_span_mm)})/2`, g.a, 'mm'),
           step('L_nave/2 (nave inner face to wheel plane)', '', g.naveArm, 'mm'),
           step('r (wheel radius)', '', g.wheelRadius, 'mm'),
-          `at the bearing: ${g.bearing.label} (width × height)`,
-          step('W_bearing = b·h²/6', `${num(spec.axle.width_mm)} × ${num(spec.axle.height_mm)}²/6`, g.bearing.W, 'mm³'),
-          step('A = b·h', `${num(spec.axle.width_mm)} × ${num(spec.axle.height_mm)}`, g.bearing.area, 'mm²'),
+          `at the bearing: ${g.bearing.label}${g.bearing.label.includes('rectangle') ? ' (width × height)' : ''}`,
+          step(`W_bearing = ${g.bearing.formulas.W[0]}`, g.bearing.formulas.W[1], g.bearing.W, 'mm³'),
+          step(`A = ${g.bearing.formulas.area[0]}`, g.bearing.formulas.area[1], g.bearing.area, 'mm²'),
           `in the nave: ${g.spindle.label} (the bore)`,
           step('W_nave = π·d³/32', `π × ${num(spec.wheels.nave.bore_mm)}³/32`, g.spindle.W, 'mm³'),
           "F_lat·r is added to N_w·a: on the outer wheel the two moments oppose, on the inner they add; the outer wheel's loads added bound both wheels",

@@ -1,7 +1,7 @@
 import { bumpFactorSources } from '../../model/bump-sources.ts';
 import { pointLoadsMaxMoment } from '../../model/beam-formulas.ts';
 import type { RailPull } from '../../model/floor-result.ts';
-import { rectangle } from '../../model/sections.ts';
+import { frameSectionInPlan } from '../../model/spec-sections.ts';
 import { timberStrength } from '../../model/timber/design-strength.ts';
 import { timberPart } from '../../model/timber/timber-part.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
@@ -24,7 +24,6 @@ export const frameRailMember = defineRule({
   run(ctx) {
     const { spec, data } = ctx;
     const part = timberPart(spec, 'frame');
-    const frame = spec.box.floor.frame;
     const stat = ctx.models.floorStatic;
     const bump = ctx.models.floorBump;
     const unsolved = [stat, bump].find((r) => !r.converged);
@@ -48,7 +47,7 @@ export const frameRailMember = defineRule({
     }
     const bending = timberStrength(data, part, 'bending', spec.moisture_content_pct);
     // The straps pull in the plane of the floor: the rail bends about its vertical axis.
-    const S = rectangle(frame.thickness_mm, frame.width_mm);
+    const S = frameSectionInPlan(spec);
     const pitch = spec.floor_straps.pitch_mm;
     const T0 = spec.floor_straps.pretension_N;
     const loaded = stat.rails.filter((r) => r.total_N > 0);
@@ -87,8 +86,8 @@ export const frameRailMember = defineRule({
         intro: [
           'rails pulled by the straps, each a simply supported span between the corners, loaded by the pull of each strap end where it is anchored:',
           ...loaded.map((r) => step(`span of the ${r.rail} rail`, '', r.span_mm, 'mm')),
-          `section bent in plan: ${S.label} (thickness × width)`,
-          step('W = t·w²/6', `${num(frame.thickness_mm)} × ${num(frame.width_mm)}²/6`, S.W, 'mm³'),
+          `section bent in plan: ${S.label}${S.label.includes('rectangle') ? ' (thickness × width)' : ''}`,
+          step(`W = ${S.formulas.W[0]}`, S.formulas.W[1], S.W, 'mm³'),
           ...bending.working,
         ],
         sources: bending.sourceIds,

@@ -3,6 +3,7 @@ import type { RulesData } from '../../data/rules-data.ts';
 import type { MessageSpec, Report } from '../../pipeline/define-rule.ts';
 import { measuredFloorDamping } from '../../ride/ride-build.ts';
 import { groundContact } from '../../ride/ride-data.ts';
+import { wheelBuild } from '../../model/tyre.ts';
 import type { RideCase, RideResult } from '../../ride/ride-types.ts';
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
 
@@ -17,7 +18,7 @@ export function rideWorking(r: RideResult): string[] {
 /** Ids of the sources of the ride model's parameters this build reads in one case (rules/parameters/ride.yaml). */
 export function rideSourceIds(data: RulesData, spec: CheckedSpecification, which: RideCase): string[] {
   const read: [string, string][] = [
-    ['ride.wheel-contact', spec.wheels.tyre ? 'stiffness_tyred' : 'stiffness_bare'],
+    ['ride.wheel-contact', `stiffness_${wheelBuild(spec)}`],
     ['ride.wheel-contact', 'damping_ratio'],
     ['ride.supports', 'yoke_pad_stiffness'],
     ['ride.supports', 'yoke_damping_ratio'],
