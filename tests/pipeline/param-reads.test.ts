@@ -1,3 +1,4 @@
+import { readdirSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { RulesData } from '../../src/core/data/rules-data.ts';
 import { Analysis } from '../support/analysis.ts';
@@ -35,7 +36,9 @@ function recordingData(graph: () => ModelGraph | undefined, reads: Map<string, S
 const BY_BUILD = [/^ride\.ground-(contact|damping)\./, /^timber-strength\.intersection_moisture_pct/, /^cutlist\.usable_hide_m2/];
 
 describe('model parameters', () => {
-  for (const demo of ['demo-two-crew', 'demo-rear-axle', 'teaching-flawed']) {
+  // The demos and the validation specs between them reach every kind of part (iron tyres, round bars).
+  const specs = ['demo-two-crew', 'demo-rear-axle', 'teaching-flawed', ...readdirSync(new URL('../../specs/validation/', import.meta.url)).filter((f) => f.endsWith('.yaml')).map((f) => `validation/${f.slice(0, -5)}`)];
+  for (const demo of specs) {
     it(`${demo}: every parameter a model reads is one it declares`, () => {
       const reads = new Map<string, Set<string>>();
       const holder: { graph?: ModelGraph } = {};

@@ -21,8 +21,10 @@ import { buildScene } from '../result/scene-of.ts';
 // models the requested rules and outputs need, each once.
 
 const TIMBER = ['timber-strength.fifth_percentile_z', 'timber-strength.gamma_M'] as const;
-/** The balance reads the rolling resistance and the EQU factors. */
-const BALANCE = [...ROLLING_PARAMS, ...COMBINATION_PARAMS] as const;
+/** The mass of an iron tyre reads steel's density. */
+const MASS = ['tyre.iron_density_kg_per_m3'] as const;
+/** The balance weighs the chariot and reads the rolling resistance and the EQU factors. */
+const BALANCE = [...MASS, ...ROLLING_PARAMS, ...COMBINATION_PARAMS] as const;
 /** The 5th-percentile stiffness of a timber part (the pole's bending spring in the ride model). */
 const TIMBER_STIFFNESS = ['timber-strength.fifth_percentile_z', 'timber-strength.cov_moe', 'timber-strength.min_moisture_credit_pct'] as const;
 /** Everything a run of the ride model reads (the ground's own stiffness and damping follow the specification's ground). */
@@ -38,7 +40,7 @@ const CUTTING = ['bend_end_allowance_mm', 'bend_good_fraction', 'nave_tenon_frac
 export const massDef = defineModel({
   id: 'mass',
   needs: [],
-  params: [],
+  params: MASS,
   compute: (_, { spec, data }) => massModel(spec, data),
 });
 
