@@ -49,25 +49,47 @@ describe(RULE, () => {
     expect(governingStep(b, 'σ_m = M/W').result).toBeCloseTo(sigma(gov), 9);
     // Every case but the design turn is worked.
     expect(stepsOf(b, 'σ_m = M/W')).toHaveLength(cases.length);
-    // Euler (design basis, section 6): E_0.05 = 12000 × (1 − 1.645 × 0.22) MPa (Wood Handbook
-    // Table 5-3a, 12 %), I = 60⁴/12, L = 2000 mm, K = 1; demand 3 × m × 0.3 g.
+    // The strut (EN 1995-1-1 6.3.2, eqs 6.21-6.29 and 6.23), by hand: white ash at 12 %, the clear-wood
+    // compression in the slenderness, 51.1 MPa mean (Wood Handbook Table 5-3a) × (1 − 1.645 × 0.18);
+    // E_0.05 = 12000 × (1 − 1.645 × 0.22) MPa (Table 5-3a, COV from chapter 5); i = 60/√12, L = 2000, K = 1:
+    // λ_rel = (λ/π)·√(f_c,0,k/E_0.05) (eq. 6.21), another route than the rule's √(f_c,0,k·A/P_cr).
     const k = buckling(found);
+    const fck = 51.1 * (1 - 1.645 * 0.18);
     const E05 = 12000 * (1 - 1.645 * 0.22);
-    expect(k.limit).toBeCloseTo((Math.PI ** 2 * E05 * (60 ** 4 / 12)) / 2000 ** 2, 6);
-    expect(k.value).toBeCloseTo(3 * a.mass.rolling.mass_kg * 0.3 * G, 9);
-    expect(k.load_case).toBe('braking');
-    expect(k.params.factor).toBe(3);
+    const lrel = (2000 / (60 / Math.sqrt(12)) / Math.PI) * Math.sqrt(fck / E05);
+    expect(lrel).toBeCloseTo(2.519, 3);
+    const kk = 0.5 * (1 + 0.2 * (lrel - 0.3) + lrel ** 2);
+    const kc = 1 / (kk + Math.sqrt(kk ** 2 - lrel ** 2));
+    expect(kc).toBeCloseTo(0.1457, 4);
+    const fc0k = fck * 0.6; // sawn stock, k_select 0.6, in the design strength
+    expect(k.params.kc as number).toBeCloseTo(kc, 12);
+    expect(k.params.lrel as number).toBeCloseTo(lrel, 12);
+    // Each pushing case: N_Rd = k_c·f_c,0,d·A·(1 − σ_m/f_m,d), f_d = f_k·k_mod/γ_M (short 0.9 / 1.3 for
+    // braking in the fundamental combination; instantaneous 1.1 / 1.0 for the stopping shock, accidental).
+    const fmk = 103 * (1 - 1.645 * 0.16) * 0.6;
+    const resistance = (c: (typeof cases)[number], kMod: number, gM: number) => kc * ((fc0k * kMod) / gM) * 3600 * (1 - sigma(c) / ((fmk * kMod) / gM));
+    const pushing = [
+      { c: a.memberCases.find((c) => c.id === 'braking')!, r: 0 },
+      { c: a.memberCases.find((c) => c.id === 'stopping-shock')!, r: 0 },
+    ];
+    pushing[0].r = resistance(pushing[0].c, 0.9, 1.3);
+    pushing[1].r = resistance(pushing[1].c, 1.1, 1.0);
+    const govStrut = pushing.reduce((w, p) => (p.c.poleAxial_N / p.r > w.c.poleAxial_N / w.r ? p : w));
+    expect(k.load_case).toBe(govStrut.c.id);
+    expect(k.value).toBeCloseTo(govStrut.c.poleAxial_N, 9);
+    expect(k.limit!).toBeCloseTo(govStrut.r, 6);
+    // The braking thrust in the fundamental combination is 1.5 × m × 0.3 g (EN 1990 Table A1.2(B)).
+    expect(pushing[0].c.poleAxial_N).toBeCloseTo(1.5 * a.mass.rolling.mass_kg * 0.3 * G, 9);
     expect(k.message_key).toBe('strutWithin');
-    // K and the strut factor cite the design basis; the modulus the handbook table.
-    expect(k.sources).toEqual(expect.arrayContaining(['design-basis-members', 'wood-handbook-2010-t5-3a', 'wood-handbook-2010-ch5-cov']));
+    expect(k.sources).toEqual(expect.arrayContaining(['design-basis-members', 'en-1995-1-1-6-3-2', 'wood-handbook-2010-t5-3a', 'wood-handbook-2010-ch5-cov']));
   });
 
-  it('the effective length factor is a rule parameter: K = 2 quarters the Euler load', async () => {
-    // Closed form: P_cr = π²·E·I/(K·L)², so doubling K quarters it.
+  it('the buckling length follows the effective length factor: K = 2 doubles the relative slenderness', async () => {
     const raw = handSpec();
     const k1 = buckling(await findingsOf(RULE, raw, {}, rigid));
     const k2 = buckling(await findingsOf(RULE, raw, { effective_length_factor: 2 }, rigid));
-    expect(k2.limit! / k1.limit!).toBeCloseTo(1 / 4, 12);
+    expect((k2.params.lrel as number) / (k1.params.lrel as number)).toBeCloseTo(2, 12);
+    expect(k2.limit!).toBeLessThan(k1.limit!);
   });
 
   it('fails a pole cut down to 40 mm deep, in bending', async () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { Analysis } from '../support/analysis.ts';
-import { bucklingFactor } from '../../src/core/rules/member/spoke.ts';
+import { bucklingFactor } from '../../src/core/model/timber/buckling-factor.ts';
 import { dataWithGround, deepMerge, findingsOf, handSpec, prepared, readDemo } from '../support/fixtures.ts';
 import { bySubjectId, expectPlainTemplates, expectUtilisationBoundary, governingStep, stepsOf } from '../support/member-support.ts';
 

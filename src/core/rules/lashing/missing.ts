@@ -63,7 +63,7 @@ export const lashingMissing = defineRule({
       ctx.report({
         ...common,
         message: required ? (known ? 'missing' : 'missingUnknown') : known ? 'advised' : 'advisedUnknown',
-        params: { joint, why: need.why, ...(gov ? { force: gov.held_N, case: caseName(d, gov) } : {}) },
+        params: { joint, why: need.why, ...(gov ? { force: designValue(gov, 'held_N'), case: caseName(d, gov) } : {}) },
         severity: required ? 'fail' : 'advice',
         fix: required
           ? `Lash the ${joint} joint and list it under lashings, so that its strength is checked.`

@@ -1,4 +1,4 @@
-import { loadFactor } from '../../model/load-factors.ts';
+import { bucklingFactor } from '../../model/timber/buckling-factor.ts';
 import { poleCantilever, poleEulerLoad, rootMoment } from '../../model/members/pole-cantilever.ts';
 import { stiffness05, timberStrength } from '../../model/timber/design-strength.ts';
 import { timberPart } from '../../model/timber/timber-part.ts';
@@ -7,20 +7,21 @@ import { num, step } from '../../pipeline/step.ts';
 import { memberReport, strengthCheck, stressReport, type CaseCheck, type Working } from './member-finding.ts';
 import { STRESS_MESSAGES } from './member-messages.ts';
 import { strengthStep } from './strength-step.ts';
+import { bucklingFactorSteps } from './buckling-steps.ts';
 
 export const poleMember = defineRule({
   id: 'member.pole',
   title: 'Pole strength and buckling',
-  checks: 'Bending of the pole where it leaves the box, as a cantilever carrying the yoke load and the pull or push along it, and Euler buckling of the pole as a strut under the braking force with a margin.',
+  checks: 'Bending of the pole where it leaves the box, as a cantilever carrying the yoke load and the pull or push along it, and the pole as a strut under the braking thrust and the stopping shock: the instability factor k_c of EN 1995-1-1 6.3.2 (its initial bow included) with the bending at the root (eq. 6.23).',
   kind: 'check',
-  method: ['design-basis-members', 'design-basis-materials', 'en-1995-1-1-6-2-4'],
+  method: ['design-basis-members', 'design-basis-materials', 'en-1995-1-1-6-2-4', 'en-1995-1-1-6-3-2'],
   needs: ['mass', 'memberCases'],
-  limits: { utilisation: { direction: 'max', unit: 'of the design strength (in buckling, of the Euler load)' } },
-  params: ['effective_length_factor'],
+  limits: { utilisation: { direction: 'max', unit: 'of the design strength (in buckling, of the buckling resistance)' } },
+  params: ['effective_length_factor', 'straightness_factor', 'slenderness_threshold'],
   messages: {
     ...STRESS_MESSAGES,
-    strutWithin: { code: 2306, text: '{part}, {mode}: {value:N} ({factor:1} × the braking force), within the Euler load {limit:N} (modulus at its fifth percentile); case "{case}".' },
-    strutOver: { code: 2307, text: '{part}, {mode}: {value:N} ({factor:1} × the braking force) exceeds the Euler load {limit:N} (modulus at its fifth percentile) in "{case}".' },
+    strutWithin: { code: 2306, text: '{part}, {mode}: {value:N} of design thrust in "{case}", within its buckling resistance {limit:N} (k_c {kc:2} at a relative slenderness of {lrel:2}, less what the bending at the root uses).' },
+    strutOver: { code: 2307, text: '{part}, {mode}: {value:N} of design thrust in "{case}" exceeds its buckling resistance {limit:N} (k_c {kc:2} at a relative slenderness of {lrel:2}, less what the bending at the root uses).' },
   },
   run(ctx) {
     const { spec, data } = ctx;
@@ -83,42 +84,61 @@ export const poleMember = defineRule({
       }),
     );
 
-    const braking = cases.find((c) => c.id === 'braking');
-    if (!braking) return;
+    // The pole as a strut in every case that pushes along it (braking, the stopping shock):
+    // EN 1995-1-1 6.3.2, the thrust against k_c·f_c,0,d·A less what the bending at the root uses (eq. 6.23).
+    const thrusts = cases.filter((c) => c.poleAxial_N > 0);
+    if (thrusts.length === 0) return;
     const K = ctx.param('effective_length_factor');
-    const strut = loadFactor(data, 'braking_strut_factor');
+    const beta = ctx.param('straightness_factor');
+    const lim0 = ctx.param('slenderness_threshold');
     const E = stiffness05(data, part, M);
     const Pcr = poleEulerLoad(g, E.fk, K.value);
-    const demand = strut.value * braking.poleAxial_N;
-    const shock = cases.find((c) => c.id === 'stopping-shock');
-    const check: CaseCheck = {
-      memberCase: braking,
-      mode: 'buckling as a strut',
-      demand,
-      capacity: Pcr,
-      basis: { factor: strut.value },
-      sources: [...K.sources, ...strut.sources],
-      steps: [
-        step('P_cr = π²·E_0.05·I_min/(K·L)²', `π² × ${num(E.fk)} × ${num(S.Imin)} / (${num(K.value)} × ${num(g.strutLength)})²`, Pcr, 'N'),
-        step('demand = braking_strut_factor × T', `${num(strut.value)} × ${num(braking.poleAxial_N)}`, demand, 'N'),
-        ...(shock ? [step("the stopping shock's share of P_cr = T_shock / P_cr", `${num(shock.poleAxial_N)} / ${num(Pcr)}`, shock.poleAxial_N / Pcr, '1')] : []),
-      ],
-    };
+    // The clear-wood f_c,0,k (not reduced for the grade), as for the spokes: the larger λ_rel, the safe side.
+    const fck = compression.characteristic.fk;
+    const lambdaRel = Math.sqrt((fck * S.area) / Pcr);
+    const kc = bucklingFactor(lambdaRel, beta.value, lim0.value);
+    const strutChecks: CaseCheck[] = thrusts.map((c) => {
+      const fc = compression.design(c.duration, c.gammaM);
+      const fm = bending.design(c.duration, c.gammaM);
+      const sm = rootMoment(g, c.pole_N, c.poleAxial_N) / S.W;
+      const left = Math.max(0, 1 - sm / fm.value);
+      const capacity = kc * fc.value * S.area * left;
+      return {
+        memberCase: c,
+        mode: 'buckling as a strut',
+        demand: c.poleAxial_N,
+        capacity,
+        basis: { kc, lrel: lambdaRel },
+        sources: [...fc.kModSources],
+        steps: [
+          step('N_d, the design thrust along the pole', '', c.poleAxial_N, 'N'),
+          strengthStep(compression, fc),
+          step('σ_m,d at the root = M/W', `${num(rootMoment(g, c.pole_N, c.poleAxial_N))} / ${num(S.W)}`, sm, 'MPa'),
+          strengthStep(bending, fm),
+          step('N_Rd = k_c·f_c,0,d·A·(1 − σ_m,d/f_m,d) (eq. 6.23)', `${num(kc)} × ${num(fc.value)} × ${num(S.area)} × (1 − ${num(sm)} / ${num(fm.value)})`, capacity, 'N'),
+        ],
+      };
+    });
     ctx.report(
       memberReport({
         subject: 'pole.strut',
         label: 'pole as a strut',
         part: part.label,
         unit: 'N',
-        checks: [check],
+        checks: strutChecks,
         limit: utilisation,
         message: { pass: 'strutWithin', fail: 'strutOver' },
         intro: [
           step('L (developed length from the root to the yoke)', '', g.strutLength, 'mm'),
           step(`I_min (${S.label})`, '', S.Imin, 'mm⁴'),
+          ...compression.working.filter((l) => !bending.working.includes(l)),
           ...E.working,
+          step('P_cr = π²·E_0.05·I_min/(K·L)²', `π² × ${num(E.fk)} × ${num(S.Imin)} / (${num(K.value)} × ${num(g.strutLength)})²`, Pcr, 'N'),
+          step('λ_rel = √(f_c,0,k·A / P_cr)', `√(${num(fck)} × ${num(S.area)} / ${num(Pcr)})`, lambdaRel, '1'),
+          'the clear-wood f_c,0,k in λ_rel, not reduced for the grade: the larger λ_rel, the safe side',
+          ...bucklingFactorSteps(lambdaRel, beta.value, lim0.value, kc),
         ],
-        sources: E.sourceIds,
+        sources: [...E.sourceIds, ...K.sources, ...beta.sources, ...lim0.sources, 'en-1995-1-1-6-3-2'],
         fix: 'Make the pole thicker in its thinner direction (the Euler load rises with the cube of it), shorten the free length, or add a stay that holds it at mid-length.',
       }),
     );

@@ -1,32 +1,13 @@
 import { eulerLoad } from '../../model/beam-formulas.ts';
 import { rectangle } from '../../model/sections.ts';
+import { bucklingFactor } from '../../model/timber/buckling-factor.ts';
 import { stiffness05, timberStrength } from '../../model/timber/design-strength.ts';
 import { timberPart } from '../../model/timber/timber-part.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
 import { memberReport, strengthCheck, stressReport, type CaseCheck } from './member-finding.ts';
 import { BUCKLING_MESSAGES, STRESS_MESSAGES } from './member-messages.ts';
-
-/** EN 1995-1-1 section 6.3.2: k = 0.5·(1 + β_c·(λ_rel − λ_rel,0) + λ_rel²). */
-function instabilityK(lambdaRel: number, betaC: number, threshold: number): number {
-  return 0.5 * (1 + betaC * (lambdaRel - threshold) + lambdaRel ** 2);
-}
-
-/** EN 1995-1-1 section 6.3.2: k_c from the relative slenderness. */
-export function bucklingFactor(lambdaRel: number, betaC: number, threshold: number): number {
-  if (lambdaRel <= threshold) return 1;
-  const k = instabilityK(lambdaRel, betaC, threshold);
-  return 1 / (k + Math.sqrt(k * k - lambdaRel ** 2));
-}
-
-/** The buckling factor worked, for a spoke beyond the threshold slenderness. */
-function kcSteps(lambdaRel: number, betaC: number, threshold: number, kc: number) {
-  const k = instabilityK(lambdaRel, betaC, threshold);
-  return [
-    step('k = 0.5·(1 + β_c·(λ_rel − λ_rel,0) + λ_rel²)', `0.5 × (1 + ${num(betaC)} × (${num(lambdaRel)} − ${num(threshold)}) + ${num(lambdaRel)}²)`, k, '1'),
-    step('k_c = 1/(k + √(k² − λ_rel²))', `1/(${num(k)} + √(${num(k)}² − ${num(lambdaRel)}²))`, kc, '1'),
-  ];
-}
+import { bucklingFactorSteps } from './buckling-steps.ts';
 
 export const spokeMember = defineRule({
   id: 'member.spoke',
@@ -100,7 +81,7 @@ export const spokeMember = defineRule({
           step('N_cr = π²·E_0.05·I_min/(K·L)²', `π² × ${num(E.fk)} × ${num(S.Imin)} / (${num(K.value)} × ${num(L)})²`, Ncr, 'N'),
           step('λ_rel = √(f_c,0,k·A / N_cr)', `√(${num(fck)} × ${num(S.area)} / ${num(Ncr)})`, lambdaRel, '1'),
           'the clear-wood f_c,0,k in λ_rel, not reduced for the grade: the larger λ_rel, the safe side',
-          ...(lambdaRel <= lim0.value ? [step('λ_rel ≤ λ_rel,0: no reduction, k_c', `${num(lambdaRel)} ≤ ${num(lim0.value)}`, kc, '1')] : kcSteps(lambdaRel, beta.value, lim0.value, kc)),
+          ...bucklingFactorSteps(lambdaRel, beta.value, lim0.value, kc),
         ],
         sources: [...compression.sourceIds, ...E.sourceIds, ...K.sources, ...beta.sources, ...lim0.sources],
         fix: 'Thicken the spoke in its thinner direction (buckling resistance rises with the cube of it), or shorten it with a larger nave or deeper felloe.',
