@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { Analysis } from '../support/analysis.ts';
 import { deepMerge, findingsOf, prepared, readDemo, rulesData } from '../support/fixtures.ts';
-import { expectPlainTemplates, expectUtilisationBoundary, governingStep, stepsOf } from '../support/member-support.ts';
+import { expectPlainTemplates, expectUtilisationBoundary, stepsOf } from '../support/member-support.ts';
 
 const RULE = 'member.axle';
 const one = async (raw: unknown) => (await findingsOf(RULE, raw))[0];

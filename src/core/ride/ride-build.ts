@@ -138,7 +138,6 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
   const speed = which === 'drop' ? 0 : spec.operation.speed_kmh * UNITS.kmh.si;
   // The draught's couple about the contact: each part of the rolling resistance with its own arm (design basis, section 3).
   const couple = rollingResistance(spec, data).couple_m;
-  const hy = mm(spec.pole.yoke_height_mm);
   const r = mm(lay.wheelRadius);
   const bump = { height: o.bumpHeight ?? mm(spec.operation.bump_height_mm), length: o.bumpLength ?? mm(spec.operation.bump_length_mm) };
   let road: RoadInput = (_w, _t, out) => out.fill(0);
