@@ -40,7 +40,7 @@ export function rideDampingBlocks(d: RideDamping): Block[] {
   return [table, ...(d.working ? [workingLines(d.working.split('\n'))] : [])];
 }
 
-/** "Ridge across both tracks (ridge)": the model's title, then the case's id as the command line names it. */
+/** "Rough-ground ridge across both tracks (rough-ridge)": the model's title, then the case's id as the command line names it. */
 export function caseHeading(r: Pick<RideCaseResult, 'title' | 'case'>): string {
   return `${r.title.charAt(0).toUpperCase()}${r.title.slice(1)} (${r.case})`;
 }
