@@ -139,7 +139,7 @@ export const lashingDemandsDef = defineModel({
 export const figuresDef = defineModel({
   id: 'figures',
   needs: ['mass', 'loadCases', 'staticCase', 'turn', 'floorStatic', 'floorBump', 'ride', 'bumpFactors', 'stoneFactors', 'cutting'],
-  params: TIMBER_STIFFNESS, // the pole's Euler load
+  params: [...TIMBER_STIFFNESS, 'ride.inputs.decay_fraction', 'ride.inputs.duration_s'], // the pole's Euler load; the decay figure's reason
   compute: (m, i) => figures(withInputs(m, i)),
 });
 

@@ -50,7 +50,7 @@ export function floorDampingNeeded(i: RideInput, grid: readonly number[] = DAMPI
   const r = leastOnGrid(holds, grid, tolerance);
   const [lower, upper] = [grid[0], grid[grid.length - 1]];
   const working = r.value === null
-    ? `no floor damping ratio up to ${upper} keeps the crew on the floor and their motion within ${maxCycles} cycles (${simulations} simulations)`
+    ? `no floor damping ratio up to ${upper} keeps the crew on the floor over rough ground and their motion within ${maxCycles} cycles (${simulations} simulations)`
     : r.atLower
       ? `the rules are met already at a floor damping ratio of ${lower}`
       : `ζ_floor tried at ${grid.join(', ')} in turn, then bisection to ${tolerance * 100} %: least ζ_floor = ${r.value.toFixed(4)} (${simulations} simulations)`;

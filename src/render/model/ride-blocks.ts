@@ -31,8 +31,8 @@ export function rideDampingBlocks(d: RideDamping): Block[] {
   if (d.used) rows.push(quantityRow('Floor damping ratio used', d.used.value, '', d.used.source));
   if (d.needed !== undefined) {
     const note = d.needed === null
-      ? 'no floor damping ratio meets the decay rule and keeps the crew on the floor over the design bump'
-      : 'the least that meets the decay rule and keeps the crew on the floor over the design bump; found by bisection over full runs';
+      ? 'no floor damping ratio meets the decay rule and keeps the crew on the floor over rough ground'
+      : 'the least that meets the decay rule and keeps the crew on the floor over rough ground; found by bisection over full runs';
     rows.push(quantityRow('Floor damping ratio needed (tuner)', d.needed, '', note, 'none'));
   }
   if (rows.length === 0) return [];

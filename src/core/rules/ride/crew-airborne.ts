@@ -1,9 +1,10 @@
+import type { Combination } from '../../findings/finding.ts';
 import { severityRank } from '../../findings/severity.ts';
 import { formatQuantity } from '../../format/number-format.ts';
 import { defineRule, type LimitSpec, type ResolvedLimit } from '../../pipeline/define-rule.ts';
 import { grade } from '../../pipeline/grade.ts';
 import { step } from '../../pipeline/step.ts';
-import { ROAD_SHAPES, roadCase, type CrewRide } from '../../ride/ride-types.ts';
+import { ROAD_SHAPES, roadCase, type CrewRide, type RideResult, type RoadGround } from '../../ride/ride-types.ts';
 import { withinLimit } from '../within-limit.ts';
 import { notRunMessage, rideNotRun, rideSourceIds, rideWorking } from './ride-working.ts';
 
@@ -17,11 +18,25 @@ const LIMITS = {
 
 type Name = keyof typeof LIMITS;
 
-/** The two limits a ground is judged against: time off the floor, height above it. */
-const PAIRS = {
-  'rough-ground': { airborne: 'airborne_ms', rise: 'rise_mm' },
-  stone: { airborne: 'stone_airborne_ms', rise: 'stone_rise_mm' },
-} as const satisfies Record<string, { airborne: Name; rise: Name }>;
+type Message = 'stays' | 'leaves' | 'stoneHeld' | 'stoneThrown';
+
+/** How each ground is judged: its two limits, its combination, its messages and its fix. */
+const GROUNDS = {
+  'rough-ground': {
+    airborne: 'airborne_ms',
+    rise: 'rise_mm',
+    combination: 'characteristic',
+    message: { pass: 'stays', warning: 'leaves', fail: 'leaves' },
+    fix: "Damp the floor more (a tighter weave, a felt or hide underlay), drive slower over rough ground, or soften the wheels' contact (a rawhide tyre); the floor-damping figure gives the damping that would keep the crew down.",
+  },
+  stone: {
+    airborne: 'stone_airborne_ms',
+    rise: 'stone_rise_mm',
+    combination: 'accidental',
+    message: { pass: 'stoneHeld', warning: 'stoneThrown' },
+    fix: 'Slow down for stones and rut edges, and hold on: no floor keeps a standing crew down on a hard strike at speed. A smaller design stone (operation.bump_height_mm) is a promise about the track, so make it one you can keep.',
+  },
+} as const satisfies Record<RoadGround, { airborne: Name; rise: Name; combination: Combination; message: Record<string, Message>; fix: string }>;
 
 /** The limit that decides: the one the value is furthest beyond (by severity, then by utilisation). */
 function governingLimit(c: CrewRide, pair: { airborne: Name; rise: Name }, limits: Record<Name, ResolvedLimit>): Name {
@@ -66,54 +81,39 @@ export const crewAirborne = defineRule({
       step(`${c.role}: rise above standing`, '', c.rise_mm, 'mm'),
       step(`${c.role}: peak floor force / weight`, '', c.floor_dlf, '1'),
     ];
+    /** One crew member in one road case, judged as its ground is. */
+    const judge = (over: RoadGround, r: RideResult, c: CrewRide, i: number, note: string[]) => {
+      const g = GROUNDS[over];
+      const name = governingLimit(c, g, limits);
+      ctx.report({
+        // A crew member once in each road case: the case qualifies the subject.
+        subject: `crew.${i}.${r.case}`,
+        label: `${c.role}, ${r.title}`,
+        load_case: over,
+        combination: g.combination,
+        sources: rideSourceIds(ctx.data, ctx.spec, r.case),
+        message: g.message,
+        params: { role: c.role, case: r.title, airborne: c.airborne_ms, airborneLimit: shown(limits[g.airborne]), lift: c.lift_mm, liftLimit: shown(limits[g.rise]), dlf: c.floor_dlf },
+        value: name === g.airborne ? c.airborne_ms : c.lift_mm,
+        unit: LIMITS[name].unit,
+        against: { limit: name },
+        fix: withinLimit(c.airborne_ms, limits[g.airborne]) && withinLimit(c.lift_mm, limits[g.rise]) ? 'None needed.' : g.fix,
+        working: [...rideWorking(r), ...measures(c), `governing limit: ${name}`, ...note],
+      });
+    };
     for (const shape of ROAD_SHAPES) {
       const rough = rides[roadCase('rough-ground', shape)];
       const stone = rides[roadCase('stone', shape)];
       rough.crew.forEach((c, i) => {
-        // A crew member once in each road case: the case qualifies the subject.
-        const where = { subject: `crew.${i}.${rough.case}`, label: `${c.role}, ${rough.title}`, load_case: 'rough-ground', combination: 'characteristic' as const, sources: rideSourceIds(ctx.data, ctx.spec, rough.case) };
         if (!finite(c)) {
-          ctx.report({ ...where, message: 'notComputed', params: { case: rough.title }, severity: 'fail', fix: 'Fix what stops the floor model (see floor.convergence), then check again.', working: rideWorking(rough) });
+          ctx.report({ subject: `crew.${i}.${rough.case}`, label: `${c.role}, ${rough.title}`, load_case: 'rough-ground', combination: 'characteristic', message: 'notComputed', params: { case: rough.title }, severity: 'fail', fix: 'Fix what stops the floor model (see floor.convergence), then check again.', working: rideWorking(rough) });
           return;
         }
         const s = stone.crew[i];
         const apart = finite(s) && worseAtStone(s, c);
-        const name = governingLimit(c, PAIRS['rough-ground'], limits);
-        ctx.report({
-          ...where,
-          message: { pass: 'stays', warning: 'leaves', fail: 'leaves' },
-          params: { role: c.role, case: rough.title, airborne: c.airborne_ms, airborneLimit: shown(limits.airborne_ms), lift: c.lift_mm, liftLimit: shown(limits.rise_mm), dlf: c.floor_dlf },
-          value: name === 'airborne_ms' ? c.airborne_ms : c.lift_mm,
-          unit: LIMITS[name].unit,
-          against: { limit: name },
-          fix: withinLimit(c.airborne_ms, limits.airborne_ms) && withinLimit(c.lift_mm, limits.rise_mm)
-            ? 'None needed.'
-            : "Damp the floor more (a tighter weave, a felt or hide underlay), drive slower over rough ground, or soften the wheels' contact (a rawhide tyre); the floor-damping figure gives the damping that would keep the crew down.",
-          working: [
-            ...rideWorking(rough),
-            ...measures(c),
-            `governing limit: ${name}`,
-            `${stone.title}: off the floor ${finite(s) ? `${formatQuantity(s.airborne_ms, 'ms')}, at most ${formatQuantity(s.lift_mm, 'mm')} above it` : 'not found'}${apart ? ': further than over rough ground, reported apart (load case stone)' : ': no further than over rough ground'}`,
-          ],
-        });
-        if (!apart) return;
-        const stoneName = governingLimit(s, PAIRS.stone, limits);
-        ctx.report({
-          subject: `crew.${i}.${stone.case}`,
-          label: `${s.role}, ${stone.title}`,
-          load_case: 'stone',
-          combination: 'accidental',
-          sources: rideSourceIds(ctx.data, ctx.spec, stone.case),
-          message: { pass: 'stoneHeld', warning: 'stoneThrown' },
-          params: { role: s.role, case: stone.title, airborne: s.airborne_ms, airborneLimit: shown(limits.stone_airborne_ms), lift: s.lift_mm, liftLimit: shown(limits.stone_rise_mm), dlf: s.floor_dlf },
-          value: stoneName === 'stone_airborne_ms' ? s.airborne_ms : s.lift_mm,
-          unit: LIMITS[stoneName].unit,
-          against: { limit: stoneName },
-          fix: withinLimit(s.airborne_ms, limits.stone_airborne_ms) && withinLimit(s.lift_mm, limits.stone_rise_mm)
-            ? 'None needed.'
-            : 'Slow down for stones and rut edges, and hold on: no floor keeps a standing crew down on a hard strike at speed. A smaller design stone (operation.bump_height_mm) is a promise about the track, so make it one you can keep.',
-          working: [...rideWorking(stone), ...measures(s), `governing limit: ${stoneName}`],
-        });
+        const seen = finite(s) ? `${formatQuantity(s.airborne_ms, 'ms')}, at most ${formatQuantity(s.lift_mm, 'mm')} above it` : 'not found';
+        judge('rough-ground', rough, c, i, [`${stone.title}: off the floor ${seen}${apart ? ': further than over rough ground, reported apart (load case stone)' : ': no further than over rough ground'}`]);
+        if (apart) judge('stone', stone, s, i, []);
       });
     }
   },
