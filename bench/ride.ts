@@ -1,4 +1,4 @@
-// The ride model's benchmark: one 3-second ridge case on the central-axle
+// The ride model's benchmark: one 3-second rough-ground ridge case on the central-axle
 // demo against a target time after warm-up, and its accuracy against odex at
 // relative tolerance 1e-10 on the crew's rise. Returns the count of missed targets.
 import { performance } from 'node:perf_hooks';
@@ -17,23 +17,23 @@ const RUNS = 21;
 export function benchRide(spec: CheckedSpecification, data: RulesData): number {
   const input = new ModelGraph(MODELS, { spec, data, ride: true }).get('rideInput');
   void input.floorStatic; // the floor is solved once, outside the timing
-  for (let i = 0; i < WARM; i++) rideCaseOf(input, 'ridge');
+  for (let i = 0; i < WARM; i++) rideCaseOf(input, 'rough-ridge');
   const times: number[] = [];
-  let result = rideCaseOf(input, 'ridge');
+  let result = rideCaseOf(input, 'rough-ridge');
   for (let i = 0; i < RUNS; i++) {
     const t0 = performance.now();
-    result = rideCaseOf(input, 'ridge');
+    result = rideCaseOf(input, 'rough-ridge');
     times.push(performance.now() - t0);
   }
   times.sort((a, b) => a - b);
   const ours = times[Math.floor(RUNS / 2)];
-  rideByOdex(input, 'ridge', 1e-10); // warm-up
+  rideByOdex(input, 'rough-ridge', 1e-10); // warm-up
   const t0 = performance.now();
-  const ref = rideByOdex(input, 'ridge', 1e-10);
+  const ref = rideByOdex(input, 'rough-ridge', 1e-10);
   const odexMs = performance.now() - t0;
   const worst = Math.max(...result.crew.map((c, i) => Math.abs(c.rise_mm - ref.rise_mm[i])));
   const fast = ours < TARGET_MS, close = worst < TOLERANCE_MM;
-  console.log(`ride model, ridge case 3 s: median ${ours.toFixed(2)} ms (${result.steps} RK4 steps)  target < ${TARGET_MS} ms  ${fast ? 'met' : 'MISSED'}`);
+  console.log(`ride model, rough-ground ridge case 3 s: median ${ours.toFixed(2)} ms (${result.steps} RK4 steps)  target < ${TARGET_MS} ms  ${fast ? 'met' : 'MISSED'}`);
   console.log(`  odex at rel. tol. 1e-10: ${odexMs.toFixed(1)} ms (${ref.nEval} evaluations); odex / RK4 time ${(odexMs / ours).toFixed(1)}`);
   console.log(`  crew rise: ${result.crew.map((c, i) => `${c.role} ${c.rise_mm.toFixed(4)} / ${ref.rise_mm[i].toFixed(4)} mm`).join(', ')}; worst difference ${worst.toFixed(4)} mm  target < ${TOLERANCE_MM} mm  ${close ? 'met' : 'MISSED'}`);
   return (fast ? 0 : 1) + (close ? 0 : 1);

@@ -57,7 +57,7 @@ describe.skipIf(!browser)('the HTML report in headless Chromium', () => {
     expect(laid).toHaveLength(html.match(/<svg[\s>]/g)!.length);
     expect(laid.length).toBeGreaterThanOrEqual(4); // the three drawings of the build and the wheel setting-out at least
     // The plots drawn by vega: load per horse, the turn over speed, three per ride case.
-    expect(laid.filter((f) => /\bmarks\b/.test(f.cls))).toHaveLength(2 + 3 * 3);
+    expect(laid.filter((f) => /\bmarks\b/.test(f.cls))).toHaveLength(2 + 3 * 5); // five ride cases
     for (const f of laid) {
       expect(f.width, f.cls).toBeGreaterThan(0);
       expect(f.height, f.cls).toBeGreaterThan(0);

@@ -76,7 +76,7 @@ const SHEETS: Record<string, string[]> = {
   Findings: ['findings', 'notes'],
   'Mass and balance': ['parts', 'load-cases'],
   Loads: ['loads'],
-  Ride: ['ride-damping', ...['ridge', 'one-wheel', 'drop'].flatMap((c) => ['crew', 'wheels', 'case'].map((t) => `ride-${c}-${t}`))],
+  Ride: ['ride-damping', ...['rough-ridge', 'rough-one-wheel', 'stone-ridge', 'stone-one-wheel', 'drop'].flatMap((c) => ['crew', 'wheels', 'case'].map((t) => `ride-${c}-${t}`))],
   'Cut list': ['cut-list'],
   Leather: ['leather-items', 'hides'],
   'Wheel setting-out': ['setting-out'],

@@ -24,7 +24,7 @@ export interface RideOptions {
 export const RIDE_REPORT_FILE = 'ride.md';
 export const rideCsvFile = (c: RideCase) => `ride-${c}.csv`;
 
-/** `axletree ride <spec> [--case ridge|one-wheel|drop] [--out DIR] [--json]`: the ride model's time series, plots and report. */
+/** `axletree ride <spec> [--case CASE] [--out DIR] [--json]`: the ride model's time series, plots and report. */
 export async function rideCommand(file: string, opts: RideOptions, con: Console): Promise<number> {
   if (opts.case !== undefined && !(RIDE_CASES as readonly string[]).includes(opts.case)) {
     con.err(`axletree ride: unknown case "${opts.case}"; cases: ${RIDE_CASES.join(', ')}.\n`);

@@ -1,6 +1,6 @@
 import { lateralLimits } from './model/turn-limits.ts';
 import type { ModelView } from './pipeline/define-model.ts';
-import type { Figure } from './result/figure.ts';
+import type { Figure, FigureEntry } from './result/figure.ts';
 import { G, UNITS } from './units/units.ts';
 import { tightestYokeRadius } from './model/turn.ts';
 import { memberFigures } from './model/members/member-figures.ts';
@@ -8,10 +8,10 @@ import { floorFigures } from './model/cable-net/floor-figures.ts';
 import { rideFigures } from './ride/ride-figures.ts';
 
 /** The models the named figures read. */
-export type FiguresView = ModelView<'mass' | 'loadCases' | 'staticCase' | 'turn' | 'floorStatic' | 'floorBump' | 'ride' | 'bumpFactors' | 'cutting'>;
+export type FiguresView = ModelView<'mass' | 'loadCases' | 'staticCase' | 'turn' | 'floorStatic' | 'floorBump' | 'ride' | 'bumpFactors' | 'stoneFactors' | 'cutting'>;
 
-/** The named figures of a check; later families add theirs here. */
-export function figures(a: FiguresView): Record<string, Figure> {
+/** The named figures of a check, or why one does not apply; later families add theirs here. */
+export function figures(a: FiguresView): Record<string, FigureEntry> {
   const cases = a.loadCases;
   const stat = cases.find((c) => c.id === 'static')!;
   const yoke = cases.map((c) => c.yoke_load_N);

@@ -94,7 +94,7 @@ describe('writeOutputs with ride results', () => {
     await writeOutputs(withRide(), dir, join(dir, 'spec.yaml'));
     const md = await readFile(join(dir, 'report.md'), 'utf8');
     const linked = [...md.matchAll(/\]\((ride-[^)]+\.svg)\)/g)].map((m) => m[1]);
-    expect(linked.length).toBe(9);
+    expect(linked.length).toBe(15); // three plots for each of the five cases
     const files = await readdir(dir);
     for (const f of linked) expect(files).toContain(f);
   });

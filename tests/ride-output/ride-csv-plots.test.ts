@@ -7,7 +7,7 @@ import { rideCaseSummary, strideSeries } from '../../src/core/result/ride-summar
 import { demoRide } from '../fixtures/sample-ride.ts';
 
 describe('rideCsv', () => {
-  const r = demoRide().results.ridge;
+  const r = demoRide().results['rough-ridge'];
   const lines = rideCsv(r.series).trimEnd().split('\n');
 
   it('has one column per channel with its unit, time first, a row per sample', () => {
@@ -28,9 +28,9 @@ describe('rideCsv', () => {
 
 describe('ride plots', () => {
   it('heights, floor forces and wheel and yoke forces, each with its channels', async () => {
-    const r = demoRide().results['one-wheel'];
+    const r = demoRide().results['stone-one-wheel'];
     const files = await ridePlotFiles(r.case, r.title, r.series);
-    expect(files.map(([n]) => n)).toEqual(['ride-one-wheel-heights.svg', 'ride-one-wheel-floor-forces.svg', 'ride-one-wheel-support-forces.svg']);
+    expect(files.map(([n]) => n)).toEqual(['ride-stone-one-wheel-heights.svg', 'ride-stone-one-wheel-floor-forces.svg', 'ride-stone-one-wheel-support-forces.svg']);
     expect(ridePlotNames(r.case, r.series)).toEqual(files.map(([n]) => n));
     const [, heights] = files[0];
     const [, floor] = files[1];

@@ -82,6 +82,8 @@ export interface Ground {
   /** The ground's share of the rolling resistance at the reference wheel diameter (rules/parameters/rolling.yaml). */
   soil_resistance: Sourced;
   lateral_friction: Sourced;
+  /** The routine rough ground the ride model runs over where the specification gives no operation.rough_ground: a ridge's height and length, mm. */
+  rough_ground?: { height_mm: Sourced; length_mm: Sourced };
 }
 
 export interface RulesData {

@@ -2,7 +2,7 @@ import type { CuttingResult } from '../cutlist/cutting-result.ts';
 import type { LoadEntry } from '../loads/load-entry.ts';
 import type { PlotData } from '../plots/plot-data.ts';
 import type { BuildScene } from '../result/build-scene.ts';
-import type { Figure } from '../result/figure.ts';
+import type { FigureEntry } from '../result/figure.ts';
 import type { FloorModel } from '../model/cable-net/floor-model.ts';
 import type { JointDemand, Joint } from '../model/lashing-demand.ts';
 import type { LoadCaseResult } from '../model/load-case-result.ts';
@@ -10,17 +10,12 @@ import type { MassModel } from '../model/mass-model.ts';
 import type { MemberCase } from '../model/member-cases.ts';
 import type { TurnModel } from '../model/turn.ts';
 import type { DampingNeeded } from '../ride/damping-tuner.ts';
-import type { DynamicFactor } from '../ride/dynamic-factors.ts';
+import type { GroundFactors } from '../ride/dynamic-factors.ts';
 import type { RideInput } from '../ride/ride-build.ts';
 import type { RideCase, RideResult } from '../ride/ride-types.ts';
 
-/** The bump case's factors: the crew's for the floor and lashings, the wheels' for the members. */
-export interface BumpFactors {
-  crew: DynamicFactor;
-  wheel: DynamicFactor;
-  /** The ride model's largest yoke force above the standing one, N; null without a ride. */
-  yokeIncrease_N: number | null;
-}
+/** One ground's dynamic factors: the crew's for the floor and lashings, the wheels' for the members, the yoke's rise for the pole; provisional where the data's bound stands in. */
+export type BumpFactors = GroundFactors;
 
 /** Every model of a check by id, with what it gives. Models and rules name the ones they read. */
 export interface ModelValues {
@@ -34,12 +29,14 @@ export interface ModelValues {
   floorStatic: FloorModel;
   /** What the ride model reads from the other models. */
   rideInput: RideInput;
-  /** The ride model's three cases; null where it is not run (no crew, or a statics-only run). */
+  /** The ride model's cases (rough ground and the stone, each under both wheels and one; the drop test); null where it is not run (no crew, or a statics-only run). */
   ride: Record<RideCase, RideResult> | null;
   /** The least floor damping ratio that meets the ride rules (the tuner); null where the ride model is not run. */
   floorDampingNeeded: DampingNeeded | null;
-  /** The bump case's dynamic factors, from the ride model or the placeholder. */
+  /** Routine rough ground's dynamic factors (operation.rough_ground), from the ride model or, provisional, the data's routine_factor_bound. */
   bumpFactors: BumpFactors;
+  /** The stone strike's dynamic factors (operation.bump_height_mm, bump_length_mm), from the ride model or, provisional, the data's stone_factor_bound. */
+  stoneFactors: BumpFactors;
   /** The strap floor under the crew's weight times the bump factor. */
   floorBump: FloorModel;
   /** The load cases the timber members are checked in, with their load-duration classes. */
@@ -48,8 +45,8 @@ export interface ModelValues {
   cutting: CuttingResult;
   /** The force each lashed joint must pass, case by case. */
   lashingDemands: Record<Joint, JointDemand>;
-  /** The named figures of the result. */
-  figures: Record<string, Figure>;
+  /** The named figures of the result, or for each that does not apply the reason why. */
+  figures: Record<string, FigureEntry>;
   /** Every load the models computed, by part and case (the Loads sheet). */
   loads: LoadEntry[];
   /** What the drawings of the build are made from. */

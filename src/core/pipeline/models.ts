@@ -2,12 +2,12 @@ import { cuttingResult } from '../cutlist/cutting-model.ts';
 import { floorModel } from '../model/cable-net/floor-model.ts';
 import { lashingDemands } from '../model/lashing-demand.ts';
 import { loadCases } from '../model/load-cases.ts';
-import { loadFactor } from '../model/load-factors.ts';
 import { massModel } from '../model/mass-model.ts';
 import { memberCases } from '../model/member-cases.ts';
 import { turnModel } from '../model/turn.ts';
 import { floorDampingNeeded } from '../ride/damping-tuner.ts';
-import { crewFloorFactor, wheelFactor, yokeIncrease } from '../ride/dynamic-factors.ts';
+import { groundFactors } from '../ride/dynamic-factors.ts';
+import { param } from '../data/param.ts';
 import { rideCases } from '../ride/ride-model.ts';
 import { defineModel, withInputs, type ModelDef } from './define-model.ts';
 import { COMBINATION_PARAMS } from '../model/combination-factors.ts';
@@ -29,7 +29,7 @@ const BALANCE = [...MASS, ...ROLLING_PARAMS, ...COMBINATION_PARAMS] as const;
 const TIMBER_STIFFNESS = ['timber-strength.fifth_percentile_z', 'timber-strength.cov_moe', 'timber-strength.min_moisture_credit_pct'] as const;
 /** Everything a run of the ride model reads (the ground's own stiffness and damping follow the specification's ground). */
 const RIDE = [
-  'ride.inputs.duration_s', 'ride.inputs.sample_interval_s', 'ride.inputs.decay_fraction',
+  'ride.inputs.duration_s', 'ride.inputs.sample_interval_s', 'ride.inputs.decay_fraction', 'ride.inputs.rough_ground_height_mm', 'ride.inputs.rough_ground_length_mm',
   'ride.wheel-contact.stiffness_bare', 'ride.wheel-contact.stiffness_tyred', 'ride.wheel-contact.damping_ratio',
   'ride.supports.yoke_pad_stiffness', 'ride.supports.yoke_damping_ratio', 'ride.supports.shear_modulus_ratio', 'ride.supports.legs_stiffness', 'ride.supports.floor_damping_ratio',
   ...TIMBER_STIFFNESS,
@@ -97,14 +97,20 @@ export const floorDampingNeededDef = defineModel({
   compute: ({ rideInput }, { spec, ride }) => (ride && spec.crew.length > 0 ? floorDampingNeeded(rideInput) : null),
 });
 
+/** The routine rough ground's dynamic factors: a variable action in the fundamental combinations. */
 export const bumpFactorsDef = defineModel({
   id: 'bumpFactors',
   needs: ['ride'],
-  params: ['load-cases.bump_dynamic_factor'],
-  compute: ({ ride }, { data }) => {
-    const placeholder = loadFactor(data, 'bump_dynamic_factor');
-    return { crew: crewFloorFactor(ride, placeholder), wheel: wheelFactor(ride, placeholder), yokeIncrease_N: yokeIncrease(ride)?.value ?? null };
-  },
+  params: ['load-cases.routine_factor_bound'],
+  compute: ({ ride }, { data }) => groundFactors(ride, 'rough-ground', param(data, 'load-cases', 'routine_factor_bound')),
+});
+
+/** The stone strike's dynamic factors: an accidental action. */
+export const stoneFactorsDef = defineModel({
+  id: 'stoneFactors',
+  needs: ['ride'],
+  params: ['load-cases.stone_factor_bound'],
+  compute: ({ ride }, { data }) => groundFactors(ride, 'stone', param(data, 'load-cases', 'stone_factor_bound')),
 });
 
 export const floorBumpDef = defineModel({
@@ -139,8 +145,8 @@ export const lashingDemandsDef = defineModel({
 
 export const figuresDef = defineModel({
   id: 'figures',
-  needs: ['mass', 'loadCases', 'staticCase', 'turn', 'floorStatic', 'floorBump', 'ride', 'bumpFactors', 'cutting'],
-  params: [...TIMBER_STIFFNESS, ...COMBINATION_PARAMS], // the pole's Euler load; the turn's limits in equilibrium
+  needs: ['mass', 'loadCases', 'staticCase', 'turn', 'floorStatic', 'floorBump', 'ride', 'bumpFactors', 'stoneFactors', 'cutting'],
+  params: [...TIMBER_STIFFNESS, ...COMBINATION_PARAMS, 'ride.inputs.decay_fraction', 'ride.inputs.duration_s'], // the pole's Euler load; the turn's limits in equilibrium; the decay figure's reason
   compute: (m, i) => figures(withInputs(m, i)),
 });
 
@@ -167,6 +173,6 @@ export const plotsDef = defineModel({
 
 /** Every model, in no particular order: the graph finds the order from their needs. */
 export const MODELS: readonly ModelDef[] = [
-  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, floorBumpDef, memberCasesDef, cuttingDef, lashingDemandsDef,
+  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorBumpDef, memberCasesDef, cuttingDef, lashingDemandsDef,
   figuresDef, loadsDef, sceneDef, plotsDef,
 ];

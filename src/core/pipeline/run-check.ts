@@ -6,6 +6,8 @@ import { severityRank, verdictOf } from '../findings/severity.ts';
 import type { CheckResult } from '../result/check-result.ts';
 import { rideSummary } from '../result/ride-summary.ts';
 import { floorDampingOf } from '../ride/ride-build.ts';
+import { dampingFigure } from '../ride/damping-figure.ts';
+import { splitFigures } from '../result/figure.ts';
 import { RULES } from '../rules/index.ts';
 import { usedSources } from '../sources.ts';
 import type { SpecEntry } from '../spec/spec-entry.ts';
@@ -43,7 +45,7 @@ export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data:
     tool: { name: pkg.name, version: pkg.version },
     spec_name: spec.name,
     verdict: verdictOf(findings.map((f) => f.severity)),
-    figures: { ...graph.get('figures'), ...(damping ? { floor_damping_ratio_needed: { value: damping.ratio ?? NaN, unit: '1' } } : {}) },
+    ...splitFigures({ ...graph.get('figures'), floor_damping_ratio_needed: dampingFigure(damping) }),
     findings: ordered,
     mass: { parts: mass.parts, rolling_mass_kg: mass.rolling.mass_kg, yoke_mass_kg: mass.yoke.mass_kg, total_mass_kg: mass.total.mass_kg },
     balance: { cases: graph.get('loadCases') },

@@ -15,7 +15,10 @@ export interface CheckResult {
   tool: { name: string; version: string };
   spec_name: string;
   verdict: Severity;
+  /** Named figures, each a finite number: never NaN, Infinity or null. */
   figures: Record<string, Figure>;
+  /** The figures that do not apply to this build or run, each with the reason, in words. */
+  figures_not_applicable: Record<string, string>;
   findings: Finding[];
   mass: { parts: PartMass[]; rolling_mass_kg: number; yoke_mass_kg: number; total_mass_kg: number };
   balance: { cases: LoadCaseResult[] };

@@ -20,7 +20,7 @@ export interface RideSummary {
   cases: RideCaseSummary[];
   /**
    * The least floor damping ratio that meets the decay rule and keeps the crew
-   * on the floor over the design bump; null where no damping does. Absent where
+   * on the floor over rough ground; null where no damping does. Absent where
    * the tuner did not run: it runs only when the decay rule finds the motion
    * dies out too slowly.
    */

@@ -2,14 +2,14 @@ import { limitLevel } from '../data/param.ts';
 import type { RulesData } from '../data/rules-data.ts';
 import { leastOnGrid } from './bisect-least.ts';
 import type { RideInput } from './ride-build.ts';
-import { RIDE_CASES, rideCaseOf } from './ride-model.ts';
-import type { RideCase, RideResult } from './ride-types.ts';
+import { rideCaseOf } from './ride-model.ts';
+import { ROUTINE_CASES, type RideCase, type RideResult } from './ride-types.ts';
 import { meetsRideRules, type CrewLimits } from './ride-verdict.ts';
 
 // The floor-damping tuner: the least floor damping ratio with which the crew
-// stay on the floor over the design bump and their motion dies out within the
-// decay rule's cycles, found by bisection over full simulations of all three
-// cases (mechanics note, section 8).
+// stay on the floor over routine rough ground and their motion dies out within the
+// decay rule's cycles, found by bisection over full simulations of the drop test
+// and the two rough-ground cases (design basis, section 8).
 
 export interface DampingNeeded {
   /** The least floor damping ratio that meets both rules; null if none up to the upper bound does. */
@@ -37,7 +37,7 @@ export function floorDampingNeeded(i: RideInput, grid: readonly number[] = DAMPI
   const maxCycles = limitLevel(i.data, 'ride.decay', 'cycles', 'hard');
   let simulations = 0;
   // The drop first: the decay most often decides, and a failing case ends the trial.
-  const order: RideCase[] = ['drop', ...RIDE_CASES.filter((c) => c !== 'drop')];
+  const order: RideCase[] = ['drop', ...ROUTINE_CASES];
   const holds = (zeta: number) => {
     const rides: Partial<Record<RideCase, RideResult>> = {};
     for (const c of order) {
@@ -50,7 +50,7 @@ export function floorDampingNeeded(i: RideInput, grid: readonly number[] = DAMPI
   const r = leastOnGrid(holds, grid, tolerance);
   const [lower, upper] = [grid[0], grid[grid.length - 1]];
   const working = r.value === null
-    ? `no floor damping ratio up to ${upper} keeps the crew on the floor and their motion within ${maxCycles} cycles (${simulations} simulations)`
+    ? `no floor damping ratio up to ${upper} keeps the crew on the floor over rough ground and their motion within ${maxCycles} cycles (${simulations} simulations)`
     : r.atLower
       ? `the rules are met already at a floor damping ratio of ${lower}`
       : `ζ_floor tried at ${grid.join(', ')} in turn, then bisection to ${tolerance * 100} %: least ζ_floor = ${r.value.toFixed(4)} (${simulations} simulations)`;

@@ -9,8 +9,8 @@ import type { LoadCaseResult } from '../model/load-case-result.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { G, mm, UNITS } from '../units/units.ts';
 import { rigidBody } from './body-inertia.ts';
-import { groundContact, inSeries, rideParam } from './ride-data.ts';
-import type { RideCase } from './ride-types.ts';
+import { groundContact, inSeries, rideParam, roughGround, stone, type ProfileValue } from './ride-data.ts';
+import { groundOf, underBothWheels, type RideCase } from './ride-types.ts';
 import { wheelEnvelope, type Envelope } from './road-envelope.ts';
 import type { RideSystem, RoadInput } from './ride-system.ts';
 
@@ -28,7 +28,7 @@ export interface RideInput {
 export interface RideOptions {
   /** Floor damping ratio in place of the rules' or the measured floor's. */
   floorDampingRatio?: number;
-  /** Bump height and length, m, in place of the specification's. */
+  /** The road case's ridge or stone height and length, m, in place of the specification's or the ground's. */
   bumpHeight?: number;
   bumpLength?: number;
   duration?: number;
@@ -38,7 +38,7 @@ export interface RideOptions {
 
 export interface BuiltRide {
   system: RideSystem;
-  /** When the road input has passed (ridge, one wheel), s; the drop's is found from the first wheel contact. */
+  /** When the road input has passed (road cases), s; the drop's is found from the first wheel contact. */
   inputEnd: number;
   /** Times at which the road input has a kink (the wheel strikes and leaves the bump), s. */
   breaks: number[];
@@ -101,8 +101,9 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
   const cg = ground ? damp * 2 * ground.zeta.value * Math.sqrt(ground.k.value * wheelMass) : 0;
   const iron = tyreOf(spec)?.kind === 'iron' ? ', an iron tyre taken as the bare wheel: no iron-tyred stiffness is held' : '';
   working.push(`wheel (${build}${iron}) k = ${f(wheel.k / 1e3, 0)} kN/m, ζ = ${wheel.zeta}, c = 2ζ√(k·N_w/g) = ${f(cw, 0)} N·s/m${ground ? `, in series with ${spec.operation.ground} k = ${f(ground.k.value / 1e3, 0)} kN/m, ζ = ${ground.zeta.value}, c = ${f(cg, 0)} N·s/m: together ${f(contact.k / 1e3, 0)} kN/m` : which === 'drop' ? ' on rigid ground' : ` (${spec.operation.ground} not in ride.ground-contact: taken as rigid)`}`);
+  // The damped spring's standing compression for the contact law: the wheel's own with a ground point, else the whole contact's.
   const wheelAt = (side: 'left' | 'right', y: number) => ({
-    side, y, k: contact.k, c: cw, kWheel: wheel.k, kGround: ground ? ground.k.value : Infinity, cGround: cg, ramp: (wheelMass * G) / wheel.k,
+    side, y, k: contact.k, c: cw, kWheel: wheel.k, kGround: ground ? ground.k.value : Infinity, cGround: cg, xs: (wheelMass * G) / (cg > 0 ? wheel.k : contact.k),
   });
 
   // Yoke: pole bending 3EI/L³ in series with the pad and horse; roll from pole torsion GJ/L.
@@ -132,21 +133,24 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
     const k = (kf * legs) / (kf + legs);
     const cc = damp * 2 * floorDamping.value * Math.sqrt(k * c.mass_kg);
     working.push(`${c.role}: floor ${f(kf / 1e3, 2)} kN/m (tangent, cable net) in series with the legs ${f(legs / 1e3, 0)} kN/m = ${f(k / 1e3, 2)} kN/m; ζ_floor = ${floorDamping.value}, c = ${f(cc, 0)} N·s/m`);
-    return { role: c.role, m: c.mass_kg, x: mm(c.x_mm), y: mm(c.y_mm), k, c: cc };
+    return { role: c.role, m: c.mass_kg, x: mm(c.x_mm), y: mm(c.y_mm), k, c: cc, xs: (c.mass_kg * G) / k };
   });
 
   const speed = which === 'drop' ? 0 : spec.operation.speed_kmh * UNITS.kmh.si;
   // The draught's couple about the contact: each part of the rolling resistance with its own arm (design basis, section 3).
   const couple = rollingResistance(spec, data).couple_m;
   const r = mm(lay.wheelRadius);
-  const bump = { height: o.bumpHeight ?? mm(spec.operation.bump_height_mm), length: o.bumpLength ?? mm(spec.operation.bump_length_mm) };
   let road: RoadInput = (_w, _t, out) => out.fill(0);
   let inputEnd = 0;
   let breaks: number[] = [];
-  if (which !== 'drop') {
+  const over = groundOf(which);
+  if (over !== null) {
+    const profile = over === 'rough-ground' ? roughGround(spec, data) : stone(spec);
+    sources.push(...profile.height.sources, ...profile.length.sources);
+    const bump = { height: o.bumpHeight ?? profile.height.value, length: o.bumpLength ?? profile.length.value };
     const env: Envelope = wheelEnvelope(bump, r);
-    const lead = 0.05 - env.start; // the wheel starts 50 mm short of where it strikes
-    const struck = which === 'ridge' ? [true, true] : [true, false];
+    const lead = 0.05 - env.start; // the wheel starts 50 mm short of where it first touches
+    const struck = underBothWheels(which) ? [true, true] : [true, false];
     road = (w, t, out) => {
       if (!struck[w]) return void out.fill(0);
       env.at(speed * t - lead, out);
@@ -155,7 +159,9 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
     inputEnd = (lead + env.end) / speed;
     // just past each kink, so a step never starts on its left-hand value
     breaks = [(lead + env.start) / speed + 1e-9, inputEnd + 1e-9];
-    working.push(`road: ${which === 'ridge' ? 'a ridge across both tracks' : 'a bump under the left wheel'}, raised cosine ${f(bump.height * 1000)} mm high and ${f(bump.length * 1000, 0)} mm long, the rigid wheel's envelope (r = ${f(r * 1000, 0)} mm) ${f((env.end - env.start) * 1000, 0)} mm long, at ${spec.operation.speed_kmh} km/h; draught couple (h_y − r)·C_s + h_y·C_b = ${f(couple, 4)} m`);
+    const what = over === 'rough-ground' ? 'rough ground, a ridge' : 'the stone, a hump';
+    const given = (v: number | undefined, p: ProfileValue) => (v === undefined ? p.from : 'set by the caller');
+    working.push(`road: ${what} ${underBothWheels(which) ? 'across both tracks' : 'under the left wheel'}, raised cosine ${f(bump.height * 1000)} mm high (${given(o.bumpHeight, profile.height)}) and ${f(bump.length * 1000, 0)} mm long (${given(o.bumpLength, profile.length)}), steepest slope πh/L = ${f((Math.PI * bump.height) / bump.length, 3)}; the rigid wheel's envelope (r = ${f(r * 1000, 0)} mm) ${f((env.end - env.start) * 1000, 0)} mm long, at ${spec.operation.speed_kmh} km/h; draught couple (h_y − r)·C_s + h_y·C_b = ${f(couple, 4)} m`);
   } else {
     working.push(`drop test: released at rest with every point ${f(spec.operation.drop_height_mm, 0)} mm above its standing position, onto rigid ground`);
   }
@@ -167,7 +173,7 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
       wheelAt('left', mm(spec.wheels.track_mm) / 2),
       wheelAt('right', -mm(spec.wheels.track_mm) / 2),
     ],
-    yoke: { x: mm(spec.pole.yoke_x_mm), k: yoke.k, c: cy, kRoll, cRoll, oneSided: which === 'drop', ramp: Math.max(i.staticCase.pole_load_N, 1) / yoke.k },
+    yoke: { x: mm(spec.pole.yoke_x_mm), k: yoke.k, c: cy, kRoll, cRoll, oneSided: which === 'drop', xs: Math.max(i.staticCase.pole_load_N, 1) / yoke.k },
     crew,
     draughtArm: which === 'drop' ? 0 : couple,
     road,

@@ -1,11 +1,10 @@
 import { buildRide, type RideInput, type RideOptions } from './ride-build.ts';
 import { rideParam } from './ride-data.ts';
 import { rideTitle, runRide } from './ride-run.ts';
-import type { RideCase, RideResult } from './ride-types.ts';
+import { RIDE_CASES, type RideCase, type RideResult } from './ride-types.ts';
 export { RIDE_CASES } from './ride-types.ts';
 
-// Entry points of the ride model: one case, or all three.
-
+// Entry points of the ride model: one case, or all of them.
 
 export function rideCaseOf(i: RideInput, which: RideCase, o: RideOptions = {}): RideResult {
   const built = buildRide(i, which, o);
@@ -18,5 +17,5 @@ export function rideCaseOf(i: RideInput, which: RideCase, o: RideOptions = {}): 
 }
 
 export function rideCases(i: RideInput, o: RideOptions = {}): Record<RideCase, RideResult> {
-  return { ridge: rideCaseOf(i, 'ridge', o), 'one-wheel': rideCaseOf(i, 'one-wheel', o), drop: rideCaseOf(i, 'drop', o) };
+  return Object.fromEntries(RIDE_CASES.map((c) => [c, rideCaseOf(i, c, o)])) as Record<RideCase, RideResult>;
 }

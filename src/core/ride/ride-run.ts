@@ -2,7 +2,7 @@ import { G } from '../units/units.ts';
 import type { BuiltRide } from './ride-build.ts';
 import { decayCycles, TurningPoints } from './decay.ts';
 import { integrate } from './integrate.ts';
-import { contactMode, derivative, newForces, stateSize } from './ride-system.ts';
+import { anyWheelPushes, contactMode, crewShut, derivative, newForces, stateSize, wheelShut } from './ride-system.ts';
 import type { RideChannel, RideResult, RideCase } from './ride-types.ts';
 import { staticEquilibrium } from './static-equilibrium.ts';
 
@@ -19,7 +19,13 @@ export interface RunSettings {
   title: string;
 }
 
-const TITLES: Record<RideCase, string> = { ridge: 'ridge across both tracks', 'one-wheel': 'bump under one wheel', drop: 'drop test' };
+const TITLES: Record<RideCase, string> = {
+  'rough-ridge': 'rough-ground ridge across both tracks',
+  'rough-one-wheel': 'rough-ground ridge under one wheel',
+  'stone-ridge': 'stone strike under both wheels',
+  'stone-one-wheel': 'stone strike under one wheel',
+  drop: 'drop test',
+};
 export const rideTitle = (c: RideCase) => TITLES[c];
 
 export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResult {
@@ -32,7 +38,7 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
   const h = Math.min(1e-3, b.shortestPeriod / (s.stepsPerPeriod ?? 60), b.shortestTimeConstant / 2);
   const scratch = newForces(sys), forces = newForces(sys);
   const dyScratch = new Float64Array(stateSize(sys));
-  const wheelBits = sys.wheels.length;
+  const wheelCount = sys.wheels.length;
 
   const crewStatic = sys.crew.map((_, i) => rest.y[3 + i]);
   const crewRise = sys.crew.map(() => 0), crewLift = sys.crew.map(() => 0), crewAir = sys.crew.map(() => 0), crewPeak = sys.crew.map(() => 0);
@@ -69,9 +75,10 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
       breaks: b.breaks,
       onStep(t0, t1, y, mode) {
         const dt = t1 - t0;
-        for (let i = 0; i < wheelBits; i++) if (!(mode & (1 << i))) wheelAir[i] += dt;
-        for (let i = 0; i < n; i++) if (!(mode & (1 << (wheelBits + i)))) crewAir[i] += dt;
-        if (Number.isNaN(firstContact) && mode & ((1 << wheelBits) - 1)) firstContact = t0;
+        // Off the ground or the floor only while the gap is open, not where the contact law has cut the force.
+        for (let i = 0; i < wheelCount; i++) if (!wheelShut(mode, i)) wheelAir[i] += dt;
+        for (let i = 0; i < n; i++) if (!crewShut(sys, mode, i)) crewAir[i] += dt;
+        if (Number.isNaN(firstContact) && anyWheelPushes(sys, mode)) firstContact = t0;
         derivative(sys, t1, y, dyScratch, forces);
         for (let i = 0; i < n; i++) {
           const c = sys.crew[i];
@@ -81,7 +88,7 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
           crewPeak[i] = Math.max(crewPeak[i], forces.crew[i]);
           turning[i].add(t1, y[3 + i] - crewStatic[i], y[N + 3 + i]);
         }
-        for (let i = 0; i < wheelBits; i++) wheelPeak[i] = Math.max(wheelPeak[i], forces.wheel[i]);
+        for (let i = 0; i < wheelCount; i++) wheelPeak[i] = Math.max(wheelPeak[i], forces.wheel[i]);
         yokeMin = Math.min(yokeMin, forces.yoke);
         yokeMax = Math.max(yokeMax, forces.yoke);
         while (nextSample <= t1 + 1e-12) {

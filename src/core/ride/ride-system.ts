@@ -1,5 +1,6 @@
 import type { RigidBody } from './body-inertia.ts';
 import { G } from '../units/units.ts';
+import { contactDamping, contactForce } from './contact-law.ts';
 
 // The ride model's equations (mechanics note, section 8), gravity explicit,
 // forces positive up on the car, small angles. State: displacements from the
@@ -8,10 +9,12 @@ import { G } from '../units/units.ts';
 // with w the heave of the car body's centre of mass, θ pitch (nose up), φ roll
 // (left side up) and u_i each crew member's height. SI units.
 
-/** A one-sided spring and damper: it pushes only, F = max(0, k·δ + c·δ') while δ > 0. */
+/** A one-sided spring and damper: the contact law of contact-law.ts, about a standing compression xs. */
 export interface Contact {
   k: number;
   c: number;
+  /** Standing compression of the damped spring, m: the damping is c there, and c·x/xs at indentation x. */
+  xs: number;
 }
 
 export interface CrewMass extends Contact {
@@ -27,10 +30,9 @@ export interface CrewMass extends Contact {
  * the point between the two is a state of its own, its compression x_g with
  * cGround·x_g' = F − kGround·x_g, so the force through the wheel cannot jump
  * when the road's slope does (the rim striking the bump). With no ground
- * damper the two springs are one, k. The wheel's own damper comes in over the
- * first `ramp` metres of its compression (its static deflection), c·min(1,
- * e/ramp): a massless spring and damper would otherwise jump to c·e' the
- * instant the rim touches, a force no real contact gives.
+ * damper the two springs are one, k. The wheel's own damper follows the
+ * contact law (damping c·e/xs at compression e of the wheel's spring), so
+ * the force rises from zero when the rim touches.
  */
 export interface WheelSupport extends Contact {
   side: 'left' | 'right';
@@ -38,7 +40,6 @@ export interface WheelSupport extends Contact {
   kWheel: number;
   kGround: number;
   cGround: number;
-  ramp: number;
 }
 
 export interface YokeSupport {
@@ -48,10 +49,10 @@ export interface YokeSupport {
   /** Roll spring and damper (pole torsion with the yoke on two necks), N·m/rad and N·m·s/rad; 0 without the horses. */
   kRoll: number;
   cRoll: number;
-  /** True for a prop that can only push (the drop test); false for the yoke held on the necks. */
+  /** True for a prop that can only push (the drop test, by the contact law); false for the yoke held on the necks. */
   oneSided: boolean;
-  /** Compression over which a one-sided prop's damper comes in, m (as for a wheel). */
-  ramp: number;
+  /** A prop's standing compression, m (the contact law's xs). */
+  xs: number;
 }
 
 /** Ground height under wheel `wheel` at time t into out[0] (m) and its rate into out[1] (m/s). */
@@ -68,11 +69,14 @@ export interface RideSystem {
   road: RoadInput;
 }
 
-/** Forces of one evaluation, for the record. */
+/** Forces of one evaluation, for the record, with the indentation of each one-sided contact (its gap is shut while above zero), m. */
 export interface Forces {
   wheel: number[];
   crew: number[];
   yoke: number;
+  wheelIndent: number[];
+  crewIndent: number[];
+  yokeIndent: number;
 }
 
 /** Wheels whose ground point is a state (a ground with a damper). */
@@ -99,23 +103,28 @@ export function derivative(s: RideSystem, t: number, y: ArrayLike<number>, dy: F
     s.road(i, t, ROAD);
     const ay = wh.y - b.y;
     const d = ROAD[0] - (w + ax * th + ay * ph), dd = ROAD[1] - (vw + ax * vth + ay * vph);
-    let F: number;
-    if (linear) F = wh.k * d + wh.c * dd;
-    else if (wh.cGround > 0) {
+    let F: number, indent: number;
+    if (linear) {
+      F = wh.k * d + wh.c * dd;
+      indent = d;
+    } else if (wh.cGround > 0) {
       // wheel spring compression e = d − x_g; with e' = d' − x_g' and x_g' = (F − k_g x_g)/c_g solved for F.
       const xg = y[node];
       const e = d - xg;
-      const c = e < wh.ramp ? (wh.c * Math.max(0, e)) / wh.ramp : wh.c;
-      const r = c / wh.cGround;
-      F = e > 0 ? (wh.kWheel * e + c * dd + r * wh.kGround * xg) / (1 + r) : 0;
+      const r = contactDamping(wh.c, wh.xs, e) / wh.cGround;
+      F = e > 0 ? (wh.kWheel * e + r * wh.cGround * dd + r * wh.kGround * xg) / (1 + r) : 0;
       if (F < 0) F = 0;
+      indent = e;
       dy[node] = (F - wh.kGround * xg) / wh.cGround;
       node++;
     } else {
-      F = d > 0 ? wh.k * d + (d < wh.ramp ? (wh.c * d) / wh.ramp : wh.c) * dd : 0;
-      if (F < 0) F = 0;
+      F = contactForce(wh.k, wh.c, wh.xs, d, dd);
+      indent = d;
     }
-    if (out) out.wheel[i] = F;
+    if (out) {
+      out.wheel[i] = F;
+      out.wheelIndent[i] = indent;
+    }
     wheelSum += F;
     Fz += F;
     Mth += F * ax;
@@ -125,12 +134,11 @@ export function derivative(s: RideSystem, t: number, y: ArrayLike<number>, dy: F
   const yk = s.yoke;
   const yx = yk.x - b.x;
   const dy0 = -(w + yx * th - b.y * ph), ddy0 = -(vw + yx * vth - b.y * vph);
-  let Fy = yk.k * dy0 + yk.c * ddy0;
-  if (yk.oneSided && !linear) {
-    Fy = dy0 > 0 ? yk.k * dy0 + (dy0 < yk.ramp ? (yk.c * dy0) / yk.ramp : yk.c) * ddy0 : 0;
-    if (Fy < 0) Fy = 0;
+  const Fy = yk.oneSided && !linear ? contactForce(yk.k, yk.c, yk.xs, dy0, ddy0) : yk.k * dy0 + yk.c * ddy0;
+  if (out) {
+    out.yoke = Fy;
+    out.yokeIndent = dy0;
   }
-  if (out) out.yoke = Fy;
   Fz += Fy;
   Mth += Fy * yx;
   Mph += -Fy * b.y - yk.kRoll * ph - yk.cRoll * vph;
@@ -138,9 +146,11 @@ export function derivative(s: RideSystem, t: number, y: ArrayLike<number>, dy: F
     const c = s.crew[i];
     const cx = c.x - b.x, cy = c.y - b.y;
     const d = w + cx * th + cy * ph - y[3 + i], dd = vw + cx * vth + cy * vph - y[N + 3 + i];
-    let F = c.k * d + c.c * dd;
-    if (!linear && (d <= 0 || F < 0)) F = 0;
-    if (out) out.crew[i] = F;
+    const F = linear ? c.k * d + c.c * dd : contactForce(c.k, c.c, c.xs, d, dd);
+    if (out) {
+      out.crew[i] = F;
+      out.crewIndent[i] = d;
+    }
     Fz -= F;
     Mth -= F * cx;
     Mph -= F * cy;
@@ -156,20 +166,40 @@ export function derivative(s: RideSystem, t: number, y: ArrayLike<number>, dy: F
 }
 
 /**
- * Which one-sided elements push at this state: wheels, then crew, then the
- * prop (drop test). A change marks a contact event for the integrator.
+ * Which one-sided contacts have their gap shut (indentation above zero), then
+ * which push (force above zero), one bit each: wheels, then crew, then the
+ * prop (drop test). A change marks a contact event for the integrator: both
+ * the touch and the cut of the contact law are kinks in the forces.
  */
 export function contactMode(s: RideSystem, t: number, y: ArrayLike<number>, scratch: Forces): number {
   derivative(s, t, y, MODE_SINK, scratch);
+  const n = contactCount(s);
   let bits = 0, b = 1;
-  for (let i = 0; i < scratch.wheel.length; i++, b <<= 1) if (scratch.wheel[i] > 0) bits |= b;
-  for (let i = 0; i < scratch.crew.length; i++, b <<= 1) if (scratch.crew[i] > 0) bits |= b;
-  if (s.yoke.oneSided && scratch.yoke > 0) bits |= b;
+  const set = (F: number, x: number) => {
+    if (x > 0) bits |= b;
+    if (F > 0) bits |= b << n;
+    b <<= 1;
+  };
+  for (let i = 0; i < scratch.wheel.length; i++) set(scratch.wheel[i], scratch.wheelIndent[i]);
+  for (let i = 0; i < scratch.crew.length; i++) set(scratch.crew[i], scratch.crewIndent[i]);
+  if (s.yoke.oneSided) set(scratch.yoke, scratch.yokeIndent);
   return bits;
 }
 const MODE_SINK = new Float64Array(64);
 
-export const newForces = (s: RideSystem): Forces => ({ wheel: s.wheels.map(() => 0), crew: s.crew.map(() => 0), yoke: 0 });
+/** One-sided contacts: the wheels, the crew and, in the drop test, the prop. */
+export const contactCount = (s: RideSystem) => s.wheels.length + s.crew.length + (s.yoke.oneSided ? 1 : 0);
+
+/** True when wheel i's gap is shut in a mode from contactMode. */
+export const wheelShut = (mode: number, i: number) => (mode & (1 << i)) !== 0;
+
+/** True when crew member i's gap is shut (they stand on the floor) in a mode from contactMode. */
+export const crewShut = (s: RideSystem, mode: number, i: number) => (mode & (1 << (s.wheels.length + i))) !== 0;
+
+/** True when any wheel pushes on the ground in a mode from contactMode. */
+export const anyWheelPushes = (s: RideSystem, mode: number) => ((mode >> contactCount(s)) & ((1 << s.wheels.length) - 1)) !== 0;
+
+export const newForces = (s: RideSystem): Forces => ({ wheel: s.wheels.map(() => 0), crew: s.crew.map(() => 0), yoke: 0, wheelIndent: s.wheels.map(() => 0), crewIndent: s.crew.map(() => 0), yokeIndent: 0 });
 
 /** Kinetic plus gravity plus spring energy, J (a one-sided spring stores energy only while it pushes): conserved with damping off. */
 export function energy(s: RideSystem, t: number, y: ArrayLike<number>): number {

@@ -1,8 +1,34 @@
 // What the ride model returns for one road case (mechanics note, section 8).
 
-export type RideCase = 'ridge' | 'one-wheel' | 'drop';
+// Two grounds, each under both wheels (a ridge across the track) and under
+// one wheel: the routine rough ground (operation.rough_ground, a long, low
+// ridge) and the stone (operation.bump_height_mm and bump_length_mm, short
+// enough to be struck); then the drop test.
+export type RideCase = 'rough-ridge' | 'rough-one-wheel' | 'stone-ridge' | 'stone-one-wheel' | 'drop';
 
-export const RIDE_CASES: readonly RideCase[] = ['ridge', 'one-wheel', 'drop'];
+export const RIDE_CASES: readonly RideCase[] = ['rough-ridge', 'rough-one-wheel', 'stone-ridge', 'stone-one-wheel', 'drop'];
+
+/** The ground a road case runs over: the load case its findings name. */
+export type RoadGround = 'rough-ground' | 'stone';
+
+/** Where the ground lies: across both tracks (a ridge), or under the left wheel alone. */
+export type RoadShape = 'ridge' | 'one-wheel';
+export const ROAD_SHAPES: readonly RoadShape[] = ['ridge', 'one-wheel'];
+
+/** The road case over a ground in a shape. */
+export const roadCase = (g: RoadGround, shape: RoadShape): RideCase => (g === 'rough-ground' ? (shape === 'ridge' ? 'rough-ridge' : 'rough-one-wheel') : shape === 'ridge' ? 'stone-ridge' : 'stone-one-wheel');
+
+export const ROUTINE_CASES: readonly RideCase[] = ROAD_SHAPES.map((s) => roadCase('rough-ground', s));
+export const STONE_CASES: readonly RideCase[] = ROAD_SHAPES.map((s) => roadCase('stone', s));
+
+/** The road cases over one ground. */
+export const casesOver = (g: RoadGround): readonly RideCase[] => (g === 'rough-ground' ? ROUTINE_CASES : STONE_CASES);
+
+/** The ground of a road case; null for the drop test. */
+export const groundOf = (c: RideCase): RoadGround | null => (ROUTINE_CASES.includes(c) ? 'rough-ground' : STONE_CASES.includes(c) ? 'stone' : null);
+
+/** True where the road case strikes both wheels at once; false for one wheel. */
+export const underBothWheels = (c: RideCase): boolean => c.endsWith('-ridge');
 
 export interface RideChannel {
   name: string;

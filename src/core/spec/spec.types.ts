@@ -443,9 +443,22 @@ export interface BuildSpecification {
      */
     bump_height_mm?: number | string;
     /**
-     * Length along the track of the design bump (a raised-cosine ridge or stone) for the ride model. Default 200 (from memory: a stone or a rut edge).
+     * Length along the track of the design stone (a raised-cosine hump) for the ride model's stone-strike case. Default 200 (from memory: a stone or a rut edge).
      */
     bump_length_mm?: number | string;
+    /**
+     * The routine rough ground driven over at the design speed (a raised-cosine ridge of soil, sod or ruts): the ride model's rough-ground case, whose dynamic factors feed the strength checks. Default: the ground type's rough_ground in rules/grounds.yaml.
+     */
+    rough_ground?: {
+      /**
+       * A coordinate in the unit of its key; a string with another unit is converted.
+       */
+      height_mm: number | string;
+      /**
+       * Length of the ridge along the track; at least 500 mm (shorter is struck, not ridden over: give it as the stone, bump_height_mm and bump_length_mm).
+       */
+      length_mm: number | string;
+    };
     /**
      * Height the ride model's drop test releases the chariot from, every point above its standing position. Default 500 (from memory).
      */
@@ -977,9 +990,22 @@ export interface CheckedSpecification {
      */
     bump_height_mm: number;
     /**
-     * Length along the track of the design bump (a raised-cosine ridge or stone) for the ride model. Default 200 (from memory: a stone or a rut edge).
+     * Length along the track of the design stone (a raised-cosine hump) for the ride model's stone-strike case. Default 200 (from memory: a stone or a rut edge).
      */
     bump_length_mm: number;
+    /**
+     * The routine rough ground driven over at the design speed (a raised-cosine ridge of soil, sod or ruts): the ride model's rough-ground case, whose dynamic factors feed the strength checks. Default: the ground type's rough_ground in rules/grounds.yaml.
+     */
+    rough_ground?: {
+      /**
+       * A coordinate in the unit of its key; a string with another unit is converted.
+       */
+      height_mm: number;
+      /**
+       * Length of the ridge along the track; at least 500 mm (shorter is struck, not ridden over: give it as the stone, bump_height_mm and bump_length_mm).
+       */
+      length_mm: number;
+    };
     /**
      * Height the ride model's drop test releases the chariot from, every point above its standing position. Default 500 (from memory).
      */

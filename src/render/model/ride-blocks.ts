@@ -31,8 +31,8 @@ export function rideDampingBlocks(d: RideDamping): Block[] {
   if (d.used) rows.push(quantityRow('Floor damping ratio used', d.used.value, '', d.used.source));
   if (d.needed !== undefined) {
     const note = d.needed === null
-      ? 'no floor damping ratio meets the decay rule and keeps the crew on the floor over the design bump'
-      : 'the least that meets the decay rule and keeps the crew on the floor over the design bump; found by bisection over full runs';
+      ? 'no floor damping ratio meets the decay rule and keeps the crew on the floor over rough ground'
+      : 'the least that meets the decay rule and keeps the crew on the floor over rough ground; found by bisection over full runs';
     rows.push(quantityRow('Floor damping ratio needed (tuner)', d.needed, '', note, 'none'));
   }
   if (rows.length === 0) return [];
@@ -40,7 +40,7 @@ export function rideDampingBlocks(d: RideDamping): Block[] {
   return [table, ...(d.working ? [workingLines(d.working.split('\n'))] : [])];
 }
 
-/** "Ridge across both tracks (ridge)": the model's title, then the case's id as the command line names it. */
+/** "Rough-ground ridge across both tracks (rough-ridge)": the model's title, then the case's id as the command line names it. */
 export function caseHeading(r: Pick<RideCaseResult, 'title' | 'case'>): string {
   return `${r.title.charAt(0).toUpperCase()}${r.title.slice(1)} (${r.case})`;
 }

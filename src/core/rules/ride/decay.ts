@@ -10,7 +10,7 @@ export const rideDecay = defineRule({
   checks: "After the drop test, the cycles until the crew's motion falls below a fraction of its first amplitude (ride.inputs.decay_fraction), against the cycles allowed.",
   kind: 'check',
   worst: 'warning',
-  method: ['design-basis-ride'],
+  method: ['design-basis-ride', 'hunt-crossley-1975'],
   needs: ['ride', 'floorDampingNeeded'],
   limits: { cycles: { direction: 'max', unit: 'cycles', levels: { hard: 'warning' } } },
   params: [],
@@ -39,6 +39,7 @@ export const rideDecay = defineRule({
       params: { fraction: fraction.value, zeta: r.floorDamping.value, zetaSource: r.floorDamping.source.split(':')[0] },
       sources: [...fraction.sources, ...rideSourceIds(ctx.data, ctx.spec, 'drop')],
       load_case: 'drop',
+      combination: 'characteristic' as const,
       fix: need === null
         ? 'None needed.'
         : `Damp the floor more: ${need.ratio === null ? `no floor damping ratio up to ${num(need.grid[need.grid.length - 1])} meets the ride rules` : `a floor damping ratio of ${num(need.ratio)} would meet the ride rules`}; measure a floor sample with axletree floor-test and name it in the specification.`,

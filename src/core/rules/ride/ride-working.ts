@@ -2,9 +2,9 @@ import { param } from '../../data/param.ts';
 import type { RulesData } from '../../data/rules-data.ts';
 import type { MessageSpec, Report } from '../../pipeline/define-rule.ts';
 import { measuredFloorDamping } from '../../ride/ride-build.ts';
-import { groundContact } from '../../ride/ride-data.ts';
+import { groundContact, roughGround } from '../../ride/ride-data.ts';
 import { wheelBuild } from '../../model/tyre.ts';
-import type { RideCase, RideResult } from '../../ride/ride-types.ts';
+import { groundOf, type RideCase, type RideResult } from '../../ride/ride-types.ts';
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
 
 // What the ride rules share: the ride model's working and the sources of its
@@ -30,9 +30,15 @@ export function rideSourceIds(data: RulesData, spec: CheckedSpecification, which
     ['ride.inputs', 'sample_interval_s'],
   ];
   // The drop test falls on rigid ground.
-  const ground = which === 'drop' ? null : groundContact(data, spec.operation.ground);
+  const over = groundOf(which);
+  const ground = over === null ? null : groundContact(data, spec.operation.ground);
   const ids = read.flatMap(([g, n]) => param(data, g, n).sources);
   if (ground) ids.push(...ground.k.sources, ...ground.zeta.sources);
+  // The rough ground's ridge, where the data gives it (the stone is the specification's).
+  if (over === 'rough-ground') {
+    const rough = roughGround(spec, data);
+    ids.push(...rough.height.sources, ...rough.length.sources);
+  }
   return [...new Set(ids)];
 }
 

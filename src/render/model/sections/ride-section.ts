@@ -12,7 +12,7 @@ export function rideSection(result: CheckResult): Section[] {
   return [
     section('ride', [
       paragraph(
-        'The lumped ride model (mechanics note, section 8): the crew over a ridge across both tracks, a bump under one wheel, and a drop onto rigid ground. ',
+        'The lumped ride model (design basis, section 8): the crew over the routine rough ground and the stone at the design speed, each across both tracks and under one wheel, and a drop onto rigid ground. ',
         'Heights are from the standing position; a dynamic load factor is the peak force over the standing force. The full time series come from ',
         code('axletree ride'),
         '.',
