@@ -18,11 +18,11 @@ describe('declared data', () => {
 
   it('names a model parameter the data lacks, and a limit given as a plain value', () => {
     const params = structuredClone(rulesData.params);
-    delete (params['load-cases'] as Record<string, unknown>).bump_dynamic_factor;
+    delete (params['load-cases'] as Record<string, unknown>).stopping_shock_factor;
     const limits = structuredClone(rulesData.limits);
     limits['balance.horse-load'].load_fraction = { value: 0.1, unit: '1', sources: ['from-memory'], source: 'from memory' };
     const problems = declaredDataProblems({ ...rulesData, params, limits }, MODELS, RULES);
-    expect(problems.map((p) => `${p.table} ${p.group}.${p.name}`)).toEqual(expect.arrayContaining(['params load-cases.bump_dynamic_factor', 'limits balance.horse-load.load_fraction']));
+    expect(problems.map((p) => `${p.table} ${p.group}.${p.name}`)).toEqual(expect.arrayContaining(['params load-cases.stopping_shock_factor', 'limits balance.horse-load.load_fraction']));
   });
 
   it('the loader refuses such data, naming the file, the line and the key', () => {
@@ -30,8 +30,8 @@ describe('declared data', () => {
     cpSync(defaultRulesDir(), dir, { recursive: true });
     const file = join(dir, 'parameters', 'load-cases.yaml');
     const text = readFileSync(file, 'utf8');
-    writeFileSync(file, text.replace(/\n  bump_dynamic_factor:[\s\S]*?(?=\n  \w)/, ''));
-    expect(() => loadRulesData(dir)).toThrow(/parameters\/load-cases\.yaml:\d+: load-cases: bump_dynamic_factor: the model "\w+" reads the parameter load-cases\.bump_dynamic_factor/);
+    writeFileSync(file, text.replace(/\n  stopping_shock_factor:[\s\S]*?(?=\n  \w)/, ''));
+    expect(() => loadRulesData(dir)).toThrow(/parameters\/load-cases\.yaml:\d+: load-cases: stopping_shock_factor: the model "\w+" reads the parameter load-cases\.stopping_shock_factor/);
   });
 
   it('an advisory level beyond the hard level is refused', () => {

@@ -39,10 +39,10 @@ export interface DemandInput {
   turn: TurnModel;
   /** The strap floor under the bump factor; undefined where no floor model ran. */
   floorBump: FloorResult | undefined;
-  /** The routine rough ground's factor and its source (the ride model's crew floor factor); without it, the placeholder. */
-  bump?: { value: number; source: string };
-  /** The stone strike's factor (an accidental case); without it, the routine factor. */
-  stone?: { value: number; source: string };
+  /** The routine rough ground's factor and its source (the ride model's crew floor factor, or the data's bound). */
+  bump: { value: number; source: string };
+  /** The stone strike's factor (an accidental case), the same way. */
+  stone: { value: number; source: string };
 }
 
 // Parts of the rolling assembly that are not carried by the box: the running
@@ -62,8 +62,7 @@ interface Factors {
 }
 
 export function lashingDemands(i: DemandInput): Record<Joint, JointDemand> {
-  const bump = i.bump ?? placeholderBump(i.data);
-  const k: Factors = { bump, stone: i.stone ?? bump, shock: loadFactor(i.data, 'stopping_shock_factor') };
+  const k: Factors = { bump: i.bump, stone: i.stone, shock: loadFactor(i.data, 'stopping_shock_factor') };
   const boxParts = i.mass.parts.filter((p) => p.group === 'rolling' && !RUNNING_GEAR.has(p.part));
   const corners = cornerDemand(i.spec, i.floorBump);
   const siding = i.spec.box.siding_mass_kg;
@@ -199,7 +198,3 @@ function carriedCases(c: Carried, i: DemandInput, k: Factors): JointForce[] {
   return out;
 }
 
-function placeholderBump(data: RulesData): { value: number; source: string } {
-  const f = loadFactor(data, 'bump_dynamic_factor');
-  return { value: f.value, source: `placeholder bump_dynamic_factor ${f.value}: ${f.source}` };
-}

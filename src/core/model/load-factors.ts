@@ -2,6 +2,6 @@ import type { Param, RulesData } from '../data/rules-data.ts';
 import { param } from '../data/param.ts';
 
 /** A shared load-case factor from rules/parameters/load-cases.yaml. */
-export function loadFactor(data: RulesData, name: 'bump_dynamic_factor' | 'stopping_shock_factor'): Param {
+export function loadFactor(data: RulesData, name: 'stopping_shock_factor'): Param {
   return param(data, 'load-cases', name);
 }

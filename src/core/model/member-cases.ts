@@ -3,7 +3,6 @@ import type { Combination } from '../findings/finding.ts';
 import { num } from '../findings/working.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { G } from '../units/units.ts';
-import { bumpFactorSources } from './bump-sources.ts';
 import { combinationFactors, type CombinationFactors } from './combination-factors.ts';
 import type { LoadCaseResult } from './load-case-result.ts';
 import { staticPoleLoad } from './load-cases.ts';
@@ -13,6 +12,7 @@ import { rollingResistance } from './rolling-resistance.ts';
 import type { Duration } from './timber/load-duration.ts';
 import { strengthFactor } from './timber/strength-factors.ts';
 import type { TurnModel } from './turn.ts';
+import type { DynamicFactor, GroundFactors } from '../ride/dynamic-factors.ts';
 
 // The load cases the timber members are checked in, each a load combination
 // of EN 1990 (design basis, section 2): the fundamental combination
@@ -70,15 +70,18 @@ function envelope(list: readonly LoadCaseResult[], dead: { wheel: number; pole: 
 
 /** The dynamic factors of a case and where they came from. */
 export interface DynamicInput {
-  /** `from`: the ride case the factor came from, null or absent for a bound from the data. */
-  factor: { value: number; source: string; from?: string | null };
+  /** The wheels' factor: the ride model's, or the data's bound (provisional). */
+  factor: DynamicFactor;
   /** The ride model's largest yoke force above the standing one, N; null without a ride. */
   yokeIncrease_N: number | null;
 }
 
+/** A ground's factors as the member cases take them. */
+export const wheelInput = (g: GroundFactors): DynamicInput => ({ factor: g.wheel, yokeIncrease_N: g.yokeIncrease_N });
+
 const fund = (f: CombinationFactors, g: number, q: number) => f.gammaGsup * g + f.gammaQ * q;
 
-export function memberCases(spec: CheckedSpecification, data: RulesData, mass: MassModel, cases: readonly LoadCaseResult[], turn: TurnModel, routine?: DynamicInput, stone?: DynamicInput): MemberCase[] {
+export function memberCases(spec: CheckedSpecification, data: RulesData, mass: MassModel, cases: readonly LoadCaseResult[], turn: TurnModel, rough: DynamicInput, strike: DynamicInput): MemberCase[] {
   const f = combinationFactors(data);
   const gammaM = strengthFactor(data, 'gamma_M').value;
   const comboIds = f.sources;
@@ -89,10 +92,6 @@ export function memberCases(spec: CheckedSpecification, data: RulesData, mass: M
   const dead = { wheel: deadLoad.axle_N / 2, pole: Math.abs(deadLoad.pole_N) };
   const standingCases = cases.filter((c) => c.accel_g === 0);
   const stand = envelope(standingCases, dead);
-  const placeholder = loadFactor(data, 'bump_dynamic_factor');
-  const bound = { value: placeholder.value, source: `placeholder bump_dynamic_factor ${placeholder.value}: ${placeholder.source}`, from: null };
-  const rough = routine ?? { factor: bound, yokeIncrease_N: null };
-  const strike = stone ?? rough;
   const G_ = num(f.gammaGsup);
   const Q_ = num(f.gammaQ);
   const fundText = (what: string, p: Pair, extra = 0, extraName = '') => `${what}: ${G_} × ${num(p.G)} + ${Q_} × ${num(p.Q)}${extra ? ` + ${Q_} × ${num(extra)} (${extraName})` : ''} = ${num(fund(f, p.G, p.Q) + f.gammaQ * extra)} N`;
@@ -121,7 +120,7 @@ export function memberCases(spec: CheckedSpecification, data: RulesData, mass: M
       poleAxial_N: 0,
       gravityFactor: phi,
       sources: [d.factor.source],
-      sourceIds: [...bumpFactorSources(data, d.factor.from), ...(acc ? ['en-1990-6-11', 'en-1995-1-1-2-4-1'] : comboIds)],
+      sourceIds: [...d.factor.sources, ...(acc ? ['en-1990-6-11', 'en-1995-1-1-2-4-1'] : comboIds)],
       working: `${working}; own weight G from the chariot without its crew, crew Q the rest (${stand.titles})`,
     };
   };

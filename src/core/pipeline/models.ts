@@ -3,7 +3,7 @@ import { floorModel } from '../model/cable-net/floor-model.ts';
 import { lashingDemands } from '../model/lashing-demand.ts';
 import { loadCases } from '../model/load-cases.ts';
 import { massModel } from '../model/mass-model.ts';
-import { memberCases } from '../model/member-cases.ts';
+import { memberCases, wheelInput } from '../model/member-cases.ts';
 import { turnModel } from '../model/turn.ts';
 import { floorDampingNeeded } from '../ride/damping-tuner.ts';
 import { groundFactors } from '../ride/dynamic-factors.ts';
@@ -122,9 +122,9 @@ export const floorBumpDef = defineModel({
 
 export const memberCasesDef = defineModel({
   id: 'memberCases',
-  needs: ['mass', 'loadCases', 'turn', 'bumpFactors'],
-  params: ['load-cases.bump_dynamic_factor', 'load-cases.stopping_shock_factor', ...TIMBER, ...BALANCE],
-  compute: ({ mass, loadCases, turn, bumpFactors }, { spec, data }) => memberCases(spec, data, mass, loadCases, turn, { factor: bumpFactors.wheel, yokeIncrease_N: bumpFactors.yokeIncrease_N }),
+  needs: ['mass', 'loadCases', 'turn', 'bumpFactors', 'stoneFactors'],
+  params: ['load-cases.stopping_shock_factor', ...TIMBER, ...BALANCE],
+  compute: ({ mass, loadCases, turn, bumpFactors, stoneFactors }, { spec, data }) => memberCases(spec, data, mass, loadCases, turn, wheelInput(bumpFactors), wheelInput(stoneFactors)),
 });
 
 export const cuttingDef = defineModel({
@@ -136,9 +136,9 @@ export const cuttingDef = defineModel({
 
 export const lashingDemandsDef = defineModel({
   id: 'lashingDemands',
-  needs: ['mass', 'loadCases', 'turn', 'floorBump', 'bumpFactors'],
+  needs: ['mass', 'loadCases', 'turn', 'floorBump', 'bumpFactors', 'stoneFactors'],
   params: ['load-cases.stopping_shock_factor', ...ROLLING_PARAMS],
-  compute: ({ mass, loadCases, turn, floorBump, bumpFactors }, { spec, data }) => lashingDemands({ spec, data, mass, cases: loadCases, turn, floorBump, bump: bumpFactors.crew }),
+  compute: ({ mass, loadCases, turn, floorBump, bumpFactors, stoneFactors }, { spec, data }) => lashingDemands({ spec, data, mass, cases: loadCases, turn, floorBump, bump: bumpFactors.crew, stone: stoneFactors.crew }),
 });
 
 // The outputs: what the result carries besides the findings.

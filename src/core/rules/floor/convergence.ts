@@ -26,7 +26,7 @@ export const floorConvergence = defineRule({
     const tol = param(data, 'floor.solver', 'tolerance_fraction');
     const steps = param(data, 'floor.solver', 'max_iterations');
     const nodes = param(data, 'floor.solver', 'max_nodes');
-    for (const c of floorCases(ctx.models, data)) {
+    for (const c of floorCases(ctx.models)) {
       const m = c.model;
       const fix = 'Check the strap sizes, material and pretension for a slip of the pen (a strap far too thin or soft for the crew); if they are right, allow more Newton steps (max_iterations in rules/parameters/floor.yaml) and report the case.';
       const common = { subject: 'floor.net', label: `floor net, ${c.label}`, load_case: c.load_case, sources: [...tol.sources, ...steps.sources, ...netSources(spec, data), ...c.sources] };

@@ -1,4 +1,3 @@
-import { param } from '../../data/param.ts';
 import type { RulesData } from '../../data/rules-data.ts';
 import type { WorkingStep } from '../../findings/finding.ts';
 import type { Severity } from '../../findings/severity.ts';
@@ -17,7 +16,7 @@ import { G } from '../../units/units.ts';
 /** One case the floor is solved in, as the findings name it. */
 export interface FloorCase {
   model: FloorModel;
-  load_case: 'static' | 'bump';
+  load_case: 'static' | 'rough-ground' | 'stone';
   /** In words, for a message: `crew standing`, `bump`. */
   name: string;
   /** For a finding's label, with the factor on the crew's weight. */
@@ -30,14 +29,13 @@ export function standingCase(model: FloorModel): FloorCase {
   return { model, load_case: 'static', name: 'crew standing', label: 'crew standing', sources: [] };
 }
 
-/** The bump case: its factor comes from the ride model or, without one, the placeholder of rules/parameters. */
-export function bumpCase(model: FloorModel, bump: BumpFactors, data: RulesData): FloorCase {
-  const sources = bump.crew.from === null ? param(data, 'load-cases', 'bump_dynamic_factor').sources : ['design-basis-ride'];
-  return { model, load_case: 'bump', name: 'bump', label: `bump, ${formatNumber(model.factor)} × crew weight`, sources };
+/** The routine rough ground's case: its factor comes from the ride model or, without one, the data's bound. */
+export function bumpCase(model: FloorModel, bump: BumpFactors): FloorCase {
+  return { model, load_case: 'rough-ground', name: 'rough ground', label: `rough ground, ${formatNumber(model.factor)} × crew weight`, sources: bump.crew.sources };
 }
 
-export function floorCases(models: { floorStatic: FloorModel; floorBump: FloorModel; bumpFactors: BumpFactors }, data: RulesData): [FloorCase, FloorCase] {
-  return [standingCase(models.floorStatic), bumpCase(models.floorBump, models.bumpFactors, data)];
+export function floorCases(models: { floorStatic: FloorModel; floorBump: FloorModel; bumpFactors: BumpFactors }): [FloorCase, FloorCase] {
+  return [standingCase(models.floorStatic), bumpCase(models.floorBump, models.bumpFactors)];
 }
 
 /** A number the solver may not have reached (NaN) as a finding's value. */

@@ -32,7 +32,7 @@ export const floorSag = defineRule({
   },
   run(ctx) {
     const { spec, data } = ctx;
-    const cases = floorCases(ctx.models, data);
+    const cases = floorCases(ctx.models);
     const net = netSources(spec, data);
     const unsolved = cases.filter((c) => !c.model.converged);
     if (unsolved.length) {

@@ -31,7 +31,7 @@ export const strapTension = defineRule({
     const fd = (ft.value * eta.value) / sf.value;
     const sources = [...ft.sources, ...eta.sources, ...sf.sources, ...netSources(spec, data)];
     const dry = `Keep the straps dry: wet ${s.material} keeps about ${formatPercent(leather.wet_strength_factor.value)} of its strength (rules data).`;
-    for (const c of floorCases(ctx.models, data)) {
+    for (const c of floorCases(ctx.models)) {
       const m = c.model;
       const working = [
         ...floorWorking(spec, data, m),

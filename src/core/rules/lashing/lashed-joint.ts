@@ -50,14 +50,13 @@ export function forceWorking(d: JointDemand, gov: JointForce | undefined, measur
   ];
 }
 
-/** Ids of the sources of the load factors the joint forces use: the bump factor (the ride model's, or the placeholder) and the stopping shock. */
-export function demandSourceIds(data: RulesData, bump: DynamicFactor): string[] {
-  const bumpIds = bump.from === null ? loadFactor(data, 'bump_dynamic_factor').sources : ['design-basis-ride'];
-  return [...bumpIds, ...loadFactor(data, 'stopping_shock_factor').sources];
+/** Ids of the sources of the load factors the joint forces use: the rough ground's and the stone's (the ride model's, or the data's bounds) and the stopping shock's. */
+export function demandSourceIds(data: RulesData, bump: DynamicFactor, stone: DynamicFactor): string[] {
+  return [...bump.sources, ...stone.sources, ...loadFactor(data, 'stopping_shock_factor').sources];
 }
 
-/** The bump factor the forces use, and where it came from, as a line of working. */
-export const bumpLine = (bump: DynamicFactor) => `bump factor k_bump = ${num(bump.value)}: ${bump.source}`;
+/** The dynamic factors the forces use, and where they came from, as lines of working. */
+export const factorLines = (bump: DynamicFactor, stone: DynamicFactor) => [`rough ground, the crew's factor φ = ${num(bump.value)}: ${bump.source}`, `stone, the crew's factor φ = ${num(stone.value)}: ${stone.source}`];
 
 export const DEMAND_UNKNOWN: MessageSpec = { code: 2503, text: 'The force on the {joint} lashing could not be found, so it is not checked; the working says why.' };
 

@@ -2,7 +2,7 @@ import { JOINTS } from '../../model/lashing-demand.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num } from '../../pipeline/step.ts';
 import { jointNeed } from './joint-needs.ts';
-import { bumpLine, caseName, demandSourceIds, designValue, forceWorking, governingDesign, jointSubject, lashingText, loadCaseOf } from './lashed-joint.ts';
+import { factorLines, caseName, demandSourceIds, designValue, forceWorking, governingDesign, jointSubject, lashingText, loadCaseOf } from './lashed-joint.ts';
 
 export const lashingMissing = defineRule({
   id: 'lashing.missing',
@@ -10,7 +10,7 @@ export const lashingMissing = defineRule({
   checks: 'Every joint this construction needs held is lashed: the pole to the axle and to the yoke and the box to the axle must be; the pole to the floor, the frame corners and the siding are advised, since joinery may hold them instead.',
   kind: 'check',
   method: ['design-basis-lashings'],
-  needs: ['lashingDemands', 'bumpFactors'],
+  needs: ['lashingDemands', 'bumpFactors', 'stoneFactors'],
   limits: {},
   params: [],
   messages: {
@@ -23,6 +23,7 @@ export const lashingMissing = defineRule({
   run(ctx) {
     const { spec } = ctx;
     const bump = ctx.models.bumpFactors.crew;
+    const stone = ctx.models.stoneFactors.crew;
     for (const joint of JOINTS) {
       const need = jointNeed(joint, spec);
       const lashing = spec.lashings.find((l) => l.joint === joint);
@@ -34,7 +35,7 @@ export const lashingMissing = defineRule({
         label: `${joint} joint`,
         value: gov ? designValue(gov, 'held_N') : null,
         unit: 'N',
-        sources: demandSourceIds(ctx.data, bump),
+        sources: demandSourceIds(ctx.data, bump, stone),
         load_case: loadCaseOf(d, gov),
         combination: gov?.combination ?? null,
       };
@@ -44,7 +45,7 @@ export const lashingMissing = defineRule({
         ...(joint === 'pole-to-floor' ? [`the pole's rear end at x = ${num(spec.pole.rear_x_mm, 'mm')} mm`] : []),
         ...(joint === 'siding-to-frame' ? [`the siding: ${num(spec.box.siding_mass_kg, 'kg')} kg`] : []),
         lashing ? `lashed: ${lashingText(lashing)}` : 'not lashed',
-        bumpLine(bump),
+        ...factorLines(bump, stone),
         ...(d.unknown === null ? forceWorking(d, gov, 'held_N') : [`not found: ${d.unknown}`]),
       ];
       if (lashing) {

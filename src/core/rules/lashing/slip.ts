@@ -2,7 +2,7 @@ import { slipCapacity } from '../../model/lashing-capacity.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
 import { withinLimit } from '../within-limit.ts';
-import { bumpLine, caseName, DEMAND_UNKNOWN, demandSourceIds, designValue, forceWorking, governingDesign, jointSubject, lashingLabel, lashingText, loadCaseOf, loadedLashings } from './lashed-joint.ts';
+import { factorLines, caseName, DEMAND_UNKNOWN, demandSourceIds, designValue, forceWorking, governingDesign, jointSubject, lashingLabel, lashingText, loadCaseOf, loadedLashings } from './lashed-joint.ts';
 
 export const lashingSlip = defineRule({
   id: 'lashing.slip',
@@ -10,7 +10,7 @@ export const lashingSlip = defineRule({
   checks: "Each lashed joint's largest design force in the contact face (× 1.5 in the fundamental combination, × 1.0 for the stone and the stopping shock) against the friction of the clamp its wraps make, mu × 2 n T_pre, with the builder's estimated pretension.",
   kind: 'check',
   method: ['design-basis-lashings'],
-  needs: ['lashingDemands', 'bumpFactors'],
+  needs: ['lashingDemands', 'bumpFactors', 'stoneFactors'],
   limits: { utilisation: { direction: 'max', unit: 'of the clamp friction mu·2·n·T_pre' } },
   params: ['friction_wood_on_wood'],
   messages: {
@@ -22,6 +22,7 @@ export const lashingSlip = defineRule({
     const mu = ctx.param('friction_wood_on_wood');
     const lim = ctx.limit('utilisation');
     const bump = ctx.models.bumpFactors.crew;
+    const stone = ctx.models.stoneFactors.crew;
     for (const { l, d } of loadedLashings(ctx.spec.lashings, ctx.models.lashingDemands, (r) => ctx.report(r))) {
       const capacity = slipCapacity(mu.value, l.wraps, l.pretension_N);
       const gov = governingDesign(d.cases, 'shear_N');
@@ -35,7 +36,7 @@ export const lashingSlip = defineRule({
         value: V,
         unit: 'N',
         against: { limit: 'utilisation', times: capacity },
-        sources: [...mu.sources, ...demandSourceIds(ctx.data, bump)],
+        sources: [...mu.sources, ...demandSourceIds(ctx.data, bump, stone)],
         load_case: loadCaseOf(d, gov),
         combination: gov?.combination ?? null,
         fix: withinLimit(V, lim, capacity)
@@ -43,7 +44,7 @@ export const lashingSlip = defineRule({
           : 'Add wraps or lay them tighter (rawhide laid wet shrinks tight as it dries), notch or peg the joint so it cannot slide, or measure the friction of your own timber.',
         working: [
           `${l.joint}: ${d.where}; ${lashingText(l)} at an estimated ${num(l.pretension_N, 'N')} N each`,
-          bumpLine(bump),
+          ...factorLines(bump, stone),
           ...forceWorking(d, gov, 'shear_N'),
           step('V_d, the largest design force in the contact face', '', V, 'N'),
           step('clamp friction = mu·2·n·T_pre', `${num(mu.value)} × 2 × ${l.wraps} × ${num(l.pretension_N)}`, capacity, 'N'),

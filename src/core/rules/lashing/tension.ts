@@ -2,7 +2,7 @@ import { leatherDesignStrength } from '../../model/leather-strength.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
 import { withinLimit } from '../within-limit.ts';
-import { bumpLine, caseName, DEMAND_UNKNOWN, demandSourceIds, designValue, forceWorking, jointSubject, lashingLabel, lashingText, loadCaseOf, loadedLashings } from './lashed-joint.ts';
+import { factorLines, caseName, DEMAND_UNKNOWN, demandSourceIds, designValue, forceWorking, jointSubject, lashingLabel, lashingText, loadCaseOf, loadedLashings } from './lashed-joint.ts';
 
 export const lashingTension = defineRule({
   id: 'lashing.tension',
@@ -10,7 +10,7 @@ export const lashingTension = defineRule({
   checks: "Each lashing's largest design joint force (the fundamental combination's 1.5, or 1.0 for the stone and the stopping shock), or its own pretension where that is more, against the strands' design capacity 2 n b t f_d, f_d from the one strength chain of leather and rawhide (wet where the chariot is driven wet).",
   kind: 'check',
   method: ['design-basis-lashings', 'design-basis-materials'],
-  needs: ['lashingDemands', 'bumpFactors'],
+  needs: ['lashingDemands', 'bumpFactors', 'stoneFactors'],
   limits: { utilisation: { direction: 'max', unit: 'of the design capacity 2 n b t f_d' } },
   params: [],
   messages: {
@@ -22,6 +22,7 @@ export const lashingTension = defineRule({
     const lim = ctx.limit('utilisation');
     const wet = ctx.spec.operation.wet;
     const bump = ctx.models.bumpFactors.crew;
+    const stone = ctx.models.stoneFactors.crew;
     for (const { l, d } of loadedLashings(ctx.spec.lashings, ctx.models.lashingDemands, (r) => ctx.report(r))) {
       // Each case against the capacity of its own combination: the strands only wrap round, so no joint efficiency.
       const pretension = 2 * l.wraps * l.pretension_N;
@@ -43,7 +44,7 @@ export const lashingTension = defineRule({
         value: g.pull,
         unit: 'N',
         against: { limit: 'utilisation', times: g.capacity },
-        sources: [...g.fd.sources, ...demandSourceIds(ctx.data, bump)],
+        sources: [...g.fd.sources, ...demandSourceIds(ctx.data, bump, stone)],
         load_case: byPretension ? null : loadCaseOf(d, g.c),
         combination: g.combination,
         fix: withinLimit(g.pull, lim, g.capacity)
@@ -51,7 +52,7 @@ export const lashingTension = defineRule({
           : `Add wraps, use a wider or thicker strap or a stronger leather${wet ? ', or keep the lashing dry' : ''}; ${byPretension ? 'or lay the wraps less tight' : 'or take part of the load with a peg or notch'}.`,
         working: [
           `${l.joint}: ${d.where}; ${lashingText(l)}`,
-          bumpLine(bump),
+          ...factorLines(bump, stone),
           ...forceWorking(d, g.c, 'held_N'),
           step('F_d, the governing design force held', '', g.F, 'N'),
           step('strand pull = max(F_d, 2·n·T_pre)', `max(${num(g.F)}, 2 × ${l.wraps} × ${num(l.pretension_N)})`, g.pull, 'N'),

@@ -1,4 +1,3 @@
-import { bumpFactorSources } from '../../model/bump-sources.ts';
 import { pointLoadsMaxMoment } from '../../model/beam-formulas.ts';
 import type { RailPull } from '../../model/floor-result.ts';
 import { frameSectionInPlan } from '../../model/spec-sections.ts';
@@ -54,7 +53,7 @@ export const frameRailMember = defineRule({
     const cases: { info: CaseInfo; pulls: (rail: RailPull) => Pulls }[] = [
       { info: { id: 'pretension', title: 'strap pretension alone', combination: 'characteristic', gammaM: bending.gammaM, duration: 'permanent', sourceIds: [], working: `each strap end pulls T_0 on its rail (T_0 = ${num(T0)} N, pitch ${num(pitch)} mm)` }, pulls: (r) => r.pulls.map((p) => ({ ...p, force_N: T0 })) },
       { info: { id: 'standing', title: 'crew standing (strap-floor model, factor 1)', combination: 'characteristic', gammaM: bending.gammaM, duration: 'short', sourceIds: [], working: `each strap end's pull from the floor model (${stat.iterations} iterations, residual ${num(stat.residual_N)} N)` }, pulls: (r) => r.pulls },
-      { info: { id: 'rough-ground', title: `rough ground (strap-floor model, factor ${num(bump.factor)})`, combination: 'characteristic', gammaM: bending.gammaM, duration: 'instantaneous', sourceIds: bumpFactorSources(data, ctx.models.bumpFactors.crew.from), working: `the floor model with the crew's weight × ${num(bump.factor)} (${bump.factorSource})` }, pulls: (r) => bump.rails.find((b) => b.rail === r.rail)!.pulls },
+      { info: { id: 'rough-ground', title: `rough ground (strap-floor model, factor ${num(bump.factor)})`, combination: 'characteristic', gammaM: bending.gammaM, duration: 'instantaneous', sourceIds: ctx.models.bumpFactors.crew.sources, working: `the floor model with the crew's weight × ${num(bump.factor)} (${bump.factorSource})` }, pulls: (r) => bump.rails.find((b) => b.rail === r.rail)!.pulls },
     ];
     const checks: CaseCheck[] = [];
     for (const c of cases) {
