@@ -101,10 +101,12 @@ describe('characteristic and design strength (mechanics note, section 1)', () =>
     // Wood Handbook Table 5-3a: white ash MOR 103,000 kPa at 12 %.
     expect(ash.mor_kPa.dry12.value).toBe(103000);
     const s = timberStrength(rulesData, part(), 'bending', 12);
-    expect(s.design('short').value).toBeCloseTo((103 * (1 - 1.645 * 0.16) * 0.8 * 0.9) / 1.3, 10);
+    expect(s.design('short', 1.3).value).toBeCloseTo((103 * (1 - 1.645 * 0.16) * 0.8 * 0.9) / 1.3, 10);
     const sawn = timberStrength(rulesData, part({ grade: 'sawn' }), 'bending', 12);
-    expect(sawn.design('permanent').value).toBeCloseTo((103 * (1 - 1.645 * 0.16) * 0.6 * 0.6) / 1.3, 10);
-    expect(s.design('instantaneous').value / s.design('permanent').value).toBeCloseTo(1.1 / 0.6, 12);
+    expect(sawn.design('permanent', 1.3).value).toBeCloseTo((103 * (1 - 1.645 * 0.16) * 0.6 * 0.6) / 1.3, 10);
+    expect(s.design('instantaneous', 1.3).value / s.design('permanent', 1.3).value).toBeCloseTo(1.1 / 0.6, 12);
+    // In an accidental combination γ_M is 1.0 (EN 1995-1-1 2.4.1): the same strength × 1.3.
+    expect(s.design('instantaneous', 1.0).value).toBeCloseTo((103 * (1 - 1.645 * 0.16) * 0.8 * 1.1) / 1.0, 10);
   });
 
   it('applies the slope of grain through Hankinson before the percentile', () => {

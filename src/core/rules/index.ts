@@ -13,6 +13,8 @@ import { floorConvergence } from './floor/convergence.ts';
 import { floorSag } from './floor/sag.ts';
 import { floorStiffness } from './floor/stiffness.ts';
 import { strapTension } from './floor/strap-tension.ts';
+import { felloeJoint } from './wheel/felloe-joint.ts';
+import { spokeTenon } from './wheel/spoke-tenon.ts';
 import { axleMember } from './member/axle.ts';
 import { felloeMember } from './member/felloe.ts';
 import { frameRailMember } from './member/frame-rail.ts';
@@ -46,6 +48,8 @@ export const RULES: readonly Rule[] = [
   floorSag,
   floorStiffness,
   strapTension,
+  felloeJoint,
+  spokeTenon,
   axleMember,
   felloeMember,
   frameRailMember,

@@ -214,6 +214,27 @@ export interface BuildSpecification {
        * True when a felloe is bent against a supporting strap (a steel strap along the outer face, with end stops); selects which of the species’ two steam-bending limits applies. Default true.
        */
       bend_strap?: boolean;
+      /**
+       * How the felloe's lengths are joined end to end; the joints fall midway between spokes. Every default here is an assumption, not a measurement: state your own.
+       */
+      joint?: {
+        /**
+         * dowel: the ends butt on dowels bored straight into them; the dowels pass the rim's shear, and the joint opens under a moment unless a tyre's pre-compression ties it. tenon: a round tongue on one end in a socket in the other, passing shear and moment by bearing. Default dowel (assumed).
+         */
+        kind?: 'dowel' | 'tenon';
+        /**
+         * Dowels or tenons across each joint. Default 2 (assumed).
+         */
+        count?: number;
+        /**
+         * Diameter of each dowel or round tenon. Default 12 (assumed).
+         */
+        diameter_mm?: number | string;
+        /**
+         * A tenon's length into the next felloe (tenons only). Default 60 (assumed).
+         */
+        length_mm?: number | string;
+      };
     };
     /**
      * A tyre round each felloe. kind rawhide (a hide or leather band, named by material) or iron (a forged band, its mass from the density of iron); none, or no tyre key, for a bare felloe.
@@ -761,6 +782,27 @@ export interface CheckedSpecification {
        * True when a felloe is bent against a supporting strap (a steel strap along the outer face, with end stops); selects which of the species’ two steam-bending limits applies. Default true.
        */
       bend_strap: boolean;
+      /**
+       * How the felloe's lengths are joined end to end; the joints fall midway between spokes. Every default here is an assumption, not a measurement: state your own.
+       */
+      joint: {
+        /**
+         * dowel: the ends butt on dowels bored straight into them; the dowels pass the rim's shear, and the joint opens under a moment unless a tyre's pre-compression ties it. tenon: a round tongue on one end in a socket in the other, passing shear and moment by bearing. Default dowel (assumed).
+         */
+        kind: 'dowel' | 'tenon';
+        /**
+         * Dowels or tenons across each joint. Default 2 (assumed).
+         */
+        count: number;
+        /**
+         * Diameter of each dowel or round tenon. Default 12 (assumed).
+         */
+        diameter_mm: number;
+        /**
+         * A tenon's length into the next felloe (tenons only). Default 60 (assumed).
+         */
+        length_mm: number;
+      };
     };
     /**
      * A tyre round each felloe. kind rawhide (a hide or leather band, named by material) or iron (a forged band, its mass from the density of iron); none, or no tyre key, for a bare felloe.

@@ -30,7 +30,7 @@ export interface TimberStrength {
   /** The same sources as catalogue ids: the species' values and the factors. */
   sourceIds: string[];
   /** The design value for a load duration; an accidental combination gives its own, smaller gamma_M. */
-  design(d: Duration, gammaM?: number): DesignValue;
+  design(d: Duration, gammaM: number): DesignValue;
 }
 
 const f = (v: number, d = 2) => v.toFixed(d);
@@ -49,7 +49,7 @@ export function timberStrength(data: RulesData, part: TimberPart, property: Timb
     working: [...ch.working, `grade ${part.grade} (${part.gradeFrom}): k_select = ${sel.value}; γ_M = ${gamma.value}`],
     sources,
     sourceIds: [...new Set([...ch.sourceIds, ...sel.sources, ...gamma.sources])],
-    design(d, gammaM = gamma.value) {
+    design(d, gammaM) {
       const k = kMod(data, d);
       const value = (ch.fk * sel.value * k.value) / gammaM;
       return { duration: d, kMod: k.value, kModSource: k.source, kModSources: k.sources, value, line: `f_d = f_k·k_select·k_mod/γ_M = ${f(ch.fk)} × ${sel.value} × ${k.value} / ${gammaM} = ${f(value)} MPa` };

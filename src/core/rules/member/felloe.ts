@@ -1,9 +1,10 @@
-import { centreLoadMoment } from '../../model/beam-formulas.ts';
-import { rectangle } from '../../model/sections.ts';
+import { felloePart } from '../../model/wheel/felloe-part.ts';
+import { angleFrom, scanWheelRing, type LoadPosition } from '../../model/wheel/wheel-ring-scan.ts';
+import { wheelRingSpec } from '../../model/wheel/wheel-ring-spec.ts';
 import { timberStrength } from '../../model/timber/design-strength.ts';
-import { timberPart } from '../../model/timber/timber-part.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
+import { placeOf, ringIntro } from '../wheel/ring-working.ts';
 import { strengthCheck, stressReport, type CaseCheck } from './member-finding.ts';
 import { STRESS_MESSAGES } from './member-messages.ts';
 
@@ -16,15 +17,29 @@ export function felloeRunoutDeg(pieces: number, bent: boolean): number {
   return bent ? 0 : 180 / pieces;
 }
 
+/** The largest extreme-fibre stress |M|/W + |N|/A over the positions' nodes that `where` admits. */
+function worstSection(scan: readonly LoadPosition[], W: number, A: number, where: (p: LoadPosition, node: number) => boolean): { p: LoadPosition; node: number; sigma: number } {
+  let best: { p: LoadPosition; node: number; sigma: number } | null = null;
+  for (const p of scan) {
+    for (let node = 0; node < p.result.nodes.length; node++) {
+      if (!where(p, node)) continue;
+      const sigma = Math.abs(p.result.moment[node]) / W + Math.abs(p.result.hoop[node]) / A;
+      if (best === null || sigma > best.sigma) best = { p, node, sigma };
+    }
+  }
+  if (best === null) throw new Error('no section of the felloe to check');
+  return best;
+}
+
 export const felloeMember = defineRule({
   id: 'member.felloe',
-  title: 'Felloe span strength',
-  checks: 'Bending of the rim between two spokes, as a simply supported span with the wheel load at its middle, in every load case, against the design strength of the felloe timber with the grain run-out of sawn segments.',
+  title: 'Felloe strength in the ring',
+  checks: 'Bending of the felloe as a ring continuous over the spokes (a ring frame of the whole wheel, spokes that only push unless a tyre keeps them loaded), with the contact anywhere on the rim, in every load case: in the span at the full design strength, and beside each joint, where the grain of sawn segments runs out, at the strength across that grain.',
   kind: 'check',
-  method: ['design-basis-members', 'design-basis-materials'],
+  method: ['design-basis-members', 'design-basis-materials', 'roark-thin-ring'],
   needs: ['mass', 'memberCases'],
   limits: { utilisation: { direction: 'max', unit: 'of the design strength' } },
-  params: [],
+  params: ['joint_grain_length_mm'],
   messages: STRESS_MESSAGES,
   run(ctx) {
     const { spec, data } = ctx;
@@ -32,37 +47,60 @@ export const felloeMember = defineRule({
     const lay = ctx.models.mass.layout;
     const bent = w.felloe.bend_radius_mm !== undefined;
     const runout = felloeRunoutDeg(w.felloe.pieces, bent);
-    const part = timberPart(spec, 'felloe');
-    const bending = timberStrength(data, part, 'bending', spec.moisture_content_pct, runout);
-    const Rm = (lay.felloeInner + lay.felloeOuter) / 2;
-    const span = (2 * Math.PI * Rm) / w.spokes;
-    const S = rectangle(w.felloe.width_mm, w.felloe.depth_mm);
-    const checks: CaseCheck[] = ctx.models.memberCases.map((c) => {
-      const fm = bending.design(c.duration, c.gammaM);
-      const Mc = centreLoadMoment(c.wheel_N, span);
-      return strengthCheck(c, 'bending between spokes', Mc / S.W, bending, fm, [step('M = N_w·span/4', `${num(c.wheel_N)} × ${num(span)}/4`, Mc, 'N·mm'), step('σ = M/W', `${num(Mc)} / ${num(S.W)}`, Mc / S.W, 'MPa')]);
+    const part = felloePart(spec);
+    const M = spec.moisture_content_pct;
+    const full = timberStrength(data, part, 'bending', M);
+    const atJoint = timberStrength(data, part, 'bending', M, runout);
+    const ws = wheelRingSpec(spec, data, lay);
+    const S = ws.felloe;
+    const grainLength = ctx.param('joint_grain_length_mm');
+    const half = grainLength.value / 2 / ws.ring.radius;
+    const cases = ctx.models.memberCases;
+    const scans = scanWheelRing(ws, cases.map((c) => c.wheel_N), [-half, half]);
+    const span = (2 * Math.PI * ws.ring.radius) / w.spokes;
+    const sectionSteps = (c: { wheel_N: number }, p: LoadPosition, node: number, sigma: number) => {
+      const m = p.result.moment[node];
+      const n = p.result.hoop[node];
+      const sideways = p.result.tokenForce > 1e-3 * c.wheel_N ? [`the rim's hinged lengths lean sideways on the spokes' tenons, up to ${num(p.result.tokenForce)} N (not checked here)`] : [];
+      return [
+        `ring model, ${placeOf(p, node)}: M = ${num(m)} N·mm (${m >= 0 ? 'inner' : 'outer'} face in tension), hoop force ${num(n)} N (${n >= 0 ? 'tension' : 'compression'})`,
+        ...sideways,
+        step('c = |M|/(N_w·span)', `${num(Math.abs(m))} / (${num(c.wheel_N)} × ${num(span)})`, Math.abs(m) / (c.wheel_N * span), '1'),
+        step('σ = |M|/W + |N|/A', `${num(Math.abs(m))} / ${num(S.W)} + ${num(Math.abs(n))} / ${num(S.area)}`, sigma, 'MPa'),
+      ];
+    };
+    const checks: CaseCheck[] = cases.flatMap((c, i) => {
+      const inSpan = worstSection(scans[i], S.W, S.area, () => true);
+      const nearJoint = worstSection(scans[i], S.W, S.area, (p, node) => ws.joints.representatives.some((j) => angleFrom(p, node, j) <= half + 1e-9));
+      return [
+        strengthCheck(c, 'bending in the span', inSpan.sigma, full, full.design(c.duration, c.gammaM), sectionSteps(c, inSpan.p, inSpan.node, inSpan.sigma)),
+        strengthCheck(c, 'bending beside a joint', nearJoint.sigma, atJoint, atJoint.design(c.duration, c.gammaM), sectionSteps(c, nearJoint.p, nearJoint.node, nearJoint.sigma)),
+      ];
     });
     ctx.report(
       stressReport({
         subject: 'wheel.felloe',
-        label: 'felloe between two spokes',
-        part: part.label,
+        label: 'felloe in the ring of the wheel',
+        part: 'felloe',
         checks,
         limit: ctx.limit('utilisation'),
         intro: [
-          step("R_m (the felloe's mid-depth radius) = (R_inner + R_outer)/2", `(${num(lay.felloeInner)} + ${num(lay.felloeOuter)})/2`, Rm, 'mm'),
-          step('span = 2π·R_m/n', `2π × ${num(Rm)} / ${num(w.spokes)}`, span, 'mm'),
-          `${S.label} (width × depth)`,
+          ...ringIntro(spec, lay, ws),
           step('W = b·h²/6', `${num(w.felloe.width_mm)} × ${num(w.felloe.depth_mm)}²/6`, S.W, 'mm³'),
-          bent ? 'steam-bent felloe: the grain follows the rim' : `sawn segments, ${w.felloe.pieces} to the rim`,
+          step('A = b·h', `${num(w.felloe.width_mm)} × ${num(w.felloe.depth_mm)}`, S.area, 'mm²'),
+          bent ? 'steam-bent felloe: the grain follows the rim, and the stock is selected' : `sawn segments, ${w.felloe.pieces} to the rim`,
           ...(bent ? [] : [step('grain run-out at the segment ends = 180°/pieces', `180°/${num(w.felloe.pieces)}`, runout, '°')]),
-          ...(!bent && part.grainSlopeDeg > 0 ? [step('plus the stated slope of grain', '', part.grainSlopeDeg, '°')] : []),
-          ...bending.working,
+          step('the run-out weakens the felloe over joint_grain_length_mm, centred on each joint', '', grainLength.value, 'mm'),
+          ...(part.grainSlopeDeg > 0 ? [step('the stated slope of grain, everywhere', '', part.grainSlopeDeg, '°')] : []),
+          'in the span:',
+          ...full.working,
+          'beside a joint:',
+          ...atJoint.working,
         ],
-        sources: bending.sourceIds,
+        sources: [...new Set([...full.sourceIds, ...atJoint.sourceIds, ...ws.sourceIds, ...grainLength.sources])],
         fix: bent
-          ? 'Deepen the felloe, add spokes to shorten the span, or use a stronger species or selected stock.'
-          : 'Cut the rim in more, shorter segments (less grain run-out), steam-bend it instead, deepen it, or add spokes to shorten the span.',
+          ? 'Deepen the felloe, add spokes to shorten the span, tie the joints (tenons, or a tyre shrunk on), or use a stronger species.'
+          : 'Cut the rim in more, shorter segments (less grain run-out), steam-bend it instead, deepen it, add spokes to shorten the span, or tie the joints.',
       }),
     );
   },

@@ -1,0 +1,85 @@
+import { nodeAt, sameAngle, wrapAngle } from './ring-mesh.ts';
+import { solveWheelRing, type WheelRingResult } from './wheel-ring.ts';
+import type { WheelRingSpec } from './wheel-ring-spec.ts';
+
+// The wheel rolls, so every point of the rim comes to the ground: the ring is
+// solved with the contact midway between two spokes, under a spoke, and at
+// eight steps across one spoke span centred on each felloe joint (the moment
+// at a section of a continuous beam is largest with the load on or near it).
+// Angles in the wheel's own frame (spoke 0 at 0).
+//
+// With spokes that can only push and no pre-compression, the ring's answer is
+// proportional to the ground load (which spokes go slack does not depend on
+// its size), so it is solved once for a unit load and scaled; with a tyre's
+// pre-compression each load is solved on its own.
+
+export interface LoadPosition {
+  /** The contact's angle in the wheel's frame, rad. */
+  at: number;
+  /** In words, for the working. */
+  label: string;
+  result: WheelRingResult;
+}
+
+/** Steps across one span, either side of a joint. */
+const STEPS = 4;
+
+function positions(ws: WheelRingSpec): { at: number; label: string }[] {
+  const n = ws.ring.spokes;
+  const span = (2 * Math.PI) / n;
+  const out = [
+    { at: Math.PI / n, label: 'contact midway between two spokes' },
+    { at: 0, label: 'contact under a spoke' },
+  ];
+  ws.joints.representatives.forEach((j, i) => {
+    for (let k = -STEPS; k <= STEPS; k++) out.push({ at: wrapAngle(j + (k * span) / (2 * STEPS)), label: k === 0 ? `contact at joint ${i + 1}` : `contact ${k > 0 ? '+' : '−'}${Math.abs(k)}/${2 * STEPS} span from joint ${i + 1}` });
+  });
+  return out.filter((p, i) => out.findIndex((q) => sameAngle(q.at, p.at)) === i);
+}
+
+function scaled(r: WheelRingResult, f: number): WheelRingResult {
+  return {
+    ...r,
+    load: { ...r.load, P: r.load.P * f },
+    moment: r.moment.map((m) => m * f),
+    hoop: r.hoop.map((v) => v * f),
+    shear: r.shear.map((v) => v * f),
+    spokes: r.spokes.map((s) => ({ ...s, force: s.force * f })),
+    peak: { ...r.peak, moment: r.peak.moment * f, hoop: r.peak.hoop * f },
+    tokenForce: r.tokenForce * f,
+  };
+}
+
+function solveAt(ws: WheelRingSpec, P: number, at: number, around: readonly number[]): WheelRingResult {
+  const joints = ws.joints.angles.map((j) => wrapAngle(j - at));
+  return solveWheelRing(ws.ring, {
+    P,
+    spokeOffset: wrapAngle(-at),
+    hinges: ws.hinged ? joints : [],
+    nodesAt: [...joints, ...joints.flatMap((j) => around.map((d) => wrapAngle(j + d)))],
+  });
+}
+
+/**
+ * The ring at every contact position, for each ground load in `loads` (N).
+ * `around`: angles either side of each joint (rad, signed) that must be nodes,
+ * e.g. the ends of the length over which a joint weakens the felloe.
+ */
+export function scanWheelRing(ws: WheelRingSpec, loads: readonly number[], around: readonly number[] = []): LoadPosition[][] {
+  const where = positions(ws);
+  if (ws.ring.precompression === 0) {
+    const unit = where.map((p) => ({ ...p, result: solveAt(ws, 1, p.at, around) }));
+    return loads.map((P) => unit.map((p) => ({ ...p, result: scaled(p.result, P) })));
+  }
+  return loads.map((P) => where.map((p) => ({ ...p, result: solveAt(ws, P, p.at, around) })));
+}
+
+/** The node of a result at an angle of the wheel's frame. */
+export function nodeAtWheelAngle(p: LoadPosition, angle: number): number {
+  return nodeAt(p.result.nodes, wrapAngle(angle - p.at));
+}
+
+/** Distance along the rim between a node of a result and an angle of the wheel's frame, rad (0 to π). */
+export function angleFrom(p: LoadPosition, node: number, angle: number): number {
+  return Math.abs(wrapAngle(p.result.nodes[node] + p.at - angle + Math.PI) - Math.PI);
+}
