@@ -56,8 +56,12 @@ describe('member load cases', () => {
     expect(byId('rough-ground').gravityFactor).toBe(phi);
     const yoke = Math.max(0, a.bumpFactors.yokeIncrease_N!);
     expect(byId('rough-ground').pole_N).toBeCloseTo(GG * poleG + GQ * PSI_CREW * poleQ + GQ * yoke, 9);
-    expect(byId('stone').wheel_N).toBeCloseTo(phi * (wheelG + wheelQ), 9);
-    expect(byId('stone').pole_N).toBeCloseTo(poleG + poleQ + yoke, 9);
+    // The stone's own factors, from the ride model's stone cases.
+    const phiStone = a.stoneFactors.wheel.value;
+    expect(phiStone).toBeGreaterThan(phi);
+    expect(byId('stone').wheel_N).toBeCloseTo(phiStone * (wheelG + wheelQ), 9);
+    expect(byId('stone').gravityFactor).toBe(phiStone);
+    expect(byId('stone').pole_N).toBeCloseTo(poleG + poleQ + Math.max(0, a.stoneFactors.yokeIncrease_N!), 9);
   });
 
   it('the turn leads with the load transfer and the lateral force', () => {

@@ -30,8 +30,8 @@ describe('declared data', () => {
     cpSync(defaultRulesDir(), dir, { recursive: true });
     const file = join(dir, 'parameters', 'load-cases.yaml');
     const text = readFileSync(file, 'utf8');
-    writeFileSync(file, text.replace(/\n  stopping_shock_factor:[\s\S]*?(?=\n  \w)/, ''));
-    expect(() => loadRulesData(dir)).toThrow(/parameters\/load-cases\.yaml:\d+: load-cases: stopping_shock_factor: the model "\w+" reads the parameter load-cases\.stopping_shock_factor/);
+    writeFileSync(file, text.replace(/\n  routine_factor_bound:[\s\S]*?(?=\n  \w)/, ''));
+    expect(() => loadRulesData(dir)).toThrow(/parameters\/load-cases\.yaml:\d+: load-cases: routine_factor_bound: the model "\w+" reads the parameter load-cases\.routine_factor_bound/);
   });
 
   it('an advisory level beyond the hard level is refused', () => {

@@ -59,6 +59,9 @@ export class Analysis {
   get bumpFactors(): BumpFactors {
     return this.graph.get('bumpFactors');
   }
+  get stoneFactors(): BumpFactors {
+    return this.graph.get('stoneFactors');
+  }
   get memberCases(): ModelValues['memberCases'] {
     return this.graph.get('memberCases');
   }

@@ -4,7 +4,7 @@ import { stiffness05, timberStrength } from '../../model/timber/design-strength.
 import { timberPart } from '../../model/timber/timber-part.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
-import { memberReport, strengthCheck, stressReport, type CaseCheck, type Working } from './member-finding.ts';
+import { memberReport, strengthCheck, stressReport, type CaseCheck } from './member-finding.ts';
 import { STRESS_MESSAGES } from './member-messages.ts';
 import { strengthStep } from './strength-step.ts';
 import { bucklingFactorSteps } from './buckling-steps.ts';
@@ -20,8 +20,8 @@ export const poleMember = defineRule({
   params: ['effective_length_factor', 'straightness_factor', 'slenderness_threshold'],
   messages: {
     ...STRESS_MESSAGES,
-    strutWithin: { code: 2306, text: '{part}, {mode}: {value:N} of design thrust in "{case}", within its buckling resistance {limit:N} (k_c {kc:2} at a relative slenderness of {lrel:2}, less what the bending at the root uses).' },
-    strutOver: { code: 2307, text: '{part}, {mode}: {value:N} of design thrust in "{case}" exceeds its buckling resistance {limit:N} (k_c {kc:2} at a relative slenderness of {lrel:2}, less what the bending at the root uses).' },
+    strutWithin: { code: 2306, text: '{part}, {mode}: the design thrust in "{case}" with what the bending at the root uses, {value:N}, is within its buckling resistance {limit:N} (k_c {kc:2} at a relative slenderness of {lrel:2}).' },
+    strutOver: { code: 2307, text: '{part}, {mode}: the design thrust in "{case}" with what the bending at the root uses, {value:N}, exceeds its buckling resistance {limit:N} (k_c {kc:2} at a relative slenderness of {lrel:2}).' },
   },
   run(ctx) {
     const { spec, data } = ctx;
@@ -44,23 +44,35 @@ export const poleMember = defineRule({
           : step('M = R_pole·L_f', `${num(c.pole_N)} × ${num(g.reach)}`, Mr, 'N·mm'),
         step('σ_m = M/W', `${num(Mr)} / ${num(S.W)}`, sm, 'MPa'),
       ]);
-      const steps: Working[] = [...plain.steps];
-      let capacity = fm.value;
+      // The push or pull along the pole is carried as the bending stress it uses up, so the
+      // check stays demand against f_m,d (and finite where the axial force alone would break it).
       if (c.poleAxial_N > 0) {
-        // EN 1995-1-1 eq. 6.19: (σ_c/f_c)² + σ_m/f_m ≤ 1, as the bending strength left.
+        // EN 1995-1-1 eq. 6.19: (σ_c/f_c,0,d)² + σ_m/f_m,d ≤ 1.
         const fc = compression.design(c.duration, c.gammaM);
-        capacity = fm.value * (1 - (sa / fc.value) ** 2);
-        steps.push(
-          step('σ_c = T/A', `${num(T)} / ${num(S.area)}`, sa, 'MPa'),
-          strengthStep(compression, fc),
-          step('bending strength left = f_m,d·(1 − (σ_c/f_c,0,d)²)', `${num(fm.value)} × (1 − (${num(sa)} / ${num(fc.value)})²)`, capacity, 'MPa'),
-        );
-      } else if (c.poleAxial_N < 0) {
-        // σ_t/f_t + σ_m/f_m ≤ 1 with f_t taken as f_m (clear wood is stronger in tension than in bending).
-        capacity = fm.value - sa;
-        steps.push(step('σ_t = T/A', `${num(T)} / ${num(S.area)}`, sa, 'MPa'), step('bending strength left = f_m,d − σ_t', `${num(fm.value)} − ${num(sa)}`, capacity, 'MPa'));
+        const demand = sm + fm.value * (sa / fc.value) ** 2;
+        return {
+          ...plain,
+          mode: 'bending at the root with the thrust',
+          demand,
+          steps: [
+            ...plain.steps,
+            step('σ_c = T/A', `${num(T)} / ${num(S.area)}`, sa, 'MPa'),
+            strengthStep(compression, fc),
+            step('σ_m + f_m,d·(σ_c/f_c,0,d)² (eq. 6.19)', `${num(sm)} + ${num(fm.value)} × (${num(sa)} / ${num(fc.value)})²`, demand, 'MPa'),
+          ],
+        };
       }
-      return { ...plain, capacity: Math.max(0, capacity), steps };
+      if (c.poleAxial_N < 0) {
+        // σ_t/f_t + σ_m/f_m ≤ 1 with f_t taken as f_m (clear wood is stronger in tension than in bending).
+        const demand = sm + sa;
+        return {
+          ...plain,
+          mode: 'bending at the root with the pull',
+          demand,
+          steps: [...plain.steps, step('σ_t = T/A', `${num(T)} / ${num(S.area)}`, sa, 'MPa'), step('σ_m + σ_t (f_t taken as f_m)', `${num(sm)} + ${num(sa)}`, demand, 'MPa')],
+        };
+      }
+      return plain;
     });
     const utilisation = ctx.limit('utilisation');
     ctx.report(
@@ -101,12 +113,14 @@ export const poleMember = defineRule({
       const fc = compression.design(c.duration, c.gammaM);
       const fm = bending.design(c.duration, c.gammaM);
       const sm = rootMoment(g, c.pole_N, c.poleAxial_N) / S.W;
-      const left = Math.max(0, 1 - sm / fm.value);
-      const capacity = kc * fc.value * S.area * left;
+      // Eq. 6.23 as forces: N_d + k_c·f_c,0,d·A·σ_m,d/f_m,d ≤ k_c·f_c,0,d·A, the bending at the root
+      // carried as the thrust it uses up (finite where the bending alone would break the pole).
+      const capacity = kc * fc.value * S.area;
+      const used = (capacity * sm) / fm.value;
       return {
         memberCase: c,
         mode: 'buckling as a strut',
-        demand: c.poleAxial_N,
+        demand: c.poleAxial_N + used,
         capacity,
         basis: { kc, lrel: lambdaRel },
         sources: [...fc.kModSources],
@@ -115,7 +129,9 @@ export const poleMember = defineRule({
           strengthStep(compression, fc),
           step('σ_m,d at the root = M/W', `${num(rootMoment(g, c.pole_N, c.poleAxial_N))} / ${num(S.W)}`, sm, 'MPa'),
           strengthStep(bending, fm),
-          step('N_Rd = k_c·f_c,0,d·A·(1 − σ_m,d/f_m,d) (eq. 6.23)', `${num(kc)} × ${num(fc.value)} × ${num(S.area)} × (1 − ${num(sm)} / ${num(fm.value)})`, capacity, 'N'),
+          step('N_b,Rd = k_c·f_c,0,d·A', `${num(kc)} × ${num(fc.value)} × ${num(S.area)}`, capacity, 'N'),
+          step('N_m, the thrust the bending uses = N_b,Rd·σ_m,d/f_m,d', `${num(capacity)} × ${num(sm)} / ${num(fm.value)}`, used, 'N'),
+          step('N_d + N_m (eq. 6.23 as forces)', `${num(c.poleAxial_N)} + ${num(used)}`, c.poleAxial_N + used, 'N'),
         ],
       };
     });
