@@ -2,7 +2,7 @@ import pkg from '../../../package.json' with { type: 'json' };
 import { CAUTIONS } from '../cautions.ts';
 import { choicesOf } from '../data/choices.ts';
 import type { RulesData } from '../data/rules-data.ts';
-import { severityRank, verdictOf } from '../findings/severity.ts';
+import { SEVERITY_MEANING, severityRank, verdictOf } from '../findings/severity.ts';
 import type { CheckResult } from '../result/check-result.ts';
 import { rideSummary } from '../result/ride-summary.ts';
 import { floorDampingOf } from '../ride/ride-build.ts';
@@ -41,10 +41,16 @@ export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data:
   const damping = graph.peek('floorDampingNeeded') ?? null;
   const ride = graph.get('ride');
   const mass = graph.get('mass');
+  // A verdict that rests on the data's bounds for the dynamic factors, not on the ride model, is provisional.
+  const provisional = [graph.peek('bumpFactors'), graph.peek('stoneFactors')].flatMap((g, i) =>
+    g?.provisional ? [`the ${i === 0 ? 'routine rough ground' : 'stone'}'s dynamic factors are the data's bound, not the ride model's: ${g.wheel.source}`] : [],
+  );
   return {
     tool: { name: pkg.name, version: pkg.version },
     spec_name: spec.name,
     verdict: verdictOf(findings.map((f) => f.severity)),
+    provisional,
+    severity_meanings: { ...SEVERITY_MEANING },
     ...splitFigures({ ...graph.get('figures'), floor_damping_ratio_needed: dampingFigure(damping) }),
     findings: ordered,
     mass: { parts: mass.parts, rolling_mass_kg: mass.rolling.mass_kg, yoke_mass_kg: mass.yoke.mass_kg, total_mass_kg: mass.total.mass_kg },

@@ -15,6 +15,10 @@ export interface CheckResult {
   tool: { name: string; version: string };
   spec_name: string;
   verdict: Severity;
+  /** Why the verdict is provisional (it rests on a bound, not a model's result); empty where it is not. */
+  provisional: string[];
+  /** What each severity means, one line each. */
+  severity_meanings: Record<Severity, string>;
   /** Named figures, each a finite number: never NaN, Infinity or null. */
   figures: Record<string, Figure>;
   /** The figures that do not apply to this build or run, each with the reason, in words. */
