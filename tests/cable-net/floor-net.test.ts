@@ -63,7 +63,7 @@ describe('floor cable net', () => {
     for (const weave of WEAVES) {
       it(`${demo}, ${weave}: sag and largest tension independent of the mesh within 1 %`, () => {
         const spec = specOf(demo, { weave });
-        const [coarse, mid, fine] = [1, 2, 4].map((r) => floorModel(spec, rulesData, { value: 2, source: 'test' }, r));
+        const [coarse, mid, fine] = [1, 2, 4].map((r) => floorModel(spec, rulesData, { value: 2, source: 'test' }, { refine: r }));
         for (const m of [coarse, mid]) {
           expect(Math.abs(m.maxTension_N / fine.maxTension_N - 1)).toBeLessThan(0.01);
           m.crew.forEach((c, i) => expect(Math.abs(c.sag_mm / fine.crew[i].sag_mm - 1)).toBeLessThan(0.01));
