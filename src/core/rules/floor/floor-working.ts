@@ -17,7 +17,7 @@ import { G } from '../../units/units.ts';
 /** One case the floor is solved in, as the findings name it. */
 export interface FloorCase {
   model: FloorModel;
-  load_case: 'static' | 'bump';
+  load_case: 'static' | 'bump' | 'stone';
   /** In words, for a message: `crew standing`, `bump`. */
   name: string;
   /** For a finding's label, with the factor on the crew's weight. */
@@ -36,8 +36,14 @@ export function bumpCase(model: FloorModel, bump: BumpFactors, data: RulesData):
   return { model, load_case: 'bump', name: 'bump', label: `bump, ${formatNumber(model.factor)} × crew weight`, sources };
 }
 
-export function floorCases(models: { floorStatic: FloorModel; floorBump: FloorModel; bumpFactors: BumpFactors }, data: RulesData): [FloorCase, FloorCase] {
-  return [standingCase(models.floorStatic), bumpCase(models.floorBump, models.bumpFactors, data)];
+/**
+ * The floor's cases: standing first, then the dynamic ones. The accidental
+ * stone strike joins them here once a `floorStone` model (the floor under the
+ * stone's crew factor, from `stoneFactors`) exists: pass it as `floorStone`
+ * and the floor rules check it like the bump, as one more dynamic case.
+ */
+export function floorCases(models: { floorStatic: FloorModel; floorBump: FloorModel; bumpFactors: BumpFactors; floorStone?: FloorCase }, data: RulesData): FloorCase[] {
+  return [standingCase(models.floorStatic), bumpCase(models.floorBump, models.bumpFactors, data), ...(models.floorStone ? [models.floorStone] : [])];
 }
 
 /** A number the solver may not have reached (NaN) as a finding's value. */
@@ -57,7 +63,13 @@ export function floorWorking(spec: CheckedSpecification, data: RulesData, m: Flo
     step(`EA = E × b × t (${s.material})`, `${num(E)} MPa × ${num(s.width_mm, 'mm')} mm × ${num(s.thickness_mm, 'mm')} mm`, m.EA_N, 'N'),
     step('T_0 (pretension)', '', m.pretension_N, 'N'),
     'each segment of plan length p is cut to l_0 = p / (1 + T_0/EA), so it carries T_0 when flat',
-    `net: ${s.weave} weave at a pitch of ${num(s.pitch_mm, 'mm')} mm, ${num(m.nodes, 'count')} nodes, ${Number.isFinite(m.segments) ? num(m.segments, 'count') : 'no'} tension-only segments, ends fixed to the frame`,
+    `net: ${s.weave} weave at a pitch of ${num(s.pitch_mm, 'mm')} mm, ${num(m.nodes, 'count')} nodes, ${Number.isFinite(m.segments) ? num(m.segments, 'count') : 'no'} tension-only segments, ends anchored on the frame`,
+    ...(m.frame
+      ? [
+          `the frame bends in plan under the straps' pull (a closed loop of rails, ${m.frame.cornerRadius_mm > 0 ? 'bent front corners' : 'square corners'}${m.frame.struts.length ? `, the ${m.frame.struts.map((x) => x.part).join(' and ')} beneath as a strut` : ''}); the anchors move in with it and each strap's plan length shrinks by its anchors' movement, so the pretension relaxes`,
+          step('largest inward movement of a strap end', '', m.frame.maxAnchorMove_mm, 'mm'),
+        ]
+      : []),
     `factor on the crew's weight ${num(m.factor)} (${m.factorSource})`,
     ...spec.crew.map((c) => step(`P = m × g × factor (${c.role})`, `${num(c.mass_kg)} × ${num(G)} × ${num(m.factor)}`, c.mass_kg * G * m.factor, 'N')),
     `each spread over a ${num(length_mm, 'mm')} × ${num(width_mm, 'mm')} mm foot patch (front to back × side to side)`,
