@@ -22,6 +22,10 @@ export interface OneStrapHand {
   /** The side rail's moment under the strap, M_A, and at the corners, M_C, N·mm. */
   MA: number;
   MC: number;
+  /** The frame's flexibility for the strap, mm/N, and the moments per newton of pull, mm. */
+  F: number;
+  mA: number;
+  mC: number;
 }
 
 /** The hand solution of ONE_STRAP for a load P on the middle node, with the E of the rails and the E·A of the strap from the data. */
@@ -50,6 +54,6 @@ export function oneStrapHand(P: number, E: number, EA: number): OneStrapHand {
   const eAt = (sag: number) => bisect((e) => e - F * strap(sag, e).H, 0, 50);
   const sag = bisect((s) => strap(s, eAt(s)).V - P, 1, 500);
   const q = strap(sag, eAt(sag));
-  return { sag, pull: q.H, tension: q.T, MA: q.H * mA, MC: -q.H * mC };
+  return { sag, pull: q.H, tension: q.T, MA: q.H * mA, MC: -q.H * mC, F, mA, mC: -mC };
 }
 

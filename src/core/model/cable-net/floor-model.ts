@@ -132,7 +132,7 @@ function coupledCompliance(net: CableNet, sol: CoupledSolution, F: ArrayLike<num
   const K = new SkylineCholesky(net.nodes.length, coupledPairs(net), nodeOrder(net));
   const spans = strapSpans(net);
   // Only a net without pretension can have a slack strap with no stiffness at all; give it the solver's stand-in.
-  const T = coupledTangent(net, F, spans, states, K, 0) ?? coupledTangent(net, F, spans, states, K, SLACK_TENSION);
+  const T = coupledTangent(net, F, spans, states, K, 0, 0) ?? coupledTangent(net, F, spans, states, K, SLACK_TENSION, 0);
   if (!T) return null;
   const zero = new Float64Array(net.straps.length);
   return (p) => T.solve(p, zero)?.du ?? new Float64Array(p.length).fill(NaN);

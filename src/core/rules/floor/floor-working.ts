@@ -39,11 +39,12 @@ export function bumpCase(model: FloorModel, bump: BumpFactors, data: RulesData):
 /**
  * The floor's cases: standing first, then the dynamic ones. The accidental
  * stone strike joins them here once a `floorStone` model (the floor under the
- * stone's crew factor, from `stoneFactors`) exists: pass it as `floorStone`
- * and the floor rules check it like the bump, as one more dynamic case.
+ * stone's crew factor, from `stoneFactors`) exists: a rule that names it in
+ * its needs passes its case as `stone`, and the floor rules check it like the
+ * bump, as one more dynamic case.
  */
-export function floorCases(models: { floorStatic: FloorModel; floorBump: FloorModel; bumpFactors: BumpFactors; floorStone?: FloorCase }, data: RulesData): FloorCase[] {
-  return [standingCase(models.floorStatic), bumpCase(models.floorBump, models.bumpFactors, data), ...(models.floorStone ? [models.floorStone] : [])];
+export function floorCases(models: { floorStatic: FloorModel; floorBump: FloorModel; bumpFactors: BumpFactors }, data: RulesData, stone?: FloorCase): FloorCase[] {
+  return [standingCase(models.floorStatic), bumpCase(models.floorBump, models.bumpFactors, data), ...(stone ? [stone] : [])];
 }
 
 /** A number the solver may not have reached (NaN) as a finding's value. */
