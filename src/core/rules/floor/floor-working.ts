@@ -1,6 +1,6 @@
 import { param } from '../../data/param.ts';
 import type { RulesData } from '../../data/rules-data.ts';
-import type { WorkingStep } from '../../findings/finding.ts';
+import type { Combination, WorkingStep } from '../../findings/finding.ts';
 import type { Severity } from '../../findings/severity.ts';
 import { formatNumber } from '../../format/number-format.ts';
 import type { FloorModel } from '../../model/cable-net/floor-model.ts';
@@ -24,16 +24,18 @@ export interface FloorCase {
   label: string;
   /** The sources of that factor. */
   sources: string[];
+  /** For the serviceability checks (sag, clearance): unfactored loads; the stone strike is accidental. */
+  combination: Combination;
 }
 
 export function standingCase(model: FloorModel): FloorCase {
-  return { model, load_case: 'static', name: 'crew standing', label: 'crew standing', sources: [] };
+  return { model, load_case: 'static', name: 'crew standing', label: 'crew standing', sources: [], combination: 'characteristic' };
 }
 
 /** The bump case: its factor comes from the ride model or, without one, the placeholder of rules/parameters. */
 export function bumpCase(model: FloorModel, bump: BumpFactors, data: RulesData): FloorCase {
   const sources = bump.crew.from === null ? param(data, 'load-cases', 'bump_dynamic_factor').sources : ['design-basis-ride'];
-  return { model, load_case: 'bump', name: 'bump', label: `bump, ${formatNumber(model.factor)} × crew weight`, sources };
+  return { model, load_case: 'bump', name: 'bump', label: `bump, ${formatNumber(model.factor)} × crew weight`, sources, combination: 'characteristic' };
 }
 
 /**

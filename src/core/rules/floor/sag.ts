@@ -61,6 +61,7 @@ export const floorSag = defineRule({
         unit: 'mm',
         against: { limit: 'sag_mm' },
         load_case: stat.load_case,
+        combination: stat.combination,
         fix:
           grade(c.sag_mm, ctx.limit('sag_mm'), SAG).severity !== 'pass'
             ? 'Raise the pretension, use thicker or wider straps, a closer pitch or a two-way weave; stand on a sample panel to judge the footing.'
@@ -87,6 +88,7 @@ export const floorSag = defineRule({
         unit: 'mm',
         against: { limit },
         load_case: c.load_case,
+        combination: c.combination,
         fix:
           standingHits || dynamic.some((d) => beyond(left(d.model.clearances[i]), 'bump_clearance_mm', BUMP_CLEARANCE))
             ? `Stiffen the floor (more pretension, thicker or wider straps, a closer pitch, a two-way weave), stiffen the frame rails in plan (the straps slacken as they bow), move the crew off the ${sp.part}, or deepen the frame rails so the ${sp.part} sits lower.`
