@@ -74,13 +74,13 @@ describe('floor net coupled to its frame', () => {
       expect(short.stopped).toContain('no convergence in 2 iterations');
     });
 
-    it(`${demo}: sag and rail moments independent of the mesh (net within 1 %, arcs within 0.5 %)`, () => {
+    it(`${demo}: sag and rail moments independent of the mesh (net within 2 % at the default mesh and 1 % at twice it, arcs within 0.5 %)`, () => {
       // The net's intervals split into 1, 2 and 4 segments; the bent corners cut into chords of 4°, 2° and 1°.
       const spec = prepared(readDemo(demo));
       const [coarse, mid, fine] = [1, 2, 4].map((refine) => floorModel(spec, rulesData, BUMP, { refine }));
-      for (const m of [coarse, mid]) {
-        m.crew.forEach((c, i) => expect(Math.abs(c.sag_mm / fine.crew[i].sag_mm - 1)).toBeLessThan(0.01));
-        m.frame!.rails.forEach((r, i) => expect(Math.abs(r.M_Nmm / fine.frame!.rails[i].M_Nmm - 1)).toBeLessThan(0.01));
+      for (const [m, tol] of [[coarse, 0.02], [mid, 0.01]] as const) {
+        m.crew.forEach((c, i) => expect(Math.abs(c.sag_mm / fine.crew[i].sag_mm - 1)).toBeLessThan(tol));
+        m.frame!.rails.forEach((r, i) => expect(Math.abs(r.M_Nmm / fine.frame!.rails[i].M_Nmm - 1)).toBeLessThan(tol));
       }
       const arcs = [4, 2, 1].map((arcStepDeg) => floorModel(spec, rulesData, BUMP, { arcStepDeg }));
       for (const m of arcs.slice(0, 2)) {

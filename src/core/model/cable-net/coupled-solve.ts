@@ -182,7 +182,6 @@ export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLi
       e,
     };
   };
-  // Start from the net on rigid anchors (a quick solve) and the pulls it puts on them.
   const problem: EnergyProblem<CoupledState> = {
     state,
     direction: (_x, cur) => {
@@ -201,26 +200,12 @@ export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLi
       return { step, slope };
     },
   };
+  // Without a start given: the sags on rigid anchors (a quick solve) and the pulls they put on the anchors. The floor model
+  // starts closer: the same sags with the pulls of the pretension alone solved with the frame (far fewer steps).
   const start = new Float64Array(n + m);
-  if (from) {
-    start.set(from.sag);
-    start.set(from.pulls, n);
-  } else {
-    // Start from the sags on rigid anchors (a quick solve) and the pulls of the pretension alone with the frame (two or three
-    // steps from the flat net): far fewer steps than from the flat net under the full load.
-    const flat = new Float64Array(n + m);
-    flat.set(
-      meanPulls(
-        net,
-        net.segments.map((seg) => segmentState(seg, 0, 0)),
-        spans,
-      ),
-      n,
-    );
-    const rest = minimise(problem, flat, settings);
-    start.set(solveNet(net, loads, settings).sag);
-    start.set(rest.x.subarray(n), n);
-  }
+  const sag = from?.sag ?? solveNet(net, loads, settings).sag;
+  start.set(sag);
+  start.set(from?.pulls ?? meanPulls(net, net.segments.map((seg) => segmentState(seg, at(sag, seg.a), at(sag, seg.b))), spans), n);
   const result = minimise(problem, start, settings);
   const x = result.x;
   return {
