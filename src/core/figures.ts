@@ -8,7 +8,7 @@ import { floorFigures } from './model/cable-net/floor-figures.ts';
 import { rideFigures } from './ride/ride-figures.ts';
 
 /** The models the named figures read. */
-export type FiguresView = ModelView<'mass' | 'loadCases' | 'staticCase' | 'turn' | 'floorStatic' | 'floorBump' | 'ride' | 'bumpFactors' | 'stoneFactors' | 'cutting'>;
+export type FiguresView = ModelView<'mass' | 'loadCases' | 'staticCase' | 'turn' | 'floorStatic' | 'floorBump' | 'floorStone' | 'ride' | 'bumpFactors' | 'stoneFactors' | 'cutting'>;
 
 /** The named figures of a check, or why one does not apply; later families add theirs here. */
 export function figures(a: FiguresView): Record<string, FigureEntry> {

@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { deepMerge, findingsOf, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 import { Analysis } from '../support/analysis.ts';
 import type { Finding } from '../../src/core/findings/finding.ts';
+import { floorFigures } from '../../src/core/model/cable-net/floor-figures.ts';
+import { ONE_STRAP, oneStrapHand } from '../support/one-strap-floor.ts';
 
 const RULE = 'floor.sag';
 const THICK = { floor_straps: { width_mm: 30, thickness_mm: 10, pitch_mm: 32, pretension_N: 60 } };
@@ -43,12 +45,12 @@ describe(RULE, () => {
   });
 
   it('warns when the floor reaches the pole only at a bump', async () => {
-    // The thin floor on a 25 mm frame: the standing sag over the pole (about 20 mm) clears it, the bump sag (about 28 mm) does not.
-    const found = await findingsOf(RULE, raw(deepMerge(THIN, { box: { floor: { frame: { thickness_mm: 25 } } } })));
+    // The thin floor on a 46 mm frame: the standing sag over the pole (about 38 mm) clears it, the bump sag (about 49 mm) does not.
+    const found = await findingsOf(RULE, raw(deepMerge(THIN, { box: { floor: { frame: { thickness_mm: 46 } } } })));
     const pole = bySubject(found, 'part.pole');
     expect(pole.severity).toBe('warning');
     expect(pole.load_case).toBe('bump');
-    expect(pole.params.clearance as number).toBeCloseTo(25, 9);
+    expect(pole.params.clearance as number).toBeCloseTo(46, 9);
     expect(pole.value!).toBeLessThan(0);
     expect(pole.message).toContain('in the bump case and reaches it');
     expect(pole.working_text).toMatch(/bump, [\d.]+ × crew weight/);
@@ -97,5 +99,46 @@ describe(RULE, () => {
     expect(found.length).toBeGreaterThan(0);
     expect(found.every((f) => f.severity === 'fail' && f.code === 2215 && f.message_key === 'notSolved' && f.subject === 'floor.net')).toBe(true);
     expect(found[0].message).toContain('max_nodes');
+  });
+
+  it('hand calculation: one strap over the pole leaves the rail thickness less its sag; the figure gives the least in any case', async () => {
+    // tests/support/one-strap-floor.ts: one side-to-side strap at x = 254 mm right over the pole,
+    // one person of 80 kg on it, the rails free to bow (square corners, no lashing). The pole's
+    // top is one rail thickness (45 mm) below the floor top (layout: the frame sits on the pole);
+    // the floor over it sags by the strap's sag w, found by hand from the compatibility of the
+    // strap's stretch with the frame's deflection. Clearance left = 45 − w in each case.
+    const r = deepMerge(readDemo('demo-rear-axle'), ONE_STRAP);
+    const a = floors(r);
+    const found = await findingsOf(RULE, r);
+    const pole = bySubject(found, 'part.pole');
+    const w = (factor: number) => oneStrapHand(80 * 9.80665 * factor, a.floorStatic.frame!.E_MPa, a.floorStatic.EA_N).sag;
+    const standing = 45 - w(1);
+    const bump = 45 - w(a.floorBump.factor);
+    const stone = 45 - w(a.floorStone.factor);
+    // One strap sags more than a rail thickness under a person: the floor rests on the pole standing, which governs and fails.
+    expect(standing).toBeLessThan(0);
+    expect(pole).toMatchObject({ severity: 'fail', load_case: 'static', message_key: 'strikes' });
+    expect(pole.value! / standing - 1).toBeCloseTo(0, 6);
+    const left = pole.working.filter((st) => st.formula?.startsWith('clearance left,'));
+    expect(left.map((st) => st.result! / 1)).toHaveLength(3);
+    expect(left[1].result! / bump - 1).toBeCloseTo(0, 6);
+    expect(left[2].result! / stone - 1).toBeCloseTo(0, 6);
+    // The figure: the least clearance left under the floor in any case, here on the stone.
+    expect(stone).toBeLessThan(bump);
+    expect(bump).toBeLessThan(standing);
+    const figure = floorFigures({ floorStatic: a.floorStatic, floorBump: a.floorBump, floorStone: a.floorStone } as Parameters<typeof floorFigures>[0]).floor_clearance_min;
+    expect(figure).toMatchObject({ unit: 'mm' });
+    expect((figure as { value: number }).value / stone - 1).toBeCloseTo(0, 6);
+  });
+
+  it('reports the case that leaves the least clearance where standing clears', async () => {
+    const found = await findingsOf(RULE, raw(THICK));
+    const a = floors(raw(THICK));
+    for (const part of ['pole', 'axle'] as const) {
+      const f = bySubject(found, `part.${part}`);
+      const left = [a.floorStatic, a.floorBump].map((m) => m.clearances.find((c) => c.part === part)!).map((c) => c.clearance_mm - c.sag_mm);
+      expect(f.value).toBe(Math.min(...left));
+      expect(f.load_case).toBe(left[1] < left[0] ? 'bump' : 'static');
+    }
   });
 });

@@ -4,7 +4,7 @@ import { formatNumber, formatQuantity } from '../../src/core/format/number-forma
 import { deepMerge, findingsOf, fractionHitting, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 const RULE = 'floor.strap-tension';
-const THICK = { floor_straps: { width_mm: 30, thickness_mm: 10, pitch_mm: 32, pretension_N: 60 } };
+const THICK = { floor_straps: { width_mm: 30, thickness_mm: 12, pitch_mm: 32, pretension_N: 60 } };
 const raw = (patch: unknown = {}) => deepMerge(readDemo('demo-two-crew'), patch);
 // Design basis, sections 1 and 5: f_d = f_t × η_slot / SF. Rawhide f_t = 20 MPa
 // (rules/materials/leathers.yaml, from memory), η_slot = 0.6 and SF = 4

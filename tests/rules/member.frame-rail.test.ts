@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { Analysis } from '../support/analysis.ts';
 import { deepMerge, findingsOf, prepared, readDemo, rulesData, withParams } from '../support/fixtures.ts';
-import { expectPlainTemplates, expectUtilisationBoundary, governingStep, stepsOf } from '../support/member-support.ts';
+import { expectPlainTemplates, expectUtilisationBoundary, stepsOf } from '../support/member-support.ts';
+import { ONE_STRAP, oneStrapHand } from '../support/one-strap-floor.ts';
 
 const RULE = 'member.frame-rail';
 // The central-axle demo (floor 560 × 1020 mm) with deep 50 × 120 mm rails of selected
@@ -11,19 +12,10 @@ const DEEP_RAILS = {
   floor_straps: { material: 'rawhide', width_mm: 30, thickness_mm: 10, pitch_mm: 32, weave: 'two-way', pretension_N: 60 },
   stock: { grade: 'selected' },
 };
-// W = t·w²/6 of the 50 mm thick rail bent in plan about its 120 mm width, mm³.
-const W = (50 * 120 ** 2) / 6;
 const deepRails = (patch: unknown = {}) => deepMerge(deepMerge(readDemo('demo-two-crew'), DEEP_RAILS), patch);
 const one = async (raw: unknown, data = rulesData) => (await findingsOf(RULE, raw, {}, data))[0];
-
-/**
- * Bending moment at x of a simply supported span L under point loads, by statics:
- * R_A = Σ P_i·(L − a_i)/L, and the moment of R_A and of the loads left of x.
- */
-function momentAt(x: number, L: number, loads: { at_mm: number; force_N: number }[]): number {
-  const RA = loads.reduce((s, q) => s + (q.force_N * (L - q.at_mm)) / L, 0);
-  return RA * x - loads.filter((q) => q.at_mm < x).reduce((s, q) => s + q.force_N * (x - q.at_mm), 0);
-}
+// W = t·w²/6 of the 45 mm thick rail bent in plan about its 80 mm width (the rear-axle demo), mm³.
+const W = (45 * 80 ** 2) / 6;
 
 describe(RULE, () => {
   it('passes deep rails of selected stock', async () => {
@@ -33,50 +25,33 @@ describe(RULE, () => {
     expect(f.subject).toMatch(/^frame\.(front|rear|left|right)-rail$/);
   });
 
-  it('hand calculation: the largest moment by statics under the strap-end pulls on the governing rail, bent in plan', async () => {
-    const raw = deepRails();
+  it('hand calculation: one strap on a rectangular loop, the side rail\'s moment under the strap', async () => {
+    // tests/support/one-strap-floor.ts: one side-to-side strap at mid-depth of the rear-axle
+    // demo's square frame, solved by hand (compatibility of its stretch with the frame's
+    // deflection) for its pull H; the rectangle with rigid corners pulled in at the middle of its
+    // sides a = 588 mm (b = 1060 mm) bends most under the pull: M_A = H·a·(a + 2b)/(8·(a + b)),
+    // with no axial force there (the rear and front rails carry H/2 in compression).
+    const raw = deepMerge(readDemo('demo-rear-axle'), ONE_STRAP);
     const a = new Analysis(prepared(raw), rulesData);
     const f = await one(raw);
+    expect(f.subject).toMatch(/^frame\.(left|right)-rail$/);
     expect(f.load_case).toBe('bump');
-    expect(f.params.duration).toBe('instantaneous');
-    const rail = a.floorBump.rails.find((r) => f.subject === `frame.${r.rail}-rail`)!;
-    expect(f.subject_label).toBe(`${rail.rail} rail of the floor frame`);
-    // Between loads the moment is linear in x, so its largest value sits under a load.
-    const M = Math.max(...rail.pulls.map((q) => momentAt(q.at_mm, rail.span_mm, rail.pulls)));
-    expect(rail.pulls.length).toBeGreaterThan(0);
-    expect(f.value).toBeCloseTo(M / W, 9);
-    // The bump factor comes from the ride model here, and the finding cites it.
-    expect(f.sources).toContain('design-basis-ride');
-    // Three cases (pretension, standing, bump) on each rail the straps pull on.
-    expect(stepsOf(f, 'σ = M_max/W')).toHaveLength(3 * a.floorStatic.rails.filter((r) => r.total_N > 0).length);
-  });
-
-  it('the pretension alone: each strap end pulls T_0 on its rail, a permanent case', async () => {
-    // At T_0 = 600 N the pretension, held for good (k_mod 0.6), governs. Front rail, span
-    // L = 1020 mm: floor(1020/32) = 31 strap ends at 32 mm pitch, centred, a_k = 510 + 32·k,
-    // k = −15 … 15. Symmetric, so R_A = 31 × 600 / 2 = 9300 N and the moment peaks at midspan:
-    // M = R_A·L/2 − Σ_{k=1..15} T_0·32·k = 9300 × 510 − 600 × 32 × 120 = 2 439 000 N·mm.
-    // (Side rails, L = 560 mm, 17 ends: 5100 × 280 − 600 × 32 × 36 = 736 800 N·mm, less.)
-    // σ = M/W = 2 439 000 / 120 000 = 20.325 MPa.
-    const f = await one(deepRails({ floor_straps: { pretension_N: 600 } }));
-    expect(f.subject).toBe('frame.front-rail');
-    expect(f.load_case).toBe('pretension');
-    expect(f.params).toMatchObject({ case: 'strap pretension alone', duration: 'permanent', kMod: 0.6, mode: 'front rail' });
-    expect(f.message).toContain('"strap pretension alone" (permanent load, k_mod 0.6)');
-    expect(f.value).toBeCloseTo(2_439_000 / W, 9);
-    expect(f.value).toBeCloseTo(20.325, 9);
-    expect(f.working_text).toContain('strap pretension alone [permanent]: each strap end pulls T_0 on its rail (T_0 = 600 N, pitch 32 mm)');
-    const Mstep = governingStep(f, 'M_max = max over x of [R_A·x − Σ P_i·(x − a_i)]');
-    expect(Mstep.formula).toContain('at x = 510 mm');
-    expect(Mstep.result).toBeCloseTo(2_439_000, 6);
-    // The uniform load of the same total, w = ΣP/L = 18 600 / 1020 N/mm, for comparison:
-    // w·L²/8 = 18 600 × 1020 / 8 = 2 371 500 N·mm.
-    expect(governingStep(f, 'ΣP over 31 strap ends').result).toBe(18_600);
-    expect(governingStep(f, 'for comparison, a uniform load').result).toBeCloseTo(2_371_500, 6);
+    const h = oneStrapHand(80 * 9.80665 * a.floorBump.factor, a.floorBump.frame!.E_MPa, a.floorBump.EA_N);
+    expect(f.value! / (h.MA / W) - 1).toBeCloseTo(0, 6);
+    expect(h.MA / h.pull).toBeCloseTo((588 * (588 + 2 * 1060)) / (8 * (588 + 1060)), 9);
+    // The pretension alone, no one aboard: the strap keeps T_0/(1 + F·(EA + T_0)/L) of its 60 N.
+    const pre = 60 / (1 + (h.F * (a.floorStatic.EA_N + 60)) / 980);
+    const [preStep] = stepsOf(f, 'largest moment in plan on the left rail');
+    expect(preStep.result! / (pre * h.mA) - 1).toBeCloseTo(0, 6);
+    // Three cases (pretension, standing, bump) on each of the four rails.
+    expect(stepsOf(f, 'σ_m = M/W')).toHaveLength(12);
+    // The rear rail holds the side rails apart: compression H/2 beside its corner moment.
+    const rear = stepsOf(f, 'axial force there (compression)');
+    expect(rear.length).toBeGreaterThan(0);
   });
 
   it('fails slender rails', async () => {
-    const f = await one(deepMerge(readDemo('demo-two-crew'), { box: { floor: { frame: { width_mm: 30, thickness_mm: 30 } } } }));
+    const f = await one(deepMerge(readDemo('demo-two-crew'), { box: { floor: { frame: { width_mm: 20, thickness_mm: 15 } } } }));
     expect(f.severity).toBe('fail');
     expect(f.message_key).toBe('over');
   });

@@ -42,6 +42,15 @@ export class Analysis {
   get floorBump(): ModelValues['floorBump'] {
     return this.graph.get('floorBump');
   }
+  get floorStone(): ModelValues['floorStone'] {
+    return this.graph.get('floorStone');
+  }
+  get floorDesign(): ModelValues['floorDesign'] {
+    return this.graph.get('floorDesign');
+  }
+  get floorDesignRough(): ModelValues['floorDesignRough'] {
+    return this.graph.get('floorDesignRough');
+  }
   /** The ride model's three cases; throws where it was not run (check `hasRide` first). */
   get ride(): NonNullable<ModelValues['ride']> {
     const r = this.graph.get('ride');

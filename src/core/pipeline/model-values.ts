@@ -37,8 +37,14 @@ export interface ModelValues {
   bumpFactors: BumpFactors;
   /** The stone strike's dynamic factors (operation.bump_height_mm, bump_length_mm), from the ride model or, provisional, the data's stone_factor_bound. */
   stoneFactors: BumpFactors;
-  /** The strap floor under the crew's weight times the bump factor. */
+  /** The strap floor under the crew's weight times the routine rough ground's factor (characteristic). */
   floorBump: FloorModel;
+  /** The strap floor under the crew's weight times the stone's factor (accidental: every action × 1.0). */
+  floorStone: FloorModel;
+  /** The strap floor in the fundamental combination, the crew standing: their weight × γ_Q. */
+  floorDesign: FloorModel;
+  /** The strap floor in the fundamental combination over rough ground: the crew's weight × φ_routine × γ_Q. */
+  floorDesignRough: FloorModel;
   /** The load cases the timber members are checked in, with their load-duration classes. */
   memberCases: MemberCase[];
   /** Cut list, leather list, wheel setting-out and stock plan. */

@@ -11,6 +11,7 @@ import { param } from '../data/param.ts';
 import { rideCases } from '../ride/ride-model.ts';
 import { defineModel, withInputs, type ModelDef } from './define-model.ts';
 import { COMBINATION_PARAMS } from '../model/combination-factors.ts';
+import { designFloorFactor } from '../model/cable-net/design-floor-factor.ts';
 import { ROLLING_PARAMS } from '../model/rolling-resistance.ts';
 import { figures } from '../figures.ts';
 import { collectLoads } from '../loads/collect-loads.ts';
@@ -21,6 +22,8 @@ import { buildScene } from '../result/scene-of.ts';
 // models the requested rules and outputs need, each once.
 
 const TIMBER = ['timber-strength.fifth_percentile_z', 'timber-strength.gamma_M'] as const;
+/** The floor's solver settings. */
+const FLOOR = ['floor.solver.tolerance_fraction', 'floor.solver.max_iterations', 'floor.solver.max_nodes'] as const;
 /** The mass of an iron tyre reads steel's density. */
 const MASS = ['tyre.iron_density_kg_per_m3'] as const;
 /** The balance weighs the chariot and reads the rolling resistance and the EQU factors. */
@@ -72,7 +75,7 @@ export const turnDef = defineModel({
 export const floorStaticDef = defineModel({
   id: 'floorStatic',
   needs: [],
-  params: ['floor.solver.tolerance_fraction', 'floor.solver.max_iterations', 'floor.solver.max_nodes'],
+  params: FLOOR,
   compute: (_, { spec, data }) => floorModel(spec, data, { value: 1, source: 'the crew standing, no dynamic factor' }),
 });
 
@@ -116,8 +119,32 @@ export const stoneFactorsDef = defineModel({
 export const floorBumpDef = defineModel({
   id: 'floorBump',
   needs: ['bumpFactors'],
-  params: ['floor.solver.tolerance_fraction', 'floor.solver.max_iterations', 'floor.solver.max_nodes'],
+  params: FLOOR,
   compute: ({ bumpFactors }, { spec, data }) => floorModel(spec, data, bumpFactors.crew),
+});
+
+/** The floor under the stone: an accidental case, every action × 1.0, so also its design state. */
+export const floorStoneDef = defineModel({
+  id: 'floorStone',
+  needs: ['stoneFactors'],
+  params: FLOOR,
+  compute: ({ stoneFactors }, { spec, data }) => floorModel(spec, data, stoneFactors.crew),
+});
+
+/** The floor under the fundamental combination, the crew standing: their weight × γ_Q. */
+export const floorDesignDef = defineModel({
+  id: 'floorDesign',
+  needs: [],
+  params: [...FLOOR, ...COMBINATION_PARAMS],
+  compute: (_, { spec, data }) => floorModel(spec, data, designFloorFactor(data, null)),
+});
+
+/** The floor under the fundamental combination over rough ground: the crew's weight and its dynamic increment × γ_Q. */
+export const floorDesignRoughDef = defineModel({
+  id: 'floorDesignRough',
+  needs: ['bumpFactors'],
+  params: [...FLOOR, ...COMBINATION_PARAMS],
+  compute: ({ bumpFactors }, { spec, data }) => floorModel(spec, data, designFloorFactor(data, bumpFactors.crew)),
 });
 
 export const memberCasesDef = defineModel({
@@ -145,7 +172,7 @@ export const lashingDemandsDef = defineModel({
 
 export const figuresDef = defineModel({
   id: 'figures',
-  needs: ['mass', 'loadCases', 'staticCase', 'turn', 'floorStatic', 'floorBump', 'ride', 'bumpFactors', 'stoneFactors', 'cutting'],
+  needs: ['mass', 'loadCases', 'staticCase', 'turn', 'floorStatic', 'floorBump', 'floorStone', 'ride', 'bumpFactors', 'stoneFactors', 'cutting'],
   params: [...TIMBER_STIFFNESS, ...COMBINATION_PARAMS, 'ride.inputs.decay_fraction', 'ride.inputs.duration_s'], // the pole's Euler load; the turn's limits in equilibrium; the decay figure's reason
   compute: (m, i) => figures(withInputs(m, i)),
 });
@@ -173,6 +200,6 @@ export const plotsDef = defineModel({
 
 /** Every model, in no particular order: the graph finds the order from their needs. */
 export const MODELS: readonly ModelDef[] = [
-  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorBumpDef, memberCasesDef, cuttingDef, lashingDemandsDef,
+  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, cuttingDef, lashingDemandsDef,
   figuresDef, loadsDef, sceneDef, plotsDef,
 ];

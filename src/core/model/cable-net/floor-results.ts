@@ -5,7 +5,6 @@ import type { CableNet, Family } from './net.ts';
 import type { Rail } from './outline.ts';
 import { pointWeights, weightedSum } from './point-sag.ts';
 import { segmentState } from './segment.ts';
-import { SLACK_TENSION, tangentMatrix } from './solve-net.ts';
 
 // What a solved net means for the floor: tensions, sag and stiffness under
 // each person, the straps' pull on the rails and the frame's reactions.
@@ -52,53 +51,45 @@ export function describeSegment(net: CableNet, index: number): string {
 }
 
 /**
- * Sag, secant and tangent stiffness under each person; the tangent from one
- * solve with the tangent matrix per person. `withTangent` false (a net the
- * solver declined) leaves the tangent unknown (NaN).
+ * Sag, secant and tangent stiffness under each person; the tangent from the
+ * sags a unit load on the patch adds, by `compliance` (the coupled tangent of
+ * the solved state). Null (a net the solver declined, or no tangent) leaves
+ * the tangent unknown (NaN).
  */
-export function crewResults(floor: FloorNet, sag: ArrayLike<number>, crew: readonly Loaded[], withTangent = true): CrewOnFloor[] {
+export function crewResults(floor: FloorNet, sag: ArrayLike<number>, crew: readonly Loaded[], compliance: ((p: Float64Array) => Float64Array) | null): CrewOnFloor[] {
   const n = floor.net.nodes.length;
-  const K = withTangent ? tangentMatrix(floor.net, undefined, sag) : undefined;
-  // Only a net without pretension can have a slack strap with no stiffness at all; give it the solver's stand-in.
-  const factored = K !== undefined && (K.factor() || tangentMatrix(floor.net, K, sag, SLACK_TENSION).factor());
   return crew.map((c) => {
     const centre = pointWeights(floor.net, floor.outline, c.patch.x, c.patch.y);
     const s = weightedSum(centre, sag);
     let tangent = NaN;
-    if (factored) {
+    if (compliance) {
       const unit = new Float64Array(n);
       for (const { node, w } of c.weights) unit[node] += w;
-      const dSag = weightedSum(centre, K.solve(unit));
-      tangent = 1 / dSag;
+      tangent = 1 / weightedSum(centre, compliance(unit));
     }
     return { role: c.role, load_N: c.load_N, sag_mm: s, secantStiffness_N_per_mm: c.load_N / s, tangentStiffness_N_per_mm: tangent };
   });
 }
 
 /**
- * In-plane pull of each strap end (the horizontal part of its end segment's
- * tension) gathered by the rail it pulls on: front-to-back straps on the rear
- * and front rails, side-to-side straps on the side rails. Spans are the clear
- * inner depth and width, the safe side where a bent front rail shortens the
- * straight runs.
+ * Each strap's pull on its two anchors (the pull the frame carries), gathered
+ * by the rail it pulls on: front-to-back straps on the rear and front rails,
+ * side-to-side straps on the side rails. Spans are the clear inner depth and
+ * width.
  */
-export function railPulls(floor: FloorNet, sag: ArrayLike<number>, T: ArrayLike<number>): RailPull[] {
+export function strapPulls(floor: FloorNet, pulls: ArrayLike<number>): RailPull[] {
   const { net, outline, pitch } = floor;
   const spans: Record<Rail, number> = { front: outline.width, rear: outline.width, left: outline.depth, right: outline.depth };
   const out = new Map<Rail, RailPull>((['front', 'rear', 'left', 'right'] as const).map((r) => [r, { rail: r, span_mm: spans[r], lineLoad_N_per_mm: 0, total_N: 0, pulls: [] as RailPull['pulls'] }]));
-  for (const strap of net.straps) {
-    const ends = [strap.firstSegment, strap.firstSegment + strap.points.length - 2];
-    ends.forEach((i, e) => {
-      const seg = net.segments[i];
-      const st = segmentState(seg, at(sag, seg.a), at(sag, seg.b));
-      const horizontal = (T[i] * seg.flat) / st.length;
-      const r = out.get(strap.rails[e])!;
-      r.total_N += horizontal;
+  net.straps.forEach((strap, s) => {
+    for (const rail of strap.rails) {
+      const r = out.get(rail)!;
+      r.total_N += pulls[s];
       // Front and rear rails run across y (from the right corner); side rails along x.
-      r.pulls.push({ at_mm: strap.family === 'front-to-back' ? strap.cross + outline.width / 2 : strap.cross, force_N: horizontal });
-      r.lineLoad_N_per_mm = Math.max(r.lineLoad_N_per_mm, horizontal / pitch);
-    });
-  }
+      r.pulls.push({ at_mm: strap.family === 'front-to-back' ? strap.cross + outline.width / 2 : strap.cross, force_N: pulls[s] });
+      r.lineLoad_N_per_mm = Math.max(r.lineLoad_N_per_mm, pulls[s] / pitch);
+    }
+  });
   return [...out.values()];
 }
 

@@ -1,7 +1,8 @@
 import type { Segment } from './net.ts';
 
 // One tension-only segment with its ends displaced vertically by ua and ub
-// (sag, positive down; a fixed end has 0). Its plan length stays `flat`.
+// (sag, positive down; a fixed end has 0). Its plan length is `flat`, or a
+// shorter one where the frame's anchors have moved in (frame-coupling.ts).
 
 export interface SegmentState {
   /** Current length. */
@@ -10,13 +11,15 @@ export interface SegmentState {
   drop: number;
   /** max(0, EA (l - l_0) / l_0). */
   tension: number;
+  /** Its plan length. */
+  flat: number;
 }
 
-export function segmentState(seg: Segment, ua: number, ub: number): SegmentState {
+export function segmentState(seg: Segment, ua: number, ub: number, flat = seg.flat): SegmentState {
   const drop = ua - ub;
-  const length = Math.hypot(seg.flat, drop);
+  const length = Math.hypot(flat, drop);
   const tension = length > seg.rest ? (seg.EA * (length - seg.rest)) / seg.rest : 0;
-  return { length, drop, tension };
+  return { length, drop, tension, flat };
 }
 
 /** Upward pull of the segment on end a (and downward on end b): T (ua - ub) / l. */
@@ -42,4 +45,17 @@ export function tangentStiffness(seg: Segment, st: SegmentState, floorTension = 
   if (st.tension <= 0) return geometric;
   const c = st.drop / st.length;
   return geometric + c * c * (seg.EA / seg.rest - st.tension / st.length);
+}
+
+/**
+ * The segment energy's second derivatives in its plan length f and its drop d
+ * (U a function of l = hypot(f, d)): T/l (1 − n nᵀ) + (EA/l_0) n nᵀ with
+ * n = (f, d)/l; zero for a slack segment.
+ */
+export function planCurvatures(seg: Segment, st: SegmentState): { ff: number; fd: number } {
+  if (st.tension <= 0) return { ff: 0, fd: 0 };
+  const s = st.flat / st.length;
+  const c = st.drop / st.length;
+  const g = st.tension / st.length;
+  return { ff: g * (1 - s * s) + (seg.EA / seg.rest) * s * s, fd: (seg.EA / seg.rest - g) * s * c };
 }

@@ -2,17 +2,17 @@ import { param } from '../../data/param.ts';
 import { defineRule, type LimitSpec } from '../../pipeline/define-rule.ts';
 import { grade } from '../../pipeline/grade.ts';
 import { num, step } from '../../pipeline/step.ts';
-import { floorCases, floorWorking, mN, netSources } from './floor-working.ts';
+import { everyFloorCase, floorWorking, mN, netSources } from './floor-working.ts';
 
 const RESIDUAL: LimitSpec = { direction: 'max', unit: "of the solver's tolerance" };
 
 export const floorConvergence = defineRule({
   id: 'floor.convergence',
   title: 'Floor model convergence',
-  checks: 'Whether the cable-net model of the floor reached equilibrium, standing and at a bump, within the tolerance and the number of Newton steps allowed.',
+  checks: 'Whether the cable-net model of the floor reached equilibrium in every state it is solved in (standing, rough ground and the stone as loaded, and the design states of the fundamental combination), within the tolerance and the number of Newton steps allowed.',
   kind: 'check',
   method: ['design-basis-floor'],
-  needs: ['floorStatic', 'floorBump', 'bumpFactors'],
+  needs: ['floorStatic', 'floorBump', 'floorStone', 'floorDesign', 'floorDesignRough', 'bumpFactors', 'stoneFactors'],
   limits: { residual: RESIDUAL },
   params: [],
   messages: {
@@ -26,10 +26,10 @@ export const floorConvergence = defineRule({
     const tol = param(data, 'floor.solver', 'tolerance_fraction');
     const steps = param(data, 'floor.solver', 'max_iterations');
     const nodes = param(data, 'floor.solver', 'max_nodes');
-    for (const c of floorCases(ctx.models)) {
+    for (const c of everyFloorCase(ctx.models)) {
       const m = c.model;
       const fix = 'Check the strap sizes, material and pretension for a slip of the pen (a strap far too thin or soft for the crew); if they are right, allow more Newton steps (max_iterations in rules/parameters/floor.yaml) and report the case.';
-      const common = { subject: 'floor.net', label: `floor net, ${c.label}`, load_case: c.load_case, sources: [...tol.sources, ...steps.sources, ...netSources(spec, data), ...c.sources] };
+      const common = { subject: 'floor.net', label: `floor net, ${c.label}`, load_case: c.load_case, combination: c.combination, sources: [...tol.sources, ...steps.sources, ...netSources(spec, data), ...c.sources] };
       const working = [
         ...floorWorking(spec, data, m),
         step('tolerance = tolerance_fraction × applied load', `${num(tol.value)} × ${num(m.appliedLoad_N)} N`, mN(m.tolerance_N), 'mN'),

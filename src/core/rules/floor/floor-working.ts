@@ -1,5 +1,5 @@
 import type { RulesData } from '../../data/rules-data.ts';
-import type { WorkingStep } from '../../findings/finding.ts';
+import type { Combination, WorkingStep } from '../../findings/finding.ts';
 import type { Severity } from '../../findings/severity.ts';
 import { formatNumber } from '../../format/number-format.ts';
 import type { FloorModel } from '../../model/cable-net/floor-model.ts';
@@ -23,19 +23,49 @@ export interface FloorCase {
   label: string;
   /** The sources of that factor. */
   sources: string[];
+  /** For the serviceability checks (sag, clearance): unfactored loads; the stone strike is accidental. */
+  combination: Combination;
 }
 
 export function standingCase(model: FloorModel): FloorCase {
-  return { model, load_case: 'static', name: 'crew standing', label: 'crew standing', sources: [] };
+  return { model, load_case: 'static', name: 'crew standing', label: 'crew standing', sources: [], combination: 'characteristic' };
 }
+
+const times = (m: FloorModel) => `${formatNumber(m.factor)} × crew weight`;
 
 /** The routine rough ground's case: its factor comes from the ride model or, without one, the data's bound. */
 export function bumpCase(model: FloorModel, bump: BumpFactors): FloorCase {
-  return { model, load_case: 'rough-ground', name: 'rough ground', label: `rough ground, ${formatNumber(model.factor)} × crew weight`, sources: bump.crew.sources };
+  return { model, load_case: 'rough-ground', name: 'rough ground', label: `rough ground, ${times(model)}`, sources: bump.crew.sources, combination: 'characteristic' };
 }
 
-export function floorCases(models: { floorStatic: FloorModel; floorBump: FloorModel; bumpFactors: BumpFactors }): [FloorCase, FloorCase] {
-  return [standingCase(models.floorStatic), bumpCase(models.floorBump, models.bumpFactors)];
+/** The stone: an accidental case, every action × 1.0, so the same floor serves the clearance and the strength checks. */
+export function stoneCase(model: FloorModel, stone: BumpFactors): FloorCase {
+  return { model, load_case: 'stone', name: 'stone', label: `stone, ${times(model)}`, sources: [...stone.crew.sources, 'en-1990-6-11'], combination: 'accidental' };
+}
+
+type ServiceModels = { floorStatic: FloorModel; floorBump: FloorModel; floorStone: FloorModel; bumpFactors: BumpFactors; stoneFactors: BumpFactors };
+type StrengthModels = { floorDesign: FloorModel; floorDesignRough: FloorModel; floorStone: FloorModel; bumpFactors: BumpFactors; stoneFactors: BumpFactors };
+
+/** The floor as it is loaded (sag, clearance): standing and over rough ground unfactored, and the stone. */
+export function serviceCases(m: ServiceModels): FloorCase[] {
+  return [standingCase(m.floorStatic), bumpCase(m.floorBump, m.bumpFactors), stoneCase(m.floorStone, m.stoneFactors)];
+}
+
+/** The floor in its design states (strap and rail strength): the fundamental combination standing and over rough ground, and the stone. */
+export function strengthCases(m: StrengthModels): FloorCase[] {
+  const combo = ['en-1990-6-10', 'en-1990-a1-2b'];
+  return [
+    { model: m.floorDesign, load_case: 'static', name: 'crew standing', label: `crew standing, ${times(m.floorDesign)}`, sources: combo, combination: 'fundamental' },
+    { model: m.floorDesignRough, load_case: 'rough-ground', name: 'rough ground', label: `rough ground, ${times(m.floorDesignRough)}`, sources: [...m.bumpFactors.crew.sources, ...combo], combination: 'fundamental' },
+    stoneCase(m.floorStone, m.stoneFactors),
+  ];
+}
+
+/** Every floor the check solves, once each: the service states and the design states. */
+export function everyFloorCase(m: ServiceModels & StrengthModels): FloorCase[] {
+  const [standing, rough, stone] = serviceCases(m);
+  const [designStanding, designRough] = strengthCases(m);
+  return [standing, rough, stone, designStanding, designRough];
 }
 
 /** A number the solver may not have reached (NaN) as a finding's value. */
@@ -55,7 +85,13 @@ export function floorWorking(spec: CheckedSpecification, data: RulesData, m: Flo
     step(`EA = E × b × t (${s.material})`, `${num(E)} MPa × ${num(s.width_mm, 'mm')} mm × ${num(s.thickness_mm, 'mm')} mm`, m.EA_N, 'N'),
     step('T_0 (pretension)', '', m.pretension_N, 'N'),
     'each segment of plan length p is cut to l_0 = p / (1 + T_0/EA), so it carries T_0 when flat',
-    `net: ${s.weave} weave at a pitch of ${num(s.pitch_mm, 'mm')} mm, ${num(m.nodes, 'count')} nodes, ${Number.isFinite(m.segments) ? num(m.segments, 'count') : 'no'} tension-only segments, ends fixed to the frame`,
+    `net: ${s.weave} weave at a pitch of ${num(s.pitch_mm, 'mm')} mm, ${num(m.nodes, 'count')} nodes, ${Number.isFinite(m.segments) ? num(m.segments, 'count') : 'no'} tension-only segments, ends anchored on the frame`,
+    ...(m.frame
+      ? [
+          `the frame bends in plan under the straps' pull (a closed loop of rails, ${m.frame.cornerRadius_mm > 0 ? 'bent front corners' : 'square corners'}${m.frame.struts.length ? `, the ${m.frame.struts.map((x) => x.part).join(' and ')} beneath as a strut` : ''}); the anchors move in with it and each strap's plan length shrinks by its anchors' movement, so the pretension relaxes`,
+          step('largest inward movement of a strap end', '', m.frame.maxAnchorMove_mm, 'mm'),
+        ]
+      : []),
     `factor on the crew's weight ${num(m.factor)} (${m.factorSource})`,
     ...spec.crew.map((c) => step(`P = m × g × factor (${c.role})`, `${num(c.mass_kg)} × ${num(G)} × ${num(m.factor)}`, c.mass_kg * G * m.factor, 'N')),
     `each spread over a ${num(length_mm, 'mm')} × ${num(width_mm, 'mm')} mm foot patch (front to back × side to side)`,

@@ -2,10 +2,20 @@ import type { PartClearance } from '../../model/cable-net/clearance.ts';
 import { defineRule, type LimitSpec } from '../../pipeline/define-rule.ts';
 import { grade } from '../../pipeline/grade.ts';
 import { num, step } from '../../pipeline/step.ts';
-import { floorCases, floorWorking, netSources, notSolvedMessage, notSolvedReport, type FloorCase } from './floor-working.ts';
+import { serviceCases, floorWorking, netSources, notSolvedMessage, notSolvedReport, type FloorCase } from './floor-working.ts';
+
+const left = (p: PartClearance) => p.clearance_mm - p.sag_mm;
+
+/** The case that leaves the least clearance over a part (the first of equals). */
+function leastClearance<T extends { c: FloorCase; p: PartClearance }>(over: readonly T[]): T {
+  return over.reduce((w, o) => (left(o.p) < left(w.p) ? o : w));
+}
 
 // Resting on the pole or the axle with the crew standing fails; reaching it
-// only at a bump is a knock, and warns.
+// only over rough ground or the stone is a knock, and warns. Each part's
+// finding gives the least clearance left in any case, from the floor solved
+// with its frame (the straps slacken as the rails bow, so it sags deeper
+// than on rigid anchors).
 const SAG: LimitSpec = { direction: 'max', unit: 'mm' };
 const CLEARANCE: LimitSpec = { direction: 'min', unit: 'mm' };
 const BUMP_CLEARANCE: LimitSpec = { direction: 'min', unit: 'mm', levels: { hard: 'warning' } };
@@ -13,10 +23,10 @@ const BUMP_CLEARANCE: LimitSpec = { direction: 'min', unit: 'mm', levels: { hard
 export const floorSag = defineRule({
   id: 'floor.sag',
   title: 'Floor sag under the crew and over the parts beneath',
-  checks: 'How far the woven floor sags under each crew member standing, and whether it sags onto the pole or the axle beneath it, standing or at a bump.',
+  checks: 'How far the woven floor sags under each crew member standing, and whether it sags onto the pole or the axle beneath it, standing, over rough ground or on the stone (the floor solved with its frame).',
   kind: 'check',
   method: ['design-basis-floor'],
-  needs: ['floorStatic', 'floorBump', 'bumpFactors'],
+  needs: ['floorStatic', 'floorBump', 'floorStone', 'bumpFactors', 'stoneFactors'],
   limits: {
     sag_mm: SAG,
     clearance_mm: CLEARANCE,
@@ -32,14 +42,14 @@ export const floorSag = defineRule({
   },
   run(ctx) {
     const { spec, data } = ctx;
-    const cases = floorCases(ctx.models);
+    const cases = serviceCases(ctx.models);
     const net = netSources(spec, data);
     const unsolved = cases.filter((c) => !c.model.converged);
     if (unsolved.length) {
       for (const c of unsolved) ctx.report(notSolvedReport(c, { subject: 'floor.net', severity: 'fail', unit: 'mm', what: 'sag', sources: net, working: floorWorking(spec, data, c.model) }));
       return;
     }
-    const [stat, bump] = cases;
+    const stat = cases[0];
     const base = floorWorking(spec, data, stat.model);
     stat.model.crew.forEach((c, i) =>
       ctx.report({
@@ -51,6 +61,7 @@ export const floorSag = defineRule({
         unit: 'mm',
         against: { limit: 'sag_mm' },
         load_case: stat.load_case,
+        combination: stat.combination,
         fix:
           grade(c.sag_mm, ctx.limit('sag_mm'), SAG).severity !== 'pass'
             ? 'Raise the pretension, use thicker or wider straps, a closer pitch or a two-way weave; stand on a sample panel to judge the footing.'
@@ -59,14 +70,15 @@ export const floorSag = defineRule({
         working: [...base, step(`sag at the centre of ${c.role}'s foot patch (interpolated between nodes)`, '', c.sag_mm, 'mm')],
       }),
     );
-    const left = (p: PartClearance) => p.clearance_mm - p.sag_mm;
     const beyond = (v: number, limit: 'clearance_mm' | 'bump_clearance_mm', spec: LimitSpec) => grade(v, ctx.limit(limit), spec).severity !== 'pass';
+    const dynamic = cases.slice(1);
     stat.model.clearances.forEach((sp, i) => {
-      const bp = bump.model.clearances[i];
-      // The standing case governs where it is beyond its limit; otherwise the bump, the deeper sag.
+      // Every case over this part: the standing one where it is beyond its limit, else the least clearance left in any case.
+      const over = cases.map((c) => ({ c, p: c.model.clearances[i] }));
       const standingHits = beyond(left(sp), 'clearance_mm', CLEARANCE);
-      const [c, p]: [FloorCase, PartClearance] = standingHits ? [stat, sp] : [bump, bp];
-      const at = (q: PartClearance, k: FloorCase) => step(`sag over the ${q.part}, ${k.label} (at x ${num(q.at.x, 'mm')}, y ${num(q.at.y, 'mm')} mm)`, '', q.sag_mm, 'mm');
+      const least = leastClearance(over);
+      const { c, p } = standingHits ? over[0] : least;
+      const limit = c === stat ? 'clearance_mm' : 'bump_clearance_mm';
       ctx.report({
         subject: `part.${sp.part}`,
         label: `floor over the ${sp.part}`,
@@ -74,21 +86,23 @@ export const floorSag = defineRule({
         params: { part: sp.part, sag: p.sag_mm, clearance: p.clearance_mm, case: c.name },
         value: left(p),
         unit: 'mm',
-        against: { limit: standingHits ? 'clearance_mm' : 'bump_clearance_mm' },
+        against: { limit },
         load_case: c.load_case,
+        combination: c.combination,
         fix:
-          standingHits || beyond(left(bp), 'bump_clearance_mm', BUMP_CLEARANCE)
-            ? `Stiffen the floor (more pretension, thicker or wider straps, a closer pitch, a two-way weave), move the crew off the ${sp.part}, or deepen the frame rails so the ${sp.part} sits lower.`
+          standingHits || dynamic.some((d) => beyond(left(d.model.clearances[i]), 'bump_clearance_mm', BUMP_CLEARANCE))
+            ? `Stiffen the floor (more pretension, thicker or wider straps, a closer pitch, a two-way weave), stiffen the frame rails in plan (the straps slacken as they bow), move the crew off the ${sp.part}, or deepen the frame rails so the ${sp.part} sits lower.`
             : 'None needed.',
         sources: [...net, ...c.sources],
         working: [
           ...floorWorking(spec, data, c.model),
           step(`clearance = floor top − ${sp.part} top (layout: the straps lie on the frame's top face)`, '', sp.clearance_mm, 'mm'),
           `over x ${num(sp.x[0], 'mm')} to ${num(sp.x[1], 'mm')} mm, y ${num(sp.y[0], 'mm')} to ${num(sp.y[1], 'mm')} mm`,
-          at(sp, stat),
-          at(bp, bump),
-          step(`clearance left = clearance − sag (${c.name})`, `${num(p.clearance_mm)} − ${num(p.sag_mm)}`, left(p), 'mm'),
-          'resting on it standing fails; reaching it only at a bump warns',
+          ...over.flatMap(({ c: k, p: q }) => [
+            step(`sag over the ${q.part}, ${k.label} (at x ${num(q.at.x, 'mm')}, y ${num(q.at.y, 'mm')} mm)`, '', q.sag_mm, 'mm'),
+            step(`clearance left, ${k.label}`, `${num(q.clearance_mm)} − ${num(q.sag_mm)}`, left(q), 'mm'),
+          ]),
+          `${standingHits ? 'the crew standing rests on it' : `least clearance left in any case: ${least.c.label}`}; resting on it standing fails, reaching it only in a dynamic case warns`,
         ],
       });
     });

@@ -1,0 +1,80 @@
+// A straight plane frame element (Euler-Bernoulli: axial, shear-rigid
+// bending): its stiffness in global axes and its end forces. The standard
+// 6 × 6 element (e.g. Przemieniecki, Theory of Matrix Structural Analysis,
+// ch. 5; or any matrix structural analysis text). Dofs per node: u, v, θ.
+
+export interface ElementGeometry {
+  x1: number;
+  y1: number;
+  x2: number;
+  y2: number;
+}
+
+export interface Section {
+  EA: number;
+  EI: number;
+}
+
+function local(L: number, s: Section): number[][] {
+  const a = s.EA / L;
+  const b = (12 * s.EI) / L ** 3;
+  const c = (6 * s.EI) / L ** 2;
+  const d = (4 * s.EI) / L;
+  const e = (2 * s.EI) / L;
+  return [
+    [a, 0, 0, -a, 0, 0],
+    [0, b, c, 0, -b, c],
+    [0, c, d, 0, -c, e],
+    [-a, 0, 0, a, 0, 0],
+    [0, -b, -c, 0, b, -c],
+    [0, c, e, 0, -c, d],
+  ];
+}
+
+/** Rotation from global to the element's axes (x' along a → b). */
+function rotation(g: ElementGeometry): { L: number; c: number; s: number } {
+  const dx = g.x2 - g.x1;
+  const dy = g.y2 - g.y1;
+  const L = Math.hypot(dx, dy);
+  return { L, c: dx / L, s: dy / L };
+}
+
+const toLocal = (c: number, s: number, d: ArrayLike<number>): number[] => [c * d[0] + s * d[1], -s * d[0] + c * d[1], d[2], c * d[3] + s * d[4], -s * d[3] + c * d[4], d[5]];
+
+/** The element's 6 × 6 stiffness in global axes. */
+export function elementStiffness(g: ElementGeometry, sec: Section): number[][] {
+  const { L, c, s } = rotation(g);
+  const k = local(L, sec);
+  // K = Tᵀ k T, T block-diagonal with [[c, s, 0], [−s, c, 0], [0, 0, 1]].
+  const T = [
+    [c, s, 0, 0, 0, 0],
+    [-s, c, 0, 0, 0, 0],
+    [0, 0, 1, 0, 0, 0],
+    [0, 0, 0, c, s, 0],
+    [0, 0, 0, -s, c, 0],
+    [0, 0, 0, 0, 0, 1],
+  ];
+  const kT = k.map((row) => T[0].map((_, j) => row.reduce((sum, v, m) => sum + v * T[m][j], 0)));
+  return T[0].map((_, i) => T[0].map((__, j) => T.reduce((sum, row, m) => sum + row[i] * kT[m][j], 0)));
+}
+
+export interface ElementForces {
+  /** Axial force, N (tension positive). */
+  N: number;
+  /** Bending moment at each end, N·mm (one sign convention along the loop: sagging towards the element's left). */
+  M1: number;
+  M2: number;
+  /** Shear force, N. */
+  V: number;
+  length: number;
+}
+
+/** End forces from the element's global end displacements [u1, v1, θ1, u2, v2, θ2]. */
+export function elementForces(g: ElementGeometry, sec: Section, d: ArrayLike<number>): ElementForces {
+  const { L, c, s } = rotation(g);
+  const k = local(L, sec);
+  const dl = toLocal(c, s, d);
+  const f = k.map((row) => row.reduce((sum, v, j) => sum + v * dl[j], 0));
+  // The internal moment is −f₃ at the first end and +f₆ at the second (end moments act on the element).
+  return { N: f[3], M1: -f[2], M2: f[5], V: f[1], length: L };
+}
