@@ -22,10 +22,11 @@ describe(RULE, () => {
     const a = floors(raw(THICK));
     expect(found[0].value).toBe(a.floorStatic.crew[0].sag_mm);
     expect(found[0].load_case).toBe('static');
-    // Standing clear of both parts: the bump case, the deeper sag, is the one shown; its clearance left is clearance − sag.
-    const pole = a.floorBump.clearances[0];
-    expect(found[2]).toMatchObject({ load_case: 'bump', message_key: 'clears', value: pole.clearance_mm - pole.sag_mm, limit: 0 });
-    expect(found[2].params).toMatchObject({ part: 'pole', sag: pole.sag_mm, clearance: pole.clearance_mm, case: 'bump' });
+    // Standing clear of both parts: the stone, the deepest sag, is the one shown (accidental, every
+    // action × 1.0); its clearance left is clearance − sag.
+    const pole = a.floorStone.clearances[0];
+    expect(found[2]).toMatchObject({ load_case: 'stone', combination: 'accidental', message_key: 'clears', value: pole.clearance_mm - pole.sag_mm, limit: 0 });
+    expect(found[2].params).toMatchObject({ part: 'pole', sag: pole.sag_mm, clearance: pole.clearance_mm, case: 'stone' });
   });
 
   it('fails a floor that rests on the pole with the crew standing', async () => {
@@ -44,16 +45,17 @@ describe(RULE, () => {
     expect(pole.sources).toContain('design-basis-floor');
   });
 
-  it('warns when the floor reaches the pole only at a bump', async () => {
-    // The thin floor on a 46 mm frame: the standing sag over the pole (about 38 mm) clears it, the bump sag (about 49 mm) does not.
+  it('warns when the floor reaches the pole only over rough ground or on the stone', async () => {
+    // The thin floor on a 46 mm frame: the standing sag over the pole (about 38 mm) clears it, the dynamic sags do not.
     const found = await findingsOf(RULE, raw(deepMerge(THIN, { box: { floor: { frame: { thickness_mm: 46 } } } })));
     const pole = bySubject(found, 'part.pole');
     expect(pole.severity).toBe('warning');
-    expect(pole.load_case).toBe('bump');
+    expect(['rough-ground', 'stone']).toContain(pole.load_case);
     expect(pole.params.clearance as number).toBeCloseTo(46, 9);
     expect(pole.value!).toBeLessThan(0);
-    expect(pole.message).toContain('in the bump case and reaches it');
-    expect(pole.working_text).toMatch(/bump, [\d.]+ × crew weight/);
+    expect(pole.message).toContain(`in the ${pole.params.case as string} case and reaches it`);
+    expect(pole.working_text).toMatch(/rough ground, [\d.]+ × crew weight/);
+    expect(pole.working_text).toMatch(/stone, [\d.]+ × crew weight/);
   });
 
   it('warns above the advisory sag under a person', async () => {
@@ -84,12 +86,12 @@ describe(RULE, () => {
     expect(over).toMatchObject({ severity: 'fail', load_case: 'static', value: left });
   });
 
-  it('boundary: a clearance left at a bump equal to its limit passes, a hair less warns', async () => {
+  it('boundary: a clearance left on the stone equal to its limit passes, a hair less warns', async () => {
     const r = raw(THICK);
-    const p = floors(r).floorBump.clearances[1];
+    const p = floors(r).floorStone.clearances[1];
     const left = p.clearance_mm - p.sag_mm;
     const at = bySubject(await findingsOf(RULE, r, { 'bump_clearance_mm.hard': left }), 'part.axle');
-    expect(at).toMatchObject({ severity: 'pass', load_case: 'bump', value: left, limit: left });
+    expect(at).toMatchObject({ severity: 'pass', load_case: 'stone', value: left, limit: left });
     const over = bySubject(await findingsOf(RULE, r, { 'bump_clearance_mm.hard': left + 1e-9 }), 'part.axle');
     expect(over.severity).toBe('warning');
   });
@@ -136,9 +138,9 @@ describe(RULE, () => {
     const a = floors(raw(THICK));
     for (const part of ['pole', 'axle'] as const) {
       const f = bySubject(found, `part.${part}`);
-      const left = [a.floorStatic, a.floorBump].map((m) => m.clearances.find((c) => c.part === part)!).map((c) => c.clearance_mm - c.sag_mm);
+      const left = [a.floorStatic, a.floorBump, a.floorStone].map((m) => m.clearances.find((c) => c.part === part)!).map((c) => c.clearance_mm - c.sag_mm);
       expect(f.value).toBe(Math.min(...left));
-      expect(f.load_case).toBe(left[1] < left[0] ? 'bump' : 'static');
+      expect(f.load_case).toBe((['static', 'rough-ground', 'stone'] as const)[left.indexOf(Math.min(...left))]);
     }
   });
 });

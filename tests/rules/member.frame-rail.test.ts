@@ -35,16 +35,25 @@ describe(RULE, () => {
     const a = new Analysis(prepared(raw), rulesData);
     const f = await one(raw);
     expect(f.subject).toMatch(/^frame\.(left|right)-rail$/);
-    expect(f.load_case).toBe('bump');
-    const h = oneStrapHand(80 * 9.80665 * a.floorBump.factor, a.floorBump.frame!.E_MPa, a.floorBump.EA_N);
-    expect(f.value! / (h.MA / W) - 1).toBeCloseTo(0, 6);
+    // The floor's design states: the crew × 1.5 standing and × 1.5 φ over rough ground (fundamental,
+    // k_mod short 0.9, γ_M 1.3), × φ_stone on the stone (accidental, k_mod 1.1, γ_M 1.0; EN 1995-1-1
+    // Tables 3.1 and 2.3, 2.4.1). The governing case has the highest M/f_d, found by hand.
+    const states = [
+      { id: 'static', m: a.floorDesign, kOverGamma: 0.9 / 1.3 },
+      { id: 'rough-ground', m: a.floorDesignRough, kOverGamma: 0.9 / 1.3 },
+      { id: 'stone', m: a.floorStone, kOverGamma: 1.1 / 1.0 },
+    ].map((c) => ({ ...c, MA: oneStrapHand(80 * 9.80665 * c.m.factor, c.m.frame!.E_MPa, c.m.EA_N).MA }));
+    const gov = states.reduce((w, c) => (c.MA / c.kOverGamma > w.MA / w.kOverGamma ? c : w));
+    expect(f.load_case).toBe(gov.id);
+    expect(f.value! / (gov.MA / W) - 1).toBeCloseTo(0, 6);
+    const h = oneStrapHand(80 * 9.80665 * gov.m.factor, gov.m.frame!.E_MPa, gov.m.EA_N);
     expect(h.MA / h.pull).toBeCloseTo((588 * (588 + 2 * 1060)) / (8 * (588 + 1060)), 9);
     // The pretension alone, no one aboard: the strap keeps T_0/(1 + F·(EA + T_0)/L) of its 60 N.
     const pre = 60 / (1 + (h.F * (a.floorStatic.EA_N + 60)) / 980);
     const [preStep] = stepsOf(f, 'largest moment in plan on the left rail');
     expect(preStep.result! / (pre * h.mA) - 1).toBeCloseTo(0, 6);
-    // Three cases (pretension, standing, bump) on each of the four rails.
-    expect(stepsOf(f, 'σ_m = M/W')).toHaveLength(12);
+    // Four cases (pretension, standing, rough ground, the stone) on each of the four rails.
+    expect(stepsOf(f, 'σ_m = M/W')).toHaveLength(16);
     // The rear rail holds the side rails apart: compression H/2 beside its corner moment.
     const rear = stepsOf(f, 'axial force there (compression)');
     expect(rear.length).toBeGreaterThan(0);
