@@ -76,7 +76,7 @@ describe(RULE, () => {
     expect(w.utilisation!).toBeCloseTo(0.9, 9);
     // The advisory level is 0.8 of f_d (rules/limits/floor.yaml).
     expect(w.params.advisory as number).toBeCloseTo(0.8 * w.limit!, 12);
-    expect(w.message).toContain(`the advisory limit is ${formatQuantity(0.8 * w.limit!, 'MPa')} and the hard limit ${formatQuantity(w.limit!, 'MPa')}`);
+    expect(w.message).toContain(`the advisory limit is ${formatQuantity(0.8 * w.limit!, 'MPa')} and the hard limit ${formatQuantity(w.limit, 'MPa')}`);
   });
 
   it('boundary: a stress equal to the design strength is within it', async () => {
