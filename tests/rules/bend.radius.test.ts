@@ -9,14 +9,14 @@ describe(RULE, () => {
   it('passes the rear-axle demo: pole and felloe, inner radius over thickness against the data', async () => {
     const found = await findingsOf(RULE, readDemo('demo-rear-axle'));
     expect(found.map((f) => [f.subject, f.subject_label, f.severity])).toEqual([['part.pole', 'pole', 'pass'], ['part.felloe', 'felloe', 'pass']]);
-    // Pole: 1000 mm on the centre line, 64 mm high: R_i = 1000 − 32 = 968 mm. Felloe: inner radius 406 / depth 54.
-    expect(found[0].value).toBeCloseTo(968 / 64, 12);
+    // Pole: 1000 mm on the centre line, 72 mm high: R_i = 1000 − 36 = 964 mm. Felloe: inner radius 406 / depth 54.
+    expect(found[0].value).toBeCloseTo(964 / 72, 12);
     expect(found[1].value).toBeCloseTo(406 / 54, 12);
-    expect(found[0].params).toMatchObject({ part: 'pole', radius: 968, thickness: 64, species: 'white-ash', strap: 'bent with a supporting strap' });
-    expect(found[0].working.find((s) => s.formula === 'inner face R_i = R − t/2')!.result).toBe(968);
+    expect(found[0].params).toMatchObject({ part: 'pole', radius: 964, thickness: 72, species: 'white-ash', strap: 'bent with a supporting strap' });
+    expect(found[0].working.find((s) => s.formula === 'inner face R_i = R − t/2')!.result).toBe(964);
     // White ash with a strap: the species file's supported figure (from memory), times the hard level 1.0.
     expect(found[0].limit).toBe(ash.supported!.value);
-    expect(found[0].utilisation!).toBeCloseTo(ash.supported!.value / (968 / 64), 12);
+    expect(found[0].utilisation!).toBeCloseTo(ash.supported!.value / (964 / 72), 12);
     expect(found[0].message_key).toBe('within');
     expect(found[0].sources).toEqual(expect.arrayContaining(['design-basis-members', ...ash.supported!.sources]));
     expect(found[0].load_case).toBeNull();
@@ -46,7 +46,7 @@ describe(RULE, () => {
     const f = bySubjectId('part.pole')(await findingsOf(RULE, deepMerge(readDemo('demo-rear-axle'), { pole: { species: 'black-ash' } })));
     expect(f.severity).toBe('warning');
     expect(f).toMatchObject({ code: 2403, message_key: 'noData', limit: null, utilisation: null });
-    expect(f.value).toBeCloseTo(968 / 64, 12);
+    expect(f.value).toBeCloseTo(964 / 72, 12);
   });
 
   it('sawn felloes have nothing to check; a frame bent without a strap is held to the unsupported figure', async () => {

@@ -15,7 +15,7 @@ describe(RULE, () => {
     expect(f.combination).toBe('equilibrium');
     // a_lat = v^2 R_a / R_y^2 (design basis, section 4), v = 20/3.6 m/s
     const v = 20 / 3.6;
-    const aLat = (v * v * Math.sqrt(225 - 2.67 ** 2)) / 225;
+    const aLat = (v * v * Math.sqrt(225 - 2.715 ** 2)) / 225;
     expect(f.params.lateral as number).toBeCloseTo(aLat, 9);
     expect(f.value).toBeCloseTo(GQ * aLat, 9);
     const aRoll = f.working.find((s) => s.formula === 'a_roll = g·SSF')!.result!;
@@ -35,7 +35,7 @@ describe(RULE, () => {
     const aRoll = f.working.find((s) => s.formula === 'a_roll = g·SSF')!.result!;
     const u = f.value! / (GSTB * aRoll);
     expect(f.severity).toBe(u > 1 ? 'fail' : u > 0.8 ? 'warning' : 'pass');
-    expect(f.value).toBeCloseTo(GQ * (((24 / 3.6) ** 2 * Math.sqrt(225 - 2.67 ** 2)) / 225), 9);
+    expect(f.value).toBeCloseTo(GQ * (((24 / 3.6) ** 2 * Math.sqrt(225 - 2.715 ** 2)) / 225), 9);
   });
 
   it('boundary: a design lateral acceleration equal to the hard limit is within it', async () => {

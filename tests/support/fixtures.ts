@@ -97,9 +97,13 @@ export function deepMerge<T>(base: T, patch: unknown): T {
   return out as T;
 }
 
-/** The largest double f with f * w <= v and, where one exists, f * w === v. */
+/**
+ * A level f that puts the limit f * w on v: exactly where some double does, else the
+ * nearest one step above it (f * w >= v), so a value "equal to the limit" is within it.
+ */
 export function fractionHitting(v: number, w: number): number {
   let f = v / w;
   for (let i = 0; i < 8 && f * w !== v; i++) f = f * w > v ? f - Number.EPSILON * f : f + Number.EPSILON * f;
+  for (let i = 0; i < 16 && Math.abs(f * w) < Math.abs(v); i++) f += Number.EPSILON * Math.abs(f);
   return f;
 }

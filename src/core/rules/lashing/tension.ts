@@ -45,7 +45,7 @@ export const lashingTension = defineRule({
         unit: 'N',
         against: { limit: 'utilisation', times: g.capacity },
         sources: [...g.fd.sources, ...demandSourceIds(ctx.data, bump, stone)],
-        load_case: byPretension ? null : loadCaseOf(d, g.c),
+        load_case: byPretension ? 'pretension' : loadCaseOf(d, g.c),
         combination: g.combination,
         fix: withinLimit(g.pull, lim, g.capacity)
           ? 'None needed; test strips of your own hide to confirm the strength.'
