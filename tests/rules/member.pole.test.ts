@@ -115,7 +115,7 @@ describe(RULE, () => {
     expect(buckling(found).message_key).toBe('strutOver');
   });
 
-  it('a push along the pole uses part of its bending strength (EN 1995-1-1 eq. 6.19); selected stock is the stronger', async () => {
+  it('a push along the pole uses part of its bending strength (EN 1995-1-1 eq. 6.19); a bent pole is selected stock', async () => {
     const raw = readDemo('demo-rear-axle');
     const sawn = bending(await findingsOf(RULE, deepMerge(raw, { stock: { grade: 'sawn' } })));
     // In every pushing case the demand is σ_m plus f_m,d·(σ_c/f_c,0,d)², above σ_m alone.
@@ -124,9 +124,12 @@ describe(RULE, () => {
     expect(pushed.length).toBe(2); // braking and the stopping shock
     for (const p of pushed) expect(plain.some((m) => m.result! < p.result!)).toBe(true);
     expect(sawn.sources).toContain('en-1995-1-1-6-2-4');
-    // k_select 0.8 against 0.6: the same demand in the bending-only cases, a lower utilisation.
-    const selected = bending(await findingsOf(RULE, deepMerge(raw, { stock: { grade: 'selected' } })));
-    expect(selected.utilisation!).toBeLessThan(sawn.utilisation!);
+    // A steam-bent pole is selected stock whatever the grade given (only straight, clear stock takes the bend).
+    expect(sawn.working_text).toContain('steam-bent: only straight-grained, clear stock takes the bend');
+    // A straight pole takes the grade given: k_select 0.8 against 0.6, a lower utilisation.
+    const straightSawn = bending(await findingsOf(RULE, deepMerge(handSpec(), { stock: { grade: 'sawn' } }), {}, rigid));
+    const straightSelected = bending(await findingsOf(RULE, deepMerge(handSpec(), { stock: { grade: 'selected' } }), {}, rigid));
+    expect(straightSelected.utilisation!).toBeLessThan(straightSawn.utilisation!);
   });
 
   it('its messages hold no numbers of their own', () => {

@@ -31,7 +31,7 @@ describe(RULE, () => {
     const f = await one(fourSpokes());
     // The schema's default joint: 2 dowels of 12 mm.
     const V = jointShear(f.working_text, f.params.case as string);
-    const tau = governingStep(f, 'τ = V/(count·π·d²/4)');
+    const tau = governingStep(f, 'τ = V_dowels/(count·π·d²/4)');
     expect(tau.substituted).toMatch(/ \/ \(2 × π × 12²\/4\)$/);
     // V as the working prints it (four significant figures), so the hand value agrees to 1e-3.
     expect(tau.result! / (V / ((2 * Math.PI * 12 ** 2) / 4))).toBeCloseTo(1, 3);

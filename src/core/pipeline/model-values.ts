@@ -1,3 +1,4 @@
+import type { WheelStiffness } from '../model/wheel/wheel-stiffness.ts';
 import type { CuttingResult } from '../cutlist/cutting-result.ts';
 import type { LoadEntry } from '../loads/load-entry.ts';
 import type { PlotData } from '../plots/plot-data.ts';
@@ -27,6 +28,8 @@ export interface ModelValues {
   turn: TurnModel;
   /** The strap floor under the crew's weight alone (factor 1). */
   floorStatic: FloorModel;
+  /** The wheel's own radial stiffness from its ring frame (rolling and striking). */
+  wheelStiffness: WheelStiffness;
   /** What the ride model reads from the other models. */
   rideInput: RideInput;
   /** The ride model's cases (rough ground and the stone, each under both wheels and one; the drop test); null where it is not run (no crew, or a statics-only run). */

@@ -4,6 +4,8 @@ import { lashingDemands } from '../model/lashing-demand.ts';
 import { loadCases } from '../model/load-cases.ts';
 import { massModel } from '../model/mass-model.ts';
 import { memberCases, wheelInput } from '../model/member-cases.ts';
+import { wheelStiffness } from '../model/wheel/wheel-stiffness.ts';
+import { wheelRingSpec } from '../model/wheel/wheel-ring-spec.ts';
 import { turnModel } from '../model/turn.ts';
 import { floorDampingNeeded } from '../ride/damping-tuner.ts';
 import { groundFactors } from '../ride/dynamic-factors.ts';
@@ -79,11 +81,19 @@ export const floorStaticDef = defineModel({
   compute: (_, { spec, data }) => floorModel(spec, data, { value: 1, source: 'the crew standing, no dynamic factor' }),
 });
 
+/** The wheel's own radial stiffness from its ring frame, rolling (averaged round the rim) and striking (its stiffest). */
+export const wheelStiffnessDef = defineModel({
+  id: 'wheelStiffness',
+  needs: ['mass', 'staticCase'],
+  params: TIMBER_STIFFNESS, // the felloe's and spokes' moduli
+  compute: ({ mass, staticCase }, { spec, data }) => wheelStiffness(wheelRingSpec(spec, data, mass.layout), staticCase.axle_load_N / 2),
+});
+
 export const rideInputDef = defineModel({
   id: 'rideInput',
-  needs: ['mass', 'staticCase', 'floorStatic'],
+  needs: ['mass', 'staticCase', 'floorStatic', 'wheelStiffness'],
   params: [],
-  compute: ({ mass, staticCase, floorStatic }, { spec, data }) => ({ spec, data, mass, staticCase, floorStatic }),
+  compute: ({ mass, staticCase, floorStatic, wheelStiffness }, { spec, data }) => ({ spec, data, mass, staticCase, floorStatic, wheelStiffness }),
 });
 
 export const rideDef = defineModel({
@@ -200,6 +210,6 @@ export const plotsDef = defineModel({
 
 /** Every model, in no particular order: the graph finds the order from their needs. */
 export const MODELS: readonly ModelDef[] = [
-  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, cuttingDef, lashingDemandsDef,
+  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, wheelStiffnessDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, cuttingDef, lashingDemandsDef,
   figuresDef, loadsDef, sceneDef, plotsDef,
 ];

@@ -1,8 +1,10 @@
+import type { WheelStiffness } from '../model/wheel/wheel-stiffness.ts';
 import { rollingResistance } from '../model/rolling-resistance.ts';
 import type { RulesData } from '../data/rules-data.ts';
 import type { FloorResult } from '../model/floor-result.ts';
 import type { MassModel } from '../model/mass-model.ts';
 import { poleCantilever } from '../model/members/pole-cantilever.ts';
+import { axleArm } from '../model/members/axle-arm.ts';
 import { tyreOf, wheelBuild } from '../model/tyre.ts';
 import { characteristicValue } from '../model/timber/characteristic.ts';
 import type { LoadCaseResult } from '../model/load-case-result.ts';
@@ -23,6 +25,8 @@ export interface RideInput {
   mass: MassModel;
   staticCase: LoadCaseResult;
   floorStatic: FloorResult;
+  /** The wheel's own radial stiffness from its ring frame. */
+  wheelStiffness: WheelStiffness;
 }
 
 export interface RideOptions {
@@ -90,9 +94,25 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
   };
   const damp = o.undamped ? 0 : 1;
 
-  // Wheels: the wheel's own radial stiffness in series with the ground (none in the drop test: rigid ground).
+  // Wheels: the wheel's own radial stiffness and the axle arm's bending in series with the ground
+  // (none in the drop test: rigid ground). The arm is a cantilever from the box's bearing to the
+  // wheel's mid-plane, 3EI/a³ (Roark, Table 8.1 case 1a), the full section over the whole arm (the
+  // stiff side: the spindle in the nave is thinner), the mean modulus at the build's moisture.
   const build = wheelBuild(spec);
-  const wheel = { k: lim('ride.wheel-contact', `stiffness_${build}`), zeta: lim('ride.wheel-contact', 'damping_ratio') };
+  // The data's figure stands for the joints, tenons, nave seat and tyre; the ring frame adds the felloe's and spokes' own give.
+  const kJoints = lim('ride.wheel-contact', `stiffness_${build}`);
+  const rolling = which === 'rough-ridge' || which === 'rough-one-wheel';
+  const kRing = rolling ? i.wheelStiffness.rolling : i.wheelStiffness.strike;
+  const kRim = 1 / (1 / kJoints + 1 / kRing);
+  working.push(`${i.wheelStiffness.working}; ${rolling ? 'rough ground is rolled over: the averaged figure' : 'a stone or the drop may meet the rim anywhere: the stiffest'}, in series with the joints, tenons and tyre ${f(kJoints / 1e3, 0)} kN/m (ride.wheel-contact.stiffness_${build}): ${f(kRim / 1e3, 0)} kN/m`);
+  const armGeo = axleArm(spec);
+  const Eaxle = characteristicValue(data, spec.axle.species, 'stiffness', spec.moisture_content_pct, 0);
+  sources.push(...Eaxle.sources);
+  const kArm = (3 * Eaxle.mean * 1e6 * armGeo.bearing.I * 1e-12) / mm(armGeo.a) ** 3;
+  const wheel = { k: 1 / (1 / kRim + 1 / kArm), zeta: lim('ride.wheel-contact', 'damping_ratio') };
+  working.push(
+    `axle arm bending 3EI/a³ = 3 × ${f(Eaxle.mean, 0)} MPa × ${f(armGeo.bearing.I / 1e6, 3)}e6 mm⁴ / (${f(armGeo.a, 0)} mm)³ = ${f(kArm / 1e3, 0)} kN/m, in series with the wheel ${f(kRim / 1e3, 0)} kN/m: ${f(wheel.k / 1e3, 0)} kN/m`,
+  );
   const ground = which === 'drop' ? null : groundContact(data, spec.operation.ground);
   if (ground) sources.push(`ride.ground-contact.${spec.operation.ground}: ${ground.k.source}`, `ride.ground-damping.${spec.operation.ground}: ${ground.zeta.source}`);
   const contact = inSeries(wheel, ground ? { k: ground.k.value, zeta: ground.zeta.value } : null);

@@ -1,7 +1,10 @@
 import type { CheckedGrade, CheckedSpecification } from '../../spec/spec.types.ts';
 
 // The timber a member is made of, as the strength model needs it: species,
-// grade of stock (the part's own or stock.grade) and slope of grain.
+// grade of stock (the part's own or stock.grade) and slope of grain. A
+// steam-bent part (a pole, frame rail or felloe with a bend radius) counts as
+// selected stock whatever the grade given, since only straight-grained,
+// clear stock survives the bend (design basis, sections 1 and 6).
 
 export type Grade = CheckedGrade;
 
@@ -18,7 +21,7 @@ export interface TimberPart {
 
 export type TimberPartKey = 'axle' | 'pole' | 'yoke' | 'spoke' | 'felloe' | 'frame';
 
-function partSpec(spec: CheckedSpecification, key: TimberPartKey): { species: string; grade?: Grade; grain_slope_deg: number } {
+function partSpec(spec: CheckedSpecification, key: TimberPartKey): { species: string; grade?: Grade; grain_slope_deg: number; bend_radius_mm?: number } {
   switch (key) {
     case 'axle':
       return spec.axle;
@@ -40,6 +43,9 @@ const LABEL: Record<TimberPartKey, string> = { axle: 'axle', pole: 'pole', yoke:
 
 export function timberPart(spec: CheckedSpecification, key: TimberPartKey): TimberPart {
   const p = partSpec(spec, key);
+  if (p.bend_radius_mm !== undefined) {
+    return { label: LABEL[key], species: p.species, grade: 'selected', gradeFrom: 'steam-bent: only straight-grained, clear stock takes the bend', grainSlopeDeg: p.grain_slope_deg };
+  }
   return {
     label: LABEL[key],
     species: p.species,

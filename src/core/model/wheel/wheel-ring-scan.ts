@@ -47,6 +47,7 @@ function scaled(r: WheelRingResult, f: number): WheelRingResult {
     spokes: r.spokes.map((s) => ({ ...s, force: s.force * f })),
     peak: { ...r.peak, moment: r.peak.moment * f, hoop: r.peak.hoop * f },
     tokenForce: r.tokenForce * f,
+    contactDeflection: r.contactDeflection * f,
   };
 }
 

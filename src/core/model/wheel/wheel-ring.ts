@@ -91,6 +91,8 @@ export interface WheelRingResult {
   rounds: number;
   /** The largest force the token stiffness across the spokes takes, N: what the spokes' tenons hold sideways. */
   tokenForce: number;
+  /** How far the rim moves in towards the nave under the ground load, mm (the wheel's own radial compliance, joints rigid). */
+  contactDeflection: number;
 }
 
 const TWO_PI = 2 * Math.PI;
@@ -186,6 +188,7 @@ export function solveWheelRing(ring: WheelRing, load: WheelLoad): WheelRingResul
         coefficient: load.P > 0 ? Math.abs(moment[peakNode]) / (load.P * span) : 0,
         rounds: round,
         tokenForce: Math.max(...sol.strutForce),
+        contactDeflection: -(sol.u[0] * Math.sin(nodes[0]) - sol.u[1] * Math.cos(nodes[0])),
       };
     }
     const key = next.map((a) => (a ? 1 : 0)).join('');

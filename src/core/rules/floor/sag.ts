@@ -11,20 +11,23 @@ function leastClearance<T extends { c: FloorCase; p: PartClearance }>(over: read
   return over.reduce((w, o) => (left(o.p) < left(w.p) ? o : w));
 }
 
-// Resting on the pole or the axle with the crew standing fails; reaching it
-// only over rough ground or the stone is a knock, and warns. Each part's
+// A floor that comes down onto the pole or the axle is held up by it (the
+// pole of documented chariots runs under the floor, and the floor bears on
+// it): the rule advises, standing or in a dynamic case, since the floor is
+// stiffer there than the net model takes it and the straps chafe on the part. Each part's
 // finding gives the least clearance left in any case, from the floor solved
 // with its frame (the straps slacken as the rails bow, so it sags deeper
 // than on rigid anchors).
 const SAG: LimitSpec = { direction: 'max', unit: 'mm' };
-const CLEARANCE: LimitSpec = { direction: 'min', unit: 'mm' };
-const BUMP_CLEARANCE: LimitSpec = { direction: 'min', unit: 'mm', levels: { hard: 'warning' } };
+const CLEARANCE: LimitSpec = { direction: 'min', unit: 'mm', levels: { hard: 'advice' } };
+const BUMP_CLEARANCE: LimitSpec = { direction: 'min', unit: 'mm', levels: { hard: 'advice' } };
 
 export const floorSag = defineRule({
   id: 'floor.sag',
   title: 'Floor sag under the crew and over the parts beneath',
   checks: 'How far the woven floor sags under each crew member standing, and whether it sags onto the pole or the axle beneath it, standing, over rough ground or on the stone (the floor solved with its frame).',
   kind: 'check',
+  worst: 'warning',
   method: ['design-basis-floor'],
   needs: ['floorStatic', 'floorBump', 'floorStone', 'bumpFactors', 'stoneFactors'],
   limits: {
@@ -36,7 +39,7 @@ export const floorSag = defineRule({
   messages: {
     over: { code: 2211, text: '{role} sags the floor {value:mm} standing, more than the advisory {advisory:mm}.' },
     within: { code: 2212, text: '{role} sags the floor {value:mm} standing, within the advisory {advisory:mm}.' },
-    strikes: { code: 2213, text: "The floor sags {sag:mm} over the {part} in the {case} case and reaches it: the {part}'s top is {clearance:mm} below the floor top." },
+    strikes: { code: 2213, text: "The floor sags {sag:mm} over the {part} in the {case} case and comes to bear on it (its top is {clearance:mm} below the floor top): the {part} holds the floor up there, so the floor is stiffer than the net model takes it and the straps chafe over the {part}." },
     clears: { code: 2214, text: 'The floor sags at most {sag:mm} over the {part} in the {case} case, clear of its top {clearance:mm} below the floor top by {value:mm}.' },
     notSolved: notSolvedMessage(2215),
   },
@@ -46,7 +49,7 @@ export const floorSag = defineRule({
     const net = netSources(spec, data);
     const unsolved = cases.filter((c) => !c.model.converged);
     if (unsolved.length) {
-      for (const c of unsolved) ctx.report(notSolvedReport(c, { subject: 'floor.net', severity: 'fail', unit: 'mm', what: 'sag', sources: net, working: floorWorking(spec, data, c.model) }));
+      for (const c of unsolved) ctx.report(notSolvedReport(c, { subject: 'floor.net', severity: 'warning', unit: 'mm', what: 'sag', sources: net, working: floorWorking(spec, data, c.model) }));
       return;
     }
     const stat = cases[0];
@@ -82,7 +85,7 @@ export const floorSag = defineRule({
       ctx.report({
         subject: `part.${sp.part}`,
         label: `floor over the ${sp.part}`,
-        message: { pass: 'clears', warning: 'strikes', fail: 'strikes' },
+        message: { pass: 'clears', advice: 'strikes' },
         params: { part: sp.part, sag: p.sag_mm, clearance: p.clearance_mm, case: c.name },
         value: left(p),
         unit: 'mm',
@@ -91,7 +94,7 @@ export const floorSag = defineRule({
         combination: c.combination,
         fix:
           standingHits || dynamic.some((d) => beyond(left(d.model.clearances[i]), 'bump_clearance_mm', BUMP_CLEARANCE))
-            ? `Stiffen the floor (more pretension, thicker or wider straps, a closer pitch, a two-way weave), stiffen the frame rails in plan (the straps slacken as they bow), move the crew off the ${sp.part}, or deepen the frame rails so the ${sp.part} sits lower.`
+            ? `Pad the ${sp.part}'s top (a leather or felt strip) so the straps do not chafe on it; for a floor with more give, stiffen the net (more pretension, thicker or wider straps, a closer pitch, a two-way weave), stiffen the frame rails in plan, or deepen the rails so the ${sp.part} sits lower.`
             : 'None needed.',
         sources: [...net, ...c.sources],
         working: [
@@ -102,7 +105,7 @@ export const floorSag = defineRule({
             step(`sag over the ${q.part}, ${k.label} (at x ${num(q.at.x, 'mm')}, y ${num(q.at.y, 'mm')} mm)`, '', q.sag_mm, 'mm'),
             step(`clearance left, ${k.label}`, `${num(q.clearance_mm)} − ${num(q.sag_mm)}`, left(q), 'mm'),
           ]),
-          `${standingHits ? 'the crew standing rests on it' : `least clearance left in any case: ${least.c.label}`}; resting on it standing fails, reaching it only in a dynamic case warns`,
+          `${standingHits ? 'the crew standing brings the floor down onto it' : `least clearance left in any case: ${least.c.label}`}; where the floor comes to bear on the part, the part holds it up: the strap tensions are taken from the net alone, which is the safe side`,
         ],
       });
     });

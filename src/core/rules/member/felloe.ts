@@ -1,4 +1,4 @@
-import { felloePart } from '../../model/wheel/felloe-part.ts';
+import { timberPart } from '../../model/timber/timber-part.ts';
 import { angleFrom, scanWheelRing, type LoadPosition } from '../../model/wheel/wheel-ring-scan.ts';
 import { wheelRingSpec } from '../../model/wheel/wheel-ring-spec.ts';
 import { timberStrength } from '../../model/timber/design-strength.ts';
@@ -47,7 +47,7 @@ export const felloeMember = defineRule({
     const lay = ctx.models.mass.layout;
     const bent = w.felloe.bend_radius_mm !== undefined;
     const runout = felloeRunoutDeg(w.felloe.pieces, bent);
-    const part = felloePart(spec);
+    const part = timberPart(spec, 'felloe');
     const M = spec.moisture_content_pct;
     const full = timberStrength(data, part, 'bending', M);
     const atJoint = timberStrength(data, part, 'bending', M, runout);

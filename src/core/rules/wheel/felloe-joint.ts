@@ -1,4 +1,4 @@
-import { felloePart } from '../../model/wheel/felloe-part.ts';
+import { timberPart } from '../../model/timber/timber-part.ts';
 import { nodeAtWheelAngle, scanWheelRing, type LoadPosition } from '../../model/wheel/wheel-ring-scan.ts';
 import { wheelRingSpec } from '../../model/wheel/wheel-ring-spec.ts';
 import { timberStrength } from '../../model/timber/design-strength.ts';
@@ -41,13 +41,13 @@ export const felloeJoint = defineRule({
   method: ['design-basis-members', 'design-basis-materials', 'richardson-1891-rims'],
   needs: ['mass', 'memberCases'],
   limits: { utilisation: { direction: 'max', unit: 'of the design strength' } },
-  params: [],
+  params: ['end_friction'],
   messages: STRESS_MESSAGES,
   run(ctx) {
     const { spec, data } = ctx;
     const lay = ctx.models.mass.layout;
     const joint = spec.wheels.felloe.joint;
-    const part = felloePart(spec);
+    const part = timberPart(spec, 'felloe');
     const M = spec.moisture_content_pct;
     const ws = wheelRingSpec(spec, data, lay);
     const cases = ctx.models.memberCases;
@@ -58,17 +58,27 @@ export const felloeJoint = defineRule({
     const across = timberStrength(data, part, 'compression', M, 90);
     const bending = timberStrength(data, part, 'bending', M);
     const where = (f: { p: LoadPosition; node: number }) => `(${placeOf(f.p, f.node)})`;
+    const mu = ctx.param('end_friction');
     const checks: CaseCheck[] = cases.flatMap((c, i) =>
       ws.joints.representatives.flatMap((j, k): CaseCheck[] => {
         const f = jointForces(scans[i], j);
         const at = ws.joints.representatives.length > 1 ? ` at joint ${k + 1}` : '';
         if (joint.kind === 'dowel') {
           const A = (n * Math.PI * d * d) / 4;
-          const tau = f.V.value / A;
+          // A joint the tyre keeps closed passes shear by friction across its pressed ends first (Coulomb).
+          const pressed = ws.hinged ? 0 : Math.max(0, -f.V.p.result.hoop[f.V.node]);
+          const carried = Math.max(0, f.V.value - mu.value * pressed);
+          const tau = carried / A;
           return [
             strengthCheck(c, `dowels in shear${at}`, tau, shear, shear.design(c.duration, c.gammaM), [
               `rim shear at the joint ${num(f.V.value)} N ${where(f.V)}`,
-              step('τ = V/(count·π·d²/4)', `${num(f.V.value)} / (${num(n)} × π × ${num(d)}²/4)`, tau, 'MPa'),
+              ...(ws.hinged
+                ? []
+                : [
+                    step('ends pressed together by the hoop force there', '', pressed, 'N'),
+                    step('shear left to the dowels = V − μ·N_c', `max(0, ${num(f.V.value)} − ${num(mu.value)} × ${num(pressed)})`, carried, 'N'),
+                  ]),
+              step('τ = V_dowels/(count·π·d²/4)', `${num(carried)} / (${num(n)} × π × ${num(d)}²/4)`, tau, 'MPa'),
             ]),
           ];
         }
@@ -98,11 +108,11 @@ export const felloeJoint = defineRule({
             ? `${n} dowel(s) of ${num(d)} mm bored straight into the butted ends; taken of the felloe's timber (a dowel sheared across its grain is stronger than the shear along the grain used here)`
             : `${n} round tenon(s) of ${num(d)} mm, ${num(joint.length_mm)} mm long into the next felloe, of the felloe's timber; the tenon presses across the grain of its socket`,
           ...(ws.hinged ? ['the butted joint opens under a moment (no tyre pre-compression to close it): the dowels carry the shear alone'] : []),
-          ...(joint.kind === 'dowel' && !ws.hinged ? ["the tyre's pre-compression closes the joint: the moment passes by end-grain contact, tied by the tyre (not checked here)"] : []),
+          ...(joint.kind === 'dowel' && !ws.hinged ? ["the tyre's pre-compression closes the joint: the moment passes by end-grain contact, tied by the tyre (not checked here), and the shear first by friction across the pressed ends"] : []),
           'the joint as given in wheels.felloe.joint; any size not given there is the default, an assumption',
           ...used.flatMap((s) => s.working),
         ],
-        sources: [...new Set([...used.flatMap((s) => s.sourceIds), ...ws.sourceIds, 'wheelwright-felloe-shop'])],
+        sources: [...new Set([...used.flatMap((s) => s.sourceIds), ...ws.sourceIds, 'wheelwright-felloe-shop', ...(ws.hinged ? [] : mu.sources)])],
         fix:
           joint.kind === 'dowel'
             ? 'Use more or thicker dowels across each joint, or shrink a tyre on to tie the joints.'

@@ -1,4 +1,3 @@
-import { felloePart } from '../../model/wheel/felloe-part.ts';
 import { scanWheelRing, type LoadPosition } from '../../model/wheel/wheel-ring-scan.ts';
 import { wheelRingSpec } from '../../model/wheel/wheel-ring-spec.ts';
 import { timberStrength } from '../../model/timber/design-strength.ts';
@@ -52,7 +51,7 @@ export const spokeTenon = defineRule({
     const nave: TimberPart = { label: 'nave', species: w.nave.species, grade: spec.stock.grade, gradeFrom: 'stock.grade', grainSlopeDeg: 0 };
     const crush = timberStrength(data, spoke, 'compression', M);
     const naveAcross = timberStrength(data, nave, 'compression', M, 90);
-    const felloeAcross = timberStrength(data, felloePart(spec), 'compression', M, 90);
+    const felloeAcross = timberStrength(data, timberPart(spec, 'felloe'), 'compression', M, 90);
     const checks: CaseCheck[] = cases.flatMap((c, i) => {
       const { F, p } = largestSpokeForce(scans[i]);
       const pushed = `largest spoke push ${num(F)} N (${p.label})`;

@@ -1,0 +1,49 @@
+import { formatNumber as fmt } from '../../format/number-format.ts';
+import { solveWheelRing } from './wheel-ring.ts';
+import type { WheelRingSpec } from './wheel-ring-spec.ts';
+import { wrapAngle } from './ring-mesh.ts';
+
+// The wheel's own radial stiffness from its ring frame (design basis,
+// section 8): the felloe bending between the spokes and the spokes' axial
+// give, joints rigid, the nave held. It depends on where the rim meets the
+// ground: stiff under a spoke, soft midway between two, the more so with few
+// spokes and hinged felloe joints. A ridge of routine rough ground is longer
+// than a spoke span, so the wheel rolls over it through every position: the
+// compliance averaged over the rim stands for it. A short stone, or the drop,
+// may meet the rim anywhere: the stiffest position, the safe side.
+
+/** Positions sampled across each spoke span. */
+const PER_SPAN = 8;
+
+export interface WheelStiffness {
+  /** Averaged over the rim, N/m. */
+  rolling: number;
+  /** The stiffest position, N/m. */
+  strike: number;
+  /** The softest position, N/m (for the working). */
+  softest: number;
+  working: string;
+}
+
+/** `P` the ground load on the wheel, N (the standing one): with a tyre's pre-compression the ring's give depends on it. */
+export function wheelStiffness(ws: WheelRingSpec, P: number): WheelStiffness {
+  const n = ws.ring.spokes;
+  const count = ws.hinged || ws.ring.precompression > 0 ? n * PER_SPAN : PER_SPAN;
+  const compliances: number[] = [];
+  for (let i = 0; i < count; i++) {
+    const at = ((2 * Math.PI) / n / PER_SPAN) * i;
+    const joints = ws.joints.angles.map((j) => wrapAngle(j - at));
+    const r = solveWheelRing(ws.ring, { P, spokeOffset: wrapAngle(-at), hinges: ws.hinged ? joints : [], nodesAt: joints });
+    compliances.push(r.contactDeflection / 1000 / P); // m/N
+  }
+  const mean = compliances.reduce((s, c) => s + c, 0) / compliances.length;
+  const rolling = 1 / mean;
+  const strike = 1 / Math.min(...compliances);
+  const softest = 1 / Math.max(...compliances);
+  return {
+    rolling,
+    strike,
+    softest,
+    working: `wheel ring (felloe bending and spoke compression, joints rigid${ws.hinged ? ', the dowelled felloe joints hinged' : ''}): radial stiffness ${fmt(strike / 1e3)} kN/m under a spoke, ${fmt(softest / 1e3)} kN/m at its softest, ${fmt(rolling / 1e3)} kN/m averaged over ${count} positions round the rim`,
+  };
+}
