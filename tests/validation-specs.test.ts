@@ -6,10 +6,10 @@ import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { rulesData } from './support/fixtures.ts';
 
 // The validation suite (specs/validation): documented vehicles and situations
-// of the trade, each with the verdict its record implies. The verdicts are not
-// asserted here (the models are being corrected); what is asserted is that
-// every spec is a valid specification and says, in machine-readable header
-// lines, what it expects and where it comes from:
+// of the trade, each with the verdict its record implies (asserted in
+// validation-verdicts.test.ts). Here: every spec is a valid specification and
+// says, in machine-readable header lines, what it expects and where it comes
+// from:
 //   # expect: pass            or   # expect: fail <rule id> [<rule id> ...]
 //   # record: record-<name>   or   # source: situation of the trade
 
