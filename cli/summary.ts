@@ -10,6 +10,8 @@ export function summary(result: CheckResult, written: string[], show = 6): strin
   const lines = [
     `${result.spec_name}`,
     `verdict: ${result.verdict.toUpperCase()}  (${counts})`,
+    `  ${result.verdict}: ${result.severity_meanings[result.verdict]}`,
+    ...result.provisional.map((r) => `  provisional: ${r}`),
     ...worst.map((f) => `  ${f.severity.padEnd(7)} ${f.rule}  ${f.message}`),
     ...(written.length ? ['written:', ...written.map((w) => `  ${w}`)] : []),
     SHORT_CAUTION,

@@ -355,3 +355,26 @@ describe('report, cutting sections', () => {
     expect(out).toContain('&#60;script&#62;x&#60;/script&#62; &#38; &#34;q&#34;');
   });
 });
+
+describe('what the result cannot vouch for', () => {
+  it('a provisional verdict says why before the findings, and figures not reached are named with their reason', () => {
+    const r: CheckResult = {
+      ...sampleResult(),
+      provisional: ["the stone's dynamic factors are the data's bound, not the ride model's"],
+      figures_not_applicable: { ride_decay_cycles: 'the motion never falls below 10 % within the run' },
+    };
+    const md = markdownOf(r);
+    const verdictAt = md.indexOf('Provisional verdict.');
+    expect(verdictAt).toBeGreaterThan(0);
+    expect(verdictAt).toBeLessThan(md.indexOf("the stone's dynamic factors are the data's bound"));
+    expect(md.indexOf("the stone's dynamic factors")).toBeLessThan(md.indexOf('\n## Findings'));
+    expect(md).toContain('| ride\\_decay\\_cycles | the motion never falls below 10 % within the run |');
+    expect(htmlOf(r)).toContain('Provisional verdict.');
+  });
+
+  it('a verdict resting on the models says nothing provisional', () => {
+    const r: CheckResult = { ...sampleResult(), provisional: [], figures_not_applicable: {} };
+    expect(markdownOf(r)).not.toContain('Provisional');
+    expect(markdownOf(r)).not.toContain('Figure not given');
+  });
+});

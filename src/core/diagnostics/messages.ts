@@ -48,6 +48,14 @@ export const MESSAGES = {
   marginTooWide: { code: 1125, text: 'the usable margin {value} mm leaves no usable floor; allowed: less than {max} mm (half the floor depth and width).' },
   poleRootOutsideBox: { code: 1126, text: 'the pole {key} at {value} mm is not under the box; allowed: {min} to {max} mm.' },
   loadOffVehicle: { code: 1123, text: 'the load "{value}" at x = {x} mm is not on the chariot; allowed: {min} to {max} mm.' },
+  // The form of a section (rectangular or round) and of a tyre (115x)
+  sectionBothForms: { code: 1150, text: 'both forms of the section are given ({round} and {rect}); give one: {round} alone for a round bar, or {rect} for a rectangular one.' },
+  sectionNoForm: { code: 1151, text: 'the section is not given; give {rect} for a rectangular bar, or {round} alone for a round one.' },
+  sectionHalfForm: { code: 1152, text: '{given} is given without {missing}: a rectangular section needs both (or give {round} alone for a round bar).' },
+  tyreMaterialMissing: { code: 1153, text: 'a rawhide tyre names its leather: give material (known materials: {allowed}).' },
+  tyreMaterialOnIron: { code: 1154, text: 'an iron tyre takes no material (its mass comes from the density of iron); remove material, or set kind to rawhide for a hide tyre.' },
+  tyreSizeMissing: { code: 1155, text: 'a {kind} tyre needs its {key}.' },
+  tyreNoneWithKeys: { code: 1156, text: 'a tyre of kind none takes no other key; remove {keys}, or set kind to rawhide or iron.' },
   // Stock instances for `axletree stock` (12xx)
   stockInstanceEmpty: { code: 1200, text: '{path} is empty; a stock instance needs kerf_mm, stock and pieces.' },
   stockLengthTwice: { code: 1201, text: 'the stock length {value} mm is listed twice (also at {other}); list each length once.' },
