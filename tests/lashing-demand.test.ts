@@ -2,7 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { Analysis } from './support/analysis.ts';
 import { cornerDemand } from '../src/core/model/corner-demand.ts';
 import type { FloorResult } from '../src/core/model/floor-result.ts';
-import { governing } from '../src/core/model/joint-force.ts';
+import { governing, jointForceWith } from '../src/core/model/joint-force.ts';
+
+// EN 1990 Table A1.2(B): gamma_Q 1.5 on the leading variable action.
+const force = jointForceWith(1.5);
 import { loadFactor } from '../src/core/model/load-factors.ts';
 import { G } from '../src/core/units/units.ts';
 import { dataWithGround, handSpec, prepared } from './support/fixtures.ts';
@@ -106,7 +109,7 @@ describe('frame corner demand', () => {
 
   it('each corner carries half of each rail that meets there', () => {
     const spec = prepared(handSpec(), data);
-    const c = cornerDemand(spec, floor());
+    const c = cornerDemand(spec, floor(), force);
     // √(500² + 300²) = 583.095 N at each of the four corners
     expect(c.cases.map((x) => x.id)).toEqual(['rear-left', 'rear-right', 'front-left', 'front-right']);
     for (const x of c.cases) expect(x.shear_N).toBeCloseTo(583.095, 3);
@@ -115,12 +118,12 @@ describe('frame corner demand', () => {
   it('a front rail bent round the front corners leaves only the rear ones jointed', () => {
     const s = handSpec();
     s.box.floor.frame.bend_radius_mm = 100;
-    expect(cornerDemand(prepared(s, data), floor()).cases.map((x) => x.id)).toEqual(['rear-left', 'rear-right']);
+    expect(cornerDemand(prepared(s, data), floor(), force).cases.map((x) => x.id)).toEqual(['rear-left', 'rear-right']);
   });
 
   it('no converged floor, no corner demand: it says why', () => {
     const spec = prepared(handSpec(), data);
-    expect(cornerDemand(spec, floor({ converged: false })).unknown).toMatch(/did not converge/);
-    expect(cornerDemand(spec, undefined).unknown).toMatch(/no result/);
+    expect(cornerDemand(spec, floor({ converged: false }), force).unknown).toMatch(/did not converge/);
+    expect(cornerDemand(spec, undefined, force).unknown).toMatch(/no result/);
   });
 });

@@ -23,6 +23,33 @@ describe(RULE, () => {
     expect(at(200)).toBeCloseTo(((0.9 * 9 * 1.0 - 1.5 * 80 * 0.05) * G) / 2.25, 9);
   });
 
+  it("EQU by hand in motion: each mass's inertia at its own height × 1.5 where the motion lifts the yoke; the driver stays aboard × 0.9", () => {
+    // EN 1990 Table A1.2(A); the driver's presence while the vehicle moves is the design basis's judgement (section 3).
+    // Moments about the contact on rigid ground (no rolling resistance): R = [Σ f_i·m_i·g·(x_i − x_a) + a·Σ fI_i·m_i·(h_y − z_i)] / L.
+    const rigid = dataWithGround('hand-rigid', 0);
+    const s = handSpec();
+    s.crew[0].x_mm = 300;
+    const spec = prepared(s, rigid);
+    const model = massModel(spec, rigid);
+    const xa = spec.axle.x_mm / 1000;
+    const hy = spec.pole.yoke_height_mm / 1000;
+    const L = spec.pole.yoke_x_mm / 1000 - xa;
+    const rolling = model.parts.filter((p) => p.group === 'rolling');
+    const hand = (a_g: number, fI: number) =>
+      rolling.reduce((sum, p) => {
+        const arm = p.x_mm / 1000 - xa;
+        const f = p.variable ? 0.9 : arm >= 0 ? 0.9 : 1.1; // the one crew member is the driver, ahead of the axle
+        return sum + f * p.mass_kg * G * arm + fI * p.mass_kg * a_g * G * (hy - p.z_mm / 1000);
+      }, 0) / L;
+    // Braking (a < 0): the lower of the motion left out and the motion × 1.5 is the equilibrium case.
+    const braking = Math.min(hand(-0.3, 0), hand(-0.3, 1.5));
+    expect(equilibriumPoleLoad(spec, rigid, model, -0.3).pole_N).toBeCloseTo(braking, 9);
+    const accelerating = Math.min(hand(0.2, 0), hand(0.2, 1.5));
+    expect(equilibriumPoleLoad(spec, rigid, model, 0.2).pole_N).toBeCloseTo(accelerating, 9);
+    // The two motions lift the yoke in opposite senses, so exactly one of them takes the inertia.
+    expect(hand(-0.3, 1.5) < hand(-0.3, 0)).not.toBe(hand(0.2, 1.5) < hand(0.2, 0));
+  });
+
   it('passes when the axle is under the rear edge (the crew always ahead of it), in equilibrium', async () => {
     const [f, seated] = await findingsOf(RULE, readDemo('demo-rear-axle'));
     expect(f.severity).toBe('pass');

@@ -1,7 +1,7 @@
 import { formatNumber } from '../format/number-format.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import type { FloorResult, RailPull } from './floor-result.ts';
-import { jointForce, type JointForce } from './joint-force.ts';
+import { jointForceWith, type JointForce } from './joint-force.ts';
 
 // The force on each jointed corner of the floor frame from the strap pull on
 // the rails (strap-floor model, bump case). Each rail's total pull is shared
@@ -20,7 +20,7 @@ export function jointedCorners(spec: CheckedSpecification): string {
     : 'each of the four corners of the floor frame';
 }
 
-export function cornerDemand(spec: CheckedSpecification, floor: FloorResult | undefined): CornerDemand {
+export function cornerDemand(spec: CheckedSpecification, floor: FloorResult | undefined, force: ReturnType<typeof jointForceWith>): CornerDemand {
   if (!floor) return { cases: [], unknown: 'the strap-floor model gave no result' };
   if (!floor.converged) return { cases: [], unknown: `the strap-floor model did not converge in the bump case (residual ${f1(floor.residual_N)} N against ${f1(floor.tolerance_N)} N)` };
   const rail = (name: RailPull['rail']) => floor.rails.find((r) => r.rail === name)?.total_N ?? 0;
@@ -31,7 +31,7 @@ export function cornerDemand(spec: CheckedSpecification, floor: FloorResult | un
     for (const side of ['left', 'right'] as const) {
       const along = rail(end) / 2;
       const across = rail(side) / 2;
-      cases.push(jointForce(`${end}-${side}`, `${end}-${side} corner, crew weight × ${formatNumber(floor.factor)} on the strap floor`, { along, across }, [
+      cases.push(force(`${end}-${side}`, `${end}-${side} corner, crew weight × ${formatNumber(floor.factor)} on the strap floor`, { along, across }, [
         `along = T_${end} / 2 = ${f1(rail(end))} / 2 = ${f1(along)} N (half the strap pull on the ${end} rail)`,
         `across = T_${side} / 2 = ${f1(rail(side))} / 2 = ${f1(across)} N (half the strap pull on the ${side} rail)`,
       ]));

@@ -12,9 +12,3 @@ export function equilibriumWeight(p: PartMass, axleX_mm: number, f: CombinationF
   if (p.variable) return helps ? 0 : f.gammaQdst;
   return helps ? f.gammaGstb : f.gammaGdst;
 }
-
-/** The inertia's factor: 1.5 where it lifts the yoke (braking with the yoke above the centre of mass), else left out. */
-export function equilibriumInertia(accel_g: number, yokeAboveCg: boolean, f: CombinationFactors): number {
-  const lifts = yokeAboveCg ? accel_g < 0 : accel_g > 0;
-  return lifts ? f.gammaQdst : 0;
-}

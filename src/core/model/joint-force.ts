@@ -40,7 +40,7 @@ export function caseCombination(id: string): 'fundamental' | 'accidental' {
 }
 
 /** A joint force from its parts (characteristic, as the action gives them); `lines` say where each part comes from. */
-export function jointForce(id: string, title: string, p: ForceParts, lines: string[], gammaQ = 1.5): JointForce {
+export function jointForce(id: string, title: string, p: ForceParts, lines: string[], gammaQ: number): JointForce {
   const along = p.along ?? 0;
   const across = p.across ?? 0;
   const normal = Math.abs(p.normal ?? 0);
@@ -59,3 +59,9 @@ export function jointForce(id: string, title: string, p: ForceParts, lines: stri
 export function governing(cases: readonly JointForce[], measure: 'shear_N' | 'held_N'): JointForce | undefined {
   return cases.reduce<JointForce | undefined>((w, c) => (w === undefined || c[measure] > w[measure] ? c : w), undefined);
 }
+
+/** jointForce with the fundamental combination's γ_Q of the data bound in. */
+export const jointForceWith =
+  (gammaQ: number) =>
+  (id: string, title: string, p: ForceParts, lines: string[]): JointForce =>
+    jointForce(id, title, p, lines, gammaQ);

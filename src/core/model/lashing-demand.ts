@@ -6,7 +6,8 @@ import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { G, mm } from '../units/units.ts';
 import { cornerDemand, jointedCorners } from './corner-demand.ts';
 import type { FloorResult } from './floor-result.ts';
-import { jointForce, type JointForce } from './joint-force.ts';
+import { jointForceWith, type JointForce } from './joint-force.ts';
+import { combinationFactors } from './combination-factors.ts';
 import { loadFactor } from './load-factors.ts';
 import type { MassModel } from './mass-model.ts';
 import type { TurnModel } from './turn.ts';
@@ -59,12 +60,14 @@ interface Factors {
   bump: { value: number; source: string };
   stone: { value: number; source: string };
   shock: Limit;
+  /** A joint force with the data's γ_Q on the leading variable action. */
+  force: ReturnType<typeof jointForceWith>;
 }
 
 export function lashingDemands(i: DemandInput): Record<Joint, JointDemand> {
-  const k: Factors = { bump: i.bump, stone: i.stone, shock: loadFactor(i.data, 'stopping_shock_factor') };
+  const k: Factors = { bump: i.bump, stone: i.stone, shock: loadFactor(i.data, 'stopping_shock_factor'), force: jointForceWith(combinationFactors(i.data).gammaQ) };
   const boxParts = i.mass.parts.filter((p) => p.group === 'rolling' && !RUNNING_GEAR.has(p.part));
-  const corners = cornerDemand(i.spec, i.floorBump);
+  const corners = cornerDemand(i.spec, i.floorBump, k.force);
   const siding = i.spec.box.siding_mass_kg;
   return {
     'pole-to-axle': { joint: 'pole-to-axle', where: 'where the pole crosses the axle', cases: poleCases('pole-to-axle', i, k), unknown: null },
@@ -120,7 +123,7 @@ function poleCases(joint: 'pole-to-axle' | 'pole-to-yoke', i: DemandInput, k: Fa
   const acc = worst(accel.map(asVertical));
   const axleMax = Math.max(...accel.map((c) => c.axle_load_N));
   const pull = m * A + Crr * axleMax;
-  out.push(jointForce('draught', `draught, accelerating at ${spec.operation.acceleration_g} g`, { along: pull, normal: vertical(acc) }, [
+  out.push(k.force('draught', `draught, accelerating at ${spec.operation.acceleration_g} g`, { along: pull, normal: vertical(acc) }, [
     `along = m·a + (C_s + C_b)·N_axle = ${f1(m)} kg × ${f3(A)} m/s² + ${f3(Crr)} × ${f1(axleMax)} N = ${f1(pull)} N (the largest axle load of the accelerating cases)`,
     `normal = ${vText(acc)}`,
   ]));
@@ -134,20 +137,20 @@ function poleCases(joint: 'pole-to-axle' | 'pole-to-yoke', i: DemandInput, k: Fa
     return { title: c.title.replace(/^braking at [^,]+/, `stopping shock at ${(k.shock.value * spec.operation.braking_g).toFixed(2)} g`), pole: scale(c.pole_load_N, still.pole_load_N), yoke: scale(c.yoke_load_N, still.yoke_load_N), axle: scale(c.axle_load_N, still.axle_load_N) };
   });
   const braking = worst(of('braking').map(asVertical));
-  out.push(jointForce('braking', `braking at ${spec.operation.braking_g} g`, { along: m * B, normal: vertical(braking) }, [
+  out.push(k.force('braking', `braking at ${spec.operation.braking_g} g`, { along: m * B, normal: vertical(braking) }, [
     `along = m·b = ${f1(m)} kg × ${f3(B)} m/s² = ${f1(m * B)} N (rolling resistance, which helps, not counted)`,
     `normal = ${vText(braking)}`,
   ]));
   const brk = worst(shocked);
   const hold = m * B * k.shock.value;
-  out.push(jointForce('stopping-shock', `stopping shock, ${k.shock.value} × the braking`, { along: hold, normal: vertical(brk) }, [
+  out.push(k.force('stopping-shock', `stopping shock, ${k.shock.value} × the braking`, { along: hold, normal: vertical(brk) }, [
     `along = m·b·k_stop = ${f1(m)} kg × ${f3(B)} m/s² × ${k.shock.value} = ${f1(hold)} N (rolling resistance, which helps, not counted)`,
     `with R = R_standing + k_stop × (R_braking − R_standing), normal = ${vText(brk)}`,
   ]));
 
   const stat = worst(standing.map(asVertical));
   for (const [id, phi, name] of [['rough-ground', k.bump, 'rough ground'], ['stone', k.stone, 'stone strike']] as const) {
-    out.push(jointForce(id, `${name}, standing load × ${phi.value.toFixed(2)}`, { normal: phi.value * vertical(stat) }, [
+    out.push(k.force(id, `${name}, standing load × ${phi.value.toFixed(2)}`, { normal: phi.value * vertical(stat) }, [
       `normal = φ × ${vText(stat)}: ${phi.value.toFixed(3)} × ${f1(vertical(stat))} = ${f1(phi.value * vertical(stat))} N`,
     ]));
   }
@@ -157,7 +160,7 @@ function poleCases(joint: 'pole-to-axle' | 'pole-to-yoke', i: DemandInput, k: Fa
     const arm = mm(Math.abs(i.mass.rolling.x_mm - spec.axle.x_mm));
     const side = (m * turn.lateralAccel * arm) / turn.reach;
     const rrTurn = Crr * placed.axle;
-    out.push(jointForce('turn', `design turn at ${spec.operation.speed_kmh} km/h`, { along: rrTurn, across: side, normal: vertical(placed) }, [
+    out.push(k.force('turn', `design turn at ${spec.operation.speed_kmh} km/h`, { along: rrTurn, across: side, normal: vertical(placed) }, [
       `along = (C_s + C_b)·N_axle = ${f3(Crr)} × ${f1(placed.axle)} N = ${f1(rrTurn)} N`,
       `across = m·a_lat·|x_g − x_a| / L = ${f1(m)} kg × ${f3(turn.lateralAccel)} m/s² × ${f3(arm)} m / ${f3(turn.reach)} m = ${f1(side)} N (the side pull that holds the heading)`,
       `normal = ${vText(placed)}`,
@@ -180,20 +183,20 @@ function carriedCases(c: Carried, i: DemandInput, k: Factors): JointForce[] {
   const B = spec.operation.braking_g * G;
   const seated = [`normal = m·g = ${f1(c.kg)} kg × ${G} = ${f1(W)} N, pressing the seat (apart 0)`];
   const bumped = (id: 'rough-ground' | 'stone', phi: { value: number }, name: string) =>
-    jointForce(id, `${name}, weight × ${phi.value.toFixed(2)}`, { normal: phi.value * W, apart: Math.max(0, phi.value - 1) * W }, [
+    k.force(id, `${name}, weight × ${phi.value.toFixed(2)}`, { normal: phi.value * W, apart: Math.max(0, phi.value - 1) * W }, [
       c.basis,
       `normal = φ·m·g = ${phi.value.toFixed(3)} × ${f1(c.kg)} kg × ${G} = ${f1(phi.value * W)} N, pressing the seat`,
       `apart = (φ − 1)·m·g = ${f1(Math.max(0, phi.value - 1))} × ${f1(W)} = ${f1(Math.max(0, phi.value - 1) * W)} N (the rebound, the weight not counted off)`,
     ]);
   const out: JointForce[] = [
-    jointForce('draught', `draught, accelerating at ${spec.operation.acceleration_g} g`, { along: c.kg * A, normal: W, apart: 0 }, [c.basis, `along = m·a = ${f1(c.kg)} kg × ${f3(A)} m/s² = ${f1(c.kg * A)} N`, ...seated]),
-    jointForce('braking', `braking at ${spec.operation.braking_g} g`, { along: c.kg * B, normal: W, apart: 0 }, [c.basis, `along = m·b = ${f1(c.kg)} kg × ${f3(B)} m/s² = ${f1(c.kg * B)} N`, ...seated]),
-    jointForce('stopping-shock', `stopping shock, ${k.shock.value} × the braking`, { along: c.kg * B * k.shock.value, normal: W, apart: 0 }, [c.basis, `along = m·b·k_stop = ${f1(c.kg)} kg × ${f3(B)} m/s² × ${k.shock.value} = ${f1(c.kg * B * k.shock.value)} N`, ...seated]),
+    k.force('draught', `draught, accelerating at ${spec.operation.acceleration_g} g`, { along: c.kg * A, normal: W, apart: 0 }, [c.basis, `along = m·a = ${f1(c.kg)} kg × ${f3(A)} m/s² = ${f1(c.kg * A)} N`, ...seated]),
+    k.force('braking', `braking at ${spec.operation.braking_g} g`, { along: c.kg * B, normal: W, apart: 0 }, [c.basis, `along = m·b = ${f1(c.kg)} kg × ${f3(B)} m/s² = ${f1(c.kg * B)} N`, ...seated]),
+    k.force('stopping-shock', `stopping shock, ${k.shock.value} × the braking`, { along: c.kg * B * k.shock.value, normal: W, apart: 0 }, [c.basis, `along = m·b·k_stop = ${f1(c.kg)} kg × ${f3(B)} m/s² × ${k.shock.value} = ${f1(c.kg * B * k.shock.value)} N`, ...seated]),
     bumped('rough-ground', k.bump, 'rough ground'),
     bumped('stone', k.stone, 'stone strike'),
   ];
   if (turn.steady && turn.lateralAccel > 0) {
-    out.push(jointForce('turn', `design turn at ${spec.operation.speed_kmh} km/h`, { across: c.kg * turn.lateralAccel, normal: W, apart: 0 }, [c.basis, `across = m·a_lat = ${f1(c.kg)} kg × ${f3(turn.lateralAccel)} m/s² = ${f1(c.kg * turn.lateralAccel)} N`, ...seated]));
+    out.push(k.force('turn', `design turn at ${spec.operation.speed_kmh} km/h`, { across: c.kg * turn.lateralAccel, normal: W, apart: 0 }, [c.basis, `across = m·a_lat = ${f1(c.kg)} kg × ${f3(turn.lateralAccel)} m/s² = ${f1(c.kg * turn.lateralAccel)} N`, ...seated]));
   }
   return out;
 }

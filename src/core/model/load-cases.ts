@@ -6,7 +6,7 @@ import { massModel, type MassModel } from './mass-model.ts';
 import { poleLoad } from './pole-load.ts';
 import { rollingResistance } from './rolling-resistance.ts';
 import { combinationFactors } from './combination-factors.ts';
-import { equilibriumInertia, equilibriumWeight } from './equilibrium-factors.ts';
+import { equilibriumWeight } from './equilibrium-factors.ts';
 import { num, step, stepText } from '../findings/working.ts';
 
 // The longitudinal load cases (design basis, section 3): the crew as placed
@@ -63,15 +63,37 @@ export function yokeLoads(spec: CheckedSpecification, data: RulesData, model: Ma
   return { pole: r, yoke_N, perHorse_N: yoke_N / spec.team.horses };
 }
 
-/** The pole load with the EQU factors on each weight and on the inertia. */
+/**
+ * The pole load with the EQU factors: each permanent weight × 1.1 behind the
+ * axle and × 0.9 ahead of it; the motion's inertia (one action, each mass at
+ * its own height) × 1.5 where it lifts the yoke, else left out; the crew and
+ * loads × 1.5 where they (weight and inertia together) lift it, else left out.
+ * Whether the motion lifts depends on which masses are aboard, so both
+ * choices are made and the lower pole load is the equilibrium case.
+ */
 export function equilibriumPoleLoad(spec: CheckedSpecification, data: RulesData, model: MassModel, accel_g: number) {
   const f = combinationFactors(data);
   const rolling = model.parts.filter((p) => p.group === 'rolling');
-  const parts = rolling.map((p) => ({ ...p, factor: equilibriumWeight(p, spec.axle.x_mm, f) }));
-  const cgZ = model.rolling.z_mm;
-  const accelFactor = equilibriumInertia(accel_g, spec.pole.yoke_height_mm > cgZ, f);
-  const r = poleLoad({ parts, axleX_mm: spec.axle.x_mm, yokeX_mm: spec.pole.yoke_x_mm, yokeZ_mm: spec.pole.yoke_height_mm, accel_g, accelFactor, resistance: rollingResistance(spec, data) });
-  const factors = [`weights ahead of the axle × ${f.gammaGstb} (own weight) or left out (crew, loads); behind it × ${f.gammaGdst} (own weight) or × ${f.gammaQdst} (crew, loads); inertia × ${accelFactor}`];
+  const xa = spec.axle.x_mm;
+  const hy = spec.pole.yoke_height_mm;
+  const resistance = rollingResistance(spec, data);
+  // Someone drives whenever the vehicle moves: the driver (the crew entry of that role, else the first) is then aboard.
+  const driver = `crew, ${(spec.crew.find((c) => c.role === 'driver') ?? spec.crew[0])?.role}`;
+  const trial = (fI: number) => {
+    const parts = rolling.map((p) => {
+      if (!p.variable) return { ...p, factor: equilibriumWeight(p, xa, f), inertiaFactor: fI };
+      // A person aboard brings weight (× γ_Q behind the axle, × 0.9 ahead of it) and inertia (the motion's factor).
+      // The driver of a moving vehicle is aboard; anyone else only where their presence lifts the yoke.
+      const weightFactor = p.x_mm < xa ? f.gammaQdst : f.gammaGstb;
+      const lifts = weightFactor * (p.x_mm - xa) + fI * accel_g * (hy - p.z_mm) < 0;
+      const aboard = lifts || (accel_g !== 0 && p.part === driver);
+      return aboard ? { ...p, factor: weightFactor, inertiaFactor: fI } : { ...p, factor: 0, inertiaFactor: 0 };
+    });
+    return { fI, r: poleLoad({ parts, axleX_mm: xa, yokeX_mm: spec.pole.yoke_x_mm, yokeZ_mm: hy, accel_g, resistance }) };
+  };
+  const choices = accel_g === 0 ? [trial(0)] : [trial(0), trial(f.gammaQdst)];
+  const { fI, r } = choices.reduce((lo, c) => (c.r.pole_N < lo.r.pole_N ? c : lo));
+  const factors = [`own weight × ${f.gammaGstb} ahead of the axle, × ${f.gammaGdst} behind it; crew and loads aboard where they lift the yoke${accel_g !== 0 ? ' (and the driver, aboard whenever the vehicle moves)' : ''}, × ${f.gammaGstb} ahead of the axle and × ${f.gammaQdst} behind it, else left out; inertia × ${fI} (the lower pole load of the motion left out and the motion × ${f.gammaQdst})`];
   return { pole_N: r.pole_N, working: [...factors, ...r.working.map(stepText)].join('\n') };
 }
 

@@ -11,8 +11,8 @@ import type { RollingResistance } from './rolling-resistance.ts';
 // solving for R directly gives R = (A + c*m*g) / (L + c).
 
 export interface PoleLoadInput {
-  /** Rolling assembly parts, crew and loads included (mm, kg); each with its weight factor (1 unfactored). */
-  parts: readonly (PartMass & { factor?: number })[];
+  /** Rolling assembly parts, crew and loads included (mm, kg); each with its weight factor and its inertia factor (1 unfactored; the inertia factor defaults to the weight factor times accelFactor). */
+  parts: readonly (PartMass & { factor?: number; inertiaFactor?: number })[];
   axleX_mm: number;
   yokeX_mm: number;
   yokeZ_mm: number;
@@ -33,19 +33,22 @@ export interface PoleLoad {
 
 export function poleLoad(i: PoleLoadInput): PoleLoad {
   const w = (p: (typeof i.parts)[number]) => p.mass_kg * (p.factor ?? 1);
+  // The inertia of each mass acts at its own height, with its own factor (in equilibrium terms the motion and the weights are separate actions).
+  const wi = (p: (typeof i.parts)[number]) => p.mass_kg * (p.inertiaFactor ?? (p.factor ?? 1) * (i.accelFactor ?? 1));
   const m = i.parts.reduce((s, p) => s + w(p), 0);
-  const hg = mm(i.parts.reduce((s, p) => s + w(p) * p.z_mm, 0) / m);
+  const mi = i.parts.reduce((s, p) => s + wi(p), 0);
+  const hg = mi > 0 ? mm(i.parts.reduce((s, p) => s + wi(p) * p.z_mm, 0) / mi) : 0;
   const xa = mm(i.axleX_mm);
   const L = mm(i.yokeX_mm) - xa;
   const hy = mm(i.yokeZ_mm);
-  const a = i.accel_g * G * (i.accelFactor ?? 1);
+  const a = i.accel_g * G;
   const c = i.resistance.couple_m;
   const gravityMoment = i.parts.reduce((s, p) => s + w(p) * G * (mm(p.x_mm) - xa), 0);
-  const inertiaMoment = m * a * (hy - hg);
+  const inertiaMoment = mi * a * (hy - hg);
   const pole = (gravityMoment + inertiaMoment + c * m * G) / (L + c);
   const axle = m * G - pole;
   const working = [
-    step('R_pole = [Σ m_i·g·(x_i − x_a) + m·a·(h_y − h_g) + c·m·g] / (L + c)', `[${num(gravityMoment)} + ${num(m)} × ${num(a)} × (${num(hy)} − ${num(hg)}) + ${num(c)} × ${num(m * G)}] / (${num(L)} + ${num(c)})`, pole, 'N'),
+    step('R_pole = [Σ m_i·g·(x_i − x_a) + m_a·a·(h_y − h_a) + c·m·g] / (L + c)', `[${num(gravityMoment)} + ${num(mi)} × ${num(a)} × (${num(hy)} − ${num(hg)}) + ${num(c)} × ${num(m * G)}] / (${num(L)} + ${num(c)})`, pole, 'N'),
     step('axle load = m·g − R_pole', `${num(m * G)} − ${num(pole)}`, axle, 'N'),
   ];
   return { pole_N: pole, axle_N: axle, resistance_N: i.resistance.total * axle, working };

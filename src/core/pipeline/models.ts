@@ -174,7 +174,7 @@ export const cuttingDef = defineModel({
 export const lashingDemandsDef = defineModel({
   id: 'lashingDemands',
   needs: ['mass', 'loadCases', 'turn', 'floorBump', 'bumpFactors', 'stoneFactors'],
-  params: ['load-cases.stopping_shock_factor', ...ROLLING_PARAMS],
+  params: ['load-cases.stopping_shock_factor', ...ROLLING_PARAMS, ...COMBINATION_PARAMS],
   compute: ({ mass, loadCases, turn, floorBump, bumpFactors, stoneFactors }, { spec, data }) => lashingDemands({ spec, data, mass, cases: loadCases, turn, floorBump, bump: bumpFactors.crew, stone: stoneFactors.crew }),
 });
 

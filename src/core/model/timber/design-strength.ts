@@ -14,6 +14,8 @@ export interface DesignValue {
   kModSource: string;
   /** The catalogue ids k_mod rests on. */
   kModSources: string[];
+  /** The partial factor this value used (the combination's own). */
+  gammaM: number;
   /** MPa. */
   value: number;
   line: string;
@@ -24,6 +26,8 @@ export interface TimberStrength {
   /** The grade factor and the partial factor the design value uses. */
   kSelect: number;
   gammaM: number;
+  /** The angle between the load and the grain, degrees (90: across the grain). */
+  grainDeg: number;
   working: string[];
   /** The sources as text, for older readers. */
   sources: string[];
@@ -46,13 +50,14 @@ export function timberStrength(data: RulesData, part: TimberPart, property: Timb
     characteristic: ch,
     kSelect: sel.value,
     gammaM: gamma.value,
+    grainDeg: grain,
     working: [...ch.working, `grade ${part.grade} (${part.gradeFrom}): k_select = ${sel.value}; γ_M = ${gamma.value}`],
     sources,
     sourceIds: [...new Set([...ch.sourceIds, ...sel.sources, ...gamma.sources])],
     design(d, gammaM) {
       const k = kMod(data, d);
       const value = (ch.fk * sel.value * k.value) / gammaM;
-      return { duration: d, kMod: k.value, kModSource: k.source, kModSources: k.sources, value, line: `f_d = f_k·k_select·k_mod/γ_M = ${f(ch.fk)} × ${sel.value} × ${k.value} / ${gammaM} = ${f(value)} MPa` };
+      return { duration: d, kMod: k.value, kModSource: k.source, kModSources: k.sources, gammaM, value, line: `f_d = f_k·k_select·k_mod/γ_M = ${f(ch.fk)} × ${sel.value} × ${k.value} / ${gammaM} = ${f(value)} MPa` };
     },
   };
 }

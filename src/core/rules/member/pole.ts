@@ -20,8 +20,8 @@ export const poleMember = defineRule({
   params: ['effective_length_factor', 'straightness_factor', 'slenderness_threshold'],
   messages: {
     ...STRESS_MESSAGES,
-    strutWithin: { code: 2306, text: '{part}, {mode}: the design thrust in "{case}" with what the bending at the root uses, {value:N}, is within its buckling resistance {limit:N} (k_c {kc:2} at a relative slenderness of {lrel:2}).' },
-    strutOver: { code: 2307, text: '{part}, {mode}: the design thrust in "{case}" with what the bending at the root uses, {value:N}, exceeds its buckling resistance {limit:N} (k_c {kc:2} at a relative slenderness of {lrel:2}).' },
+    strutWithin: { code: 2306, text: '{part}, {mode}: the design thrust in "{case}" with what the bending at the root uses, {value:N}, is within its buckling resistance {limit:N} (k_c {kc:1} at a relative slenderness of {lrel:1}).' },
+    strutOver: { code: 2307, text: '{part}, {mode}: the design thrust in "{case}" with what the bending at the root uses, {value:N}, exceeds its buckling resistance {limit:N} (k_c {kc:1} at a relative slenderness of {lrel:1}).' },
   },
   run(ctx) {
     const { spec, data } = ctx;

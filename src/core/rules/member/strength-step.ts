@@ -7,6 +7,12 @@ const SYMBOL: Record<TimberProperty, string> = { bending: 'f_m', compression: 'f
 
 /** The design strength of one case as a step: f_d = f_k·k_select·k_mod/γ_M. */
 export function strengthStep(s: TimberStrength, d: DesignValue): WorkingStep {
-  const f = SYMBOL[s.characteristic.property];
-  return step(`${f},d = ${f},k·k_select·k_mod/γ_M`, `${num(s.characteristic.fk)} × ${num(s.kSelect)} × ${num(d.kMod)} / ${num(s.gammaM)}`, d.value, 'MPa');
+  const f = symbolOf(s);
+  return step(`${f},d = ${f},k·k_select·k_mod/γ_M`, `${num(s.characteristic.fk)} × ${num(s.kSelect)} × ${num(d.kMod)} / ${num(d.gammaM)}`, d.value, 'MPa');
+}
+
+/** The strength's symbol, with the grain angle where the load runs off the grain (f_c,90 straight across it). */
+function symbolOf(s: TimberStrength): string {
+  if (s.characteristic.property !== 'compression' || s.grainDeg === 0) return SYMBOL[s.characteristic.property];
+  return s.grainDeg >= 90 ? 'f_c,90' : `f_c,${Math.round(s.grainDeg)}°`;
 }
