@@ -14,6 +14,8 @@ export interface DesignValue {
   kModSource: string;
   /** The catalogue ids k_mod rests on. */
   kModSources: string[];
+  /** The material factor this value was found with (the combination's). */
+  gammaM: number;
   /** MPa. */
   value: number;
   line: string;
@@ -52,7 +54,7 @@ export function timberStrength(data: RulesData, part: TimberPart, property: Timb
     design(d, gammaM) {
       const k = kMod(data, d);
       const value = (ch.fk * sel.value * k.value) / gammaM;
-      return { duration: d, kMod: k.value, kModSource: k.source, kModSources: k.sources, value, line: `f_d = f_k·k_select·k_mod/γ_M = ${f(ch.fk)} × ${sel.value} × ${k.value} / ${gammaM} = ${f(value)} MPa` };
+      return { duration: d, kMod: k.value, kModSource: k.source, kModSources: k.sources, gammaM, value, line: `f_d = f_k·k_select·k_mod/γ_M = ${f(ch.fk)} × ${sel.value} × ${k.value} / ${gammaM} = ${f(value)} MPa` };
     },
   };
 }

@@ -5,8 +5,7 @@ import { num, step } from '../../pipeline/step.ts';
 
 const SYMBOL: Record<TimberProperty, string> = { bending: 'f_m', compression: 'f_c,0', shear: 'f_v', stiffness: 'E' };
 
-/** The design strength of one case as a step: f_d = f_k·k_select·k_mod/γ_M. */
-export function strengthStep(s: TimberStrength, d: DesignValue): WorkingStep {
-  const f = SYMBOL[s.characteristic.property];
-  return step(`${f},d = ${f},k·k_select·k_mod/γ_M`, `${num(s.characteristic.fk)} × ${num(s.kSelect)} × ${num(d.kMod)} / ${num(s.gammaM)}`, d.value, 'MPa');
+/** The design strength of one case as a step: f_d = f_k·k_select·k_mod/γ_M; `f` names it where the property's own symbol does not (across the grain, f_c,90). */
+export function strengthStep(s: TimberStrength, d: DesignValue, f: string = SYMBOL[s.characteristic.property]): WorkingStep {
+  return step(`${f},d = ${f},k·k_select·k_mod/γ_M`, `${num(s.characteristic.fk)} × ${num(s.kSelect)} × ${num(d.kMod)} / ${num(d.gammaM)}`, d.value, 'MPa');
 }
