@@ -14,6 +14,7 @@ import { floorSag } from './floor/sag.ts';
 import { floorStiffness } from './floor/stiffness.ts';
 import { strapTension } from './floor/strap-tension.ts';
 import { felloeJoint } from './wheel/felloe-joint.ts';
+import { nave } from './wheel/nave.ts';
 import { spokeTenon } from './wheel/spoke-tenon.ts';
 import { axleMember } from './member/axle.ts';
 import { felloeMember } from './member/felloe.ts';
@@ -49,6 +50,7 @@ export const RULES: readonly Rule[] = [
   floorStiffness,
   strapTension,
   felloeJoint,
+  nave,
   spokeTenon,
   axleMember,
   felloeMember,

@@ -54,3 +54,8 @@ export function timberPart(spec: CheckedSpecification, key: TimberPartKey): Timb
     grainSlopeDeg: p.grain_slope_deg,
   };
 }
+
+/** The nave as a part of its own: its species, the stock grade, straight grain (the specification gives the nave neither). */
+export function navePart(spec: CheckedSpecification): TimberPart {
+  return { label: 'nave', species: spec.wheels.nave.species, grade: spec.stock.grade, gradeFrom: 'stock.grade', grainSlopeDeg: 0 };
+}

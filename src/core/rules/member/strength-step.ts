@@ -5,9 +5,8 @@ import { num, step } from '../../pipeline/step.ts';
 
 const SYMBOL: Record<TimberProperty, string> = { bending: 'f_m', compression: 'f_c,0', shear: 'f_v', stiffness: 'E' };
 
-/** The design strength of one case as a step: f_d = f_k·k_select·k_mod/γ_M. */
-export function strengthStep(s: TimberStrength, d: DesignValue): WorkingStep {
-  const f = symbolOf(s);
+/** The design strength of one case as a step: f_d = f_k·k_select·k_mod/γ_M; `f` names it where the property's own symbol does not. */
+export function strengthStep(s: TimberStrength, d: DesignValue, f: string = symbolOf(s)): WorkingStep {
   return step(`${f},d = ${f},k·k_select·k_mod/γ_M`, `${num(s.characteristic.fk)} × ${num(s.kSelect)} × ${num(d.kMod)} / ${num(d.gammaM)}`, d.value, 'MPa');
 }
 

@@ -1,7 +1,7 @@
 import { scanWheelRing, type LoadPosition } from '../../model/wheel/wheel-ring-scan.ts';
 import { wheelRingSpec } from '../../model/wheel/wheel-ring-spec.ts';
 import { timberStrength } from '../../model/timber/design-strength.ts';
-import { timberPart, type TimberPart } from '../../model/timber/timber-part.ts';
+import { navePart, timberPart } from '../../model/timber/timber-part.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
 import { strengthCheck, stressReport, type CaseCheck } from '../member/member-finding.ts';
@@ -47,8 +47,7 @@ export const spokeTenon = defineRule({
     const across = Math.max(b, t);
     const Ab = (along + ext.value) * across - At;
     const spoke = timberPart(spec, 'spoke');
-    // The nave as a part of its own: its species, the stock grade, straight grain.
-    const nave: TimberPart = { label: 'nave', species: w.nave.species, grade: spec.stock.grade, gradeFrom: 'stock.grade', grainSlopeDeg: 0 };
+    const nave = navePart(spec);
     const crush = timberStrength(data, spoke, 'compression', M);
     const naveAcross = timberStrength(data, nave, 'compression', M, 90);
     const felloeAcross = timberStrength(data, timberPart(spec, 'felloe'), 'compression', M, 90);
