@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { girthLengthMass, horseMass } from '../src/core/model/horse-mass.ts';
+import schema from '../src/core/spec/spec.schema.json' with { type: 'json' };
+import { girthLengthMass, HORSE_TYPES, horseMass } from '../src/core/model/horse-mass.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { pathText } from '../src/core/spec/input-issue.ts';
 import { prepared, readDemo, rulesData, withParams } from './support/fixtures.ts';
@@ -44,6 +45,10 @@ describe('the horse mass from a preset', () => {
     expect(h.low_kg).toBeCloseTo(258.5, 2);
     expect(h.high_kg).toBeCloseTo(323.12, 2);
     expect(h.mass_kg).toBe(h.low_kg);
+  });
+
+  it('offers in the schema exactly the types the model reads presets for', () => {
+    expect(schema.properties.team.properties.horse.properties.type.enum).toEqual([...HORSE_TYPES]);
   });
 
   it('a weighed mass is used as given', () => {
