@@ -1,8 +1,8 @@
 // Bundles the command line (cli/main.ts) into a directory as JavaScript
 // modules: the entry axletree.mjs and a chunk per command, loaded when the
 // command runs. Used by scripts/build.ts (dist/) and by the test of the bundle.
-import { readFileSync, rmSync } from 'node:fs';
-import { relative } from 'node:path';
+import { readFileSync, realpathSync, rmSync } from 'node:fs';
+import { basename, dirname, join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Plugin } from 'esbuild';
 
@@ -59,7 +59,9 @@ export async function bundle(outdir: string): Promise<Bundle | undefined> {
     external: EXTERNAL,
     // Bundled CommonJS packages call require(); an ES module has none of its own.
     banner: { js: "import { createRequire as __axletreeRequire } from 'node:module'; const require = __axletreeRequire(import.meta.url);" },
-    plugins: [ownUrl(outdir)],
+    // Node runs the bundle from its real path: where outdir is reached through a
+    // symbolic link (a linked node_modules), the sources are found from there.
+    plugins: [ownUrl(join(realpathSync(dirname(outdir)), basename(outdir)))],
     metafile: true,
     logLevel: 'warning',
   });

@@ -127,6 +127,17 @@ const CASES: Case[] = [
     issues: [{ path: 'pole.yoke_x_mm', at: ['yoke_x_mm: "40 m"', '"40 m"'], says: ['40000', 'out of range', 'at most 8000 mm'] }],
   },
   {
+    // The horse's mass must come one way: here none (shown where the team's mapping starts).
+    name: 'no horse mass given',
+    text: edited(['  horse_mass_kg: 430\n', '']),
+    issues: [{ path: 'team', at: ['team:\n  horses: 2', 'horses'], says: ['gives no horse mass', 'horse.girth_cm with horse.body_length_cm', 'horse.type with horse.height_m'] }],
+  },
+  {
+    name: 'the horse mass given two ways',
+    text: edited(['  horse_mass_kg: 430\n', '  horse_mass_kg: 430\n  horse: { type: riding, height_m: 1.6 }\n']),
+    issues: [{ path: 'team.horse_mass_kg', at: ['horse_mass_kg: 430', '430'], says: ['more than one way', 'horse_mass_kg; horse.type with horse.height_m', 'give exactly one'] }],
+  },
+  {
     name: 'the same crew role twice',
     text: edited(['role: companion', 'role: driver   ']),
     issues: [{ path: 'crew[1].role', at: ['role: driver   ', 'driver'], says: ['"driver"', 'more than once', 'must be unique'] }],

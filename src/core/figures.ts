@@ -8,7 +8,7 @@ import { floorFigures } from './model/cable-net/floor-figures.ts';
 import { rideFigures } from './ride/ride-figures.ts';
 
 /** The models the named figures read. */
-export type FiguresView = ModelView<'mass' | 'loadCases' | 'staticCase' | 'turn' | 'floorStatic' | 'floorBump' | 'floorStone' | 'ride' | 'bumpFactors' | 'stoneFactors' | 'cutting'>;
+export type FiguresView = ModelView<'mass' | 'loadCases' | 'staticCase' | 'turn' | 'floorStatic' | 'floorBump' | 'floorStone' | 'ride' | 'bumpFactors' | 'stoneFactors' | 'cutting' | 'draught'>;
 
 /** The named figures of a check, or why one does not apply; later families add theirs here. */
 export function figures(a: FiguresView): Record<string, FigureEntry> {
@@ -28,6 +28,9 @@ export function figures(a: FiguresView): Record<string, FigureEntry> {
     axle_load: { value: stat.axle_load_N, unit: 'N' },
     yoke_mass: { value: a.mass.yoke.mass_kg, unit: 'kg' },
     total_weight: { value: total.mass_kg * G, unit: 'N' },
+    // The pull up the design grade, and the pull the team keeps up (draught.pull's advisory level).
+    draught_pull_design: { value: a.draught.pull_N, unit: 'N' },
+    draught_pull_capacity: { value: a.draught.sustained_N, unit: 'N' },
     ...turnFigures(a),
     ...memberFigures(a),
     ...floorFigures(a),

@@ -13,7 +13,7 @@ const rigid = dataWithGround('hand-rigid', 0);
 
 describe('load on each horse over crew position', () => {
   const spec = prepared(handSpec(), rigid);
-  const plot = yokeLoadPlot(spec, rigid)!;
+  const plot = yokeLoadPlot(spec, rigid, 400)!;
   const line = (label: RegExp) => plot.lines.find((l) => label.test(l.label))!;
   const rule = (label: RegExp) => plot.rules.find((r) => label.test(r.label))!;
 
@@ -56,11 +56,11 @@ describe('load on each horse over crew position', () => {
   it('puts the crew centre at the mass-weighted mean of two crew members', () => {
     const s = handSpec();
     s.crew = [{ role: 'driver', mass_kg: 80, x_mm: 200, y_mm: 0 }, { role: 'archer', mass_kg: 60, x_mm: 340, y_mm: 0 }];
-    const two = yokeLoadPlot(prepared(s, rigid), rigid)!;
+    const two = yokeLoadPlot(prepared(s, rigid), rigid, 400)!;
     expect(two.rules.find((r) => /crew as placed/.test(r.label))!.value).toBeCloseTo((80 * 200 + 60 * 340) / 140, 9);
   });
 
   it('is left out with no crew on board (the schema asks for one; the core does not rely on it)', () => {
-    expect(yokeLoadPlot({ ...spec, crew: [] }, rigid)).toBeNull();
+    expect(yokeLoadPlot({ ...spec, crew: [] }, rigid, 400)).toBeNull();
   });
 });

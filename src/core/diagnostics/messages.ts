@@ -48,6 +48,10 @@ export const MESSAGES = {
   marginTooWide: { code: 1125, text: 'the usable margin {value} mm leaves no usable floor; allowed: less than {max} mm (half the floor depth and width).' },
   poleRootOutsideBox: { code: 1126, text: 'the pole {key} at {value} mm is not under the box; allowed: {min} to {max} mm.' },
   loadOffVehicle: { code: 1123, text: 'the load "{value}" at x = {x} mm is not on the chariot; allowed: {min} to {max} mm.' },
+  horseMassNone: { code: 1127, text: 'the team gives no horse mass; give one of: horse_mass_kg (the lightest horse weighed), horse.girth_cm with horse.body_length_cm (taped), or horse.type with horse.height_m (a preset band).' },
+  horseMassTwice: { code: 1128, text: 'the horse mass is given more than one way ({ways}); give exactly one, so that no two can disagree.' },
+  horseHalfWay: { code: 1129, text: '{given} is given without {missing}: {way} needs both.' },
+  horseHeightOutside: { code: 1130, text: 'a height of {value} m is outside the {type} preset, which holds from {min} to {max} m; give another type, or horse.girth_cm with horse.body_length_cm, or horse_mass_kg.' },
   // The form of a section (rectangular or round) and of a tyre (115x)
   sectionBothForms: { code: 1150, text: 'both forms of the section are given ({round} and {rect}); give one: {round} alone for a round bar, or {rect} for a rectangular one.' },
   sectionNoForm: { code: 1151, text: 'the section is not given; give {rect} for a rectangular bar, or {round} alone for a round one.' },

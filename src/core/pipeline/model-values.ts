@@ -14,6 +14,8 @@ import type { DampingNeeded } from '../ride/damping-tuner.ts';
 import type { GroundFactors } from '../ride/dynamic-factors.ts';
 import type { RideInput } from '../ride/ride-build.ts';
 import type { RideCase, RideResult } from '../ride/ride-types.ts';
+import type { HorseMass } from '../model/horse-mass.ts';
+import type { Draught } from '../model/draught.ts';
 
 /** One ground's dynamic factors: the crew's for the floor and lashings, the wheels' for the members, the yoke's rise for the pole; provisional where the data's bound stands in. */
 export type BumpFactors = GroundFactors;
@@ -62,6 +64,10 @@ export interface ModelValues {
   scene: BuildScene;
   /** The balance and turn plots as data. */
   plots: PlotData[];
+  /** The lightest horse's mass: as given, by tape, or the low end of a preset band. */
+  horse: HorseMass;
+  /** The pull up the design grade and the team's sustained and short pulls. */
+  draught: Draught;
 }
 
 export type ModelId = keyof ModelValues;

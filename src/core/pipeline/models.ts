@@ -19,6 +19,8 @@ import { figures } from '../figures.ts';
 import { collectLoads } from '../loads/collect-loads.ts';
 import { reportPlots } from '../plots/report-plots.ts';
 import { buildScene } from '../result/scene-of.ts';
+import { HORSE_PARAMS, horseMass } from '../model/horse-mass.ts';
+import { draught } from '../model/draught.ts';
 
 // Every model of a check, with what it reads. The pipeline computes only the
 // models the requested rules and outputs need, each once.
@@ -182,7 +184,7 @@ export const lashingDemandsDef = defineModel({
 
 export const figuresDef = defineModel({
   id: 'figures',
-  needs: ['mass', 'loadCases', 'staticCase', 'turn', 'floorStatic', 'floorBump', 'floorStone', 'ride', 'bumpFactors', 'stoneFactors', 'cutting'],
+  needs: ['mass', 'loadCases', 'staticCase', 'turn', 'floorStatic', 'floorBump', 'floorStone', 'ride', 'bumpFactors', 'stoneFactors', 'cutting', 'draught'],
   params: [...TIMBER_STIFFNESS, ...COMBINATION_PARAMS, 'ride.inputs.decay_fraction', 'ride.inputs.duration_s'], // the pole's Euler load; the turn's limits in equilibrium; the decay figure's reason
   compute: (m, i) => figures(withInputs(m, i)),
 });
@@ -203,13 +205,30 @@ export const sceneDef = defineModel({
 
 export const plotsDef = defineModel({
   id: 'plots',
-  needs: ['turn'],
+  needs: ['turn', 'horse'],
   params: BALANCE, // the horse-load plot solves the balance at each crew position; the turn's limits in equilibrium
   compute: (m, i) => reportPlots(withInputs(m, i)),
+});
+
+/** The lightest horse's mass: as given, by tape, or the low end of a preset band. */
+export const horseDef = defineModel({
+  id: 'horse',
+  needs: [],
+  params: HORSE_PARAMS,
+  compute: (_, { spec, data }) => horseMass(spec, data),
+});
+
+/** The pull up the design grade and the team's pull (draught.pull, the figures). */
+export const draughtDef = defineModel({
+  id: 'draught',
+  needs: ['mass', 'horse'],
+  params: ROLLING_PARAMS,
+  compute: ({ mass, horse }, { spec, data }) => draught(spec, data, mass, horse),
 });
 
 /** Every model, in no particular order: the graph finds the order from their needs. */
 export const MODELS: readonly ModelDef[] = [
   massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, wheelStiffnessDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, cuttingDef, lashingDemandsDef,
   figuresDef, loadsDef, sceneDef, plotsDef,
+  horseDef, draughtDef,
 ];

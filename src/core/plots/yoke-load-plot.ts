@@ -16,7 +16,8 @@ import { limitLevel } from '../data/param.ts';
 /** Crew positions sampled across the usable floor. */
 export const YOKE_LOAD_SAMPLES = 21;
 
-export function yokeLoadPlot(spec: CheckedSpecification, data: RulesData): PlotData | null {
+/** `horseKg`: the mass the horse-load check uses (the horse model's: the low end of a preset band). */
+export function yokeLoadPlot(spec: CheckedSpecification, data: RulesData, horseKg: number): PlotData | null {
   if (spec.crew.length === 0) return null;
   const { back, front } = usableFloor(spec);
   const xs = Array.from({ length: YOKE_LOAD_SAMPLES }, (_, i) => back + ((front - back) * i) / (YOKE_LOAD_SAMPLES - 1));
@@ -27,7 +28,7 @@ export function yokeLoadPlot(spec: CheckedSpecification, data: RulesData): PlotD
     y: models.map((model) => yokeLoads(spec, data, model, m.accel).perHorse_N),
     style: m.accel === 0 ? ('solid' as const) : ('dashed' as const),
   }));
-  const weight = spec.team.horse_mass_kg * G;
+  const weight = horseKg * G;
   const yokeWeight = massModel(spec, data).yoke.mass_kg * G;
   const horses = spec.team.horses;
   const lift = limitLevel(data, yokeLift.id, 'pole_load', 'hard');
@@ -41,8 +42,8 @@ export function yokeLoadPlot(spec: CheckedSpecification, data: RulesData): PlotD
     yLabel: 'load per horse (N)',
     lines,
     rules: [
-      { label: `advisory limit, ${horseLoad.id}`, axis: 'y', value: limitLevel(data, horseLoad.id, 'load_fraction', 'advisory') * weight, kind: 'advisory' },
-      { label: `hard limit, ${horseLoad.id}`, axis: 'y', value: limitLevel(data, horseLoad.id, 'load_fraction', 'hard') * weight, kind: 'hard' },
+      { label: `advisory limit, ${horseLoad.id} (a judgement)`, axis: 'y', value: limitLevel(data, horseLoad.id, 'load_fraction', 'advisory') * weight, kind: 'advisory' },
+      { label: `hard limit, ${horseLoad.id} (an analogy with ridden horses)`, axis: 'y', value: limitLevel(data, horseLoad.id, 'load_fraction', 'hard') * weight, kind: 'hard' },
       { label: `pole lifts the yoke below this, ${yokeLift.id}`, axis: 'y', value: (lift + yokeWeight) / horses, kind: 'threshold' },
       { label: 'axle', axis: 'x', value: spec.axle.x_mm, kind: 'position' },
       { label: 'crew as placed (centre of mass)', axis: 'x', value: crewX, kind: 'position' },

@@ -4,6 +4,7 @@ import type { Rule } from '../pipeline/define-rule.ts';
 import { axlePosition } from './balance/axle-position.ts';
 import { horseLoad } from './balance/horse-load.ts';
 import { yokeLift } from './balance/yoke-lift.ts';
+import { pull } from './draught/pull.ts';
 import { innerWheel } from './turn/inner-wheel.ts';
 import { poleReach } from './turn/pole-reach.ts';
 import { rollover } from './turn/rollover.ts';
@@ -40,6 +41,7 @@ export const RULES: readonly Rule[] = [
   axlePosition,
   horseLoad,
   yokeLift,
+  pull,
   innerWheel,
   poleReach,
   rollover,

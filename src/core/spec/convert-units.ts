@@ -2,7 +2,7 @@ import { parseQuantity } from '../units/parse-quantity.ts';
 import { unitOfKey, type UnitDef } from '../units/units.ts';
 import { issue, type InputIssue, type KeyPath } from './input-issue.ts';
 
-const EXAMPLES: Record<string, string> = { mm: '65 in', m: '40 ft', kg: '180 lb', 'km/h': '12 mph', N: '30 lbf', '%': '12 percent', g: '2 m/s^2', '°': '0.5 rad' };
+const EXAMPLES: Record<string, string> = { mm: '65 in', cm: '70 in', m: '40 ft', kg: '180 lb', 'km/h': '12 mph', N: '30 lbf', '%': '12 percent', g: '2 m/s^2', '°': '0.5 rad' };
 
 /**
  * Convert unit strings in place to numbers in the unit of their key, and

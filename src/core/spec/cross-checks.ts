@@ -4,6 +4,7 @@ import { frameBar } from '../model/spec-sections.ts';
 import type { CheckedSpecification } from './spec.types.ts';
 import { formIssues } from './form-checks.ts';
 import { formIssue } from './form-messages.ts';
+import { horseIssues } from './horse-checks.ts';
 import { issue, type InputIssue, type KeyPath } from './input-issue.ts';
 
 // Checks across fields that a JSON Schema cannot express. They run on a spec
@@ -13,6 +14,7 @@ export function crossChecks(spec: CheckedSpecification, data: RulesData): InputI
   const out: InputIssue[] = [];
   knownNames(spec, data, out);
   out.push(...formIssues(spec));
+  out.push(...horseIssues(spec, data));
   if (out.length) return out; // geometry below needs the materials to exist and the sections in one form
   geometry(spec, out);
   uniqueness(spec, out);

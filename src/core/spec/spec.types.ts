@@ -435,12 +435,36 @@ export interface BuildSpecification {
     y_mm?: number | string;
     z_mm: Position;
   }[];
+  /**
+   * The horses. Give the lightest horse's mass one way, exactly: horse_mass_kg (weighed), or horse.girth_cm with horse.body_length_cm (a tape), or horse.type with horse.height_m (a preset band from rules/parameters/horses.yaml, whose low end the checks use).
+   */
   team: {
     horses: number;
     /**
-     * Mass of the lightest horse in the team.
+     * Mass of the lightest horse in the team, weighed. Give this, or team.horse's girth and length, or its type and height.
      */
-    horse_mass_kg: number | string;
+    horse_mass_kg?: number | string;
+    /**
+     * The lightest horse measured, where it was not weighed: girth_cm with body_length_cm (mass by Carroll and Huntington's tape formula), or type with height_m (a preset band; the checks use its low end).
+     */
+    horse?: {
+      /**
+       * The horse's build, for a preset mass band: pony, cob, riding (a light riding horse) or draught (a heavy draught horse). Give height_m with it.
+       */
+      type?: 'pony' | 'cob' | 'riding' | 'draught';
+      /**
+       * Height at the withers (one hand is 0.1016 m: 11 hands is 1.12 m). Give type with it.
+       */
+      height_m?: number | string;
+      /**
+       * Girth round the barrel just behind the withers and elbows, the tape snug. Give body_length_cm with it.
+       */
+      girth_cm?: number | string;
+      /**
+       * Body length from the point of the shoulder to the point of the buttock. Give girth_cm with it.
+       */
+      body_length_cm?: number | string;
+    };
   };
   operation: {
     /**
@@ -484,6 +508,10 @@ export interface BuildSpecification {
      * Height the ride model's drop test releases the chariot from, every point above its standing position. Default 500 (from memory).
      */
     drop_height_mm?: number | string;
+    /**
+     * The steepest sustained grade the build is driven up, in per cent (rise over distance × 100): the draught check's design grade. Default: draught.pull's default_grade_pct in rules/limits/draught.yaml.
+     */
+    grade_pct?: number | string;
     /**
      * Ground type from rules/grounds.yaml; sets rolling resistance and friction. Default turf.
      */
@@ -1003,12 +1031,36 @@ export interface CheckedSpecification {
     y_mm: number;
     z_mm: CheckedPosition;
   }[];
+  /**
+   * The horses. Give the lightest horse's mass one way, exactly: horse_mass_kg (weighed), or horse.girth_cm with horse.body_length_cm (a tape), or horse.type with horse.height_m (a preset band from rules/parameters/horses.yaml, whose low end the checks use).
+   */
   team: {
     horses: number;
     /**
-     * Mass of the lightest horse in the team.
+     * Mass of the lightest horse in the team, weighed. Give this, or team.horse's girth and length, or its type and height.
      */
-    horse_mass_kg: number;
+    horse_mass_kg?: number;
+    /**
+     * The lightest horse measured, where it was not weighed: girth_cm with body_length_cm (mass by Carroll and Huntington's tape formula), or type with height_m (a preset band; the checks use its low end).
+     */
+    horse?: {
+      /**
+       * The horse's build, for a preset mass band: pony, cob, riding (a light riding horse) or draught (a heavy draught horse). Give height_m with it.
+       */
+      type?: 'pony' | 'cob' | 'riding' | 'draught';
+      /**
+       * Height at the withers (one hand is 0.1016 m: 11 hands is 1.12 m). Give type with it.
+       */
+      height_m?: number;
+      /**
+       * Girth round the barrel just behind the withers and elbows, the tape snug. Give body_length_cm with it.
+       */
+      girth_cm?: number;
+      /**
+       * Body length from the point of the shoulder to the point of the buttock. Give girth_cm with it.
+       */
+      body_length_cm?: number;
+    };
   };
   operation: {
     /**
@@ -1052,6 +1104,10 @@ export interface CheckedSpecification {
      * Height the ride model's drop test releases the chariot from, every point above its standing position. Default 500 (from memory).
      */
     drop_height_mm: number;
+    /**
+     * The steepest sustained grade the build is driven up, in per cent (rise over distance × 100): the draught check's design grade. Default: draught.pull's default_grade_pct in rules/limits/draught.yaml.
+     */
+    grade_pct?: number;
     /**
      * Ground type from rules/grounds.yaml; sets rolling resistance and friction. Default turf.
      */

@@ -15,6 +15,8 @@ export interface UnitDef {
 export const UNITS = {
   mm: { suffix: '_mm', symbol: 'mm', qty: 'mm', si: 1e-3, siSymbol: 'm' },
   m: { suffix: '_m', symbol: 'm', qty: 'm', si: 1, siSymbol: 'm' },
+  // A horse's girth and length are taped in centimetres.
+  cm: { suffix: '_cm', symbol: 'cm', qty: 'cm', si: 1e-2, siSymbol: 'm' },
   kg: { suffix: '_kg', symbol: 'kg', qty: 'kg', si: 1, siSymbol: 'kg' },
   deg: { suffix: '_deg', symbol: '°', qty: 'degree', si: Math.PI / 180, siSymbol: 'rad' },
   kmh: { suffix: '_kmh', symbol: 'km/h', qty: 'km/h', si: 1 / 3.6, siSymbol: 'm/s' },
