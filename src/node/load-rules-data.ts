@@ -2,10 +2,10 @@
 // model parameters) from YAML files under rules/, checks it against the
 // schema and the source catalogue, and hands the core one object.
 import { existsSync, readFileSync, readdirSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { dirname, join, relative, sep } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { LineCounter, isMap, isScalar, isSeq, parseDocument, type Document } from 'yaml';
-import type { RulesData } from '../core/data/rules-data.ts';
+import type { RulesData, RulesDataFiles } from '../core/data/rules-data.ts';
 import { RulesDataError, type RulesDataProblem } from '../core/data/rules-data-error.ts';
 import { schemaProblems } from '../core/data/validate-rules-data.ts';
 import { citedSources, normaliseSources } from '../core/data/normalise-sources.ts';
@@ -81,7 +81,14 @@ export function loadRulesData(dir: string): RulesData {
     else problems.push({ file: join(dir, p.table === 'params' ? 'parameters' : 'limits'), line: null, keyPath: `${p.group}.${p.name}`, message: p.message });
   }
   if (problems.length > 0) throw new RulesDataError(problems);
-  return data as RulesData;
+  // Where each table and group came from, so an output can name the file a value lives in.
+  const rel = (file: string) => relative(dirname(dir), file).split(sep).join('/');
+  const files: RulesDataFiles = {
+    tables: Object.fromEntries((['species', 'leathers', 'grounds'] as const).map((k) => [k, rel(join(dir, ...TABLE_FILES[k]))])),
+    limits: Object.fromEntries([...limits.origin].map(([g, f]) => [g, rel(f.file)])),
+    params: Object.fromEntries([...params.origin].map(([g, f]) => [g, rel(f.file)])),
+  };
+  return { ...(data as RulesData), files };
 }
 
 /**

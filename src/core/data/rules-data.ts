@@ -86,8 +86,17 @@ export interface Ground {
   rough_ground?: { height_mm: Sourced; length_mm: Sourced };
 }
 
+/** The file each table and group of the data was read from, relative to the folder above rules/ (`rules/limits/floor.yaml`). */
+export interface RulesDataFiles {
+  tables: Record<string, string>;
+  limits: Record<string, string>;
+  params: Record<string, string>;
+}
+
 export interface RulesData {
   sources: Record<string, SourceEntry>;
+  /** Where each part was read from; absent in data built in memory (tests). */
+  files?: RulesDataFiles;
   species: Record<string, Species>;
   leathers: Record<string, Leather>;
   grounds: Record<string, Ground>;

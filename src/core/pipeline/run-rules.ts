@@ -6,6 +6,7 @@ import { renderTemplate } from '../format/template.ts';
 import { CORE_MESSAGES } from '../diagnostics/core-messages.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import type { Rule } from './define-rule.ts';
+import type { ReadTracer } from './read-tracer.ts';
 import { ruleContext } from './rule-context.ts';
 
 /** A rule that threw: an error finding with its id and the fault, so the other rules still run. */
@@ -36,16 +37,25 @@ export function errorFinding(rule: Rule, e: unknown): Finding {
 }
 
 /** Every rule's findings, in rule order; a rule that throws gives an error finding instead. */
-export function runRules(rules: readonly Rule[], spec: CheckedSpecification, data: RulesData, graph: ModelGraph | { graph: ModelGraph } = new ModelGraph(MODELS, { spec, data, ride: true })): Finding[] {
+export function runRules(
+  rules: readonly Rule[],
+  spec: CheckedSpecification,
+  data: RulesData,
+  graph: ModelGraph | { graph: ModelGraph } = new ModelGraph(MODELS, { spec, data, ride: true }),
+  tracer?: ReadTracer,
+): Finding[] {
   const models = graph instanceof ModelGraph ? graph : graph.graph;
   const out: Finding[] = [];
   for (const rule of rules) {
     const mine: Finding[] = [];
+    tracer?.enter(`rule:${rule.id}`);
     try {
       rule.run(ruleContext(rule, spec, data, models, mine));
       out.push(...mine);
     } catch (e) {
       out.push(errorFinding(rule, e));
+    } finally {
+      tracer?.leave();
     }
   }
   return out;
