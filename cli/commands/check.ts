@@ -14,6 +14,8 @@ import { loadData } from '../load-data.ts';
 export interface CheckOptions {
   out?: string;
   json: boolean;
+  /** Search for the decisive inputs and their break-even values. */
+  decisive: boolean;
 }
 
 export async function checkCommand(file: string, opts: CheckOptions, con: Console): Promise<number> {
@@ -31,7 +33,7 @@ export async function checkCommand(file: string, opts: CheckOptions, con: Consol
     return EXIT.badInput;
   }
   // The solver is loaded only once the spec is known to be good.
-  const result = runCheck(prepared.spec, prepared.entries, data, { lp: await loadLpSolver() });
+  const result = runCheck(prepared.spec, prepared.entries, data, { lp: await loadLpSolver(), decisive: opts.decisive });
   result.input = read.raw;
   const dir = resolve(con.cwd, opts.out ?? join('axletree-out', basename(file, extname(file))));
   let written: string[];

@@ -7,6 +7,7 @@ export const check = command({
   options: {
     out: { type: 'string', value: 'DIR', help: 'write the outputs into DIR (default axletree-out/<spec name>/)' },
     json: { type: 'boolean', default: false, help: 'print result.json on standard output; the summary goes to standard error' },
+    'no-decisive': { type: 'boolean', default: false, help: 'skip the search for the inputs each decisive finding hangs on and their break-even values (it re-runs parts of the check many times)' },
   },
   about: `writes: a workbook (result.xlsx), a report (report.md and report.html, with
 plots and drawings) and result.json; nothing when the specification is
@@ -15,6 +16,6 @@ refused. The specification file is never written to.`,
   findings: 'the verdict is FAIL (a finding is beyond a hard limit, or the check could not show a part is safe); a verdict of ERROR exits 3',
   async run({ positionals: [file], values }, con) {
     const { checkCommand } = await import('../commands/check.ts');
-    return checkCommand(file, values, con);
+    return checkCommand(file, { out: values.out, json: values.json, decisive: !values['no-decisive'] }, con);
   },
 });

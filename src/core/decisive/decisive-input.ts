@@ -25,6 +25,8 @@ export interface DecisiveSearch {
   findings: number;
   candidates: number;
   reruns: number;
+  /** The work done, in re-runs that do not reach the ride model (one that does counts ten). */
+  work: number;
   work_limit: number;
   /** Pairs of finding and input left unsearched when the work limit was reached. */
   unsearched: number;

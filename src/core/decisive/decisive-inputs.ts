@@ -19,10 +19,17 @@ import { decisiveFindings } from './select-findings.ts';
 
 /** The inputs listed per finding: those that move its utilisation most at plus and minus a tenth. */
 export const KEEP_PER_FINDING = 5;
-/** The screening step: each candidate is tried a tenth up and a tenth down. */
+/** The screening step: each candidate is tried a tenth up (or down, at the top of its range). */
 export const SCREEN = 0.1;
-/** Re-runs of the affected part of the check the whole search may make (a work limit, not a clock: the answer does not depend on the machine). */
-export const WORK_LIMIT = 400;
+/**
+ * The work the whole search may do, in units of one re-run that does not
+ * reach the ride model (one that does counts RIDE_WEIGHT): a work limit, not
+ * a clock, so the answer does not depend on the machine or its load.
+ */
+export const WORK_LIMIT = 1000;
+export const RIDE_WEIGHT = 10;
+/** A re-run that reaches the floor-damping tuner (many ride runs) counts this much. */
+export const TUNER_WEIGHT = 40;
 
 export interface DecisiveArgs {
   spec: CheckedSpecification;
@@ -65,7 +72,8 @@ export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; sear
       }
 
   let reruns = 0;
-  const memo = new Map<string, Map<string, Outcome & { utilisation: number | null }> | null>();
+  let work = 0;
+  const memo = new Map<string, Map<string, Finding> | null>();
   const staleOf = new Map<InputKey, Set<string>>();
   /** Every chosen finding that reads the input, re-checked with the input at v; null where the input would be refused. */
   const trial = (key: InputKey, v: number) => {
@@ -73,62 +81,94 @@ export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; sear
     if (memo.has(id)) return memo.get(id)!;
     reruns++;
     const changed = withInput(key, v, a.spec, a.data);
-    let out: Map<string, Outcome & { utilisation: number | null }> | null = null;
+    let out: Map<string, Finding> | null = null;
     if (!key.startsWith('spec:') || crossChecks(changed.spec, changed.data).length === 0) {
       if (!staleOf.has(key)) staleOf.set(key, tracer.staleModels(new Set([key])));
       const stale = staleOf.get(key)!;
+      work += stale.has('floorDampingNeeded') ? TUNER_WEIGHT : stale.has('ride') ? RIDE_WEIGHT : 1;
       const seed = new Map([...a.computed].filter(([m]) => !stale.has(m)));
       const graph = new ModelGraph(MODELS, { ...a.inputs, ...changed }, { seed });
       const readers = rules.filter((r) => readsOf.get(r.id)!.has(key));
-      out = new Map(runRules(readers, changed.spec, changed.data, graph).map((f) => [findingKey(f), { severity: f.severity, utilisation: f.utilisation }]));
+      out = new Map(runRules(readers, changed.spec, changed.data, graph).map((f) => [findingKey(f), f]));
     }
     memo.set(id, out);
     return out;
   };
   const outcome = (f: Finding, key: InputKey, v: number): (Outcome & { utilisation: number | null }) | null => {
     const o = trial(key, v)?.get(findingKey(f));
-    return o && o.severity !== 'error' ? o : null;
+    return o && o.severity !== 'error' ? { severity: o.severity, utilisation: o.utilisation, gap: gapOf(o, guideOf(f)) } : null;
   };
 
-  const inputs: DecisiveInput[] = [];
-  let unsearched = 0;
-  for (const f of chosen) {
-    // Screen: how much a tenth either way moves this finding.
+  // 1. Screen: each input once, a tenth up (down at the top of its range); one trial serves every finding that reads it.
+  //    Inputs more findings read go first; half the work limit is kept for the searches.
+  const STATUS_ORDER = { 'from-memory': 0, defaulted: 1, given: 2 } as const;
+  const readers = (k: InputKey) => chosen.filter((f) => readsOf.get(f.rule)!.has(k)).length;
+  const keys = [...infos.keys()].sort((x, y) => readers(y) - readers(x) || STATUS_ORDER[infos.get(x)!.status] - STATUS_ORDER[infos.get(y)!.status] || x.localeCompare(y));
+  const screenAt = new Map<InputKey, number>();
+  for (const k of keys) {
+    const info = infos.get(k)!;
+    const range = inputRange(info);
+    if (!range || work >= workLimit / 2) continue;
+    const up = Math.min(range.high, info.value * (1 + SCREEN));
+    const v0 = up !== info.value ? up : Math.max(range.low, info.value * (1 - SCREEN));
+    const v = range.integer ? Math.round(v0) : v0;
+    trial(k, v);
+    screenAt.set(k, v);
+  }
+  let unsearched = chosen.reduce((n, f) => n + [...readsOf.get(f.rule)!].filter((k) => infos.has(k) && inputRange(infos.get(k)!) && !screenAt.has(k)).length, 0);
+
+  // 2. Per finding, the inputs that moved it most; those that change its severity within a tenth are searched first.
+  const pairs: { f: Finding; info: InputInfo; score: number; order: number }[] = [];
+  chosen.forEach((f, order) => {
     const scored: { info: InputInfo; score: number }[] = [];
     for (const k of readsOf.get(f.rule)!) {
-      const info = infos.get(k);
-      const range = info && inputRange(info);
-      if (!info || !range) continue;
-      if (reruns >= workLimit) {
-        unsearched++;
-        continue;
-      }
+      const at = screenAt.get(k);
+      if (at === undefined) continue;
+      const o = outcome(f, k, at);
       let score = 0;
-      for (const s of [1 + SCREEN, 1 - SCREEN]) {
-        const v = Math.min(range.high, Math.max(range.low, info.value * s));
-        const o = outcome(f, k, range.integer ? Math.round(v) : v);
-        if (!o) continue;
-        if (o.severity !== f.severity) score = Math.max(score, Infinity);
-        else if (o.utilisation !== null && f.utilisation !== null) score = Math.max(score, Math.abs(o.utilisation - f.utilisation));
-      }
-      if (score > 0) scored.push({ info, score });
+      if (o && o.severity !== f.severity) score = Infinity;
+      else if (o && o.utilisation !== null && f.utilisation !== null) score = Math.abs(o.utilisation - f.utilisation);
+      if (score > 0) scored.push({ info: infos.get(k)!, score });
     }
     scored.sort((x, y) => y.score - x.score || x.info.input.localeCompare(y.info.input));
-    for (const { info } of scored.slice(0, KEEP_PER_FINDING)) {
-      const range = inputRange(info)!;
-      const base = { rule: f.rule, subject: f.subject, severity: f.severity, input: info.input, origin: info.origin, value: info.value, unit: info.unit, status: info.status };
-      if (reruns >= workLimit) {
-        unsearched++;
-        inputs.push({ ...base, break_even: null, to_severity: null, change: null, reason: `not searched: the work limit of ${workLimit} re-runs was reached` });
-        continue;
-      }
-      const be = breakEven(info.value, f.severity, range, (v) => outcome(f, info.key, v), range.text);
-      inputs.push(
-        be.break_even === null
-          ? { ...base, break_even: null, to_severity: null, change: null, reason: be.reason }
-          : { ...base, break_even: be.break_even, to_severity: be.to_severity, change: be.break_even / info.value - 1 },
-      );
+    for (const x of scored.slice(0, KEEP_PER_FINDING)) pairs.push({ f, ...x, order });
+  });
+  pairs.sort((x, y) => Number(y.score === Infinity) - Number(x.score === Infinity) || x.order - y.order || y.score - x.score);
+
+  // 3. Search each pair for its break-even value while the work limit allows.
+  const found = pairs.map(({ f, info, order }) => {
+    const range = inputRange(info)!;
+    const base = { rule: f.rule, subject: f.subject, severity: f.severity, input: info.input, origin: info.origin, value: info.value, unit: info.unit, status: info.status };
+    if (work >= workLimit) {
+      unsearched++;
+      return { order, d: { ...base, break_even: null, to_severity: null, change: null, reason: 'not searched: the work limit of the search was reached' } };
     }
-  }
-  return { inputs, search: { findings: chosen.length, candidates: infos.size, reruns, work_limit: workLimit, unsearched } };
+    const be = breakEven(info.value, { severity: f.severity, gap: gapOf(f, guideOf(f)) }, range, (v) => outcome(f, info.key, v), range.text);
+    const d: DecisiveInput =
+      be.break_even === null
+        ? { ...base, break_even: null, to_severity: null, change: null, reason: be.reason }
+        : { ...base, break_even: be.break_even, to_severity: be.to_severity, change: be.break_even / info.value - 1 };
+    return { order, d };
+  });
+  // Findings in their order; within one, the inputs that need the smallest move first.
+  const reach = (d: DecisiveInput) => (d.change === null ? Infinity : Math.abs(d.change));
+  const inputs = found.sort((x, y) => x.order - y.order || reach(x.d) - reach(y.d)).map((x) => x.d);
+  return { inputs, search: { findings: chosen.length, candidates: infos.size, reruns, work, work_limit: workLimit, unsearched } };
+}
+
+type Level = 'advisory' | 'hard';
+
+/** The level a finding's value is nearest to, in proportion: the one its severity would turn at first. */
+function guideOf(f: Finding): Level | null {
+  const x = f.value;
+  if (x === null) return null;
+  const levels = (['advisory', 'hard'] as const).filter((l) => typeof f.params[l] === 'number' && f.params[l] !== 0);
+  if (!levels.length) return null;
+  return levels.reduce((best, l) => (Math.abs(x / (f.params[l] as number) - 1) < Math.abs(x / (f.params[best] as number) - 1) ? l : best));
+}
+
+/** The finding's value over the guiding level, less one. */
+function gapOf(f: Finding, level: Level | null): number | null {
+  const L = level === null ? undefined : f.params[level];
+  return f.value === null || typeof L !== 'number' || L === 0 ? null : f.value / L - 1;
 }

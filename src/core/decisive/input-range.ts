@@ -17,7 +17,7 @@ function resolve(node: Node): Node {
 }
 
 function schemaAt(path: (string | number)[]): Node | undefined {
-  let node: Node | undefined = resolve(schema as unknown as Node);
+  let node: Node | undefined = resolve(schema);
   for (const s of path) {
     if (!node) return undefined;
     const next: unknown = typeof s === 'number' ? node.items : (node.properties as Record<string, unknown> | undefined)?.[s];

@@ -17,6 +17,8 @@ import type { Rule } from './define-rule.ts';
 import { ModelGraph } from './model-graph.ts';
 import { MODELS } from './models.ts';
 import { runRules } from './run-rules.ts';
+import { decisiveInputs } from '../decisive/decisive-inputs.ts';
+import type { DecisiveInput, DecisiveSearch } from '../decisive/decisive-input.ts';
 
 export interface RunOptions {
   /** The rules to run (all by default). */
@@ -25,6 +27,8 @@ export interface RunOptions {
   lp?: LpSolver;
   /** False for a statics-only run: the ride model is not started. */
   ride?: boolean;
+  /** True to find the inputs each decisive finding hangs on and their break-even values (many partial re-runs). */
+  decisive?: boolean;
 }
 
 /**
@@ -33,8 +37,10 @@ export interface RunOptions {
  * Each model is computed once, when a rule or an output first needs it.
  */
 export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data: RulesData, options: RunOptions = {}): CheckResult {
-  const graph = new ModelGraph(MODELS, { spec, data, lp: options.lp, ride: options.ride ?? true });
-  const findings = runRules(options.rules ?? RULES, spec, data, graph);
+  const inputs = { lp: options.lp, ride: options.ride ?? true };
+  const graph = new ModelGraph(MODELS, { spec, data, ...inputs });
+  const rules = options.rules ?? RULES;
+  const findings = runRules(rules, spec, data, graph);
   // Worst first, keeping rule order within a severity.
   const ordered = findings.map((f, i) => ({ f, i })).sort((a, b) => severityRank(b.f.severity) - severityRank(a.f.severity) || a.i - b.i).map((x) => x.f);
   // The floor-damping tuner runs only where a ride rule asked for it (the motion decays too slowly).
@@ -53,6 +59,7 @@ export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data:
     severity_meanings: { ...SEVERITY_MEANING },
     ...splitFigures({ ...graph.get('figures'), floor_damping_ratio_needed: dampingFigure(damping) }),
     findings: ordered,
+    ...(options.decisive ? decisiveSection(decisiveInputs({ spec, entries, data, rules, findings: ordered, computed: graph.values(), inputs })) : {}),
     mass: { parts: mass.parts, rolling_mass_kg: mass.rolling.mass_kg, yoke_mass_kg: mass.yoke.mass_kg, total_mass_kg: mass.total.mass_kg },
     balance: { cases: graph.get('loadCases') },
     loads: graph.get('loads'),
@@ -65,4 +72,8 @@ export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data:
     sources: usedSources(spec, data, findings),
     cautions: [...CAUTIONS],
   };
+}
+
+function decisiveSection(d: { inputs: DecisiveInput[]; search: DecisiveSearch }): { decisive_inputs: DecisiveInput[]; decisive_search: DecisiveSearch } {
+  return { decisive_inputs: d.inputs, decisive_search: d.search };
 }

@@ -10,6 +10,7 @@ import type { CuttingResult } from '../cutlist/cutting-result.ts';
 import type { RideSummary } from './ride-summary.ts';
 import type { BuildScene } from './build-scene.ts';
 import type { PlotData } from '../plots/plot-data.ts';
+import type { DecisiveInput, DecisiveSearch } from '../decisive/decisive-input.ts';
 
 export interface CheckResult {
   tool: { name: string; version: string };
@@ -24,6 +25,10 @@ export interface CheckResult {
   /** The figures that do not apply to this build or run, each with the reason, in words. */
   figures_not_applicable: Record<string, string>;
   findings: Finding[];
+  /** The guesses and remembered data values each decisive finding hangs on, with break-even values; absent where the search was not asked for. */
+  decisive_inputs?: DecisiveInput[];
+  /** What the search for decisive inputs did (findings, candidates, re-runs, the work limit). */
+  decisive_search?: DecisiveSearch;
   mass: { parts: PartMass[]; rolling_mass_kg: number; yoke_mass_kg: number; total_mass_kg: number };
   balance: { cases: LoadCaseResult[] };
   /** Loads from every model, by part and case. */

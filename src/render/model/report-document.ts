@@ -1,6 +1,7 @@
 import type { CheckResult } from '../../core/result/check-result.ts';
 import { headlineCaution } from '../result-cautions.ts';
 import type { ReportDocument } from './document.ts';
+import { decisiveSection } from './sections/decisive-section.ts';
 import { cautionsSection } from './sections/cautions-section.ts';
 import { cutListSection, leatherSection } from './sections/cut-list-section.ts';
 import { drawingsSection, plotsSection } from './sections/drawings-section.ts';
@@ -25,6 +26,7 @@ export function reportDocument(result: CheckResult): ReportDocument {
     title: `Design-rule check: ${result.spec_name}`,
     sections: [
       verdictSection(result),
+      ...[decisiveSection(result)].filter((s) => s !== null),
       cautionsSection(result),
       findingsSection(result),
       workingSection(result),

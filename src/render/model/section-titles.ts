@@ -7,6 +7,7 @@ import type { Block, Section } from './document.ts';
  */
 export const SECTIONS = {
   verdict: { title: 'Verdict:', newPage: false },
+  decisive: { title: 'What decides the verdict', newPage: false },
   cautions: { title: 'Cautions', newPage: false },
   findings: { title: 'Findings', newPage: false },
   working: { title: 'Working of flagged findings', newPage: true },
