@@ -8,6 +8,7 @@ const ESTIMATES: readonly RegExp[] = [
   /^floor_straps\.pretension_N$/,
   /^wheels\.tyre\.pre_compression_N$/,
   /^team\.horse_mass_kg$/,
+  /^team\.horse\.(height_m|girth_cm|body_length_cm)$/,
   /^(box|wheels|pole|yoke)\.mass_kg$/,
   /^moisture_content_pct$/,
 ];

@@ -43,7 +43,8 @@ function setIn<T>(root: T, path: Path, value: unknown): T {
 function dataUnit(data: RulesData, path: Path): string {
   for (let n = path.length - 1; n >= 0; n--) {
     const u = (at(data, path.slice(0, n)) as { unit?: unknown } | undefined)?.unit;
-    if (typeof u === 'string') return u;
+    // The data's units are often words ("N, as driven"); a table keeps only a symbol ahead of them.
+    if (typeof u === 'string') return /^[A-Za-z%°/·²³]+$/.test(u.split(',')[0].trim()) ? u.split(',')[0].trim() : '';
   }
   const suffix = path.map(String).find((s) => /_(kPa|MPa|pct|mm|N|kg)$/.test(s));
   return suffix ? suffix.slice(suffix.lastIndexOf('_') + 1) : '';
