@@ -2,7 +2,8 @@
 // `axletree --version` and `axletree check <demo> --json`, each run several
 // times (the first run of each only warms the file cache), medians side by
 // side with their ratio to bare node.
-// Targets: --version under 0.3 s, check --json under 1.5 s on this machine.
+// Targets: --version under 0.3 s, check --json under 1.5 s on this machine,
+// with and without the decisive-input search.
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -25,7 +26,9 @@ interface Case {
 const CASES: Case[] = [
   { label: 'node -e 0', args: ['-e', '0'], runs: 9 },
   { label: 'axletree --version', args: [BIN, '--version'], runs: 9, target: 300 },
-  { label: 'axletree check specs/demo-two-crew.yaml --json', args: [BIN, 'check', DEMO, '--json'], runs: 5, target: 1500 },
+  { label: 'axletree check specs/demo-two-crew.yaml --json --no-decisive', args: [BIN, 'check', DEMO, '--json', '--no-decisive'], runs: 5, target: 1500 },
+  // The decisive-input search is part of a default check; its target is the same 1.5 s (not met until the core is faster).
+  { label: 'axletree check specs/demo-two-crew.yaml --json', args: [BIN, 'check', DEMO, '--json'], runs: 3, target: 1500 },
 ];
 
 /** Milliseconds of one whole process; throws if it refused its input or failed. */
