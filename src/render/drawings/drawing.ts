@@ -1,4 +1,4 @@
-import { n3 } from './svg-sheet.ts';
+import { fontRules, n3, SvgSheet, type Fonts } from './svg-sheet.ts';
 
 // The report's drawings of the build. Each is SVG text on a sheet whose user
 // unit is one millimetre of paper (width and height are given in mm, so it
@@ -20,6 +20,15 @@ export const SHEET_WIDTH = 180;
 export const FONT = 3;
 export const SMALL = 2.6;
 export const TITLE = 4;
+/** The fonts of the drawings of the build, by text class. */
+export const FONTS: Fonts = { label: { size: FONT }, title: { size: TITLE, bold: true }, small: { size: SMALL } };
+/** Labels keep this far inside the sheet's edge, paper mm. */
+const EDGE = 1;
+
+/** A sheet of the given height for a drawing of the build, labels kept on it. */
+export function drawingSheet(height: number): SvgSheet {
+  return new SvgSheet(FONTS, { x: EDGE, y: EDGE, w: SHEET_WIDTH - 2 * EDGE, h: height - 2 * EDGE });
+}
 
 /** Common drawing scales, 1:n (ISO 5455 and its halves). */
 const SCALES = [1, 2, 2.5, 5, 10, 20, 25, 50, 100, 200, 250, 500, 1000];
@@ -40,7 +49,8 @@ const BASE_STYLE = [
   '.ground { stroke-width: 0.5; } .hidden { stroke-dasharray: 1.2 0.8; } .centre { stroke-width: 0.18; stroke-dasharray: 4 1 1 1; }',
   '.dim, .extension { stroke-width: 0.18; } .scale-bar { fill: #000; stroke: none; }',
   '.load { stroke-width: 0.5; } #load-arrow path, #dim-arrow path { fill: #000; stroke: none; }',
-  `text { font-family: sans-serif; font-size: ${FONT}px; fill: #000; stroke: none; } .title { font-size: ${TITLE}px; font-weight: bold; } .small { font-size: ${SMALL}px; }`,
+  fontRules(FONTS),
+  '.leader { stroke-width: 0.18; }',
 ];
 
 const LOAD_ARROW =
