@@ -58,13 +58,14 @@ const LOAD_ARROW =
 const DIM_ARROW =
   '<marker id="dim-arrow" viewBox="0 0 6 6" refX="6" refY="3" markerWidth="2.4" markerHeight="2.4" markerUnits="userSpaceOnUse" orient="auto-start-reverse"><path d="M0,0 L6,3 L0,6 z"/></marker>';
 
-/** The root element around a drawing's parts; `data` adds data-* attributes (key dimensions, in vehicle mm). */
-export function svgDocument(o: { height: number; scale: number; origin: [number, number]; data: Record<string, number | string>; style?: string[]; parts: string[] }): string {
+/** The root element around a drawing's parts; `data` adds data-* attributes (key dimensions, in vehicle mm). A diagram not to scale has no scale and origin. */
+export function svgDocument(o: { height: number; scale?: number; origin?: [number, number]; data: Record<string, number | string>; style?: string[]; parts: string[] }): string {
   const extra = Object.entries(o.data)
     .map(([k, v]) => ` data-${k}="${typeof v === 'number' ? n3(v) : v}"`)
     .join('');
+  const scaled = o.scale !== undefined && o.origin ? ` data-scale="${o.scale}" data-unit="mm" data-origin="${n3(o.origin[0])} ${n3(o.origin[1])}"` : '';
   return [
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${SHEET_WIDTH}mm" height="${n3(o.height)}mm" viewBox="0 0 ${SHEET_WIDTH} ${n3(o.height)}" data-scale="${o.scale}" data-unit="mm" data-origin="${n3(o.origin[0])} ${n3(o.origin[1])}"${extra}>`,
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${SHEET_WIDTH}mm" height="${n3(o.height)}mm" viewBox="0 0 ${SHEET_WIDTH} ${n3(o.height)}"${scaled}${extra}>`,
     `<style>${[...BASE_STYLE, ...(o.style ?? [])].join(' ')}</style>`,
     `<defs>${LOAD_ARROW}${DIM_ARROW}</defs>`,
     ...o.parts,

@@ -5,7 +5,8 @@ import { formatNumber } from '../../core/format/number-format.ts';
 import { axleBar, frameBar } from '../../core/model/spec-sections.ts';
 import { drawingSheet, fitScale, FONT, scaleBarLength, SHEET_WIDTH, svgDocument, type Drawing } from './drawing.ts';
 
-// The build seen from its left side, to scale: ground, wheel, axle end-on,
+// The build seen from its right side (x forward to the right, z up, so y, to
+// the left, points into the page), to scale: ground, wheel, axle end-on,
 // frame and siding, the pole along its centre line, the yoke end-on, the crew
 // at their places and centre-of-mass heights, the rolling assembly's centre of
 // mass, and the static case's axle and yoke loads as arrows. Vehicle x runs
