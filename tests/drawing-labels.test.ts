@@ -4,7 +4,7 @@ import { overlappingTexts, textBoxes } from './support/svg-text-boxes.ts';
 import { coordinateDiagram } from '../src/render/drawings/coordinate-diagram.ts';
 import { LabelPlacer } from '../src/render/drawings/label-placer.ts';
 import { boxesOverlap, textBox, textWidth } from '../src/render/drawings/text-box.ts';
-import { hits } from '../src/render/drawings/obstacles.ts';
+import { hits, type Obstacle } from '../src/render/drawings/obstacles.ts';
 
 // No label of any drawing overprints another: every text element's box,
 // estimated from its attributes and its class's font (the estimate errs
@@ -44,11 +44,11 @@ describe('the label placer', () => {
   it('moves a label off a text already there, and off a line through its first position', () => {
     const placer = new LabelPlacer(sheet);
     const taken = placer.fixed(52, 51, 'dimension 2715', font, 'start', 'label');
-    const line = { kind: 'segment', p: [40, 40], q: [40, 60], pad: 0.4 } as const;
+    const line: Obstacle = { kind: 'segment', p: [40, 40], q: [40, 60], pad: 0.4 };
     placer.avoid(line);
     const p = placer.place({ text: 'axle load 2075 N', at: [50, 50], font, cls: 'label', first: { x: 52, y: 51, anchor: 'start' } });
     expect(boxesOverlap(p.box, taken.box)).toBe(false);
-    expect(hits(p.box, { ...line, p: [40, 40], q: [40, 60] })).toBe(false);
+    expect(hits(p.box, line)).toBe(false);
     expect(p.forced).toBe(false);
   });
 
@@ -86,9 +86,13 @@ describe('text box estimate', () => {
 
   it('puts the box by the anchor: start to the right of x, end to its left, middle across it', () => {
     const w = textWidth('yoke', { size: 3 });
-    expect(textBox(10, 20, 'yoke', { size: 3 }, 'start').x).toBe(10);
-    expect(textBox(10, 20, 'yoke', { size: 3 }, 'end').x).toBeCloseTo(10 - w, 9);
-    expect(textBox(10, 20, 'yoke', { size: 3 }, 'middle').x).toBeCloseTo(10 - w / 2, 9);
+    const [start, end, middle] = (['start', 'end', 'middle'] as const).map((a) => textBox(10, 20, 'yoke', { size: 3 }, a));
+    // Each box a little wider than the advance, by the same at both ends.
+    const side = (start.w - w) / 2;
+    expect(side).toBeGreaterThan(0);
+    expect(start.x).toBeCloseTo(10 - side, 9);
+    expect(end.x + end.w).toBeCloseTo(10 + side, 9);
+    expect(middle.x + middle.w / 2).toBeCloseTo(10, 9);
     // Above the baseline by the ascent and below it by the descent.
     const b = textBox(10, 20, 'yoke', { size: 3 }, 'start');
     expect(b.y).toBeLessThan(20 - 2);

@@ -105,12 +105,15 @@ export class LabelPlacer {
   private candidates(req: LabelRequest, lines: string[]): Candidate[] {
     const f = req.font;
     const w = Math.max(...lines.map((t) => textBox(0, 0, t, f, 'start').w));
+    // The box reaches this far past the text's ends (text-box.ts); x is where the text starts, ends or centres.
+    const side = -textBox(0, 0, '', f, 'start').x;
+    const xAt = (left: number, anchor: Anchor) => (anchor === 'start' ? left + side : anchor === 'end' ? left + w - side : left + w / 2);
     const h = (lines.length - 1) * LINE_STEP * f.size + (ASCENT + DESCENT) * f.size;
     const gap = req.gap ?? 1.5;
     const out: Candidate[] = [];
     if (req.first) {
       const { x, y, anchor } = req.first;
-      const left = anchor === 'start' ? x : anchor === 'end' ? x - w : x - w / 2;
+      const left = anchor === 'start' ? x - side : anchor === 'end' ? x - w + side : x - w / 2;
       out.push({ x, y, anchor, box: { x: left, y: y - ASCENT * f.size, w, h } });
     }
     const order = [...(req.prefer ?? []), ...DIRECTIONS.filter((d) => !req.prefer?.includes(d))];
@@ -124,9 +127,8 @@ export class LabelPlacer {
         const left = ux > 0 ? ox : ux < 0 ? ox - w : ax - w / 2;
         const top = uy > 0 ? oy : uy < 0 ? oy - h : ay - h / 2;
         const anchor: Anchor = ux > 0 ? 'start' : ux < 0 ? 'end' : 'middle';
-        const x = anchor === 'start' ? left : anchor === 'end' ? left + w : left + w / 2;
         const box = { x: left, y: top, w, h };
-        out.push({ x, y: top + ASCENT * f.size, anchor, box, ...(ring > 0 || req.first ? { leader: leaderTo(req.at, box) } : {}) });
+        out.push({ x: xAt(left, anchor), y: top + ASCENT * f.size, anchor, box, ...(ring > 0 || req.first ? { leader: leaderTo(req.at, box) } : {}) });
       }
     });
     return out.map((c) => (c.leader && Math.hypot(c.leader[1][0] - c.leader[0][0], c.leader[1][1] - c.leader[0][1]) < 2 * gap ? { ...c, leader: undefined } : c));

@@ -24,6 +24,8 @@ export const ASCENT = 0.95;
 export const DESCENT = 0.25;
 /** Widening over the measured widths, for a wider face on the reader's machine. */
 const MARGIN = 1.1;
+/** Room at each end of a line, em. */
+const SIDE = 0.12;
 
 const CLASSES: [RegExp, number][] = [
   [/[ijl.,:;'|!I/\\[\] ft]/, 0.34],
@@ -50,7 +52,9 @@ export function textWidth(text: string, font: Font): number {
 export function textBox(x: number, y: number, text: string, font: Font, anchor: Anchor): Box {
   const w = textWidth(text, font);
   const left = anchor === 'start' ? x : anchor === 'end' ? x - w : x - w / 2;
-  return { x: left, y: y - ASCENT * font.size, w, h: (ASCENT + DESCENT) * font.size };
+  // A browser's box may reach a little past the advance at either end (a glyph from a fallback face, overhanging ink).
+  const side = SIDE * font.size;
+  return { x: left - side, y: y - ASCENT * font.size, w: w + 2 * side, h: (ASCENT + DESCENT) * font.size };
 }
 
 /** True where the boxes share area, each grown by `gap` on every side. */
