@@ -6,7 +6,7 @@
 // draws it.
 
 import type { TopLevelSpec } from 'vega-lite';
-import type { PlotData, RuleKind } from '../../core/plots/plot-data.ts';
+import type { PlotData } from '../../core/plots/plot-data.ts';
 import { thinPoints } from './thin-points.ts';
 import { cycle, DASHED, RULE_COLOURS, RULE_DASH, SERIES_COLOURS, SERIES_DASHES } from './series-style.ts';
 
