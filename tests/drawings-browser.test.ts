@@ -4,6 +4,7 @@ import { CHROMIUM, hasChromium, launchChromium } from '../scripts/headless-chrom
 import { drawingsOfSpec, shippedSpecs } from './support/all-drawings.ts';
 import { textBoxes } from './support/svg-text-boxes.ts';
 import { coordinateDiagram } from '../src/render/drawings/coordinate-diagram.ts';
+import type { Box } from '../src/render/drawings/text-box.ts';
 
 // Every drawing of every shipped specification laid out by a real browser:
 // the box getBBox() gives each text element (in the drawing's paper mm)
@@ -15,13 +16,8 @@ import { coordinateDiagram } from '../src/render/drawings/coordinate-diagram.ts'
 const browser = hasChromium();
 if (!browser) console.warn(`drawings-browser.test: skipped, no browser at ${CHROMIUM}; install Debian's chromium package (apt-get install chromium) to run it.`);
 
-interface Measured {
-  text: string;
-  x: number;
-  y: number;
-  w: number;
-  h: number;
-}
+/** A text's box as laid out, paper mm. */
+type Measured = { text: string } & Box;
 
 /** Shared area of two boxes less a hundredth of a millimetre each way, for rounding in the layout. */
 const overlaps = (a: Measured, b: Measured) => Math.min(a.x + a.w, b.x + b.w) - Math.max(a.x, b.x) > 0.01 && Math.min(a.y + a.h, b.y + b.h) - Math.max(a.y, b.y) > 0.01;
