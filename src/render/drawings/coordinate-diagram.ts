@@ -9,9 +9,9 @@ import type { SvgSheet } from './svg-sheet.ts';
 // seen from the vehicle's right. Not to scale: the outline only shows where each axis starts and which
 // way it points. The numbers below are the outline's own proportions, paper mm.
 
-const SIDE = { top: 16, ground: 62 };
-const PLAN = { top: 84, centre: 112 };
-const HEIGHT = 152;
+const SIDE = { top: 16, ground: 72 };
+const PLAN = { top: 96, centre: 124 };
+const HEIGHT = 164;
 /** Rear edge of the floor on paper (x = 0 in both views). */
 const X0 = 52;
 const FLOOR_DEPTH = 30;
@@ -19,7 +19,7 @@ const WHEEL_R = 17;
 const AXLE_X = 12;
 const FLOOR_TOP = 30;
 const TRACK = 40;
-const YOKE: Pt = [160, SIDE.ground - 38];
+const YOKE: Pt = [160, SIDE.ground - 40];
 const AXIS = 26;
 
 export function coordinateDiagram(): string {
