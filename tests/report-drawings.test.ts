@@ -4,6 +4,8 @@ import { textBars } from '../src/render/stock-bar-text.ts';
 import { DRAWING_SCOPE, inlineSvg, scopeClass, scopeStyles } from '../src/render/inline-svg.ts';
 import type { CuttingPattern } from '../src/core/stock/cutting-types.ts';
 import type { StockPlanGroup } from '../src/core/cutlist/cutting-result.ts';
+import { fitText } from '../src/render/stock-bar-svg.ts';
+import { textWidth } from '../src/render/drawings/text-box.ts';
 
 // A 1000 mm stock cut to 400 + 300 mm with one 3 mm kerf between them: the
 // offcut is 1000 - 700 - 3 = 297 mm. Demo numbers, laid out by hand below.
@@ -97,5 +99,18 @@ describe('scopeStyles', () => {
   it('does not inline a sheet it cannot scope', () => {
     expect(scopeStyles('<svg><style>@media print { rect { fill: red; } }</style></svg>', DRAWING_SCOPE)).toBeNull();
     expect(scopeStyles('<svg><style>/* note */ rect { fill: red; }</style></svg>', DRAWING_SCOPE)).toBeNull();
+  });
+});
+
+describe('stock bar labels', () => {
+  it('keep a label whole where it fits, cut it short with an ellipsis where not, and drop it where not two letters fit', () => {
+    const width = (t: string) => textWidth(t, { size: 11 });
+    const label = 'front rail, left';
+    expect(fitText([label], width(label) + 6)).toBe(label);
+    const cut = fitText([label], width(label));
+    expect(cut.endsWith('…')).toBe(true);
+    expect(width(cut)).toBeLessThanOrEqual(width(label) - 6);
+    expect(fitText(['offcut 250 mm', '250 mm', '250'], width('250 mm') + 6)).toBe('250 mm');
+    expect(fitText([label], 8)).toBe('');
   });
 });

@@ -3,13 +3,19 @@
 import { dampedSineAt } from '../core/floor-test/damped-sine-fit.ts';
 import type { DropRecord, FloorTestEstimate } from '../core/floor-test/floor-test-types.ts';
 import { plotSvg } from './plots/plot-svg.ts';
+import type { PlotData } from '../core/plots/plot-data.ts';
 import { formatNumber, formatQuantity } from '../core/format/number-format.ts';
 
 export async function floorTestPlotSvg(record: DropRecord, e: FloorTestEstimate): Promise<string> {
+  return plotSvg(floorTestPlot(record, e));
+}
+
+/** The plot as data: the whole record, so nothing of it is cut off. */
+export function floorTestPlot(record: DropRecord, e: FloorTestEstimate): PlotData {
   const { start_s, end_s } = e.free_vibration;
   const t = record.t_s.filter((v) => v >= start_s && v <= end_s);
   const fitted = dampedSineAt(e.fit, t.map((v) => v - start_s));
-  return plotSvg({
+  return {
     id: 'floor-test',
     title: `Drop test: record and fitted damped sine (f_n ${formatQuantity(e.natural_frequency_hz, 'Hz')}, damping ratio ${formatNumber(e.damping_ratio)})`,
     caption: 'The drop record, the damped sine fitted to its free vibration, and the turning points the logarithmic decrement used.',
@@ -21,5 +27,5 @@ export async function floorTestPlotSvg(record: DropRecord, e: FloorTestEstimate)
       { label: 'turning points used', x: e.extrema.map((p) => p.t_s), y: e.extrema.map((p) => p.x_mm), style: 'dots' },
     ],
     rules: [],
-  });
+  };
 }

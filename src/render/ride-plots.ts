@@ -1,13 +1,16 @@
 // Plots of one ride case over time: the length channels (crew and wheel
 // heights), the floor forces under the crew, and the other forces (wheels on
 // the ground, the yoke). Floor forces are the force channels the ride model
-// names "... floor force".
+// names "... floor force". The three plots of a case share one time window:
+// the event and its decay (plots/event-window.ts), said on the time axis.
 // The file names are shared by the ride command, the check's outputs and the
 // report, which links them from Markdown and puts them inline in HTML.
 
 import type { RideCase, RideChannel, RideSeries } from '../core/ride/ride-types.ts';
 import type { PlotData } from '../core/plots/plot-data.ts';
 import { plotSvg } from './plots/plot-svg.ts';
+import { eventWindow, sampleRange } from './plots/event-window.ts';
+import { formatNumber } from '../core/format/number-format.ts';
 
 const isFloorForce = (c: RideChannel) => c.unit === 'N' && /floor force$/.test(c.name);
 
@@ -35,14 +38,24 @@ export function ridePlot(c: RideCase, title: string, series: RideSeries, kind: R
   const spec = RIDE_PLOTS.find((p) => p.kind === kind)!;
   const channels = series.channels.filter(spec.pick);
   if (channels.length === 0) return null;
+  const t = series.t_s;
+  const [i, j] = sampleRange(t, eventWindow(t, series.channels.map((ch) => ch.values)));
+  const shown = t.slice(i, j);
   return {
     id: `ride-${c}-${kind}`,
     ...ridePlotText(title, kind),
-    xLabel: 'time (s)',
+    xLabel: timeLabel(shown, t),
     yLabel: spec.yLabel,
-    lines: channels.map((ch) => ({ label: ch.name, x: series.t_s, y: ch.values })),
+    lines: channels.map((ch) => ({ label: ch.name, x: shown, y: ch.values.slice(i, j) })),
     rules: [],
   };
+}
+
+/** The time axis's title, with the part of the run shown where it is not all of it. */
+export function timeLabel(shown: readonly number[], run: readonly number[]): string {
+  const s = (v: number | undefined) => formatNumber(v ?? 0, 's');
+  if (shown.length === run.length) return 'time (s)';
+  return `time (s), showing ${s(shown[0])} to ${s(shown.at(-1))} s of a ${s(run.at(-1))} s run`;
 }
 
 /** The kinds of plot the series can fill. */

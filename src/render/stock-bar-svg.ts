@@ -2,6 +2,7 @@ import type { CuttingPattern } from '../core/stock/cutting-types.ts';
 import { formatNumber } from '../core/format/number-format.ts';
 import { barSegments } from './stock-bar.ts';
 import { OFFCUT_FILL, partFill } from './stock-palette.ts';
+import { textWidth } from './drawings/text-box.ts';
 
 // One stock piece as a small SVG bar for the HTML report. Every text placed in
 // the SVG is escaped; part labels come from the specification. Paint goes in
@@ -11,8 +12,6 @@ import { OFFCUT_FILL, partFill } from './stock-palette.ts';
 const FULL_WIDTH = 640;
 const HEIGHT = 22;
 const FONT_PX = 11;
-/** A rough width of one character at FONT_PX, to decide whether a label fits. */
-const CHAR_PX = 6.2;
 const TEXT_STYLE = `font-family:sans-serif;font-size:${FONT_PX}px;font-weight:normal;fill:#000;stroke:none`;
 
 export function escapeXml(text: string): string {
@@ -23,11 +22,16 @@ export function escapeXml(text: string): string {
  * The first of the texts that fits the width, else the first cut short with an
  * ellipsis, or '' where not even two letters fit; the full text is in the title.
  */
-function fitText(texts: readonly string[], width_px: number): string {
-  const room = Math.floor((width_px - 6) / CHAR_PX);
-  const whole = texts.find((t) => t.length <= room);
+export function fitText(texts: readonly string[], width_px: number): string {
+  // Widths estimated as the drawings' labels are (text-box.ts), erring wide, so a label never runs into the next part.
+  const fits = (t: string) => textWidth(t, { size: FONT_PX }) <= width_px - 6;
+  const whole = texts.find(fits);
   if (whole !== undefined) return whole;
-  return room >= 3 ? `${texts[0].slice(0, room - 1).trimEnd()}…` : '';
+  for (let n = texts[0].length - 1; n >= 2; n--) {
+    const cut = `${texts[0].slice(0, n).trimEnd()}…`;
+    if (fits(cut)) return cut;
+  }
+  return '';
 }
 
 export function stockBarSvg(p: CuttingPattern, longest_mm: number, labels: readonly string[], caption: string): string {

@@ -6,9 +6,10 @@ import { thinPoints } from '../../src/render/plots/thin-points.ts';
 import { inlineSvg } from '../../src/render/inline-svg.ts';
 
 // The plots are drawn by vega-lite; these tests measure the drawn SVG back
-// against the data: a line from (0, 0) to (10, 10) spans the plot, a level
-// line at y = 5 sits half-way up it, a vertical line where the padded x axis
-// puts it.
+// against the data: a line from (0, 0) to (10, 10) spans the plot's width and
+// its height but for the 5 % room kept above the highest value (none below:
+// the values start at zero), a level line at y = 5 sits where that axis puts
+// it, a vertical line where the padded x axis puts it.
 
 const sample: PlotData = {
   id: 'sample',
@@ -24,6 +25,9 @@ const sample: PlotData = {
   ],
 };
 
+/** Paper y of a value on the y axis, 0 to 10.5. */
+const py = (y: number) => PLOT_HEIGHT * (1 - y / 10.5);
+
 const translate = (g: string) => {
   const m = /translate\(([-\d.]+),([-\d.]+)\)/.exec(g)!;
   return [Number(m[1]), Number(m[2])];
@@ -34,20 +38,21 @@ describe('plot SVG from vega-lite', async () => {
   const layer = (i: number) => new RegExp(`layer_${i}_marks"[^>]*>([\\s\\S]*?)</g>`).exec(svg)![1];
 
   it('draws the line from corner to corner of the plot', () => {
-    // x runs from -0.3 to 10.3 (3 % room past the data, as a vertical line is drawn); y from 0 to 10.
+    // x runs from -0.3 to 10.3 (3 % room past the data, as a vertical line is drawn); y from 0 to 10.5.
     const d = /d="M([-\d.]+),([-\d.]+)L([-\d.]+),([-\d.]+)"/.exec(layer(0))!.slice(1).map(Number);
     const px = (x: number) => ((x + 0.3) / 10.6) * PLOT_WIDTH;
     expect(d[0]).toBeCloseTo(px(0), 2);
     expect(d[1]).toBeCloseTo(PLOT_HEIGHT, 2);
     expect(d[2]).toBeCloseTo(px(10), 2);
-    expect(d[3]).toBeCloseTo(0, 2);
+    expect(d[3]).toBeCloseTo(py(10), 2);
+    expect(d[3]).toBeGreaterThan(0);
   });
 
   it('puts level lines at their values and the vertical line at its x', () => {
     const levels = [...layer(1).matchAll(/<line[^>]*>/g)].map((m) => translate(m[0])[1]);
     expect(levels).toHaveLength(2);
-    expect(levels[0]).toBeCloseTo(PLOT_HEIGHT / 2, 6);
-    expect(levels[1]).toBeCloseTo(PLOT_HEIGHT * 0.3, 6);
+    expect(levels[0]).toBeCloseTo(py(5), 6);
+    expect(levels[1]).toBeCloseTo(py(7), 6);
     const [x] = translate(/<line[^>]*>/.exec(layer(2))![0]);
     expect(x).toBeCloseTo((3.3 / 10.6) * PLOT_WIDTH, 2);
   });

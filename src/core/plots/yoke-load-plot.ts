@@ -38,7 +38,7 @@ export function yokeLoadPlot(spec: CheckedSpecification, data: RulesData, horseK
     id: 'yoke-load',
     title: 'Load on each horse over crew position',
     caption: `The yoke load each of the ${horses} horses carries with the whole crew standing together at a point of the usable floor (${back}-${front} mm from the rear edge), standing still and at the specification's acceleration and braking. Dashed level lines are the ${horseLoad.id} limits and the load below which the pole lifts the yoke (${yokeLift.id}); vertical lines mark the axle and the crew's centre of mass as placed.`,
-    xLabel: 'crew position, mm from the rear edge of the floor',
+    xLabel: 'crew position from the rear edge of the floor (mm)',
     yLabel: 'load per horse (N)',
     lines,
     rules: [

@@ -1,4 +1,4 @@
-import { n3 } from './svg-sheet.ts';
+import { fontRules, n3, SvgSheet, type Fonts } from './svg-sheet.ts';
 
 // The report's drawings of the build. Each is SVG text on a sheet whose user
 // unit is one millimetre of paper (width and height are given in mm, so it
@@ -20,6 +20,15 @@ export const SHEET_WIDTH = 180;
 export const FONT = 3;
 export const SMALL = 2.6;
 export const TITLE = 4;
+/** The fonts of the drawings of the build, by text class. */
+export const FONTS: Fonts = { label: { size: FONT }, title: { size: TITLE, bold: true }, small: { size: SMALL } };
+/** Labels keep this far inside the sheet's edge, paper mm. */
+const EDGE = 1;
+
+/** A sheet of the given height for a drawing of the build, labels kept on it. */
+export function drawingSheet(height: number): SvgSheet {
+  return new SvgSheet(FONTS, { x: EDGE, y: EDGE, w: SHEET_WIDTH - 2 * EDGE, h: height - 2 * EDGE });
+}
 
 /** Common drawing scales, 1:n (ISO 5455 and its halves). */
 const SCALES = [1, 2, 2.5, 5, 10, 20, 25, 50, 100, 200, 250, 500, 1000];
@@ -40,7 +49,8 @@ const BASE_STYLE = [
   '.ground { stroke-width: 0.5; } .hidden { stroke-dasharray: 1.2 0.8; } .centre { stroke-width: 0.18; stroke-dasharray: 4 1 1 1; }',
   '.dim, .extension { stroke-width: 0.18; } .scale-bar { fill: #000; stroke: none; }',
   '.load { stroke-width: 0.5; } #load-arrow path, #dim-arrow path { fill: #000; stroke: none; }',
-  `text { font-family: sans-serif; font-size: ${FONT}px; fill: #000; stroke: none; } .title { font-size: ${TITLE}px; font-weight: bold; } .small { font-size: ${SMALL}px; }`,
+  fontRules(FONTS),
+  '.leader { stroke-width: 0.18; }',
 ];
 
 const LOAD_ARROW =
@@ -48,13 +58,14 @@ const LOAD_ARROW =
 const DIM_ARROW =
   '<marker id="dim-arrow" viewBox="0 0 6 6" refX="6" refY="3" markerWidth="2.4" markerHeight="2.4" markerUnits="userSpaceOnUse" orient="auto-start-reverse"><path d="M0,0 L6,3 L0,6 z"/></marker>';
 
-/** The root element around a drawing's parts; `data` adds data-* attributes (key dimensions, in vehicle mm). */
-export function svgDocument(o: { height: number; scale: number; origin: [number, number]; data: Record<string, number | string>; style?: string[]; parts: string[] }): string {
+/** The root element around a drawing's parts; `data` adds data-* attributes (key dimensions, in vehicle mm). A diagram not to scale has no scale and origin. */
+export function svgDocument(o: { height: number; scale?: number; origin?: [number, number]; data: Record<string, number | string>; style?: string[]; parts: string[] }): string {
   const extra = Object.entries(o.data)
     .map(([k, v]) => ` data-${k}="${typeof v === 'number' ? n3(v) : v}"`)
     .join('');
+  const scaled = o.scale !== undefined && o.origin ? ` data-scale="${o.scale}" data-unit="mm" data-origin="${n3(o.origin[0])} ${n3(o.origin[1])}"` : '';
   return [
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${SHEET_WIDTH}mm" height="${n3(o.height)}mm" viewBox="0 0 ${SHEET_WIDTH} ${n3(o.height)}" data-scale="${o.scale}" data-unit="mm" data-origin="${n3(o.origin[0])} ${n3(o.origin[1])}"${extra}>`,
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${SHEET_WIDTH}mm" height="${n3(o.height)}mm" viewBox="0 0 ${SHEET_WIDTH} ${n3(o.height)}"${scaled}${extra}>`,
     `<style>${[...BASE_STYLE, ...(o.style ?? [])].join(' ')}</style>`,
     `<defs>${LOAD_ARROW}${DIM_ARROW}</defs>`,
     ...o.parts,

@@ -1,10 +1,12 @@
 import type { BuildScene } from '../../core/result/build-scene.ts';
-import { esc, n3, SvgSheet, type Pt } from './svg-sheet.ts';
+import { esc, n3, type SvgSheet, type Pt } from './svg-sheet.ts';
+import { formatNumber } from '../../core/format/number-format.ts';
 import { FloorOutline } from '../../core/model/cable-net/outline.ts';
 import { frameBar } from '../../core/model/spec-sections.ts';
 import type { StrapTension } from '../../core/model/cable-net/floor-results.ts';
 import type { Family } from '../../core/model/cable-net/net.ts';
-import { fitScale, SHEET_WIDTH, svgDocument, type Drawing } from './drawing.ts';
+import { textWidth } from './text-box.ts';
+import { drawingSheet, FONTS, fitScale, SHEET_WIDTH, svgDocument, type Drawing } from './drawing.ts';
 
 // The strap floor in plan under the crew standing, to scale, each strap at its
 // true width and shaded by the largest tension along it. A two-way weave is
@@ -14,9 +16,9 @@ import { fitScale, SHEET_WIDTH, svgDocument, type Drawing } from './drawing.ts';
 const MARGIN = { side: 12, top: 14, gap: 14 };
 /** Light to dark: the shades of the tension bands, least first. */
 const SHADES = ['#e3e9ef', '#bccbdb', '#8fa9c5', '#5f83ab', '#2f5b8a'];
-const LEGEND = 26;
+const LEGEND = 31;
 
-const whole = (v: number) => Math.round(v).toString();
+const newtons = (v: number) => formatNumber(v, 'N');
 
 export function floorTension(a: BuildScene): Drawing {
   const { spec } = a;
@@ -34,7 +36,9 @@ export function floorTension(a: BuildScene): Drawing {
   const panelW = floor.depth_mm / s;
   const left = (SHEET_WIDTH - panels * panelW - (panels - 1) * MARGIN.gap) / 2;
   const oy = MARGIN.top + 6 + floor.width_mm / 2 / s;
-  const sheet = new SvgSheet();
+  const yl = oy + floor.width_mm / 2 / s + 10;
+  const height = yl + LEGEND - 10;
+  const sheet = drawingSheet(height);
   sheet.text(MARGIN.side, 8, `Floor straps in plan, scale 1:${s} on A4, crew standing`, 'start', 'title');
 
   (families.length ? families : [null]).forEach((family, k) => {
@@ -52,27 +56,28 @@ export function floorTension(a: BuildScene): Drawing {
     sheet.text(P(floor.depth_mm, 0)[0] + 1.5, oy + 1, 'front', 'start', 'small');
   });
 
-  // Legend: the bands' tension ranges.
-  const yl = oy + floor.width_mm / 2 / s + 10;
+  // Legend: the bands' tension ranges, each key as wide as its figures need.
   sheet.text(MARGIN.side, yl + 2.5, 'Largest tension along the strap, N:', 'start', 'small');
+  let x = MARGIN.side;
   SHADES.forEach((shade, i) => {
-    const x = MARGIN.side + 50 + i * 24;
-    sheet.rect(x, yl, 6, 3, 'key', ` style="fill:${shade}"`);
-    sheet.text(x + 7, yl + 2.5, `${whole((i * top) / SHADES.length)}–${whole(((i + 1) * top) / SHADES.length)}`, 'start', 'small');
+    const range = `${newtons((i * top) / SHADES.length)}–${newtons(((i + 1) * top) / SHADES.length)}`;
+    sheet.rect(x, yl + 5, 6, 3, 'key', ` style="fill:${shade}"`);
+    sheet.text(x + 7, yl + 7.5, range, 'start', 'small');
+    x += 7 + textWidth(range, FONTS.small) + 4;
   });
-  sheet.text(MARGIN.side, yl + 8, 'Dashed: the crew\'s foot patches. Straps at their true width and place.', 'start', 'small');
+  sheet.text(MARGIN.side, yl + 13, 'Dashed: the crew\'s foot patches. Straps at their true width and place.', 'start', 'small');
 
   const caption = m.straps.length
-    ? `The strap floor at 1:${s} under the crew standing (no dynamic factor), each strap shaded by the largest tension along it; the most tensioned carries ${whole(m.maxTension_N)} N (${m.maxTensionAt}).` +
+    ? `The strap floor at 1:${s} under the crew standing (no dynamic factor), each strap shaded by the largest tension along it; the most tensioned carries ${newtons(m.maxTension_N)} N (${m.maxTensionAt}).` +
       (m.converged ? '' : ' The solver did not converge: the shading is not a result.')
     : `The strap floor at 1:${s}: ${m.stopped ?? 'the net was not solved'}, so no tensions are shown.`;
   const svg = svgDocument({
-    height: yl + LEGEND - 10,
+    height,
     scale: s,
     origin: [left, oy],
     data: { depth: floor.depth_mm, width: floor.width_mm, 'max-tension': top, panels },
     style: ['.frame-inner { stroke-width: 0.5; } .strap { stroke: none; } .foot { stroke-dasharray: 1 0.6; stroke-width: 0.35; } .key { stroke-width: 0.18; }'],
-    parts: sheet.parts,
+    parts: sheet.finish(),
   });
   return { id: 'floor-straps', title: 'Floor straps by tension', caption, svg };
 }

@@ -1,9 +1,12 @@
 import type { BuildScene } from '../../core/result/build-scene.ts';
-import { dimAttrs, n3, SvgSheet, type Pt } from './svg-sheet.ts';
+import { dimAttrs, n3, type SvgSheet, type Pt } from './svg-sheet.ts';
+import { LINE_PAD, polylineSegments } from './obstacles.ts';
+import { formatNumber } from '../../core/format/number-format.ts';
 import { axleBar, frameBar } from '../../core/model/spec-sections.ts';
-import { fitScale, FONT, scaleBarLength, SHEET_WIDTH, svgDocument, type Drawing } from './drawing.ts';
+import { drawingSheet, fitScale, FONT, scaleBarLength, SHEET_WIDTH, svgDocument, type Drawing } from './drawing.ts';
 
-// The build seen from its left side, to scale: ground, wheel, axle end-on,
+// The build seen from its right side (x forward to the right, z up, so y, to
+// the left, points into the page), to scale: ground, wheel, axle end-on,
 // frame and siding, the pole along its centre line, the yoke end-on, the crew
 // at their places and centre-of-mass heights, the rolling assembly's centre of
 // mass, and the static case's axle and yoke loads as arrows. Vehicle x runs
@@ -15,7 +18,8 @@ const BELOW = 32;
 /** Drawn length of a load arrow, paper mm. */
 const ARROW = 13;
 
-const whole = (v: number) => Math.round(v).toString();
+const mm = (v: number) => formatNumber(v, 'mm');
+const newtons = (v: number) => formatNumber(v, 'N');
 
 export function sideElevation(a: BuildScene): Drawing {
   const { spec } = a;
@@ -32,14 +36,17 @@ export function sideElevation(a: BuildScene): Drawing {
   const ox = MARGIN.left - xMin / s;
   const oy = MARGIN.top + 8 + zMax / s; // the ground line; 8 mm for the labels above the tallest part
   const P = (x: number, z: number): Pt => [ox + x / s, oy - z / s];
-  const sheet = new SvgSheet();
+  const height = oy + BELOW;
+  const sheet = drawingSheet(height);
 
   sheet.text(MARGIN.left, 8, `Side elevation, scale 1:${s} on A4, dimensions in mm`, 'start', 'title');
   sheet.line([MARGIN.left / 2, oy], [SHEET_WIDTH - MARGIN.right / 2, oy], 'ground');
+  // Below the ground is for the dimensions: labels of the build stay above it.
+  sheet.avoid({ kind: 'box', box: { x: 0, y: oy, w: SHEET_WIDTH, h: BELOW } });
 
   // Wheel, nave and axle (end-on).
   const hub = P(spec.axle.x_mm, lay.axleZ);
-  sheet.raw(`<circle class="wheel" cx="${n3(hub[0])}" cy="${n3(hub[1])}" r="${n3(r / s)}" data-diameter="${n3(2 * r)}"/>`);
+  sheet.raw(`<circle class="wheel" cx="${n3(hub[0])}" cy="${n3(hub[1])}" r="${n3(r / s)}" data-diameter="${n3(2 * r)}"/>`, { kind: 'ring', c: hub, r: r / s, pad: LINE_PAD });
   sheet.circle(hub, lay.felloeInner / s, 'felloe');
   sheet.circle(hub, spec.wheels.nave.diameter_mm / 2 / s, 'nave');
   if (axle.round) sheet.circle(hub, axle.width / 2 / s, 'axle');
@@ -55,46 +62,43 @@ export function sideElevation(a: BuildScene): Drawing {
   // Yoke end-on at the yoke point.
   const yk = P(spec.pole.yoke_x_mm, spec.pole.yoke_height_mm);
   sheet.rect(yk[0] - spec.yoke.width_mm / 2 / s, yk[1] - spec.yoke.height_mm / 2 / s, spec.yoke.width_mm / s, spec.yoke.height_mm / s, 'yoke');
-  sheet.text(yk[0], yk[1] - spec.yoke.height_mm / 2 / s - 2, 'yoke', 'end');
+  sheet.label({ text: 'yoke', at: [yk[0], yk[1] - spec.yoke.height_mm / 2 / s], first: { x: yk[0], y: yk[1] - spec.yoke.height_mm / 2 / s - 2, anchor: 'end' }, prefer: ['nw', 'n', 'ne'] });
 
-  // Crew: a post from the floor to each person's centre of mass; one label per standing place.
-  const places = new Map<number, string[]>();
+  // Crew: a post from the floor to each person's centre of mass, each named beside it.
   for (const c of spec.crew) {
     const foot = P(c.x_mm, lay.floorTopZ);
     const cg = P(c.x_mm, lay.floorTopZ + c.cg_height_mm);
     sheet.line(foot, cg, 'crew');
-    sheet.raw(`<circle class="crew-cg" cx="${n3(cg[0])}" cy="${n3(cg[1])}" r="1.2" data-role="${c.role.replace(/[^\w -]/g, '')}"/>`);
-    places.set(c.x_mm, [...(places.get(c.x_mm) ?? []), c.role]);
+    sheet.raw(`<circle class="crew-cg" cx="${n3(cg[0])}" cy="${n3(cg[1])}" r="1.2" data-role="${c.role.replace(/[^\w -]/g, '')}"/>`, { kind: 'disc', c: cg, r: 1.2 + LINE_PAD });
   }
-  for (const [x, roles] of places) {
-    const top = Math.max(...spec.crew.filter((c) => c.x_mm === x).map((c) => c.cg_height_mm));
-    const [lx, ly] = P(x, lay.floorTopZ + top);
-    sheet.text(lx, ly - 2.5, `crew: ${roles.join(', ')}`, 'start', 'small');
-  }
+  for (const c of spec.crew) sheet.label({ text: `crew: ${c.role}`, at: P(c.x_mm, lay.floorTopZ + c.cg_height_mm), cls: 'small', prefer: ['ne', 'nw', 'e', 'w'] });
 
   // Centre of mass of the rolling assembly: a circle with two filled quarters.
   const cm = a.rolling;
   const [cx, cy] = P(cm.x_mm, cm.z_mm);
   const q = 2;
-  sheet.raw(`<g class="centre-of-mass" data-x="${n3(cm.x_mm)}" data-z="${n3(cm.z_mm)}"><circle cx="${n3(cx)}" cy="${n3(cy)}" r="${q}"/><path class="cm-fill" d="M ${n3(cx)} ${n3(cy)} h ${q} a ${q} ${q} 0 0 0 ${-q} ${-q} z M ${n3(cx)} ${n3(cy)} h ${-q} a ${q} ${q} 0 0 0 ${q} ${q} z"/></g>`);
-  sheet.text(cx - q - 1, cy + 1, 'centre of mass', 'end', 'small');
+  sheet.raw(
+    `<g class="centre-of-mass" data-x="${n3(cm.x_mm)}" data-z="${n3(cm.z_mm)}"><circle cx="${n3(cx)}" cy="${n3(cy)}" r="${q}"/><path class="cm-fill" d="M ${n3(cx)} ${n3(cy)} h ${q} a ${q} ${q} 0 0 0 ${-q} ${-q} z M ${n3(cx)} ${n3(cy)} h ${-q} a ${q} ${q} 0 0 0 ${q} ${q} z"/></g>`,
+    { kind: 'disc', c: [cx, cy], r: q + LINE_PAD },
+  );
+  sheet.label({ text: 'centre of mass', at: [cx, cy], cls: 'small', gap: q + 1, prefer: ['w', 'nw', 'sw', 'e'] });
 
   // Static loads as the reactions on the vehicle: up where positive, down where negative.
   const stat = a.static_case;
-  loadArrow(sheet, [hub[0], hub[1]], stat.axle_load_N, `axle load ${whole(stat.axle_load_N)} N`, 'start');
-  loadArrow(sheet, [yk[0], yk[1] + (Math.sign(stat.yoke_load_N || 1) * spec.yoke.height_mm) / 2 / s], stat.yoke_load_N, `yoke load ${whole(stat.yoke_load_N)} N`, 'end');
+  loadArrow(sheet, [hub[0], hub[1]], stat.axle_load_N, `axle load ${newtons(stat.axle_load_N)} N`, 'start');
+  loadArrow(sheet, [yk[0], yk[1] + (Math.sign(stat.yoke_load_N || 1) * spec.yoke.height_mm) / 2 / s], stat.yoke_load_N, `yoke load ${newtons(stat.yoke_load_N)} N`, 'end');
 
   // Dimensions below the ground: axle from the rear of the floor and the reach to the yoke; then the wheel.
   const row1 = oy + 7;
   const row2 = oy + 16;
   for (const x of [0, spec.axle.x_mm, spec.pole.yoke_x_mm]) sheet.line(P(x, 0), [ox + x / s, row1 + 1.5], 'extension');
   sheet.line([ox, row1], [hub[0], row1], 'dim', dimAttrs('axle-x', spec.axle.x_mm));
-  sheet.text((ox + hub[0]) / 2, row1 - 1.2, whole(spec.axle.x_mm), 'middle', 'small');
+  sheet.text((ox + hub[0]) / 2, row1 - 1.2, mm(spec.axle.x_mm), 'middle', 'small');
   sheet.line([hub[0], row1], [yk[0], row1], 'dim', dimAttrs('reach', spec.pole.yoke_x_mm - spec.axle.x_mm));
-  sheet.text((hub[0] + yk[0]) / 2, row1 - 1.2, `axle to yoke ${whole(spec.pole.yoke_x_mm - spec.axle.x_mm)}`, 'middle', 'small');
+  sheet.text((hub[0] + yk[0]) / 2, row1 - 1.2, `axle to yoke ${mm(spec.pole.yoke_x_mm - spec.axle.x_mm)}`, 'middle', 'small');
   for (const side of [-1, 1]) sheet.line([hub[0] + (side * r) / s, oy - r / s], [hub[0] + (side * r) / s, row2 + 1.5], 'extension');
   sheet.line([hub[0] - r / s, row2], [hub[0] + r / s, row2], 'dim', dimAttrs('wheel-diameter', 2 * r));
-  sheet.text(hub[0] + r / s + 1.5, row2 + FONT / 3, `wheel Ø ${whole(2 * r)}`, 'start', 'small');
+  sheet.text(hub[0] + r / s + 1.5, row2 + FONT / 3, `wheel Ø ${mm(2 * r)}`, 'start', 'small');
 
   const bar = scaleBarLength(xMax - xMin);
   const yb = oy + 23;
@@ -103,10 +107,10 @@ export function sideElevation(a: BuildScene): Drawing {
 
   const caption =
     `Side elevation at 1:${s}, drawn from the specification: the static case with the crew as placed. ` +
-    `The rolling assembly's centre of mass is ${whole(cm.x_mm)} mm ahead of the rear of the floor and ${whole(cm.z_mm)} mm above the ground; ` +
-    `the wheels carry ${whole(stat.axle_load_N)} N and the yoke ${whole(stat.yoke_load_N)} N (${whole(stat.per_horse_N)} N a horse).`;
+    `The rolling assembly's centre of mass is ${mm(cm.x_mm)} mm ahead of the rear of the floor and ${mm(cm.z_mm)} mm above the ground; ` +
+    `the wheels carry ${newtons(stat.axle_load_N)} N and the yoke ${newtons(stat.yoke_load_N)} N (${newtons(stat.per_horse_N)} N a horse).`;
   const svg = svgDocument({
-    height: oy + BELOW,
+    height,
     scale: s,
     origin: [ox, oy],
     data: { 'wheel-diameter': 2 * r, 'axle-x': spec.axle.x_mm, 'axle-z': lay.axleZ, 'yoke-x': spec.pole.yoke_x_mm, 'yoke-z': spec.pole.yoke_height_mm },
@@ -114,7 +118,7 @@ export function sideElevation(a: BuildScene): Drawing {
       `.pole { stroke: #999; stroke-width: ${n3(spec.pole.height_mm / s)}; } .frame, .axle, .yoke { fill: #ccc; }`,
       '.crew { stroke-width: 0.6; } .crew-cg { fill: #fff; } .cm-fill { fill: #000; stroke: none; } .wheel { stroke-width: 0.5; }',
     ],
-    parts: sheet.parts,
+    parts: sheet.finish(),
   });
   return { id: 'side-elevation', title: 'Side elevation', caption, svg };
 }
@@ -136,9 +140,12 @@ function drawPole(a: BuildScene, sheet: SvgSheet, P: (x: number, z: number) => P
     // No bend given, or one that cannot reach the yoke (the bend rule says so): drawn straight from the root.
     d = `M ${pt(rear)} L ${pt(root)} L ${pt(yoke)}`;
   }
-  sheet.raw(`<path class="pole" d="${d}"/>`);
+  // Labels keep off the pole's drawn width; the bend is taken as its chord, a sagitta off at most.
+  const bendEnd = lay.pole.ok && pole.bend_radius_mm !== undefined ? [P(lay.pole.path.tangentPoint.x, lay.pole.path.tangentPoint.z)] : [];
+  sheet.raw(`<path class="pole" d="${d}"/>`, ...polylineSegments([rear, root, ...bendEnd, yoke], pole.height_mm / s / 2 + LINE_PAD));
   sheet.raw(`<path class="centre" d="${d}"/>`);
-  sheet.text((root[0] + yoke[0]) / 2 + 2, (root[1] + yoke[1]) / 2 + 4, 'pole', 'start');
+  const mid: Pt = [(root[0] + yoke[0]) / 2, (root[1] + yoke[1]) / 2];
+  sheet.label({ text: 'pole', at: mid, gap: pole.height_mm / s / 2 + 1.5, first: { x: mid[0] + 2, y: mid[1] + 4, anchor: 'start' }, prefer: ['s', 'se', 'n'] });
 }
 
 /** An arrow ending at `at`, from below for a positive (upward) force, from above for a negative one. */
@@ -146,5 +153,5 @@ function loadArrow(sheet: SvgSheet, at: Pt, force_N: number, label: string, anch
   const dir = force_N >= 0 ? 1 : -1;
   const from: Pt = [at[0], at[1] + dir * ARROW];
   sheet.line(from, at, 'load', ` marker-end="url(#load-arrow)" data-force="${n3(force_N)}"`);
-  sheet.text(at[0] + (anchor === 'start' ? 1.5 : -1.5), from[1] - dir * 2, label, anchor, 'small');
+  sheet.label({ text: label, at: from, cls: 'small', first: { x: at[0] + (anchor === 'start' ? 1.5 : -1.5), y: from[1] - dir * 2, anchor }, prefer: anchor === 'start' ? ['e', 'ne', 'se'] : ['w', 'nw', 'sw'] });
 }

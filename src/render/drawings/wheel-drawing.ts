@@ -1,5 +1,7 @@
 import { spokeDetail } from './spoke-detail.ts';
-import { ARROW_DEFS, dimAttrs, n3, SvgSheet, type Pt } from './svg-sheet.ts';
+import { ARROW_DEFS, dimAttrs, fontRules, n3, SvgSheet, type Fonts, type Pt } from './svg-sheet.ts';
+import { arcSegments } from './obstacles.ts';
+import { formatNumber } from '../../core/format/number-format.ts';
 import type { WheelGeometry } from '../../core/cutlist/wheel-geometry.ts';
 
 // The wheel in elevation, to a stated scale on an A4 sheet, with the
@@ -16,9 +18,10 @@ const SCALES = [1, 2, 2.5, 5, 10, 20, 25, 50, 100];
 const MAX_DRAWN = 140;
 const FONT = 3.5;
 const LINE = 5.5;
+const FONTS: Fonts = { label: { size: FONT }, title: { size: 5, bold: true }, subtitle: { size: FONT, bold: true }, small: { size: 2.8 }, table: { size: FONT } };
 
-const mm = (v: number) => Math.round(v).toString();
-const deg = (v: number) => `${Number(v.toFixed(1))}°`;
+const mm = (v: number) => formatNumber(v, 'mm');
+const deg = (v: number) => `${formatNumber(v)}°`;
 
 export function drawingScale(diameter: number): number {
   return SCALES.find((s) => diameter / s <= MAX_DRAWN) ?? SCALES[SCALES.length - 1];
@@ -35,8 +38,10 @@ export function wheelDrawing(g: WheelGeometry): string {
     const t = (a * Math.PI) / 180;
     return [cx + (r / s) * Math.sin(t), cy - (r / s) * Math.cos(t)];
   };
-  const sheet = new SvgSheet();
-  const arc = (r: number, a0: number, a1: number, cls: string, extra = '') => sheet.arc(at(r, a0), at(r, a1), r / s, a1 - a0 > 180, cls, extra);
+  const sheet = new SvgSheet(FONTS, { x: 1, y: 1, w: PAGE.w - 2, h: PAGE.h - 2 });
+  // On paper, the angle clockwise from the top is the SVG angle less a right angle.
+  const rad = (a: number) => (a * Math.PI) / 180 - Math.PI / 2;
+  const arc = (r: number, a0: number, a1: number, cls: string, extra = '') => sheet.arc(at(r, a0), at(r, a1), r / s, a1 - a0 > 180, cls, extra, arcSegments(c, r / s, rad(a0), rad(a1)));
 
   sheet.text(cx, 14, 'Wheel setting-out, one of two alike', 'middle', 'title');
   sheet.text(cx, 20, `Scale 1:${s} on A4 · dimensions in mm · angles clockwise from spoke 1 (at the top)`);
@@ -61,7 +66,7 @@ export function wheelDrawing(g: WheelGeometry): string {
     for (const side of [-1, 1]) sheet.line(off(rIn, side), off(rOut, side), 'spoke');
     sheet.line(at(g.naveRadius, a), at(g.felloeInner, a), 'spoke-centre', ` data-spoke="${i + 1}" data-angle="${n3(a)}"`);
     const [lx, ly] = at(g.naveRadius + 0.55 * (g.felloeInner - g.naveRadius), a);
-    sheet.text(lx + 3 * Math.cos(t), ly + 3 * Math.sin(t) + 1, `${i + 1}`, 'middle', 'small');
+    sheet.label({ text: `${i + 1}`, at: [lx, ly], cls: 'small', gap: hw / s + 0.8, first: { x: lx + 3 * Math.cos(t), y: ly + 3 * Math.sin(t) + 1, anchor: 'middle' } });
   });
   // Tenons of spoke 1, dashed inside the nave and the felloe.
   for (const side of [-1, 1]) {
@@ -91,17 +96,15 @@ export function wheelDrawing(g: WheelGeometry): string {
   sheet.line([xl, y(g.naveRadius)], [xl, y(g.felloeInner)], 'dim', dimAttrs('spoke-shoulders', g.shoulders));
   sheet.line([xr, y(g.naveRadius - g.tenonNave)], [xr, y(g.felloeInner + g.tenonFelloe)], 'dim', dimAttrs('spoke-overall', g.overall));
   const ym = y((g.naveRadius + g.felloeInner) / 2);
-  sheet.text(xl - 1.5, ym - 2, mm(g.shoulders), 'end');
-  sheet.text(xl - 1.5, ym + 2.5, 'shoulders', 'end');
-  sheet.text(xr + 1.5, ym - 2, mm(g.overall), 'start');
-  sheet.text(xr + 1.5, ym + 2.5, 'overall', 'start');
+  sheet.label({ text: [mm(g.shoulders), 'shoulders'], at: [xl, ym], first: { x: xl - 1.5, y: ym - 2, anchor: 'end' }, prefer: ['w', 'nw', 'sw'] });
+  sheet.label({ text: [mm(g.overall), 'overall'], at: [xr, ym], first: { x: xr + 1.5, y: ym - 2, anchor: 'start' }, prefer: ['e', 'ne', 'se'] });
 
   // Mortise spacing between spokes 2 and 3, clear of spoke 1's dimensions.
   const first = g.mortisePositionsDeg[1];
   const ra = g.naveRadius + 0.3 * (g.felloeInner - g.naveRadius);
   arc(ra, first, first + g.mortiseSpacingDeg, 'dim', dimAttrs('mortise-angle', g.mortiseSpacingDeg));
   const [mx, my] = at(ra + 5 * s, first + g.mortiseSpacingDeg / 2);
-  sheet.text(mx, my + FONT / 3, deg(g.mortiseSpacingDeg));
+  sheet.label({ text: deg(g.mortiseSpacingDeg), at: at(ra, first + g.mortiseSpacingDeg / 2), first: { x: mx, y: my + FONT / 3, anchor: 'middle' } });
 
   // One felloe piece: its arc outside the rim, its chord across it.
   if (g.pieces >= 2) {
@@ -110,14 +113,15 @@ export function wheelDrawing(g: WheelGeometry): string {
     for (const a of [a0, a1]) sheet.line(at(g.tread, a), at(rArc + 2 * s, a), 'extension');
     arc(rArc, a0, a1, 'dim', dimAttrs('felloe-arc', g.arc));
     const [x, yy] = at(rArc + 5 * s, (a0 + a1) / 2);
-    sheet.text(x, yy + FONT / 3, `arc ${mm(g.arc)} (outer face)`, x < cx - 1 ? 'end' : x > cx + 1 ? 'start' : 'middle');
+    const side = x < cx - 1 ? 'end' : x > cx + 1 ? 'start' : 'middle';
+    sheet.label({ text: `arc ${mm(g.arc)} (outer face)`, at: at(rArc, (a0 + a1) / 2), first: { x, y: yy + FONT / 3, anchor: side }, prefer: side === 'end' ? ['w', 'nw', 'sw'] : ['e', 'ne', 'se'] });
     const p = at(g.felloeOuter, a0);
     const q = at(g.felloeOuter, a1);
     sheet.line(p, q, 'chord', ` data-dim="felloe-chord" data-value="${n3(g.chord)}"`);
     // Along the chord towards its second end, clear of spoke 1's dimensions.
     const u = 0.65;
     const [x2, y2] = [p[0] + u * (q[0] - p[0]), p[1] + u * (q[1] - p[1])];
-    sheet.text(x2 + (x2 < cx ? -1.5 : 1.5), y2 + FONT / 3, `chord ${mm(g.chord)}`, x2 < cx ? 'end' : 'start');
+    sheet.label({ text: `chord ${mm(g.chord)}`, at: [x2, y2], first: { x: x2 + (x2 < cx ? -1.5 : 1.5), y: y2 + FONT / 3, anchor: x2 < cx ? 'end' : 'start' }, prefer: x2 < cx ? ['w', 'nw', 'sw'] : ['e', 'ne', 'se'] });
   }
 
   // Scale bar under the diameter.
@@ -143,14 +147,15 @@ export function wheelDrawing(g: WheelGeometry): string {
     '.felloe-joint { stroke-width: 0.5; } .dowel { fill: #000; }',
     '.dim, .extension, .chord, .nave-face, .felloe-face { stroke-width: 0.18; } .chord { stroke-dasharray: 2 1; }',
     '.scale-bar { fill: #000; stroke: none; }',
-    `text { font-family: sans-serif; font-size: ${FONT}px; fill: #000; stroke: none; } .title { font-size: 5px; font-weight: bold; } .subtitle { font-weight: bold; } .small { font-size: 2.8px; }`,
+    fontRules(FONTS),
+    '.leader { stroke-width: 0.18; }',
     '#dim-arrow path { fill: #000; stroke: none; }',
   ].join(' ');
   return [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${PAGE.w}mm" height="${PAGE.h}mm" viewBox="0 0 ${PAGE.w} ${PAGE.h}" data-scale="${s}" data-unit="mm" data-centre="${n3(cx)} ${n3(cy)}">`,
     `<style>${style}</style>`,
     ARROW_DEFS,
-    ...sheet.parts,
+    ...sheet.finish(),
     '</svg>',
   ].join('\n');
 }

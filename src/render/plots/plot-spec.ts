@@ -1,33 +1,18 @@
 // PlotData to a vega-lite chart: one layer each for the lines, the marked
 // points and the horizontal and vertical reference lines, all sharing one
-// legend keyed by label (colour and dash together). Reference lines take a
-// colour by what they stand for, so an advisory limit looks the same in every
-// plot. Pure: the chart is data; src/render/plots/vega-svg.ts draws it.
+// legend keyed by label (colour and dash together, series-style.ts). The y
+// axis holds every value drawn with a little room above and below, so no line
+// runs along the frame. Pure: the chart is data; src/render/plots/vega-svg.ts
+// draws it.
 
 import type { TopLevelSpec } from 'vega-lite';
-import type { PlotData, RuleKind } from '../../core/plots/plot-data.ts';
+import type { PlotData } from '../../core/plots/plot-data.ts';
 import { thinPoints } from './thin-points.ts';
+import { cycle, DASHED, RULE_COLOURS, RULE_DASH, SERIES_COLOURS, SERIES_DASHES } from './series-style.ts';
 
 export const PLOT_WIDTH = 600;
 export const PLOT_HEIGHT = 240;
 
-/** Our own plain choices: lines in distinct hues, limits in the report's warning and failure tones, thresholds dark. */
-const LINE_COLOURS = ['#1f5fa8', '#2e8b57', '#8a4fb0', '#b8860b', '#008b8b', '#a0522d', '#4b5a6a', '#c2185b'];
-/** Per kind, the first, second, ... line of that kind: two thresholds in one plot still differ. */
-const RULE_COLOURS: Record<RuleKind, string[]> = {
-  advisory: ['#e69500', '#9c6b00'],
-  hard: ['#c62828', '#7f1010'],
-  threshold: ['#222222', '#6d4c41'],
-  position: ['#666666', '#00838f'],
-};
-const SOLID: number[] = [];
-const DASHED = [6, 3];
-const RULE_DASH: Record<RuleKind, number[][]> = {
-  advisory: [[6, 3], [10, 3, 2, 3]],
-  hard: [[6, 3], [10, 3, 2, 3]],
-  threshold: [[2, 2], [8, 2, 2, 2]],
-  position: [[8, 3, 2, 3], [3, 3]],
-};
 /** Room beside the data on the x axis where a vertical line could sit on the frame. */
 const X_PAD = 0.03;
 
@@ -43,13 +28,13 @@ export function plotSpec(plot: PlotData, size = { width: PLOT_WIDTH, height: PLO
   const dots = plot.lines.filter((l) => l.style === 'dots');
   const labels = [...plot.lines.map((l) => l.label), ...plot.rules.map((r) => r.label)];
   const nth = plot.rules.map((r, i) => plot.rules.slice(0, i).filter((q) => q.kind === r.kind).length);
-  const colours = [...plot.lines.map((_, i) => LINE_COLOURS[i % LINE_COLOURS.length]), ...plot.rules.map((r, i) => cycle(RULE_COLOURS[r.kind], nth[i]))];
-  const dashes = [...plot.lines.map((l) => (l.style === 'dashed' ? DASHED : SOLID)), ...plot.rules.map((r, i) => cycle(RULE_DASH[r.kind], nth[i]))];
+  const colours = [...plot.lines.map((_, i) => cycle(SERIES_COLOURS, i)), ...plot.rules.map((r, i) => cycle(RULE_COLOURS[r.kind], nth[i]))];
+  const dashes = [...plot.lines.map((l, i) => (l.style === 'dashed' ? DASHED : l.style === 'dots' ? SERIES_DASHES[0] : cycle(SERIES_DASHES, i))), ...plot.rules.map((r, i) => cycle(RULE_DASH[r.kind], nth[i]))];
   const legend = { labelLimit: 0, symbolType: 'stroke', symbolStrokeWidth: 2, symbolSize: 260 };
   const colour = { field: 'label', type: 'nominal', title: null, sort: labels, scale: { domain: labels, range: colours }, legend } as const;
   const dash = { field: 'label', type: 'nominal', title: null, sort: labels, scale: { domain: labels, range: dashes }, legend } as const;
   const x = { field: 'x', type: 'quantitative', title: plot.xLabel, ...xScale(plot) } as const;
-  const y = { field: 'y', type: 'quantitative', title: plot.yLabel } as const;
+  const y = { field: 'y', type: 'quantitative', title: plot.yLabel, scale: yScale(plot) } as const;
   const lineRows: Row[] = drawn.flatMap((l) => thinPoints(l.x, l.y, size.width / 2).map(([px, py], order) => ({ label: l.label, x: px, y: py, order })));
   const dotRows: Row[] = dots.flatMap((l) => l.x.map((px, i) => ({ label: l.label, x: px, y: l.y[i] })));
   const yRules: Row[] = plot.rules.filter((r) => r.axis === 'y').map((r) => ({ label: r.label, y: r.value }));
@@ -79,7 +64,18 @@ export function plotSpec(plot: PlotData, size = { width: PLOT_WIDTH, height: PLO
   } as TopLevelSpec;
 }
 
-const cycle = <T>(list: readonly T[], i: number): T => list[i % list.length];
+/** Room above and below the values on the y axis, as a fraction of their span. */
+const Y_PAD = 0.05;
+
+/** Every value drawn, with room either side; from zero where all are at least zero, so no force axis goes negative. */
+export function yScale(plot: PlotData): { domain: [number, number]; nice: boolean; zero: boolean } {
+  const ys = [...plot.lines.flatMap((l) => l.y), ...plot.rules.filter((r) => r.axis === 'y').map((r) => r.value)].filter(Number.isFinite);
+  if (ys.length === 0) return { domain: [0, 1], nice: false, zero: false };
+  const lo = ys.reduce((a, b) => Math.min(a, b));
+  const hi = ys.reduce((a, b) => Math.max(a, b));
+  const pad = Y_PAD * (hi - lo || Math.abs(hi) || 1);
+  return { domain: [lo >= 0 ? Math.max(0, lo - pad) : lo - pad, hi + pad], nice: false, zero: false };
+}
 
 /** With vertical lines, a little room past the outermost so none hides on the frame; otherwise the library's own domain. */
 function xScale(plot: PlotData): { scale?: { domain: [number, number]; nice: boolean; zero: boolean } } {

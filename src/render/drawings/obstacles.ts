@@ -1,0 +1,82 @@
+import type { Box } from './text-box.ts';
+
+// What is drawn on a sheet, as far as a label must keep off it: filled areas
+// as boxes, lines and outlines as segments, circles as rings (a label may sit
+// inside a large circle or outside it, not across its line) and small round
+// marks as discs. Paper mm throughout.
+
+export type Pt = [number, number];
+
+export type Obstacle =
+  | { kind: 'box'; box: Box }
+  | { kind: 'segment'; p: Pt; q: Pt; pad: number }
+  | { kind: 'ring'; c: Pt; r: number; pad: number }
+  | { kind: 'disc'; c: Pt; r: number };
+
+/** Room kept between a label and a line, paper mm: a little over half a thick stroke. */
+export const LINE_PAD = 0.4;
+
+export function hits(b: Box, o: Obstacle): boolean {
+  switch (o.kind) {
+    case 'box':
+      return b.x < o.box.x + o.box.w && o.box.x < b.x + b.w && b.y < o.box.y + o.box.h && o.box.y < b.y + b.h;
+    case 'segment':
+      return segmentCrossesBox(o.p, o.q, { x: b.x - o.pad, y: b.y - o.pad, w: b.w + 2 * o.pad, h: b.h + 2 * o.pad });
+    case 'ring':
+      return nearest(b, o.c) <= o.r + o.pad && farthest(b, o.c) >= o.r - o.pad;
+    case 'disc':
+      return nearest(b, o.c) <= o.r;
+  }
+}
+
+/** Distance from the point to the nearest point of the box (0 inside it). */
+function nearest(b: Box, c: Pt): number {
+  const dx = Math.max(b.x - c[0], 0, c[0] - (b.x + b.w));
+  const dy = Math.max(b.y - c[1], 0, c[1] - (b.y + b.h));
+  return Math.hypot(dx, dy);
+}
+
+function farthest(b: Box, c: Pt): number {
+  const dx = Math.max(Math.abs(b.x - c[0]), Math.abs(b.x + b.w - c[0]));
+  const dy = Math.max(Math.abs(b.y - c[1]), Math.abs(b.y + b.h - c[1]));
+  return Math.hypot(dx, dy);
+}
+
+/** True where any part of the segment pq lies in the box (Liang-Barsky clipping). */
+export function segmentCrossesBox(p: Pt, q: Pt, b: Box): boolean {
+  const d = [q[0] - p[0], q[1] - p[1]];
+  let lo = 0;
+  let hi = 1;
+  const edges: [number, number][] = [
+    [-d[0], p[0] - b.x],
+    [d[0], b.x + b.w - p[0]],
+    [-d[1], p[1] - b.y],
+    [d[1], b.y + b.h - p[1]],
+  ];
+  for (const [den, num] of edges) {
+    if (den === 0) {
+      if (num < 0) return false;
+      continue;
+    }
+    const t = num / den;
+    if (den < 0) lo = Math.max(lo, t);
+    else hi = Math.min(hi, t);
+    if (lo > hi) return false;
+  }
+  return true;
+}
+
+/** An arc of radius r about c from angle a0 to a1 (radians, SVG's y down), as segments. */
+export function arcSegments(c: Pt, r: number, a0: number, a1: number, pad = LINE_PAD): Obstacle[] {
+  const n = Math.max(2, Math.ceil((Math.abs(a1 - a0) * r) / 2));
+  const pts = Array.from({ length: n + 1 }, (_, i): Pt => {
+    const a = a0 + ((a1 - a0) * i) / n;
+    return [c[0] + r * Math.cos(a), c[1] + r * Math.sin(a)];
+  });
+  return pts.slice(1).map((q, i) => ({ kind: 'segment', p: pts[i], q, pad }));
+}
+
+/** A polyline as segments. */
+export function polylineSegments(pts: readonly Pt[], pad = LINE_PAD): Obstacle[] {
+  return pts.slice(1).map((q, i) => ({ kind: 'segment', p: pts[i], q, pad }));
+}
