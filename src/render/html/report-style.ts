@@ -100,7 +100,8 @@ hr { border: none; border-top: 1px solid #999; margin: 2em 0 0.5em; }
 .part-summary h2.verdict { margin-top: 0.2em; }
 .part-summary table { margin: 0.3em 0 0.5em; }
 .part-summary p, .part-summary ul { margin: 0.3em 0; }
-.part-summary figure.drawing svg { max-height: 95mm; width: auto; margin: 0 auto; }
+.part-summary figure.drawing svg { max-height: 80mm; width: auto; margin: 0 auto; }
+.part-summary figure figcaption { font-size: 0.85em; }
 /* The appendix's working, finding after finding, closely set. */
 .part-appendix article.finding { margin: 0 0 0.6em; }
 .part-appendix article.finding h3 { font-size: 1em; margin: 0.8em 0 0.2em; }

@@ -26,7 +26,10 @@ export const runsCell = (runs: Run[]): Cell => ({ kind: 'text', text: runsText(r
  */
 export function sourcesCell(ids: readonly string[], numbers?: ReadonlyMap<string, number>): Cell {
   const ref = (id: string) => sourceRef(id, numbers?.has(id) ? String(numbers.get(id)) : undefined);
-  return runsCell(ids.length === 0 ? [plain('none cited')] : ids.flatMap((id, i) => (i === 0 ? [ref(id)] : [plain(numbers ? ', ' : '; '), ref(id)])));
+  // By number, in the Sources section's order, so a long list reads like an index.
+  const order = (id: string) => numbers?.get(id) ?? Infinity;
+  const sorted = numbers ? [...ids].sort((a, b) => order(a) - order(b)) : ids;
+  return runsCell(sorted.length === 0 ? [plain('none cited')] : sorted.flatMap((id, i) => (i === 0 ? [ref(id)] : [plain(numbers ? ', ' : '; '), ref(id)])));
 }
 
 /** An empty cell. */

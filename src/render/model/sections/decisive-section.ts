@@ -2,16 +2,18 @@ import type { DecisiveInput } from '../../../core/decisive/decisive-input.ts';
 import type { CheckResult } from '../../../core/result/check-result.ts';
 import { formatNumber } from '../../../core/format/number-format.ts';
 import { TOLERANCE } from '../../../core/decisive/break-even.ts';
-import { left, numberCell, percentCell, right, row, severityCell, textCell } from '../cells.ts';
+import { left, numberCell, percentCell, right, row, runsCell, severityCell, textCell } from '../cells.ts';
 import type { Block, Row, Section, TableBlock } from '../document.ts';
 import { numberedFindings } from '../numbered-findings.ts';
-import { paragraph } from '../runs.ts';
+import { badge, paragraph, plain } from '../runs.ts';
 import { section } from '../section-titles.ts';
 
 export const STATUS_WORDS = { given: 'given (an estimate)', defaulted: 'default', 'from-memory': 'from memory' } as const;
 
 /** How many inputs of each decisive finding the summary names: those nearest their break-even. */
 const BRIEF_PER_FINDING = 2;
+/** The most rows the short table holds, so the summary stays on two pages. */
+const BRIEF_ROWS = 6;
 /** How many findings the summary names as setting the verdict. */
 const NAMED_FINDINGS = 4;
 
@@ -33,10 +35,10 @@ function inputRow(d: DecisiveInput): Row {
   ]);
 }
 
-function inputsTable(id: string, list: readonly DecisiveInput[]): TableBlock {
+function inputsTable(list: readonly DecisiveInput[]): TableBlock {
   return {
     kind: 'table',
-    id,
+    id: 'decisive-inputs',
     columns: [left('Finding'), left('Severity'), left('Input'), left('Status'), right('Value'), right('Changes at'), left('To'), right('Move')],
     rows: list.map(inputRow),
     empty: 'No estimate, default or remembered value moves a decisive finding.',
@@ -67,9 +69,25 @@ export function decisiveSection(result: CheckResult): Section | null {
     paragraph(
       `The inputs below are estimates, defaults or values from memory that the decisive findings depend on. Each was moved on its own until the finding's severity changed (found to within ${formatNumber(TOLERANCE * 100)} %, by re-running the parts of the check it reaches). A change of a few per cent means the verdict hangs on that input: measure or source it before relying on the verdict.`,
     ),
-    inputsTable('decisive-inputs', list),
+    inputsTable(list),
     ...searchLine(result),
   ]);
+}
+
+/** The short form: the finding and its severity in one cell, the status in a word. */
+function briefTable(list: readonly DecisiveInput[]): TableBlock {
+  const rows = list.map((d) =>
+    row([
+      runsCell([badge(d.severity), plain(` ${d.rule} (${d.subject})`)]),
+      textCell(`${d.input} (${STATUS_WORDS[d.status]})`),
+      numberCell(d.value, d.unit),
+      numberCell(d.break_even, d.unit),
+      d.to_severity === null ? textCell('') : severityCell(d.to_severity),
+      percentCell(d.change),
+    ]),
+  );
+  const columns = [left('Finding'), left('Input'), right('Value'), right('Changes at'), left('To'), right('Move')];
+  return { kind: 'table', id: 'decisive-brief', columns, rows, empty: 'No estimate, default or remembered value moves a decisive finding.' };
 }
 
 /** The findings whose severity is the verdict's, by their numbers in the findings table. */
@@ -92,15 +110,17 @@ export function decisiveBriefSection(result: CheckResult): Section {
     return section('decisiveBrief', [decidedBy(result), paragraph('The search for the inputs these findings hang on was not run (check --no-decisive).')]);
   }
   const findings = [...new Set(list.map((d) => `${d.rule} ${d.subject}`))];
-  const brief = findings.flatMap((key) =>
-    list
-      .filter((d) => `${d.rule} ${d.subject}` === key && d.break_even !== null)
-      .sort((a, b) => nearness(a) - nearness(b))
-      .slice(0, BRIEF_PER_FINDING),
-  );
+  const brief = findings
+    .flatMap((key) =>
+      list
+        .filter((d) => `${d.rule} ${d.subject}` === key && d.break_even !== null)
+        .sort((a, b) => nearness(a) - nearness(b))
+        .slice(0, BRIEF_PER_FINDING),
+    )
+    .slice(0, BRIEF_ROWS);
   return section('decisiveBrief', [
     decidedBy(result),
     paragraph(`Inputs nearest to changing a decisive finding (each moved on its own; the full list is under "Decisive inputs"):`),
-    inputsTable('decisive-brief', brief),
+    briefTable(brief),
   ]);
 }

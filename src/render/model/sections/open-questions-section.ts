@@ -8,7 +8,7 @@ import { section } from '../section-titles.ts';
 import { nearness, STATUS_WORDS } from './decisive-section.ts';
 
 /** How many decisive inputs the summary names, nearest first; how many other defaults it names in each group. */
-const NAMED_DECISIVE = 5;
+const NAMED_DECISIVE = 4;
 const NAMED_PER_GROUP = 3;
 
 const count = (n: number) => formatNumber(n, 'count');
@@ -35,7 +35,8 @@ function defaultItems(result: CheckResult, named: ReadonlySet<string>): Run[][] 
   const defaults = result.spec_as_checked.filter((e) => e.defaulted && !named.has(e.path.replace(/\[(\d+)\]/g, '.$1')));
   const groups = [...new Set(defaults.map((e) => groupOf(e.path)))];
   return groups.map((g) => {
-    const paths = defaults.filter((e) => groupOf(e.path) === g).map((e) => e.path);
+    // The group's name is said once, before its paths.
+    const paths = defaults.filter((e) => groupOf(e.path) === g).map((e) => e.path.slice(g.length).replace(/^\./, '') || e.path);
     const more = paths.length > NAMED_PER_GROUP ? ` and ${count(paths.length - NAMED_PER_GROUP)} more` : '';
     return [strong(`${g}:`), plain(` ${paths.slice(0, NAMED_PER_GROUP).join(', ')}${more}.`)];
   });
