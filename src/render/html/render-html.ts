@@ -33,7 +33,7 @@ function blockHtml(b: Block, plots: ReportPlots): string {
     case 'cautions':
       return `<ul class="cautions">\n${b.items.map((c) => `<li>${escapeHtml(c)}</li>`).join('\n')}\n</ul>`;
     case 'table':
-      return tableHtml(b);
+      return b.only === 'sheet' ? '' : tableHtml(b);
     case 'figure':
       return figureHtml(b, plots);
     case 'working':

@@ -27,7 +27,7 @@ function blockMd(b: Block): string[] {
     case 'cautions':
       return [b.items.map((c) => `- ${escapeBlock(c)}`).join('\n')];
     case 'table':
-      return [tableMd(b)];
+      return b.only === 'sheet' ? [] : [tableMd(b)];
     case 'figure':
       return figureMd(b);
     case 'working':

@@ -58,6 +58,8 @@ export interface TableBlock {
   rows: Row[];
   /** Said instead of an empty table. */
   empty: string;
+  /** Written only in the workbook, which picks it by id: the text outputs give its rows in another table of their own. */
+  only?: 'sheet';
 }
 
 export type FigureRole = 'drawing' | 'plot' | 'setting-out' | 'stock-bars';

@@ -1,5 +1,6 @@
 import type { CheckResult } from '../../../core/result/check-result.ts';
 import type { Block, FindingBlock, Section } from '../document.ts';
+import { familyFindingsTable } from '../family-findings-table.ts';
 import { findingsTable, type NumberedFinding } from '../findings-table.ts';
 import { numberedFindings } from '../numbered-findings.ts';
 import { badge, paragraph, plain, strong } from '../runs.ts';
@@ -27,8 +28,10 @@ function flaggedList(graded: readonly NumberedFinding[]): Block[] {
 export function findingsSection(result: CheckResult): Section {
   const { graded } = numberedFindings(result.findings);
   return section('findings', [
-    paragraph('Every graded finding, grouped by rule family, worst first within each. Sources are given by their number in the Sources section of the appendix.'),
-    findingsTable('findings', graded, 'No graded findings.', sourceNumbers(result)),
+    paragraph('Every graded finding, grouped by rule family, worst first within each; a finding keeps its number (worst first over the whole check) everywhere. Sources are given by their number in the Sources section of the appendix.'),
+    familyFindingsTable(graded, result.findings.map((f) => f.rule), sourceNumbers(result)),
+    // The same findings worst first, as the workbook lists them.
+    findingsTable('findings', graded, 'No graded findings.', 'sheet'),
     ...flaggedList(graded),
   ]);
 }
@@ -44,7 +47,7 @@ export function notesSection(result: CheckResult): Section {
   const { notes } = numberedFindings(result.findings);
   return section('notes', [
     paragraph('Notes inform; they grade nothing and never count towards the verdict.'),
-    findingsTable('notes', notes, 'No notes.', sourceNumbers(result)),
+    findingsTable('notes', notes, 'No notes.'),
     ...notes.map(findingBlock),
   ]);
 }
