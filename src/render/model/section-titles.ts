@@ -4,7 +4,8 @@ import type { Block, Section } from './document.ts';
 /**
  * The check report's sections: their ids, titles, whether each starts a
  * printed page, and the part it stands in: the summary a reviewer reads
- * first, the body, or the appendix of rarely read material. The workbook
+ * first, the body, or the appendix of rarely read material (the teaching
+ * view, a document of its own, is one part with its cautions). The workbook
  * picks tables by id, never by title.
  */
 export const SECTIONS = {
@@ -34,7 +35,7 @@ export const SECTIONS = {
   cutListBasis: { title: 'Cut list in full: grain, volume, mass and the working of each size', newPage: false, part: 'appendix' },
   spec: { title: 'Spec as checked', newPage: false, part: 'appendix' },
   sources: { title: 'Sources', newPage: false, part: 'appendix' },
-  teach: { title: 'How each rule family works', newPage: false },
+  teach: { title: 'How each rule family works', newPage: false, part: 'summary' },
 } as const satisfies Record<string, { title: string; newPage: boolean; part?: 'summary' | 'appendix' }>;
 
 export type SectionId = keyof typeof SECTIONS;
