@@ -8,11 +8,17 @@ import { renderHtml } from '../src/render/html/render-html.ts';
 import { drawReportPlots } from '../src/render/report-plots.ts';
 import { runCheck } from '../src/core/pipeline/run-check.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
+import type { CheckResult } from '../src/core/result/check-result.ts';
 
-export async function demoReportHtml(demo: string): Promise<string> {
+/** A demo checked as `axletree check` checks it; `decisive` adds the search for decisive inputs (several seconds). */
+export function demoResult(demo: string, decisive = false): CheckResult {
   const data = loadRulesData(defaultRulesDir());
   const p = prepareSpec(parse(readFileSync(new URL(`../specs/${demo}.yaml`, import.meta.url), 'utf8')), data);
   if (!p.ok) throw new Error(p.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('\n'));
-  const result = runCheck(p.spec, p.entries, data);
+  return runCheck(p.spec, p.entries, data, { decisive });
+}
+
+export async function demoReportHtml(demo: string, decisive = false): Promise<string> {
+  const result = demoResult(demo, decisive);
   return renderHtml(reportDocument(result), await drawReportPlots(result));
 }

@@ -70,13 +70,19 @@ function withHostileText(): CheckResult {
 }
 
 describe('the report model', () => {
-  it('keeps the sections in order: verdict, cautions, findings, working, then the evidence, sources last', () => {
-    const ids = reportDocument(sampleResult()).sections.map((s) => s.id);
-    expect(ids.slice(0, 5)).toEqual(['verdict', 'cautions', 'findings', 'working', 'notes']);
-    const later = ['figures', 'massBalance', 'loads', 'cutList', 'leather', 'settingOut', 'stockPlan', 'spec', 'sources'];
-    const at = later.map((id) => ids.indexOf(id));
-    expect(at.every((i) => i > 4)).toBe(true);
+  it('keeps the parts in order: the summary (verdict and cautions first), the body, then the appendix with the sources last', () => {
+    const sections = reportDocument(sampleResult()).sections;
+    const ids = sections.map((s) => s.id);
+    expect(ids.slice(0, 7)).toEqual(['verdict', 'cautions', 'utilisation', 'decisiveBrief', 'openQuestions', 'build', 'costs']);
+    expect(sections.slice(0, 7).every((s) => s.part === 'summary')).toBe(true);
+    const body = ['findings', 'figures', 'massBalance', 'cutList', 'leather', 'settingOut', 'stockPlan'];
+    const appendix = ['working', 'notes', 'loadWorking', 'loads', 'cutListBasis', 'spec', 'sources'];
+    const at = [...body, ...appendix].map((id) => ids.indexOf(id));
+    expect(at.every((i) => i > 6)).toBe(true);
     expect([...at].sort((a, b) => a - b)).toEqual(at);
+    for (const id of body) expect(sections[ids.indexOf(id)].part, id).toBeUndefined();
+    for (const id of appendix) expect(sections[ids.indexOf(id)].part, id).toBe('appendix');
+    expect(ids.at(-1)).toBe('sources');
   });
 
   it('refuses a result without cautions', () => {
@@ -89,7 +95,7 @@ describe('renderMarkdown', () => {
   const md = markdownOf(result);
 
   it('opens with the title, the verdict and every caution before the findings table', () => {
-    const tableStart = md.indexOf('| No. | Severity | Rule');
+    const tableStart = md.indexOf('| No. | Severity | Rule | Subject');
     expect(tableStart).toBeGreaterThan(0);
     expect(md.startsWith(`# Design-rule check: ${result.spec_name}`)).toBe(true);
     expect(md.indexOf('## Verdict: **FAIL**')).toBeLessThan(tableStart);
@@ -105,50 +111,60 @@ describe('renderMarkdown', () => {
   });
 
   it('says in one line what each severity means', () => {
-    const rows = tableAfter(md, '## Findings');
+    const rows = tableAfter(md, '## Verdict: **FAIL**');
     for (const [s, meaning] of Object.entries(SEVERITY_MEANING)) {
       expect(rows.find((r) => r.startsWith(`| **${s.toUpperCase()}** |`)), s).toContain(`| ${meaning} |`);
     }
   });
 
-  it('lists graded findings worst first, each with its subject in words', () => {
-    const rows = tableAfter(md, '## Findings', 1).map(cellsOf);
-    expect(rows.map((r) => r[1])).toEqual(['**FAIL**', '**WARNING**', '**ADVICE**', '**PASS**']);
-    expect(rows.map((r) => r[0])).toEqual(['1', '2', '3', '4']);
+  it('lists graded findings by rule family in one table, numbered worst first, each with its subject in words, combination, load case and sources by number', () => {
+    const rows = tableAfter(md, '## Findings by rule family').map(cellsOf);
+    expect(rows).toHaveLength(4);
+    const bySeverity = Object.fromEntries(rows.map((r) => [r[1], r[0]]));
+    expect(bySeverity).toEqual({ '**FAIL**': '1', '**WARNING**': '2', '**ADVICE**': '3', '**PASS**': '4' });
     const warning = result.findings.find((f) => f.severity === 'warning')!;
-    expect(rows[1]).toEqual([
-      '2', '**WARNING**', warning.rule, String(warning.code), warning.subject_label,
-      formatQuantity(warning.value, warning.unit), formatQuantity(warning.limit, warning.unit), formatPercent(warning.utilisation), warning.message.replace(/'/g, "'"),
+    const numbers = warning.sources.map((id) => result.sources.findIndex((s) => s.id === id) + 1).sort((a, b) => a - b);
+    expect(rows.find((r) => r[0] === '2')).toEqual([
+      '2', '**WARNING**', warning.rule, warning.subject_label, formatQuantity(warning.value, warning.unit), formatQuantity(warning.limit, warning.unit),
+      formatPercent(warning.utilisation), warning.combination ?? '', warning.load_case ?? '', numbers.join(', '),
     ]);
+    // Within the table, a family's rows stand together.
+    const families = rows.map((r) => r[2].split('.')[0]);
+    expect(families.filter((f, i) => i === 0 || families[i - 1] !== f)).toEqual([...new Set(families)]);
   });
 
   it('shows notes apart and never counts them in the verdict line', () => {
     const r = withNote();
     const text = markdownOf(r);
-    expect(text).toContain('\n4 graded findings: 0 error, 1 fail, 1 warning, 1 advice, 1 pass.\n');
-    expect(text).toContain('1 note informs without grading');
-    expect(tableAfter(text, '## Findings', 1)).toHaveLength(4);
-    const notes = tableAfter(text, '## Notes').map(cellsOf);
+    expect(text).toContain('\n4 graded findings: 0 error, 1 fail, 1 warning, 1 advice, 1 pass. 1 note informs without grading the build.');
+    expect(tableAfter(text, '## Findings by rule family')).toHaveLength(4);
+    const notes = tableAfter(text, '## Notes and their working').map(cellsOf);
     expect(notes).toHaveLength(1);
     expect(notes[0].slice(0, 5)).toEqual(['N1', '**INFO**', 'balance.axle-position', '2021', 'standing, crew as placed']);
-    expect(text.indexOf('### N1. **INFO** balance.axle-position: standing, crew as placed')).toBeGreaterThan(text.indexOf('\n## Notes\n'));
+    expect(text.indexOf('### N1. **INFO** balance.axle-position: standing, crew as placed')).toBeGreaterThan(text.indexOf('\n## Notes and their working\n'));
   });
 
-  it('shows the working of every flagged finding step by step, with its fix and its sources by id, and not of passes', () => {
-    const blocks = fencedBlocks(md);
-    const workingStart = md.indexOf('\n## Working of flagged findings\n');
+  it('shows the working of every check, passes included, step by step, with its fix and its sources by id, in the appendix', () => {
+    const appendix = md.indexOf('\n# Appendix: the working and the evidence\n');
+    const workingStart = md.indexOf('\n## Working of every check\n');
+    expect(appendix).toBeGreaterThan(md.indexOf('\n## Stock plan\n'));
+    expect(workingStart).toBeGreaterThan(appendix);
     for (const f of result.findings) {
       const heading = md.indexOf(`**${f.severity.toUpperCase()}** ${f.rule}: ${f.subject_label}`, workingStart);
-      if (f.severity === 'pass') {
-        expect(heading, f.rule).toBe(-1);
-        expect(blocks).not.toContain(f.working_text);
-      } else {
-        expect(heading, f.rule).toBeGreaterThan(workingStart);
-        const fence = md.indexOf('```text\n', heading);
-        expect(md.slice(fence + '```text\n'.length).startsWith(f.working_text)).toBe(true);
-        expect(md.indexOf(`**Fix:** ${f.fix}`, heading)).toBeGreaterThan(heading);
-        expect(md.indexOf(`**Sources:** ${f.sources.join(', ')}`, heading)).toBeGreaterThan(heading);
-      }
+      expect(heading, f.rule).toBeGreaterThan(workingStart);
+      const fence = md.indexOf('```text\n', heading);
+      expect(md.slice(fence + '```text\n'.length).startsWith(f.working_text)).toBe(true);
+      expect(md.indexOf(`**Fix:** ${f.fix}`, heading)).toBeGreaterThan(heading);
+      expect(md.indexOf(`**Sources:** ${f.sources.join(', ')}`, heading)).toBeGreaterThan(heading);
+    }
+  });
+
+  it('says under the findings table what each flagged finding says and what to do, and nothing of the passes', () => {
+    const body = md.slice(md.indexOf('\n## Findings by rule family\n'), md.indexOf('\n## Key figures\n'));
+    for (const f of result.findings) {
+      const line = `**${f.severity.toUpperCase()}** ${f.rule}, ${f.subject_label}: ${f.message}`;
+      if (f.severity === 'pass') expect(body, f.rule).not.toContain(line);
+      else expect(body, f.rule).toContain(`${line} **Fix:** ${f.fix}`);
     }
   });
 
@@ -169,6 +185,12 @@ describe('renderMarkdown', () => {
     result.spec_as_checked.forEach((e, i) => expect(spec[i].includes('*default*')).toBe(e.defaulted));
   });
 
+  it('puts the load cases\' working in the appendix', () => {
+    const at = md.indexOf('\n## Working of the load cases\n');
+    expect(at).toBeGreaterThan(md.indexOf('\n# Appendix: the working and the evidence\n'));
+    for (const c of result.balance.cases) expect(md.indexOf(`#### Load case ${c.id}: ${c.title}`), c.id).toBeGreaterThan(at);
+  });
+
   it('escapes pipes inside table cells', () => {
     const spec = tableAfter(md, '## Spec as checked');
     const row = spec.find((r) => r.includes('axle.x\\_mm'))!;
@@ -177,10 +199,13 @@ describe('renderMarkdown', () => {
     expect(row.match(/(?<!\\)\|/g)).toHaveLength(6);
   });
 
-  it('lists every cited source by id with its catalogue entry', () => {
+  it('lists every cited source by number and id with its catalogue entry, and says where the design basis is', () => {
     const rows = tableAfter(md, '## Sources').map(cellsOf);
-    expect(rows.map((r) => r[0].replace(/\\/g, ''))).toEqual(result.sources.map((s) => s.id));
-    result.sources.forEach((s, i) => expect(rows[i][1]).toContain(s.citation.slice(0, 20)));
+    expect(rows.map((r) => r[0])).toEqual(result.sources.map((_s, i) => String(i + 1)));
+    expect(rows.map((r) => r[1].replace(/\\/g, ''))).toEqual(result.sources.map((s) => s.id));
+    result.sources.forEach((s, i) => expect(rows[i][2]).toContain(s.citation.slice(0, 20)));
+    const section = md.slice(md.indexOf('\n## Sources\n'));
+    expect(section).toContain('`docs/design-basis.md`');
   });
 
   it('keeps a working fence closed even when the working holds backticks', () => {
@@ -213,8 +238,9 @@ describe('renderHtml', () => {
     expect(html).not.toMatch(/href="(?!#)/); // links only to anchors in the page
   });
 
-  it('puts the verdict and the cautions before the first table', () => {
-    const firstTable = html.indexOf('<table');
+  it('puts the verdict, what each severity means and the cautions before the first table of findings', () => {
+    const firstTable = html.indexOf('<table class="highest-utilisations">');
+    expect(html.indexOf('<table class="severities">')).toBeLessThan(firstTable);
     expect(firstTable).toBeGreaterThan(0);
     expect(html.indexOf('Verdict:')).toBeLessThan(firstTable);
     for (const caution of result.cautions) {
@@ -237,18 +263,26 @@ describe('renderHtml', () => {
   it('prints on A4 with big sections on new pages', () => {
     expect(html).toContain('size: A4');
     expect(html).toContain('@media print');
-    expect(html).toContain('<h2 class="new-page">Working of flagged findings</h2>');
-    expect(html).toContain('<h2 class="new-page">Sources</h2>');
+    // The body and the appendix each start a printed page, under their titles; the summary before them stands alone.
+    expect(html).toContain('.part-body, .part-appendix { break-before: page; }');
+    expect(html).toContain('<div class="part part-summary">\n<section>\n<h2 class="verdict">');
+    expect(html).toContain('<div class="part part-body">\n<h1 class="part">The check in detail</h1>\n<section>\n<h2>Findings by rule family</h2>');
+    expect(html).toContain('<div class="part part-appendix">\n<h1 class="part">Appendix: the working and the evidence</h1>\n<section>\n<h2>Working of every check</h2>');
     expect(html).toContain('<h2 class="cautions">Cautions</h2>');
+    // Table heads repeat on every printed page; no table is kept whole on one page.
+    expect(html).toContain('thead { display: table-header-group; }');
+    expect(html).not.toMatch(/(^|[\s,])(table|tbody)\s*\{[^}]*break-inside: avoid/m);
   });
 
   it('shows the working as steps, and links a finding\'s sources to their entries', () => {
     const r = withNote();
     const out = htmlOf(r);
     expect(out).toContain(`<li><span>x_g - x_a</span> = <span>356 - 280</span> = <span class="result">${formatQuantity(76, 'mm')}</span></li>`);
-    for (const s of r.sources) {
+    for (const [i, s] of r.sources.entries()) {
       expect(out).toContain(`<tr id="source-${s.id}">`);
+      // By id in the working, by number in the findings table.
       expect(out).toContain(`<a href="#source-${s.id}">${s.id}</a>`);
+      if (r.findings.some((f) => f.severity !== 'info' && f.sources.includes(s.id))) expect(out).toContain(`<a href="#source-${s.id}">${i + 1}</a>`);
     }
   });
 
@@ -288,11 +322,34 @@ describe('report, cutting sections', () => {
     const at = ['## Cut list', '## Leather and rawhide', '## Wheel setting-out', '## Stock plan', '## Spec as checked'].map((h) => md.indexOf(`\n${h}\n`));
     expect(at.every((i) => i > 0)).toBe(true);
     expect([...at].sort((a, b) => a - b)).toEqual(at);
-    expect(html).toContain('<h2 class="new-page">Stock plan</h2>');
+    expect(html).toContain('<h2>Stock plan</h2>');
   });
 
-  it('tables every part with its rough size and a total, and every strap and hide', () => {
-    const rows = tableAfter(md, '## Cut list');
+  it('gives the cut list densely, a line a part: sizes, count, the stock it is cut from and its allowances by key, each allowance with its source', () => {
+    const rows = tableAfter(md, '## Cut list').map(cellsOf);
+    expect(rows).toHaveLength(cut_list.length);
+    const keys = tableAfter(md, '## Cut list', 1).map(cellsOf);
+    cut_list.forEach((c, i) => {
+      const r = rows[i];
+      expect(r.slice(0, 4)).toEqual([c.part, c.species, String(c.quantity), String(c.spares)]);
+      expect(r[5]).toBe([c.rough.length_mm, c.rough.width_mm, c.rough.thickness_mm].map((v) => formatNumber(v, 'mm')).join(' x '));
+      // Each of the part's allowances is in the key under a letter the row names.
+      const named = r[7].split(', ').map((k) => keys.find((x) => x[0] === k)!);
+      expect(named.map((k) => k[1]).sort()).toEqual(c.allowances.map((a) => a.what).sort());
+      // The stock it is cut from: the group and the stock lengths its patterns use.
+      const group = stock_plan.groups.findIndex((g) => g.plan.patterns.some((p) => p.cuts.some((x) => x.label === c.part)));
+      if (group >= 0) expect(r[6]).toMatch(new RegExp(`^group ${group + 1}: `));
+    });
+    // A value the specification gives is said to come from it; a data value by its sources' numbers.
+    const form = keys.find((k) => k[1] === 'bending-form ends');
+    const at = result.sources.findIndex((s) => s.id === 'from-memory');
+    // A source the result does not list is named by its id, with no number to find.
+    if (form) expect(form[4]).toBe(at < 0 ? 'from-memory' : String(at + 1));
+    expect(keys.find((k) => k[1] === 'faces')![4]).toMatch(/^specification/);
+  });
+
+  it('tables every part with its rough size and a total in the appendix, and every strap and hide', () => {
+    const rows = tableAfter(md, '## Cut list in full: grain, volume, mass and the working of each size');
     expect(rows).toHaveLength(cut_list.length + 1);
     const axle = cut_list.find((c) => c.part === 'axle')!;
     const rough = [axle.rough.length_mm, axle.rough.width_mm, axle.rough.thickness_mm].map((v) => formatNumber(v, 'mm')).join(' x ');

@@ -4,7 +4,9 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { mkdtemp, readFile, readdir, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { OUTPUT_FILES, writeOutputs } from '../src/node/write-outputs.ts';
+import { OPTIONAL_FILES, OUTPUT_FILES, writeOutputs } from '../src/node/write-outputs.ts';
+import type { PdfPrinter } from '../src/node/pdf-printer.ts';
+import { drawHere } from '../src/render/report-plots.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 
 describe('writeOutputs', () => {
@@ -30,5 +32,39 @@ describe('writeOutputs', () => {
   it('refuses to write the drawing over the input', async () => {
     await expect(writeOutputs(sampleResult(), dir, join(dir, OUTPUT_FILES.settingOut))).rejects.toThrow();
     expect(await readdir(dir)).toEqual([]);
+  });
+
+  it('writes the summary beside the report, the teaching view when asked, and the PDFs the printer makes', async () => {
+    const result = sampleResult();
+    const printed: string[] = [];
+    // A stand-in for the browser: it records the pages it is given and returns their titles as bytes.
+    const printer: PdfPrinter = {
+      print: (html) => {
+        printed.push(html);
+        return Promise.resolve(new TextEncoder().encode(/<title>(.*?)<\/title>/.exec(html)![1]));
+      },
+      close: () => Promise.resolve(),
+    };
+    await writeOutputs(result, dir, join(dir, 'spec.yaml'), drawHere, { teach: true, printer });
+    const names = await readdir(dir);
+    for (const f of [OUTPUT_FILES.summary, ...Object.values(OPTIONAL_FILES)]) expect(names, f).toContain(f);
+    const report = await readFile(join(dir, OUTPUT_FILES.html), 'utf8');
+    const summary = await readFile(join(dir, OUTPUT_FILES.summary), 'utf8');
+    expect(printed).toEqual([report, summary]);
+    expect(await readFile(join(dir, OPTIONAL_FILES.reportPdf), 'utf8')).toBe(`Design-rule check: ${result.spec_name}`);
+    expect(await readFile(join(dir, OPTIONAL_FILES.summaryPdf), 'utf8')).toBe(`Feasibility summary: ${result.spec_name}`);
+    expect(await readFile(join(dir, OPTIONAL_FILES.teach), 'utf8')).toContain('<h2>How each rule family works</h2>');
+  });
+
+  it('writes nothing when printing fails: the outputs are one set', async () => {
+    const printer: PdfPrinter = { print: () => Promise.reject(new Error('the browser went away')), close: () => Promise.resolve() };
+    await expect(writeOutputs(sampleResult(), dir, join(dir, 'spec.yaml'), drawHere, { printer })).rejects.toThrow(/went away/);
+    expect(await readdir(dir)).toEqual([]);
+  });
+
+  it('writes no teaching view and no PDF unless asked', async () => {
+    await writeOutputs(sampleResult(), dir, join(dir, 'spec.yaml'));
+    const names = await readdir(dir);
+    for (const f of Object.values(OPTIONAL_FILES)) expect(names).not.toContain(f);
   });
 });

@@ -2,6 +2,8 @@ import { basename, extname, join, resolve } from 'node:path';
 import { readSpec } from '../../src/node/read-spec.ts';
 import { OutputIsInputError } from '../../src/node/atomic-write.ts';
 import { resultJson, writeOutputs } from '../../src/node/write-outputs.ts';
+import { pdfPrinter, type PdfPrinter } from '../../src/node/pdf-printer.ts';
+import { drawHere } from '../../src/render/report-plots.ts';
 import { runCheck } from '../../src/core/pipeline/run-check.ts';
 import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
 import { prepareSpec } from '../../src/core/spec/prepare.ts';
@@ -16,6 +18,19 @@ export interface CheckOptions {
   json: boolean;
   /** Search for the decisive inputs and their break-even values. */
   decisive: boolean;
+  /** Also write the teaching view, teach.html. */
+  teach?: boolean;
+  /** Also print report.pdf and summary.pdf, where a browser is installed. */
+  pdf?: boolean;
+}
+
+/** The printer --pdf asks for, or undefined (and one line on stderr) where no browser can print. */
+async function printerFor(opts: CheckOptions, con: Console): Promise<PdfPrinter | undefined> {
+  if (!opts.pdf) return undefined;
+  const got = await pdfPrinter();
+  if ('printer' in got) return got.printer;
+  con.err(`axletree: --pdf: ${got.why}; wrote the HTML only (install Debian's chromium package to print).\n`);
+  return undefined;
 }
 
 export async function checkCommand(file: string, opts: CheckOptions, con: Console): Promise<number> {
@@ -37,14 +52,17 @@ export async function checkCommand(file: string, opts: CheckOptions, con: Consol
   result.input = read.raw;
   const dir = resolve(con.cwd, opts.out ?? join('axletree-out', basename(file, extname(file))));
   let written: string[];
+  const printer = await printerFor(opts, con);
   try {
-    written = await writeOutputs(result, dir, input);
+    written = await writeOutputs(result, dir, input, drawHere, { teach: opts.teach, printer });
   } catch (e) {
     if (e instanceof OutputIsInputError) {
       con.err(`axletree: ${e.message}; choose another --out directory.\n`);
       return EXIT.badInput;
     }
     throw e;
+  } finally {
+    await printer?.close();
   }
   if (opts.json) {
     con.out(resultJson(result));

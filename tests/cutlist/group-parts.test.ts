@@ -11,7 +11,7 @@ const stock = (lumber: Stock['lumber'], kerf_mm = 3): Stock => ({ grade: 'sawn',
 
 function part(p: string, species: string, L: number, w: number, t: number, quantity = 1, spares = 0): CutListItem {
   const size = { length_mm: L, width_mm: w, thickness_mm: t };
-  return { part: p, quantity, species, finished: size, rough: size, grain: 'straight grain, sawn', steam_bent: spares > 0, spares, volume_m3: L * w * t * 1e-9, mass_kg: 0, basis: '' };
+  return { part: p, quantity, species, finished: size, rough: size, grain: 'straight grain, sawn', steam_bent: spares > 0, spares, volume_m3: L * w * t * 1e-9, mass_kg: 0, basis: '', allowances: [] };
 }
 
 const ASH = [

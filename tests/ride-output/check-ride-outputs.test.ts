@@ -61,9 +61,10 @@ describe('the ride section of the report', () => {
   const result = withRide(0.2);
   const md = markdownOf(result);
 
-  it('comes after the loads, with a table per case and the plots linked, keeping the cautions', () => {
-    expect(md.indexOf('\n## Ride\n')).toBeGreaterThan(md.indexOf('\n## Loads\n'));
+  it('comes after the mass and balance, with a table per case, the plots linked in the appendix, keeping the cautions', () => {
+    expect(md.indexOf('\n## Ride\n')).toBeGreaterThan(md.indexOf('\n## Mass and balance\n'));
     expect(md.indexOf('\n## Cautions\n')).toBeLessThan(md.indexOf('\n## Ride\n'));
+    expect(md.indexOf('\n## Ride plots\n')).toBeGreaterThan(md.indexOf('\n# Appendix: the working and the evidence\n'));
     for (const r of result.ride!.cases) {
       expect(md).toContain(`(${r.case})\n`);
       expect(md).toContain(`](ride-${r.case}-heights.svg)`);
@@ -77,7 +78,8 @@ describe('the ride section of the report', () => {
     const html = htmlOf(result, await drawReportPlots(result));
     expect(html).not.toMatch(/<img/);
     expect(html.match(/<figure class="plot"><svg/g)).toHaveLength(result.ride!.cases.length * 3 + (result.plots?.length ?? 0));
-    expect(html).toMatch(/<h2 class="new-page">Ride<\/h2>/);
+    expect(html).toMatch(/<h2>Ride<\/h2>/);
+    expect(html).toMatch(/<h2>Ride plots<\/h2>/);
   });
 });
 

@@ -1,4 +1,4 @@
-import type { RulesData } from '../data/rules-data.ts';
+import type { Param, RulesData } from '../data/rules-data.ts';
 import type { Layout } from '../model/layout.ts';
 import { speciesDensity } from '../model/species-density.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
@@ -29,11 +29,12 @@ export function cutList(spec: CheckedSpecification, data: RulesData, lay: Layout
   };
   const good = cutlistFactor(data, 'bend_good_fraction');
   const demands = [...frameParts(spec), ...draughtParts(spec, data, lay), ...wheelParts(spec, lay, wheel), ...extraParts(spec)];
-  return demands.map((d) => item(d, allowances, good.value, good.source, spec.moisture_content_pct, data));
+  return demands.map((d) => item(d, allowances, good, spec.moisture_content_pct, data));
 }
 
-function item(d: PartDemand, a: Allowances, good: number, goodSource: string, M: number, data: RulesData): CutListItem {
-  const { rough, lines } = roughSize(d, a, data);
+function item(d: PartDemand, a: Allowances, goodParam: Param, M: number, data: RulesData): CutListItem {
+  const { value: good, source: goodSource } = goodParam;
+  const { rough, lines, allowances } = roughSize(d, a, data);
   const spares = d.steamBent ? Math.ceil(d.quantity / good - 1e-9) - d.quantity : 0;
   const density = speciesDensity(data, d.species, M);
   const mass = d.volume_mm3 * M3_PER_MM3 * density;
@@ -56,6 +57,7 @@ function item(d: PartDemand, a: Allowances, good: number, goodSource: string, M:
     volume_m3: rough.length_mm * rough.width_mm * rough.thickness_mm * M3_PER_MM3,
     mass_kg: mass,
     basis: basis.join('\n'),
+    allowances: d.steamBent ? [...allowances, { what: 'spares', from: 'cutlist.bend_good_fraction', value: good, unit: '', sources: goodParam.sources }] : allowances,
   };
 }
 

@@ -5,6 +5,18 @@ import type { CuttingPlan } from '../stock/cutting-types.ts';
 // What the cut list, leather list, wheel setting-out and stock plan add to a
 // check result. Lengths in mm, volumes in m^3, masses in kg.
 
+/** One allowance a rough size or a spare count takes, and what its value rests on. */
+export interface CutAllowance {
+  /** What it is for: "ends", "bending-form ends", "faces", "green shrinkage, tangential", "spares". */
+  what: string;
+  /** Where the value is read: a specification path, a rules parameter, or a species' data. */
+  from: string;
+  value: number;
+  unit: string;
+  /** Catalogue ids of its sources; empty for a value the specification gives or defaults. */
+  sources: string[];
+}
+
 export interface CutListItem {
   part: string;
   quantity: number;
@@ -23,6 +35,8 @@ export interface CutListItem {
   mass_kg: number;
   /** How the rough size was found, with numbers. */
   basis: string;
+  /** The allowances the rough size and the spares take, each with its sources. */
+  allowances: CutAllowance[];
 }
 
 export interface LeatherItem {

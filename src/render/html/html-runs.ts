@@ -19,7 +19,7 @@ function runHtml(r: Run): string {
     case 'code':
       return `<code>${escapeHtml(r.text)}</code>`;
     case 'source':
-      return `<a href="#${anchorId(SOURCE_ANCHOR, r.id)}">${escapeHtml(r.id)}</a>`;
+      return `<a href="#${anchorId(SOURCE_ANCHOR, r.id)}">${escapeHtml(r.label ?? r.id)}</a>`;
     case 'severity':
       return badgeHtml(r.severity);
   }

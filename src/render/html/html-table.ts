@@ -1,10 +1,11 @@
 import type { Cell, Column, TableBlock } from '../model/document.ts';
 import { cellText, headerText } from '../model/cell-text.ts';
 import { anchorId, escapeHtml } from './html-escape.ts';
-import { badgeHtml, SOURCE_ANCHOR } from './html-runs.ts';
+import { badgeHtml, runsHtml, SOURCE_ANCHOR } from './html-runs.ts';
 
 function cellHtml(cell: Cell, column: Column): string {
   if (cell.kind === 'severity') return badgeHtml(cell.severity);
+  if (cell.kind === 'text' && cell.runs) return runsHtml(cell.runs);
   const text = escapeHtml(cellText(cell, column));
   if (cell.kind === 'text' && cell.mark) return cell.mark === 'em' ? `<em>${text}</em>` : `<strong>${text}</strong>`;
   return text;
@@ -20,7 +21,9 @@ export function tableHtml(t: TableBlock): string {
   const body = t.rows.map((r) => {
     const classes = [r.total ? 'total' : '', r.muted ? 'muted' : ''].filter(Boolean);
     const attrs = `${r.anchor ? ` id="${anchorId(SOURCE_ANCHOR, r.anchor)}"` : ''}${classes.length ? ` class="${classes.join(' ')}"` : ''}`;
-    return `<tr${attrs}>${shown.map(({ c, i }) => `<td${numClass(c)}>${cellHtml(r.cells[i], c)}</td>`).join('')}</tr>`;
+    // A group's title stands on a row of its own, a header cell across the table (no data cell, so it is not a row of the table's data).
+    const group = r.group === undefined ? '' : `<tr class="group"><th colspan="${shown.length}" scope="rowgroup">${escapeHtml(r.group)}</th></tr>\n`;
+    return `${group}<tr${attrs}>${shown.map(({ c, i }) => `<td${numClass(c)}>${cellHtml(r.cells[i], c)}</td>`).join('')}</tr>`;
   });
   return `<table class="${escapeHtml(t.id)}">\n<thead><tr>${head}</tr></thead>\n<tbody>\n${body.join('\n')}\n</tbody>\n</table>`;
 }

@@ -2,6 +2,7 @@ import type { WorkingStep } from '../../core/findings/finding.ts';
 import type { Block, ReportDocument, Section } from '../model/document.ts';
 import { stepParts } from '../model/cell-text.ts';
 import { findingParts } from '../model/finding-parts.ts';
+import { PART_TITLES, sectionsByPart } from '../model/parts.ts';
 import type { ReportPlots } from '../report-plots.ts';
 import { escapeHtml } from './html-escape.ts';
 import { figureHtml } from './html-figure.ts';
@@ -32,7 +33,7 @@ function blockHtml(b: Block, plots: ReportPlots): string {
     case 'cautions':
       return `<ul class="cautions">\n${b.items.map((c) => `<li>${escapeHtml(c)}</li>`).join('\n')}\n</ul>`;
     case 'table':
-      return tableHtml(b);
+      return b.only === 'sheet' ? '' : tableHtml(b);
     case 'figure':
       return figureHtml(b, plots);
     case 'working':
@@ -44,7 +45,7 @@ function blockHtml(b: Block, plots: ReportPlots): string {
   }
 }
 
-/** Classes of a section's heading: the verdict and the cautions stand out; big sections start a printed page. */
+/** Classes of a section's heading: the verdict and the cautions stand out; big sections start a printed page (a part's first section starts one with its part). */
 function headingClass(s: Section): string {
   const classes = [s.id === 'verdict' || s.id === 'cautions' ? s.id : '', s.newPage ? 'new-page' : ''].filter(Boolean);
   return classes.length ? ` class="${classes.join(' ')}"` : '';
@@ -55,9 +56,21 @@ function sectionHtml(s: Section, plots: ReportPlots): string {
   return `<section>\n${heading}${s.blocks.map((b) => blockHtml(b, plots)).join('\n')}\n</section>`;
 }
 
+/** Each part of the document in a block of its own: after the first, each starts a printed page under its title. */
+function partsHtml(doc: ReportDocument, plots: ReportPlots): string {
+  return sectionsByPart(doc.sections)
+    .map(({ part, sections }, i) => {
+      const title = PART_TITLES[part];
+      const heading = i > 0 && title ? `<h1 class="part">${escapeHtml(title)}</h1>\n` : '';
+      return `<div class="part part-${part}">\n${heading}${sections.map((s) => sectionHtml(s, plots)).join('\n')}\n</div>`;
+    })
+    .join('\n');
+}
+
 /** The document as HTML; `plots` holds the SVG drawn for each plot file the model names (drawReportPlots). */
 export function renderHtml(doc: ReportDocument, plots: ReportPlots): string {
   const closing = doc.closing ? `<hr>\n<p><em>${escapeHtml(doc.closing)}</em></p>\n` : '';
+  const lede = doc.lede ? `<p class="lede">${escapeHtml(doc.lede)}</p>\n` : '';
   return `<!doctype html>
 <html lang="en">
 <head>
@@ -70,7 +83,7 @@ export function renderHtml(doc: ReportDocument, plots: ReportPlots): string {
 <body>
 <main>
 <h1>${escapeHtml(doc.title)}</h1>
-${doc.sections.map((s) => sectionHtml(s, plots)).join('\n')}
+${lede}${partsHtml(doc, plots)}
 ${closing}</main>
 </body>
 </html>

@@ -16,7 +16,7 @@ function runMd(r: Run, first: boolean): string {
     case 'code':
       return inlineCode(r.text);
     case 'source':
-      return escapeInline(r.id);
+      return escapeInline(r.label ?? r.id);
     case 'severity':
       return severityMark(r.severity);
   }

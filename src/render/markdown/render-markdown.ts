@@ -1,6 +1,7 @@
 import type { Block, FigureBlock, ReportDocument, Section } from '../model/document.ts';
 import { stepLine } from '../model/cell-text.ts';
 import { findingParts } from '../model/finding-parts.ts';
+import { PART_TITLES, sectionsByPart } from '../model/parts.ts';
 import { escapeBlock, escapeInline, fencedBlock } from './markdown-escape.ts';
 import { runsMd, severityMark } from './markdown-runs.ts';
 import { tableMd } from './markdown-table.ts';
@@ -26,7 +27,7 @@ function blockMd(b: Block): string[] {
     case 'cautions':
       return [b.items.map((c) => `- ${escapeBlock(c)}`).join('\n')];
     case 'table':
-      return [tableMd(b)];
+      return b.only === 'sheet' ? [] : [tableMd(b)];
     case 'figure':
       return figureMd(b);
     case 'working':
@@ -43,8 +44,17 @@ function sectionMd(s: Section): string[] {
   return [...heading, ...s.blocks.flatMap(blockMd)];
 }
 
-/** The document as Markdown: title, sections in order, the closing line under a rule. */
+/** The sections part by part, each part after the first under its own top-level title. */
+function partsMd(doc: ReportDocument): string[] {
+  return sectionsByPart(doc.sections).flatMap(({ part, sections }, i) => {
+    const title = PART_TITLES[part];
+    return [...(i > 0 && title ? [`# ${escapeInline(title)}`] : []), ...sections.flatMap(sectionMd)];
+  });
+}
+
+/** The document as Markdown: title, what it is, the parts in order, the closing line under a rule. */
 export function renderMarkdown(doc: ReportDocument): string {
-  const blocks = [`# ${escapeInline(doc.title)}`, ...doc.sections.flatMap(sectionMd), ...(doc.closing ? ['---', `*${escapeInline(doc.closing)}*`] : [])];
+  const lede = doc.lede ? [`*${escapeInline(doc.lede)}*`] : [];
+  const blocks = [`# ${escapeInline(doc.title)}`, ...lede, ...partsMd(doc), ...(doc.closing ? ['---', `*${escapeInline(doc.closing)}*`] : [])];
   return `${blocks.join('\n\n')}\n`;
 }

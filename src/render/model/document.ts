@@ -9,12 +9,14 @@ export type Run =
   | { kind: 'text'; text: string }
   | { kind: 'strong'; text: string }
   | { kind: 'code'; text: string }
-  | { kind: 'source'; id: string }
+  /** `label` is what the reader sees for it (a short number in a dense table); the id by default. */
+  | { kind: 'source'; id: string; label?: string }
   | { kind: 'severity'; severity: Severity };
 
 /** One table cell. Numbers stay raw with their unit; renderers format them (text) or keep them (cells). */
 export type Cell =
-  | { kind: 'text'; text: string; mark?: 'strong' | 'em' }
+  /** `runs`, where given, is the same text with marks and source links (text = its plain text); HTML writes the runs. */
+  | { kind: 'text'; text: string; mark?: 'strong' | 'em'; runs?: Run[] }
   /** `none` is said where the value is null; `sig` asks the formatter for more significant figures. */
   | { kind: 'number'; value: number | null; unit: string; none?: string; sig?: number }
   /** A fraction, written as a percentage. */
@@ -44,6 +46,8 @@ export interface Row {
   muted?: true;
   /** An id other text links to (a source's id). */
   anchor?: string;
+  /** The row opens a group of rows (a rule family): HTML sets this title on a line of its own above it. */
+  group?: string;
 }
 
 export interface TableBlock {
@@ -54,6 +58,8 @@ export interface TableBlock {
   rows: Row[];
   /** Said instead of an empty table. */
   empty: string;
+  /** Written only in the workbook, which picks it by id: the text outputs give its rows in another table of their own. */
+  only?: 'sheet';
 }
 
 export type FigureRole = 'drawing' | 'plot' | 'setting-out' | 'stock-bars';
@@ -105,11 +111,15 @@ export interface Section {
   badge?: Severity;
   /** A big section that starts a new printed page. */
   newPage: boolean;
+  /** Where the section stands: in the summary a reviewer reads first, or in the appendix of rarely read material; else in the body. */
+  part?: 'summary' | 'appendix';
   blocks: Block[];
 }
 
 export interface ReportDocument {
   title: string;
+  /** A line under the title saying what the document is and how it is laid out. */
+  lede?: string;
   sections: Section[];
   /** The last line, under a rule: the one-line caution. */
   closing?: string;

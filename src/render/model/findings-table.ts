@@ -9,8 +9,10 @@ export interface NumberedFinding {
   finding: Finding;
 }
 
-// The reader sees the subject in words; the workbook also keeps its stable id,
-// the load case, the fix, the sources and the working in columns of their own.
+// The findings as the workbook lists them, worst first: the subject in words,
+// its stable id, the load case, the fix, the sources and the working in
+// columns of their own. The text outputs show the same findings grouped by
+// rule family instead (family-findings-table.ts), with the same numbers.
 const COLUMNS = [
   right('No.'),
   left('Severity'),
@@ -29,7 +31,7 @@ const COLUMNS = [
   left('Working', { only: 'sheet' }),
 ];
 
-export function findingsTable(id: string, list: readonly NumberedFinding[], empty: string): TableBlock {
+export function findingsTable(id: string, list: readonly NumberedFinding[], empty: string, only?: 'sheet'): TableBlock {
   const rows = list.map(({ ref, finding: f }) =>
     row([
       textCell(ref),
@@ -49,5 +51,5 @@ export function findingsTable(id: string, list: readonly NumberedFinding[], empt
       textCell(f.working.map(stepLine).join('\n')),
     ]),
   );
-  return { kind: 'table', id, columns: COLUMNS, rows, empty };
+  return { kind: 'table', id, columns: COLUMNS, rows, empty, ...(only ? { only } : {}) };
 }

@@ -68,8 +68,12 @@ function caseTable(r: RideCaseResult): TableBlock {
   return { kind: 'table', id: `ride-${r.case}-case`, columns: QUANTITY_COLUMNS, rows, empty: '' };
 }
 
+/** A case's plots, as the files written beside the report. */
+export function ridePlotFigures(r: Pick<RideCaseResult, 'case' | 'title'>, plots: readonly RidePlotKind[]): Block[] {
+  return plots.map((kind) => plotFigure({ id: `ride-${r.case}-${kind}`, ...ridePlotText(r.title, kind) }, ridePlotFile(r.case, kind)));
+}
+
 /** One case's tables, then its plots (files written beside the report). */
 export function rideCaseBlocks(r: RideCaseResult, plots: readonly RidePlotKind[]): Block[] {
-  const figures = plots.map((kind) => plotFigure({ id: `ride-${r.case}-${kind}`, ...ridePlotText(r.title, kind) }, ridePlotFile(r.case, kind)));
-  return [crewTable(r), wheelsTable(r), caseTable(r), ...figures];
+  return [crewTable(r), wheelsTable(r), caseTable(r), ...ridePlotFigures(r, plots)];
 }

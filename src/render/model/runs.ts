@@ -6,7 +6,7 @@ import type { Block, Run } from './document.ts';
 export const plain = (text: string): Run => ({ kind: 'text', text });
 export const strong = (text: string): Run => ({ kind: 'strong', text });
 export const code = (text: string): Run => ({ kind: 'code', text });
-export const sourceRef = (id: string): Run => ({ kind: 'source', id });
+export const sourceRef = (id: string, label?: string): Run => (label === undefined ? { kind: 'source', id } : { kind: 'source', id, label });
 export const badge = (severity: Severity): Run => ({ kind: 'severity', severity });
 
 /** A paragraph of runs, or of one plain text. */

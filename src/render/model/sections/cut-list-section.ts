@@ -1,9 +1,12 @@
-import type { CutListItem, HideNeed, LeatherItem } from '../../../core/cutlist/cutting-result.ts';
+import type { CutListItem, HideNeed, LeatherItem, StockPlan } from '../../../core/cutlist/cutting-result.ts';
+import { formatNumber } from '../../../core/format/number-format.ts';
 import type { CheckResult } from '../../../core/result/check-result.ts';
 import type { Cell, Section, TableBlock } from '../document.ts';
 import { blank, dimsCell, left, numberCell, right, row, textCell } from '../cells.ts';
-import { heading } from '../runs.ts';
+import { allowancesTable, distinctAllowances, itemKeys } from '../cut-allowance-keys.ts';
+import { heading, paragraph } from '../runs.ts';
 import { section } from '../section-titles.ts';
+import { sourceNumbers } from '../source-numbers.ts';
 
 const LWT = ['L', 'W', 'T'];
 
@@ -47,9 +50,49 @@ function hidesTable(hides: readonly HideNeed[]): TableBlock {
   return { kind: 'table', id: 'hides', columns, rows, empty: 'No hides needed.' };
 }
 
-/** Every part to cut, rough and finished, with the totals. */
+/** The stock a part is cut from: its group in the stock plan and the lengths its patterns use, or why none serves it. */
+function cutFromText(part: string, plan: StockPlan): string {
+  const unserved = plan.unserved.find((u) => u.part === part);
+  if (unserved) return `no listed stock: ${unserved.buy}`;
+  const uses = plan.groups.flatMap((g, i) => {
+    const lengths = [...new Set(g.plan.patterns.filter((p) => p.cuts.some((c) => c.label === part)).map((p) => p.stock_length_mm))].sort((a, b) => b - a);
+    return lengths.length ? [`group ${i + 1}: ${lengths.map((l) => formatNumber(l, 'mm')).join(', ')} mm`] : [];
+  });
+  return uses.length ? uses.join('; ') : 'not in the stock plan';
+}
+
+/** The cut list as a dense table, a line a part: sizes, count, the stock it comes from, its allowances by key. */
+function denseTable(result: CheckResult): TableBlock {
+  const items = result.cutting.cut_list;
+  const distinct = distinctAllowances(items);
+  const rows = items.map((c) =>
+    row([
+      textCell(c.part), textCell(c.species), numberCell(c.quantity, 'count'), numberCell(c.spares, 'count'),
+      dimsCell([c.finished.length_mm, c.finished.width_mm, c.finished.thickness_mm], 'mm'),
+      dimsCell([c.rough.length_mm, c.rough.width_mm, c.rough.thickness_mm], 'mm'),
+      textCell(cutFromText(c.part, result.cutting.stock_plan)), textCell(itemKeys(c, distinct)),
+    ]),
+  );
+  const columns = [
+    left('Part'), left('Species'), right('Qty', { unit: 'count' }), right('Spares', { unit: 'count' }),
+    right('Finished', { unit: 'mm', parts: LWT }), right('Rough', { unit: 'mm', parts: LWT }), left('Cut from (stock plan)'), left('Allowances'),
+  ];
+  return { kind: 'table', id: 'cut-list-dense', columns, rows, empty: 'No parts.' };
+}
+
+/** Every part to cut in a line, then the allowances' key with their sources; the full table with each size's working is in the appendix. */
 export function cutListSection(result: CheckResult): Section {
-  return section('cutList', [cutListTable(result.cutting.cut_list)]);
+  const distinct = distinctAllowances(result.cutting.cut_list);
+  return section('cutList', [
+    denseTable(result),
+    paragraph('The allowances, by the key the table gives:'),
+    allowancesTable(result, distinct, sourceNumbers(result)),
+  ]);
+}
+
+/** Every part with its grain, volume, mass and how its rough size was found, with the totals. */
+export function cutListBasisSection(result: CheckResult): Section {
+  return section('cutListBasis', [cutListTable(result.cutting.cut_list)]);
 }
 
 /** The straps and lashings, and the hides to buy for them. */

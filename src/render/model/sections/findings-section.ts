@@ -1,39 +1,45 @@
-import { SEVERITY_MEANING } from '../../../core/findings/severity.ts';
 import type { CheckResult } from '../../../core/result/check-result.ts';
-import { countBySeverity, SEVERITIES_WORST_FIRST } from '../../severity-order.ts';
-import type { FindingBlock, Section, TableBlock } from '../document.ts';
-import { left, numberCell, right, row, severityCell, textCell } from '../cells.ts';
+import type { Block, FindingBlock, Section } from '../document.ts';
+import { familyFindingsTable } from '../family-findings-table.ts';
 import { findingsTable, type NumberedFinding } from '../findings-table.ts';
 import { numberedFindings } from '../numbered-findings.ts';
-import { paragraph } from '../runs.ts';
+import { badge, paragraph, plain, strong } from '../runs.ts';
 import { section } from '../section-titles.ts';
-
-/** What each severity means, in one line each, with how many findings carry it (info: the notes). */
-function severitiesTable(result: CheckResult): TableBlock {
-  const counts = countBySeverity(result.findings);
-  return {
-    kind: 'table',
-    id: 'severities',
-    columns: [left('Severity'), right('Findings', { unit: 'count' }), left('Meaning')],
-    rows: SEVERITIES_WORST_FIRST.map((s) => row([severityCell(s), numberCell(counts[s], 'count'), textCell(SEVERITY_MEANING[s])])),
-    empty: '',
-  };
-}
+import { sourceNumbers } from '../source-numbers.ts';
 
 function findingBlock({ ref, finding: f }: NumberedFinding): FindingBlock {
   return { kind: 'finding', ref, severity: f.severity, rule: f.rule, subject_label: f.subject_label, message: f.message, fix: f.fix, sources: f.sources, steps: f.working };
 }
 
-/** The severities' meanings, then the graded findings worst first. */
-export function findingsSection(result: CheckResult): Section {
-  const { graded } = numberedFindings(result.findings);
-  return section('findings', [severitiesTable(result), findingsTable('findings', graded, 'No graded findings.')]);
+/** Each graded finding that is not a pass, in a line: what it says and what to do; its working is in the appendix. */
+function flaggedList(graded: readonly NumberedFinding[]): Block[] {
+  const flagged = graded.filter((g) => g.finding.severity !== 'pass');
+  if (flagged.length === 0) return [paragraph('Every graded finding is a pass.')];
+  return [
+    paragraph(strong('What the flagged findings say, and what to do'), plain(' (the working of each is in the appendix, under its number):')),
+    {
+      kind: 'list',
+      items: flagged.map(({ ref, finding: f }) => [plain(`${ref}. `), badge(f.severity), plain(` ${f.rule}, ${f.subject_label}: ${f.message} `), strong('Fix:'), plain(` ${f.fix}`)]),
+    },
+  ];
 }
 
-/** Each graded finding that is not a pass, numbered as in the findings table. */
+/** The graded findings in one table by rule family, then what each flagged one says and what to do. */
+export function findingsSection(result: CheckResult): Section {
+  const { graded } = numberedFindings(result.findings);
+  return section('findings', [
+    paragraph('Every graded finding, grouped by rule family, worst first within each; a finding keeps its number (worst first over the whole check) everywhere. Sources are given by their number in the Sources section of the appendix.'),
+    familyFindingsTable(graded, result.findings.map((f) => f.rule), sourceNumbers(result)),
+    // The same findings worst first, as the workbook lists them.
+    findingsTable('findings', graded, 'No graded findings.', 'sheet'),
+    ...flaggedList(graded),
+  ]);
+}
+
+/** The working of every graded finding, passes included, numbered as in the findings table. */
 export function workingSection(result: CheckResult): Section {
-  const flagged = numberedFindings(result.findings).graded.filter((n) => n.finding.severity !== 'pass');
-  return section('working', flagged.length ? flagged.map(findingBlock) : [paragraph('Every graded finding is a pass.')]);
+  const { graded } = numberedFindings(result.findings);
+  return section('working', graded.length ? graded.map(findingBlock) : [paragraph('No graded findings.')]);
 }
 
 /** The notes (info findings), apart from the graded ones: a table, then each with its working. */

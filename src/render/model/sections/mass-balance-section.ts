@@ -40,8 +40,12 @@ function loadCaseWorking(c: LoadCaseResult): Block[] {
   return [heading(4, `Load case ${c.id}: ${c.title}`), workingLines(c.working.split('\n'))];
 }
 
-/** The parts with their masses and totals, the load cases, and each case's working. */
+/** The parts with their masses and totals, and the load cases; their working is in the appendix. */
 export function massBalanceSection(result: CheckResult): Section {
-  const cases = result.balance.cases;
-  return section('massBalance', [heading(3, 'Parts'), partsTable(result), heading(3, 'Load cases'), loadCasesTable(cases), ...cases.flatMap(loadCaseWorking)]);
+  return section('massBalance', [heading(3, 'Parts'), partsTable(result), heading(3, 'Load cases'), loadCasesTable(result.balance.cases)]);
+}
+
+/** Each load case's working, step by step. */
+export function loadWorkingSection(result: CheckResult): Section {
+  return section('loadWorking', result.balance.cases.flatMap(loadCaseWorking));
 }
