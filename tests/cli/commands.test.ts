@@ -113,7 +113,7 @@ describe('a fault of the tool: exit 3', () => {
     writeFileSync(file, changed);
     let out = '';
     let err = '';
-    const code = await run(['check', join(REPO, 'specs', 'demo-two-crew.yaml'), '--out', join(dir, 'faulty')], { out: (s) => (out += s), err: (s) => (err += s), cwd: dir, rulesDir: rules });
+    const code = await run(['check', '--no-decisive', join(REPO, 'specs', 'demo-two-crew.yaml'), '--out', join(dir, 'faulty')], { out: (s) => (out += s), err: (s) => (err += s), cwd: dir, rulesDir: rules });
     expect(code).toBe(3);
     expect(out).toMatch(/verdict: ERROR/);
     expect(out).toMatch(/balance\.axle-position {2}The rule balance\.axle-position could not run/);
@@ -126,4 +126,19 @@ describe('a fault of the tool: exit 3', () => {
     expect(code).toBe(3);
     expect(err).toMatch(/^axletree: internal fault \(a fault of the tool, not of your input\): TypeError: the terminal went away \(at [^)]+\); please report it\.\n$/);
   });
+});
+
+describe('check: what decides the verdict', () => {
+  it('result.json lists the decisive inputs by default and leaves them out with --no-decisive', async () => {
+    const here = await freshDir('axletree-decisive-');
+    const demo = join(REPO, 'specs', 'demo-two-crew.yaml');
+    const withSearch = await runCli(['check', demo, '--out', 'a', '--json'], here);
+    expect(withSearch.code).toBe(0);
+    const r = JSON.parse(withSearch.out) as { decisive_inputs?: { input: string; status: string }[]; decisive_search?: { reruns: number } };
+    expect(r.decisive_inputs!.length).toBeGreaterThan(0);
+    expect(r.decisive_search!.reruns).toBeGreaterThan(0);
+    expect(readFileSync(join(here, 'a', 'report.md'), 'utf8')).toContain('What decides the verdict');
+    const without = await runCli(['check', demo, '--out', 'b', '--json', '--no-decisive'], here);
+    expect(JSON.parse(without.out)).not.toHaveProperty('decisive_inputs');
+  }, 180_000);
 });

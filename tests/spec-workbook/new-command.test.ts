@@ -46,7 +46,7 @@ describe('axletree new', () => {
     const dir = await freshDir('axletree-new-');
     expect((await runCli(['new', 'spec.yaml', '--from', DEMO], dir)).code).toBe(0);
     const a = await runCli(['check', 'spec.yaml', '--out', 'a', '--json'], dir);
-    const b = await runCli(['check', DEMO, '--out', 'b', '--json'], dir);
+    const b = await runCli(['check', '--no-decisive', DEMO, '--out', 'b', '--json'], dir);
     expect(a.code).toBe(b.code);
     expect(JSON.parse(a.out).spec_as_checked).toEqual(JSON.parse(b.out).spec_as_checked);
   });
@@ -67,13 +67,13 @@ describe('checking a workbook', () => {
   it('gives a result workbook that starts with the spec sheets and can be checked again', async () => {
     const dir = await freshDir('axletree-new-');
     expect((await runCli(['new', 'spec.xlsx', '--from', DEMO], dir)).code).toBe(0);
-    const first = await runCli(['check', 'spec.xlsx', '--out', 'out', '--json'], dir);
+    const first = await runCli(['check', '--no-decisive', 'spec.xlsx', '--out', 'out', '--json'], dir);
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(join(dir, 'out', 'result.xlsx'));
     const names = wb.worksheets.map((w) => w.name);
     expect(names.slice(0, 3)).toEqual(['Start here', 'General', 'Box']);
     expect(names).toContain('Summary');
-    const again = await runCli(['check', join('out', 'result.xlsx'), '--out', 'again', '--json'], dir);
+    const again = await runCli(['check', '--no-decisive', join('out', 'result.xlsx'), '--out', 'again', '--json'], dir);
     expect(again.code).toBe(first.code);
     expect(JSON.parse(again.out).spec_as_checked).toEqual(JSON.parse(first.out).spec_as_checked);
     expect(JSON.parse(again.out).verdict).toBe(JSON.parse(first.out).verdict);
@@ -82,9 +82,9 @@ describe('checking a workbook', () => {
   it('never writes over the workbook being checked', async () => {
     const dir = await freshDir('axletree-new-');
     expect((await runCli(['new', 'spec.xlsx', '--from', DEMO], dir)).code).toBe(0);
-    await runCli(['check', 'spec.xlsx', '--out', 'out'], dir);
+    await runCli(['check', '--no-decisive', 'spec.xlsx', '--out', 'out'], dir);
     const before = readFileSync(join(dir, 'out', 'result.xlsx'));
-    const r = await runCli(['check', join('out', 'result.xlsx'), '--out', 'out'], dir);
+    const r = await runCli(['check', '--no-decisive', join('out', 'result.xlsx'), '--out', 'out'], dir);
     expect(r.code).toBe(2);
     expect(r.err).toContain('refusing to write');
     expect(readFileSync(join(dir, 'out', 'result.xlsx')).equals(before)).toBe(true);
