@@ -9,6 +9,7 @@ import { STEADY_DATE, steadyZip } from '../../src/render/steady-bytes.ts';
 import { sampleResult } from '../fixtures/sample-result.ts';
 import { readDemo } from '../support/fixtures.ts';
 import { CHOICES } from '../support/spec-workbook.ts';
+import { zipEntries } from './zip-entries.ts';
 
 /** Two renderings a year apart by the clock. */
 async function twice(render: () => Promise<Uint8Array>): Promise<[Uint8Array, Uint8Array]> {
@@ -18,16 +19,6 @@ async function twice(render: () => Promise<Uint8Array>): Promise<[Uint8Array, Ui
   vi.setSystemTime(new Date('2032-08-09T10:11:13Z'));
   const b = await render();
   return [a, b];
-}
-
-/** Every zip entry's DOS time and date, read from the central directory. */
-function entryStamps(bytes: Uint8Array): string[] {
-  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
-  const stamps: string[] = [];
-  for (let at = 0; at + 46 <= bytes.length; at++) {
-    if (view.getUint32(at, true) === 0x02014b50) stamps.push(`${view.getUint16(at + 14, true)}:${view.getUint16(at + 12, true)}`);
-  }
-  return stamps;
 }
 
 afterEach(() => {
@@ -41,7 +32,7 @@ describe('workbook bytes', () => {
     const [a, b] = await twice(async () => new Uint8Array(await renderWorkbook(result)));
     expect(Buffer.from(a).equals(Buffer.from(b))).toBe(true);
     // Dated 2000-01-01 00:00 everywhere: DOS date (20 << 9 | 1 << 5 | 1), time 0.
-    const stamps = entryStamps(a);
+    const stamps = zipEntries(a).map((e) => `${e.date}:${e.time}`);
     expect(stamps.length).toBeGreaterThan(10);
     expect(new Set(stamps)).toEqual(new Set([`${(20 << 9) | (1 << 5) | 1}:0`]));
     const wb = new ExcelJS.Workbook();
