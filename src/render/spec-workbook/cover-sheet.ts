@@ -4,9 +4,12 @@ import type { Section } from '../../core/spec/spec-fields.ts';
 import { addCautionRow, addHeading, setColumnWidths, wrappedHeight } from '../sheets/sheet-style.ts';
 import { styleInput, styleLabel } from './input-style.ts';
 import { setPrint } from '../sheets/print-setup.ts';
+import { addCoordinatesFigure } from './coordinates-figure.ts';
 import { COVER_SHEET } from '../../core/input/workbook-layout.ts';
 
 const WIDTHS = [24, 96];
+/** The coordinate diagram's width on the sheet: across both columns, inside the printed page. */
+const DIAGRAM_WIDTH_PX = 800;
 
 const STEPS = [
   'Type only into the cream cells with a border round them. Grey cells without a border are keys, labels, units, defaults and help; they are not read, except the key column, which tells the check which value a row holds: do not edit it.',
@@ -27,6 +30,7 @@ export function addCoverSheet(wb: ExcelJS.Workbook, sections: readonly Section[]
   addHeading(ws, 'How to fill it in');
   STEPS.forEach((step, i) => {
     const row = ws.addRow([`${i + 1}.`, step]);
+    row.getCell(1).alignment = { vertical: 'top', horizontal: 'right' };
     row.getCell(2).alignment = { wrapText: true, vertical: 'top' };
     row.height = wrappedHeight([{ text: step, width: WIDTHS[1] }]);
   });
@@ -35,6 +39,8 @@ export function addCoverSheet(wb: ExcelJS.Workbook, sections: readonly Section[]
   styleInput(legend.getCell(1));
   const label = ws.addRow(['', 'a label, help or computed cell: not read']);
   styleLabel(label.getCell(1));
+  ws.addRow([]);
+  addCoordinatesFigure(wb, ws, DIAGRAM_WIDTH_PX, WIDTHS[1]);
   ws.addRow([]);
   addHeading(ws, 'Sheets');
   for (const s of sections) {

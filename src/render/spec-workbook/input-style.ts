@@ -14,6 +14,8 @@ const INPUT_BORDER: Partial<ExcelJS.Borders> = { top: EDGE, bottom: EDGE, left: 
 export function styleInput(cell: ExcelJS.Cell): void {
   cell.fill = INPUT_FILL;
   cell.border = INPUT_BORDER;
+  // Level with the first line of its label and help.
+  cell.alignment = { vertical: 'top' };
 }
 
 export function styleLabel(cell: ExcelJS.Cell): void {

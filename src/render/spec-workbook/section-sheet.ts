@@ -7,7 +7,7 @@ import { QUIET_FONT, REQUIRED_FONT, styleInput, styleLabel } from './input-style
 import { COL, TABLE_ENTRY_OFFSET, TABLE_FIRST_COL, TABLE_HEADER_OFFSET, TABLE_SPARE_ROWS, tableKey } from '../../core/input/workbook-layout.ts';
 import { cellText, valueAt } from '../../core/input/spec-values.ts';
 
-const WIDTHS = [30, 30, 20, 10, 16, 80];
+const WIDTHS = [28, 24, 16, 8, 12, 56];
 const TABLE_WIDTH = 18;
 /** Empty entry rows printed below a table's entries, to write more in by hand. */
 const PRINTED_SPARE_ROWS = 2;
