@@ -9,8 +9,9 @@ import { cellText, valueAt } from '../../core/input/spec-values.ts';
 
 const WIDTHS = [28, 24, 16, 8, 12, 56];
 const TABLE_WIDTH = 18;
-/** Empty entry rows printed below a table's entries, to write more in by hand. */
+/** Empty entry rows printed below a table's entries, to write more in by hand; a table prints at least so many rows (or all it has). */
 const PRINTED_SPARE_ROWS = 2;
+const PRINTED_LEAST_ROWS = 5;
 type ListRange = Parameters<typeof validationFor>[1];
 
 /** What the default column says: the default, or whether the key may be left out. */
@@ -42,7 +43,8 @@ export function addSectionSheet(wb: ExcelJS.Workbook, section: Section, value: u
     const at = row;
     const entries = valueAt(value, table.path);
     row = addTable(ws, at, section, table, entries, listRange) + 1;
-    lastPrinted = at + TABLE_ENTRY_OFFSET + Math.min(row - at - TABLE_ENTRY_OFFSET, (Array.isArray(entries) ? entries.length : 0) + PRINTED_SPARE_ROWS) - 1;
+    const filled = Array.isArray(entries) ? entries.length : 0;
+    lastPrinted = at + TABLE_ENTRY_OFFSET + Math.min(row - at - TABLE_ENTRY_OFFSET, Math.max(filled + PRINTED_SPARE_ROWS, PRINTED_LEAST_ROWS)) - 1;
   }
   setPrint(ws, { lastRow: lastPrinted });
   return ws;
