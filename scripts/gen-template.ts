@@ -4,9 +4,8 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { writeFileAtomic } from '../src/node/atomic-write.ts';
 import { defaultRulesDir, loadRulesData } from '../src/node/load-rules-data.ts';
-import { TEMPLATE_FILE, templateWorkbook } from '../src/render/spec-workbook/template.ts';
+import { TEMPLATE_FILE, templateBytes } from '../src/render/spec-workbook/template.ts';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
-const bytes = await templateWorkbook(loadRulesData(defaultRulesDir())).xlsx.writeBuffer();
-await writeFileAtomic(join(root, TEMPLATE_FILE), new Uint8Array(bytes));
+await writeFileAtomic(join(root, TEMPLATE_FILE), await templateBytes(loadRulesData(defaultRulesDir())));
 console.log(`wrote ${TEMPLATE_FILE}`);

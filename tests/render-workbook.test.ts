@@ -9,6 +9,10 @@ import { SEVERITY_MEANING } from '../src/core/findings/severity.ts';
 import { BAR_FIRST_COLUMN } from '../src/render/sheets/stock-plan-sheet.ts';
 import { partLabels } from '../src/render/stock-bar.ts';
 import { OFFCUT_FILL, partFill } from '../src/render/stock-palette.ts';
+import { SEVERITY_MARKS } from '../src/render/severity-palette.ts';
+import { readDemo } from './support/fixtures.ts';
+import type { DecisiveInput } from '../src/core/decisive/decisive-input.ts';
+import { zipEntries } from './workbook/zip-entries.ts';
 
 async function readBack(result: CheckResult): Promise<ExcelJS.Workbook> {
   const wb = new ExcelJS.Workbook();
@@ -134,19 +138,34 @@ describe('renderWorkbook', () => {
     expect(values.slice(notesAt)).toContainEqual(['N1', 'info']);
   });
 
-  it('fills severity cells by severity, fail red', async () => {
+  it('fills severity cells by severity, writes the word, and puts its mark before it by the number format', async () => {
     const rows = dataRows(sheet(await readBack(result), 'Findings'));
-    const fail = rows.find((r) => r.getCell(2).value === 'fail')!;
-    expect(fillOf(fail.getCell(2))).toBe(toArgb(SEVERITY_COLOURS.fail.fill));
     const graded = rows.filter((r) => ['fail', 'warning', 'advice', 'pass'].includes(r.getCell(2).text));
-    const fills = new Set(graded.map((r) => fillOf(r.getCell(2))));
-    expect(fills.size).toBe(4);
+    expect(new Set(graded.map((r) => r.getCell(2).value))).toEqual(new Set(['fail', 'warning', 'advice', 'pass']));
+    for (const r of graded) {
+      const cell = r.getCell(2);
+      const s = cell.value as keyof typeof SEVERITY_COLOURS;
+      expect(fillOf(cell)).toBe(toArgb(SEVERITY_COLOURS[s].fill));
+      expect(cell.font?.color?.argb).toBe(toArgb(SEVERITY_COLOURS[s].text));
+      expect(cell.numFmt).toBe(`"${SEVERITY_MARKS[s]} "@`);
+    }
   });
 
   it('freezes the header and filters the findings table', async () => {
     const ws = sheet(await readBack(result), 'Findings');
     expect(ws.views[0]).toMatchObject({ state: 'frozen', ySplit: 2 });
     expect(ws.autoFilter).toBeTruthy();
+  });
+
+  it('prints the findings through the fix, leaving the sources and working on screen, and says so on each page', async () => {
+    const ws = sheet(await readBack(result), 'Findings');
+    const headers = (ws.getRow(2).values as unknown[]).slice(1);
+    const fix = headers.indexOf('Fix') + 1;
+    expect(headers.slice(fix)).toEqual(['Sources', 'Working']);
+    const letter = String.fromCharCode(64 + fix);
+    expect(ws.pageSetup.printArea).toMatch(new RegExp(`^\\$?A\\$?1:\\$?${letter}\\$?\\d+$`));
+    expect(ws.pageSetup.printTitlesRow).toMatch(/^\$?1:\$?2$/);
+    expect(ws.headerFooter.oddHeader).toContain('Not printed: sources and working');
   });
 
   it('tables the parts with totals and the load cases', async () => {
@@ -277,5 +296,94 @@ describe('renderWorkbook, cutting sheets', () => {
     const row = rowWith(ws, u.part);
     expect(row.getCell(4).value).toBe(u.reason);
     expect(row.getCell(5).value).toBe(u.buy);
+  });
+});
+
+describe('renderWorkbook, the sheet it opens on', () => {
+  const decisive: DecisiveInput = {
+    rule: 'member.pole', subject: 'pole.strut', severity: 'pass', input: 'crew.0.mass_kg', origin: 'spec', value: 78, unit: 'kg',
+    status: 'given', break_even: 103, to_severity: 'fail', change: 103 / 78 - 1,
+  };
+  const result: CheckResult = {
+    ...sampleResult(),
+    input: readDemo('demo-two-crew'),
+    decisive_inputs: [decisive],
+    decisive_search: { findings: 1, candidates: 4, reruns: 9, work: 9, work_limit: 400, unsearched: 0 },
+  };
+
+  it('opens on the summary: first, the active tab and the only one selected; findings second; the fill-in sheets last', async () => {
+    const bytes = await renderWorkbook(result);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load(bytes as unknown as ExcelJS.Buffer);
+    const names = wb.worksheets.map((ws) => ws.name);
+    expect(names.slice(0, 2)).toEqual(['Summary', 'Findings']);
+    const cover = names.indexOf('Start here');
+    expect(cover).toBeGreaterThan(names.indexOf('Sources'));
+    expect(names.slice(cover)).toContain('Axle');
+    expect(wb.views[0].activeTab).toBe(0);
+    // The library does not read `tabSelected` back: read the sheets' own XML. Sheet files follow the sheets' order.
+    const sheetXml = zipEntries(bytes).filter((e) => /^xl\/worksheets\/sheet\d+\.xml$/.test(e.name));
+    const selected = sheetXml.filter((e) => /<sheetView[^>]*tabSelected="1"/.test(e.text())).map((e) => e.name);
+    expect(selected).toEqual(['xl/worksheets/sheet1.xml']);
+  });
+
+  it('shows the three highest utilisations with their load case and combination', async () => {
+    const ws = sheet(await readBack(result), 'Summary');
+    const rows: unknown[][] = [];
+    ws.eachRow((row) => rows.push((row.values as unknown[]).slice(1)));
+    const at = rows.findIndex((r) => r[0] === 'Subject' && r[3] === 'Utilisation');
+    expect(rows[at]).toEqual(['Subject', 'Severity', 'Rule', 'Utilisation', 'Load case', 'Combination', 'Finding No.']);
+    const graded = result.findings.filter((f) => f.severity !== 'info' && f.utilisation !== null);
+    const top = [...graded].sort((a, b) => b.utilisation! - a.utilisation!).slice(0, 3);
+    const shown = rows.slice(at + 1, at + 4);
+    expect(shown.map((r) => r[3])).toEqual(top.map((f) => f.utilisation));
+    expect(shown.map((r) => [r[0], r[2], r[4], r[5]])).toEqual(top.map((f) => [f.subject_label, f.rule, f.load_case ?? 'none', f.combination ?? 'none']));
+    // The number points at the same finding in the Findings sheet.
+    const findings = sheet(await readBack(result), 'Findings');
+    for (const r of shown) {
+      let match: ExcelJS.Row | undefined;
+      findings.eachRow((row) => {
+        if (row.getCell(1).value === r[6]) match = row;
+      });
+      expect(match?.getCell(9).value).toBe(r[3]);
+    }
+  });
+
+  it('shows the decisive inputs where the check searched for them, and leaves them out where it did not', async () => {
+    const all = texts(sheet(await readBack(result), 'Summary'));
+    expect(all).toContain('crew.0.mass_kg');
+    expect(all).toContain('member.pole (pole.strut)');
+    expect(all.some((t) => t.startsWith('What the verdict hangs on'))).toBe(true);
+    const without = texts(sheet(await readBack(sampleResult()), 'Summary'));
+    expect(without.some((t) => t.startsWith('What the verdict hangs on'))).toBe(false);
+  });
+
+  it('marks the verdict with its severity: word, mark, fill and ink', async () => {
+    const ws = sheet(await readBack(result), 'Summary');
+    let verdict: ExcelJS.Cell | undefined;
+    ws.eachRow((row) => {
+      if (row.getCell(1).value === 'Verdict') verdict = row.getCell(2);
+    });
+    const s = result.verdict;
+    expect(verdict?.value).toBe(s.toUpperCase());
+    expect(verdict?.numFmt).toBe(`"${SEVERITY_MARKS[s]} "@`);
+    expect(fillOf(verdict!)).toBe(toArgb(SEVERITY_COLOURS[s].fill));
+  });
+
+  it('sets every sheet up to print: A4, one page wide, a print area, repeated header rows, named and numbered pages', async () => {
+    const wb = await readBack(result);
+    for (const ws of wb.worksheets.filter((w) => w.state !== 'hidden')) {
+      const p = ws.pageSetup;
+      expect(p.paperSize, ws.name).toBe(9);
+      expect([p.fitToPage, p.fitToWidth, p.fitToHeight], ws.name).toEqual([true, 1, 0]);
+      expect(p.printArea, ws.name).toMatch(/^\$?A\$?1:\$?[A-Z]+\$?\d+$/);
+      expect(p.printTitlesRow, ws.name).toMatch(/^\$?1:\$?\d+$/);
+      expect(ws.headerFooter.oddHeader, ws.name).toContain('&A');
+      expect(ws.headerFooter.oddHeader, ws.name).toContain(result.spec_name);
+      expect(ws.headerFooter.oddFooter, ws.name).toContain('Page &P of &N');
+    }
+    // Wide sheets turn to landscape; the narrow setting-out stays upright.
+    expect(sheet(wb, 'Findings').pageSetup.orientation).toBe('landscape');
+    expect(sheet(wb, 'Wheel setting-out').pageSetup.orientation).toBe('portrait');
   });
 });

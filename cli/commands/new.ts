@@ -3,7 +3,7 @@ import { extname, resolve } from 'node:path';
 import { ensureNotSame, OutputIsInputError, writeFileAtomic } from '../../src/node/atomic-write.ts';
 import { readSpec } from '../../src/node/read-spec.ts';
 import { choicesOf } from '../../src/render/spec-workbook/choice-lists.ts';
-import { specificationWorkbook, unplacedKeys } from '../../src/render/spec-workbook/spec-sheets.ts';
+import { specificationWorkbookBytes, unplacedKeys } from '../../src/render/spec-workbook/spec-sheets.ts';
 import { specYaml } from '../../src/render/spec-yaml-template.ts';
 import type { Console } from '../console.ts';
 import { EXIT } from '../exit-codes.ts';
@@ -59,7 +59,7 @@ export async function newCommand(file: string, opts: NewOptions, con: Console): 
   } else {
     const data = loadData(con);
     if (!data) return EXIT.badInput;
-    bytes = new Uint8Array(await specificationWorkbook(raw, choicesOf(data)).xlsx.writeBuffer());
+    bytes = await specificationWorkbookBytes(raw, choicesOf(data));
   }
   await writeFileAtomic(target, bytes);
   con.out(`axletree: wrote ${file}${opts.from ? ` with the values of ${opts.from}` : ''}. Fill it in, then run: npx axletree check ${file}\n`);

@@ -14,18 +14,22 @@ import { addStockPlanSheet } from './sheets/stock-plan-sheet.ts';
 import { addSpecSheet } from './sheets/spec-sheet.ts';
 import { addSourcesSheet } from './sheets/sources-sheet.ts';
 import { addSpecificationSheets } from './spec-workbook/spec-sheets.ts';
+import { opensOn } from './sheets/opens-on.ts';
+import { steadyWorkbookBytes } from './steady-bytes.ts';
 
 /**
  * The check result as an .xlsx workbook, returned as bytes; the caller writes
  * it. The sheets' tables are the report model's, so the workbook says what the
  * Markdown and HTML reports say; pass the model the reports were made from.
+ * It opens on the summary; the findings follow, then the evidence, and the
+ * specification's fill-in sheets come last. Every sheet is set up to print.
+ * The same result always gives the same bytes.
  */
 export async function renderWorkbook(result: CheckResult, doc: ReportDocument = reportDocument(result)): Promise<Buffer> {
   const wb = new ExcelJS.Workbook();
   wb.creator = `${result.tool.name} ${result.tool.version}`;
   wb.title = doc.title;
-  if (result.input !== undefined) addSpecificationSheets(wb, result.input, result.choices);
-  addSummarySheet(wb, doc);
+  const summary = addSummarySheet(wb, doc, result);
   addFindingsSheet(wb, doc);
   addMassBalanceSheet(wb, doc);
   addLoadsSheet(wb, doc);
@@ -36,6 +40,7 @@ export async function renderWorkbook(result: CheckResult, doc: ReportDocument = 
   addStockPlanSheet(wb, doc, result);
   addSpecSheet(wb, doc);
   addSourcesSheet(wb, doc);
-  const bytes = await wb.xlsx.writeBuffer();
-  return Buffer.from(bytes);
+  if (result.input !== undefined) addSpecificationSheets(wb, result.input, result.choices);
+  opensOn(wb, summary);
+  return Buffer.from(await steadyWorkbookBytes(wb));
 }

@@ -64,15 +64,17 @@ describe('axletree new', () => {
 });
 
 describe('checking a workbook', () => {
-  it('gives a result workbook that starts with the spec sheets and can be checked again', async () => {
+  it('gives a result workbook that opens on the summary, ends with the spec sheets and can be checked again', async () => {
     const dir = await freshDir('axletree-new-');
     expect((await runCli(['new', 'spec.xlsx', '--from', DEMO], dir)).code).toBe(0);
     const first = await runCli(['check', '--no-decisive', 'spec.xlsx', '--out', 'out', '--json'], dir);
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(join(dir, 'out', 'result.xlsx'));
     const names = wb.worksheets.map((w) => w.name);
-    expect(names.slice(0, 3)).toEqual(['Start here', 'General', 'Box']);
-    expect(names).toContain('Summary');
+    expect(names.slice(0, 2)).toEqual(['Summary', 'Findings']);
+    const cover = names.indexOf('Start here');
+    expect(names.slice(cover, cover + 3)).toEqual(['Start here', 'General', 'Box']);
+    expect(names.slice(cover).every((n) => !['Summary', 'Findings', 'Sources'].includes(n))).toBe(true);
     const again = await runCli(['check', '--no-decisive', join('out', 'result.xlsx'), '--out', 'again', '--json'], dir);
     expect(again.code).toBe(first.code);
     expect(JSON.parse(again.out).spec_as_checked).toEqual(JSON.parse(first.out).spec_as_checked);

@@ -1,7 +1,10 @@
 import type ExcelJS from 'exceljs';
 import type { Block, ReportDocument, TableBlock } from '../model/document.ts';
 import { addCautionRow, addHeading, setColumnWidths, sumOf } from './sheet-style.ts';
-import { addModelTable, tableWidths } from './sheet-table.ts';
+import { addModelTable, tableWidths, type TableLayout } from './sheet-table.ts';
+
+/** A column width for sheets of a few long texts, narrow enough that they print upright at a readable size. */
+export const NARROW_TEXT = 45;
 
 /** The one-line caution every sheet opens with: the report's closing line, which a report without cautions never has. */
 export function sheetCaution(doc: ReportDocument): string {
@@ -15,11 +18,11 @@ export function reportSheet(
   name: string,
   doc: ReportDocument,
   tables: readonly TableBlock[],
-  o: { frozen?: boolean; joinDims?: boolean; widths?: readonly number[] } = {},
+  o: { frozen?: boolean; widths?: readonly number[] } & TableLayout = {},
 ): { ws: ExcelJS.Worksheet; widths: number[] } {
   const ws = wb.addWorksheet(name, o.frozen ? { views: [{ state: 'frozen', ySplit: 2 }] } : {});
-  const fitted = tableWidths(tables, o.joinDims);
-  const widths = (o.widths ?? fitted).map((w, i) => Math.max(w, fitted[i] ?? 0));
+  const fitted = tableWidths(tables, o);
+  const widths = Array.from({ length: Math.max(o.widths?.length ?? 0, fitted.length) }, (_, i) => Math.max(o.widths?.[i] ?? 0, fitted[i] ?? 0));
   setColumnWidths(ws, widths);
   addCautionRow(ws, sheetCaution(doc), widths.length, sumOf(widths));
   return { ws, widths };
@@ -46,13 +49,13 @@ export function tablesSheet(
   name: string,
   doc: ReportDocument,
   parts: readonly SheetPart[],
-  o: { frozen?: boolean; joinDims?: boolean } = {},
+  o: { frozen?: boolean } & TableLayout = {},
 ): { ws: ExcelJS.Worksheet; widths: number[]; headers: ExcelJS.Row[] } {
   const { ws, widths } = reportSheet(wb, name, doc, parts.map((p) => p.table), o);
   const headers = parts.map((p, i) => {
     if (i > 0 || p.heading) ws.addRow([]);
     if (p.heading) addHeading(ws, p.heading);
-    return addModelTable(ws, p.table, widths, o.joinDims);
+    return addModelTable(ws, p.table, widths, o);
   });
   return { ws, widths, headers };
 }

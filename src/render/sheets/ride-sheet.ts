@@ -1,9 +1,10 @@
 import type ExcelJS from 'exceljs';
 import type { ReportDocument } from '../model/document.ts';
 import { sectionById } from '../model/find-table.ts';
-import { tablesSheet, type SheetPart } from './report-sheet.ts';
+import { setPrint } from './print-setup.ts';
+import { NARROW_TEXT, tablesSheet, type SheetPart } from './report-sheet.ts';
 
-/** The ride section's tables, each under the heading before it: the floor damping, then each case. None where the model did not run. */
+/** The ride section's tables, each under the heading before it: the floor damping, then each case; the long texts wrap narrow, so the sheet prints upright. None where the model did not run. */
 export function addRideSheet(wb: ExcelJS.Workbook, doc: ReportDocument): void {
   const ride = sectionById(doc, 'ride');
   if (!ride) return;
@@ -15,5 +16,5 @@ export function addRideSheet(wb: ExcelJS.Workbook, doc: ReportDocument): void {
     parts.push(heading ? { heading, table: b } : { table: b });
     heading = undefined;
   }
-  tablesSheet(wb, 'Ride', doc, parts);
+  setPrint(tablesSheet(wb, 'Ride', doc, parts, { maxWidth: NARROW_TEXT }).ws);
 }

@@ -4,7 +4,8 @@ import { sectionById, tableById } from '../model/find-table.ts';
 import { stepLine } from '../model/cell-text.ts';
 import { SETTING_OUT_SVG_FILE } from '../report-figures.ts';
 import { blocksOf, tablesSheet } from './report-sheet.ts';
-import { addHeading, addMergedLine } from './sheet-style.ts';
+import { addHeading, addMergedLine, font } from './sheet-style.ts';
+import { setPrint } from './print-setup.ts';
 
 /** Where the drawing is, since a spreadsheet cell cannot hold it. */
 export const DRAWING_NOTE = `The dimensioned drawing is in the report: inline in report.html, and as ${SETTING_OUT_SVG_FILE} beside report.md.`;
@@ -18,5 +19,6 @@ export function addSettingOutSheet(wb: ExcelJS.Workbook, doc: ReportDocument): v
   addHeading(ws, 'Basis');
   basis.forEach(line);
   ws.addRow([]);
-  line(DRAWING_NOTE).getCell(1).font = { italic: true };
+  line(DRAWING_NOTE).getCell(1).font = font({ italic: true });
+  setPrint(ws);
 }

@@ -7,7 +7,8 @@ import { BOUND_NOTE, sectionText } from '../cutting-text.ts';
 import { barCells, barScale, barSegments, partLabels } from '../stock-bar.ts';
 import { OFFCUT_FILL, partFill } from '../stock-palette.ts';
 import { reportSheet } from './report-sheet.ts';
-import { addHeading, solidFill, sumOf, wrappedHeight } from './sheet-style.ts';
+import { addHeading, font, solidFill, styleHeader, sumOf, wrappedHeight } from './sheet-style.ts';
+import { setPrint } from './print-setup.ts';
 import { sheetCells, sheetHeaders, type SheetCell } from './sheet-table.ts';
 
 // Five ordinary columns, then narrow bar columns, each standing for a fixed
@@ -38,7 +39,7 @@ export function addStockPlanSheet(wb: ExcelJS.Workbook, doc: ReportDocument, res
 
   addHeading(ws, 'Stock to buy, by group');
   addTable(ws, groups, GROUP_SPANS);
-  ws.addRow([BOUND_NOTE]).getCell(1).font = { italic: true };
+  ws.addRow([BOUND_NOTE]).getCell(1).font = font({ italic: true });
 
   const labels = partLabels(plan);
   plan.groups.forEach((g, i) => {
@@ -48,7 +49,7 @@ export function addStockPlanSheet(wb: ExcelJS.Workbook, doc: ReportDocument, res
     const header = addTable(ws, patterns, PATTERN_SPANS, (row, k) => drawBar(row, g.plan.patterns[k], scale, labels));
     const barHead = header.getCell(BAR_FIRST_COLUMN);
     barHead.value = `Bar: one column = ${scale} mm of stock; each part its own colour, offcut pale grey`;
-    barHead.font = { bold: true };
+    barHead.font = font({ bold: true });
   });
 
   const unserved = tablesOf(doc).find((t) => t.id === 'stock-unserved');
@@ -57,6 +58,7 @@ export function addStockPlanSheet(wb: ExcelJS.Workbook, doc: ReportDocument, res
     addHeading(ws, 'Parts no listed stock serves');
     addTable(ws, unserved, UNSERVED_SPANS);
   }
+  setPrint(ws);
 }
 
 /** A model table with each field merged across its span of columns; `after` adds to each body row. Returns the header row. */
@@ -66,7 +68,7 @@ function addTable(ws: ExcelJS.Worksheet, t: TableBlock, spans: readonly number[]
   const header = addFieldRow(ws, spans, headers.map((value) => ({ value })), true);
   t.rows.forEach((r, k) => {
     const row = addFieldRow(ws, spans, sheetCells(t, r, true));
-    if (r.total) row.font = { bold: true };
+    if (r.total) row.font = font({ bold: true });
     after?.(row, k);
   });
   return header;
@@ -81,7 +83,7 @@ function drawBar(row: ExcelJS.Row, p: CuttingPattern, scale: number, labels: rea
     if (c.first && label !== null) {
       // The label spills over the empty cells of its own part; a rule marks where each part starts.
       cell.value = label;
-      cell.font = { size: 7 };
+      cell.font = font({ size: 7 });
       cell.alignment = { vertical: 'middle', wrapText: false };
       cell.border = { left: { style: 'thin' } };
     }
@@ -98,9 +100,7 @@ function addFieldRow(ws: ExcelJS.Worksheet, spans: readonly number[], cells: rea
     const c = cells[i];
     cell.value = c.value;
     if (header) {
-      cell.font = { bold: true };
-      cell.fill = solidFill('#D9D9D9');
-      cell.alignment = { wrapText: true, vertical: 'bottom' };
+      styleHeader(cell);
     } else {
       if (c.numFmt) cell.numFmt = c.numFmt;
       if (WRAPPED_COLUMNS.includes(col) && span === 1 && typeof c.value === 'string') {

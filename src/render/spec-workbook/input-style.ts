@@ -1,20 +1,21 @@
 import type ExcelJS from 'exceljs';
-import { solidFill } from '../sheets/sheet-style.ts';
+import { font, solidFill } from '../sheets/sheet-style.ts';
+import { INPUT_EDGE, INPUT_FILL as INPUT_COLOUR, LABEL_FILL as LABEL_COLOUR, QUIET_INK } from '../sheets/sheet-palette.ts';
+import { toArgb } from '../severity-palette.ts';
 
-// Input cells are pale green with a border; labels, help and computed cells
-// stay grey, so a planner sees at once where to type.
-export const INPUT_FILL = solidFill('#E2EFDA');
-export const LABEL_FILL = solidFill('#F2F2F2');
-const INPUT_BORDER: Partial<ExcelJS.Borders> = {
-  top: { style: 'thin', color: { argb: 'FFA9C79A' } },
-  bottom: { style: 'thin', color: { argb: 'FFA9C79A' } },
-  left: { style: 'thin', color: { argb: 'FFA9C79A' } },
-  right: { style: 'thin', color: { argb: 'FFA9C79A' } },
-};
+// Input cells are near-white cream inside an olive border; labels, help and
+// computed cells are a barely tinted grey without one, so a planner sees at
+// once where to type, on screen or printed in grey.
+export const INPUT_FILL = solidFill(INPUT_COLOUR);
+export const LABEL_FILL = solidFill(LABEL_COLOUR);
+const EDGE = { style: 'thin', color: { argb: toArgb(INPUT_EDGE) } } as const;
+const INPUT_BORDER: Partial<ExcelJS.Borders> = { top: EDGE, bottom: EDGE, left: EDGE, right: EDGE };
 
 export function styleInput(cell: ExcelJS.Cell): void {
   cell.fill = INPUT_FILL;
   cell.border = INPUT_BORDER;
+  // Level with the first line of its label and help.
+  cell.alignment = { vertical: 'top' };
 }
 
 export function styleLabel(cell: ExcelJS.Cell): void {
@@ -22,5 +23,5 @@ export function styleLabel(cell: ExcelJS.Cell): void {
   cell.alignment = { wrapText: true, vertical: 'top' };
 }
 
-export const REQUIRED_FONT: Partial<ExcelJS.Font> = { bold: true };
-export const QUIET_FONT: Partial<ExcelJS.Font> = { italic: true, color: { argb: 'FF606060' } };
+export const REQUIRED_FONT = font({ bold: true });
+export const QUIET_FONT = font({ italic: true, color: { argb: toArgb(QUIET_INK) } });

@@ -1,13 +1,17 @@
 import type ExcelJS from 'exceljs';
 import type { Field, Section, Table } from '../../core/spec/spec-fields.ts';
-import { addHeaderRow, setColumnWidths, wrappedHeight } from '../sheets/sheet-style.ts';
+import { addHeaderRow, font, setColumnWidths, wrappedHeight } from '../sheets/sheet-style.ts';
+import { setPrint } from '../sheets/print-setup.ts';
 import { validationFor } from './cell-validation.ts';
 import { QUIET_FONT, REQUIRED_FONT, styleInput, styleLabel } from './input-style.ts';
 import { COL, TABLE_ENTRY_OFFSET, TABLE_FIRST_COL, TABLE_HEADER_OFFSET, TABLE_SPARE_ROWS, tableKey } from '../../core/input/workbook-layout.ts';
 import { cellText, valueAt } from '../../core/input/spec-values.ts';
 
-const WIDTHS = [30, 30, 20, 10, 16, 80];
+const WIDTHS = [28, 24, 16, 8, 12, 56];
 const TABLE_WIDTH = 18;
+/** Empty entry rows printed below a table's entries, to write more in by hand; a table prints at least so many rows (or all it has). */
+const PRINTED_SPARE_ROWS = 2;
+const PRINTED_LEAST_ROWS = 5;
 type ListRange = Parameters<typeof validationFor>[1];
 
 /** What the default column says: the default, or whether the key may be left out. */
@@ -24,7 +28,7 @@ export function addSectionSheet(wb: ExcelJS.Workbook, section: Section, value: u
   setColumnWidths(ws, Array.from({ length: Math.max(WIDTHS.length, widest) }, (_, i) => (section.fields.length || i === 0 ? (WIDTHS[i] ?? TABLE_WIDTH) : TABLE_WIDTH)));
   const title = ws.getRow(1);
   title.getCell(1).value = section.sheet;
-  title.getCell(1).font = { bold: true, size: 13 };
+  title.getCell(1).font = font({ bold: true, size: 13 });
   title.getCell(2).value = section.help || `The ${section.path.join('.') || 'top-level'} keys of the specification.`;
   ws.mergeCells(1, 2, 1, WIDTHS.length);
   title.getCell(2).alignment = { wrapText: true, vertical: 'top' };
@@ -34,7 +38,15 @@ export function addSectionSheet(wb: ExcelJS.Workbook, section: Section, value: u
     section.fields.forEach((f, i) => addFieldRow(ws, 3 + i, f, valueAt(value, f.path), listRange));
   }
   let row = section.fields.length ? 3 + section.fields.length + 1 : 3;
-  for (const table of section.tables) row = addTable(ws, row, section, table, valueAt(value, table.path), listRange) + 1;
+  let lastPrinted = section.fields.length ? 2 + section.fields.length : 2;
+  for (const table of section.tables) {
+    const at = row;
+    const entries = valueAt(value, table.path);
+    row = addTable(ws, at, section, table, entries, listRange) + 1;
+    const filled = Array.isArray(entries) ? entries.length : 0;
+    lastPrinted = at + TABLE_ENTRY_OFFSET + Math.min(row - at - TABLE_ENTRY_OFFSET, Math.max(filled + PRINTED_SPARE_ROWS, PRINTED_LEAST_ROWS)) - 1;
+  }
+  setPrint(ws, { lastRow: lastPrinted });
   return ws;
 }
 
@@ -66,10 +78,10 @@ function addTable(ws: ExcelJS.Worksheet, at: number, section: Section, table: Ta
   const entries = Array.isArray(value) ? value : [];
   const heading = ws.getRow(at);
   heading.getCell(1).value = tableKey(section, table);
-  heading.getCell(1).font = { bold: true };
+  heading.getCell(1).font = font({ bold: true });
   const limit = table.maxItems !== undefined ? `, at most ${table.maxItems}` : '';
   heading.getCell(2).value = `${table.label || section.sheet}: one row per entry${table.minItems ? `, at least ${table.minItems}` : ''}${limit}.${table.help ? ` ${table.help}` : ''}`;
-  heading.getCell(2).font = { bold: true };
+  heading.getCell(2).font = font({ bold: true });
   const header = ws.getRow(at + TABLE_HEADER_OFFSET);
   const about = ws.getRow(at + TABLE_HEADER_OFFSET + 1);
   header.getCell(1).value = '#';
@@ -81,7 +93,7 @@ function addTable(ws: ExcelJS.Worksheet, at: number, section: Section, table: Ta
     const h = header.getCell(TABLE_FIRST_COL + i);
     h.value = f.key;
     styleLabel(h);
-    h.font = f.required ? REQUIRED_FONT : {};
+    h.font = f.required ? REQUIRED_FONT : font();
     h.note = `${f.label}. ${f.help}`.trim();
     const a = about.getCell(TABLE_FIRST_COL + i);
     a.value = `${f.unit || '-'}; ${defaultText(f)}`;

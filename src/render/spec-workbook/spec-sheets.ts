@@ -6,6 +6,7 @@ import { FILL_IN_CATEGORY, RESULT_CATEGORY } from '../../core/input/workbook-lay
 import { addSectionSheet } from './section-sheet.ts';
 import { blankSpec, valueAt } from '../../core/input/spec-values.ts';
 import { pathText, type KeyPath } from '../../core/spec/input-issue.ts';
+import { steadyWorkbookBytes } from '../steady-bytes.ts';
 
 function addAll(wb: ExcelJS.Workbook, raw: unknown, choices: Choices): void {
   const sections = specSections();
@@ -24,14 +25,20 @@ export function addSpecificationSheets(wb: ExcelJS.Workbook, raw: unknown, choic
   wb.category = RESULT_CATEGORY;
 }
 
-/** A fill-in workbook: blank, or holding the values of a specification. */
+/** A fill-in workbook: blank, or holding the values of a specification (its name in the title every printed page carries). */
 export function specificationWorkbook(raw: unknown, choices: Choices): ExcelJS.Workbook {
   const wb = new ExcelJS.Workbook();
+  const name = valueAt(raw, ['name']);
   wb.creator = 'axletree';
-  wb.title = 'Chariot build specification';
+  wb.title = typeof name === 'string' && name !== '' ? `Chariot build specification: ${name}` : 'Chariot build specification';
   wb.category = FILL_IN_CATEGORY;
   addAll(wb, raw ?? blankSpec(specSections()), choices);
   return wb;
+}
+
+/** The fill-in workbook as bytes, the same for the same specification whenever it is written. */
+export function specificationWorkbookBytes(raw: unknown, choices: Choices): Promise<Uint8Array> {
+  return steadyWorkbookBytes(specificationWorkbook(raw, choices));
 }
 
 /** Keys of a specification that no cell of the workbook would hold (unknown keys). */

@@ -1,5 +1,6 @@
 import type ExcelJS from 'exceljs';
 import type { RulesData } from '../../core/data/rules-data.ts';
+import { steadyWorkbookBytes } from '../steady-bytes.ts';
 import { choicesOf } from './choice-lists.ts';
 import { specificationWorkbook } from './spec-sheets.ts';
 
@@ -7,8 +8,10 @@ import { specificationWorkbook } from './spec-sheets.ts';
 export const TEMPLATE_FILE = 'templates/specification.xlsx';
 
 export function templateWorkbook(data: RulesData): ExcelJS.Workbook {
-  const wb = specificationWorkbook(undefined, choicesOf(data));
-  // A fixed date, so that a regenerated template differs only where its content does.
-  wb.created = wb.modified = new Date('2024-01-01T00:00:00Z');
-  return wb;
+  return specificationWorkbook(undefined, choicesOf(data));
+}
+
+/** The template's bytes: fixed dates, so a regenerated template differs only where its content does. */
+export function templateBytes(data: RulesData): Promise<Uint8Array> {
+  return steadyWorkbookBytes(templateWorkbook(data));
 }
