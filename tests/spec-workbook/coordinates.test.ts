@@ -27,7 +27,7 @@ describe('the coordinate diagram', () => {
   });
 
   it('names the origin and all three axes, each with its direction', () => {
-    for (const text of ['x forward', 'y to the left', 'z up', 'rear edge', 'level ground', 'centre line']) expect(svg, text).toContain(text);
+    for (const text of ['x forward', 'y to the left', 'z up', 'rear edge', 'ground: z = 0', 'centre line']) expect(svg, text).toContain(text);
     for (const text of ['x points forward', 'y to the chariot\u2019s left', 'z up', 'under the rear edge of the floor', 'level ground']) expect(AXES_TEXT, text).toContain(text);
   });
 
