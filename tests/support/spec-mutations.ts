@@ -75,7 +75,7 @@ export function mutated(c: MutationCase): Json {
       if (Array.isArray(parent)) parent.splice(Number(key), 0, structuredClone(parent[Number(key)]));
       else holder[key] = [structuredClone(holder[key])];
     } else if (mutation.kind === 'scale') {
-      if (typeof holder[key] === 'number') holder[key] = (holder[key] as number) * mutation.factor;
+      if (typeof holder[key] === 'number') holder[key] = (holder[key]) * mutation.factor;
     } else holder[key] = mutation.value;
   }
   return spec;
