@@ -36,7 +36,9 @@ describe('the bad-input catalogue', () => {
   it('holds cases', () => expect(files.length).toBeGreaterThan(0));
   for (const f of files) {
     const c = readCase(join(DIR.pathname, f));
-    it(`${c.name}: exit ${c.exit}`, async () => {
+    const asRoot = c.notAsRoot === true && process.getuid?.() === 0;
+    if (asRoot) console.warn(`bad-catalogue: "${c.name}" skipped: permissions do not bind the superuser this test runs as`);
+    it.skipIf(asRoot)(`${c.name}: exit ${c.exit}`, async () => {
       const dir = await freshDir('axletree-bad-case-');
       await prepareCase(c, dir);
       const before = snapshot(dir);

@@ -36,6 +36,8 @@ export interface BadCase {
   message?: string;
   /** Run as the real binary (a child process) rather than in-process: for cases about the process itself. */
   binary?: boolean;
+  /** The case depends on file permissions, which do not bind the superuser: skipped, saying so, when run as root. */
+  notAsRoot?: boolean;
 }
 
 export function readCase(file: string): BadCase {
