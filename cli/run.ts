@@ -8,6 +8,7 @@ import type { Console } from './console.ts';
 import { COMMANDS } from './declarations/index.ts';
 import { EXIT } from './exit-codes.ts';
 import { faultLine } from './fault-line.ts';
+import { OutputError } from '../src/node/output-error.ts';
 import { VERSION } from './version.ts';
 
 /** Options of axletree itself, given before any command. */
@@ -17,6 +18,11 @@ export async function run(argv: string[], con: Console): Promise<number> {
   try {
     return await dispatch(argv, con);
   } catch (e) {
+    // An output place that cannot be written is the user's to fix, not a fault of the tool.
+    if (e instanceof OutputError) {
+      con.err(`axletree: ${e.message}.\n`);
+      return EXIT.badInput;
+    }
     con.err(faultLine(e));
     return EXIT.fault;
   }

@@ -7,6 +7,7 @@ import { join } from 'node:path';
 import { OPTIONAL_FILES, OUTPUT_FILES, writeOutputs } from '../src/node/write-outputs.ts';
 import type { PdfPrinter } from '../src/node/pdf-printer.ts';
 import { drawHere } from '../src/render/report-plots.ts';
+import { MANIFEST } from '../src/node/write-file-set.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 
 describe('writeOutputs', () => {
@@ -22,7 +23,7 @@ describe('writeOutputs', () => {
     const result = sampleResult();
     const written = await writeOutputs(result, dir, join(dir, 'spec.yaml'));
     expect(written).toContain(join(dir, OUTPUT_FILES.settingOut));
-    expect((await readdir(dir)).sort()).toEqual([...Object.values(OUTPUT_FILES), ...drawingsOf(result).map((d) => drawingFile(d.id))].sort());
+    expect((await readdir(dir)).sort()).toEqual([...Object.values(OUTPUT_FILES), ...drawingsOf(result).map((d) => drawingFile(d.id)), MANIFEST].sort());
     const svg = await readFile(join(dir, OUTPUT_FILES.settingOut), 'utf8');
     expect(svg).toBe(`${settingOutSvg(result)}\n`);
     const md = await readFile(join(dir, OUTPUT_FILES.markdown), 'utf8');

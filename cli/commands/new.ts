@@ -1,6 +1,7 @@
 import { existsSync } from 'node:fs';
 import { extname, resolve } from 'node:path';
 import { ensureNotSame, OutputIsInputError, writeFileAtomic } from '../../src/node/atomic-write.ts';
+import { asOutputError } from '../../src/node/output-error.ts';
 import { readSpec } from '../../src/node/read-spec.ts';
 import { choicesOf } from '../../src/render/spec-workbook/choice-lists.ts';
 import { specificationWorkbookBytes, unplacedKeys } from '../../src/render/spec-workbook/spec-sheets.ts';
@@ -61,7 +62,9 @@ export async function newCommand(file: string, opts: NewOptions, con: Console): 
     if (!data) return EXIT.badInput;
     bytes = await specificationWorkbookBytes(raw, choicesOf(data));
   }
-  await writeFileAtomic(target, bytes);
+  await writeFileAtomic(target, bytes).catch((e: unknown) => {
+    throw asOutputError(e, target);
+  });
   con.out(`axletree: wrote ${file}${opts.from ? ` with the values of ${opts.from}` : ''}. Fill it in, then run: npx axletree check ${file}\n`);
   return EXIT.ok;
 }

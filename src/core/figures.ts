@@ -1,6 +1,6 @@
 import { lateralLimits } from './model/turn-limits.ts';
 import type { ModelView } from './pipeline/define-model.ts';
-import type { Figure, FigureEntry } from './result/figure.ts';
+import { figureOrReason, type Figure, type FigureEntry } from './result/figure.ts';
 import { G, UNITS } from './units/units.ts';
 import { tightestYokeRadius } from './model/turn.ts';
 import { memberFigures } from './model/members/member-figures.ts';
@@ -54,8 +54,8 @@ function cuttingFigures(a: ModelView<'cutting'>): Record<string, Figure> {
 }
 
 // Rollover figures use the rolling assembly with the crew as placed. Where no
-// steady turn exists, the path radii are reported as 0 (turn.pole-reach says why).
-function turnFigures(a: ModelView<'turn'>): Record<string, Figure> {
+// steady turn exists, the inner path and the rollover speed do not apply (turn.pole-reach says why).
+function turnFigures(a: ModelView<'turn'>): Record<string, FigureEntry> {
   const t = a.turn;
   const allowed = lateralLimits(a.data, t).rollover;
   const advisory = (allowed.advisory ?? allowed.hard)!;
@@ -63,9 +63,9 @@ function turnFigures(a: ModelView<'turn'>): Record<string, Figure> {
     ssf: { value: t.ssf, unit: '1' },
     rollover_accel: { value: t.rolloverAccel, unit: 'm/s²' },
     axle_path_radius: { value: t.axleRadius, unit: 'm' },
-    inner_wheel_path_radius: { value: t.steady ? t.innerRadius : 0, unit: 'm' },
+    inner_wheel_path_radius: figureOrReason(t.steady ? t.innerRadius : null, 'm', 'no steady turn: the planned turn is inside the pole reach'),
     lateral_accel_design: { value: t.lateralAccel, unit: 'm/s²' },
-    rollover_speed_at_turn: { value: t.steady ? t.rolloverSpeed / UNITS.kmh.si : 0, unit: 'km/h' },
+    rollover_speed_at_turn: figureOrReason(t.rolloverSpeed === null ? null : t.rolloverSpeed / UNITS.kmh.si, 'km/h', 'no steady turn: the planned turn is inside the pole reach'),
     min_turn_radius_at_speed: { value: tightestYokeRadius(t.speed, advisory, t.reach), unit: 'm' },
   };
 }

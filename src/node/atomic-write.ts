@@ -9,6 +9,17 @@ import { basename, dirname, join, resolve } from 'node:path';
  * rename is atomic), flush it to disk, then rename it over the target.
  */
 export async function writeFileAtomic(path: string, data: string | Uint8Array): Promise<void> {
+  const staged = await stageFile(path, data);
+  await staged.commit();
+}
+
+/** A file written under a temporary name beside its target, flushed, waiting to be renamed into place (or dropped). */
+export interface StagedFile {
+  commit(): Promise<void>;
+  drop(): Promise<void>;
+}
+
+export async function stageFile(path: string, data: string | Uint8Array): Promise<StagedFile> {
   const target = await followLink(resolve(path));
   const dir = dirname(target);
   const temp = join(dir, `.${basename(target)}.${randomBytes(6).toString('hex')}.tmp`);
@@ -22,13 +33,24 @@ export async function writeFileAtomic(path: string, data: string | Uint8Array): 
     await handle.sync();
     await handle.close();
     handle = undefined;
-    await rename(temp, target);
   } catch (error) {
     await handle?.close().catch(() => undefined);
     await unlink(temp).catch(() => undefined);
     throw error;
   }
-  await syncDirectory(dir);
+  const drop = () => unlink(temp).catch(() => undefined);
+  return {
+    async commit() {
+      try {
+        await rename(temp, target);
+      } catch (error) {
+        await drop();
+        throw error;
+      }
+      await syncDirectory(dir);
+    },
+    drop,
+  };
 }
 
 /** Write through a symbolic link to the file it names, keeping the link. */
@@ -86,9 +108,19 @@ function realPathOf(path: string): string {
 }
 
 function sameFile(a: string, b: string): boolean {
-  const sa = statSync(a, { throwIfNoEntry: false });
-  const sb = statSync(b, { throwIfNoEntry: false });
+  const sa = statOrNone(a);
+  const sb = statOrNone(b);
   return sa !== undefined && sb !== undefined && sa.dev === sb.dev && sa.ino === sb.ino;
+}
+
+/** A path's status, or undefined where nothing can be there (missing, or under a file). */
+function statOrNone(path: string) {
+  try {
+    return statSync(path, { throwIfNoEntry: false });
+  } catch (error) {
+    if (isCode(error, 'ENOTDIR')) return undefined;
+    throw error;
+  }
 }
 
 function isCode(error: unknown, code: string): boolean {

@@ -16,8 +16,8 @@ export interface TurnModel {
   axleRadius: number;
   innerRadius: number;
   outerRadius: number;
-  /** Inner over outer wheel path radius (negative: the inner wheel runs backwards). */
-  wheelSpeedRatio: number;
+  /** Inner over outer wheel path radius (negative: the inner wheel runs backwards); null where there is no steady turn. */
+  wheelSpeedRatio: number | null;
   /** Yoke path radius minus axle path radius, m. */
   offTracking: number;
   speed: number;
@@ -28,8 +28,8 @@ export interface TurnModel {
   cgHeight: number;
   ssf: number;
   rolloverAccel: number;
-  /** Team speed at which this turn reaches the rollover threshold, m/s. */
-  rolloverSpeed: number;
+  /** Team speed at which this turn reaches the rollover threshold, m/s; null where there is no steady turn. */
+  rolloverSpeed: number | null;
   lateralFriction: number;
   slideAccel: number;
   /** Rolling assembly mass and the weight on the wheels (the axle load), kg and N. */
@@ -88,7 +88,7 @@ export function turnModel(spec: CheckedSpecification, data: RulesData, mass: Mas
     axleRadius,
     innerRadius,
     outerRadius,
-    wheelSpeedRatio: steady ? innerRadius / outerRadius : NaN,
+    wheelSpeedRatio: steady ? innerRadius / outerRadius : null,
     offTracking: yokeRadius - axleRadius,
     speed,
     yawRate: speed / yokeRadius,
@@ -97,7 +97,7 @@ export function turnModel(spec: CheckedSpecification, data: RulesData, mass: Mas
     cgHeight,
     ssf,
     rolloverAccel,
-    rolloverSpeed: steady ? yokeRadius * Math.sqrt(rolloverAccel / axleRadius) : Infinity,
+    rolloverSpeed: steady ? yokeRadius * Math.sqrt(rolloverAccel / axleRadius) : null,
     lateralFriction,
     slideAccel: lateralFriction * G,
     mass: m,

@@ -36,7 +36,7 @@ function knownNames(spec: CheckedSpecification, data: RulesData, out: InputIssue
     ...spec.stock.extra_parts.map((x, i): [KeyPath, string] => [['stock', 'extra_parts', i, 'species'], x.species]),
   ];
   for (const [path, value] of wantSpecies) {
-    if (!(value in data.species)) out.push(issue(path, 'unknownSpecies', { value, allowed: species.join(', ') }));
+    if (!Object.hasOwn(data.species, value)) out.push(issue(path, 'unknownSpecies', { value, allowed: species.join(', ') }));
   }
   const wantLeather: [KeyPath, string][] = [
     [['floor_straps', 'material'], spec.floor_straps.material],
@@ -45,9 +45,9 @@ function knownNames(spec: CheckedSpecification, data: RulesData, out: InputIssue
   ];
   if (spec.wheels.tyre?.kind === 'rawhide' && spec.wheels.tyre.material === undefined) out.push(formIssue(['wheels', 'tyre', 'material'], 'tyreMaterialMissing', { allowed: leathers.join(', ') }));
   for (const [path, value] of wantLeather) {
-    if (!(value in data.leathers)) out.push(issue(path, 'unknownLeather', { value, allowed: leathers.join(', ') }));
+    if (!Object.hasOwn(data.leathers, value)) out.push(issue(path, 'unknownLeather', { value, allowed: leathers.join(', ') }));
   }
-  if (!(spec.operation.ground in data.grounds)) {
+  if (!Object.hasOwn(data.grounds, spec.operation.ground)) {
     out.push(issue(['operation', 'ground'], 'unknownGround', { value: spec.operation.ground, allowed: Object.keys(data.grounds).join(', ') }));
   }
 }

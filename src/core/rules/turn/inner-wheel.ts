@@ -17,7 +17,7 @@ export const innerWheel = defineRule({
   },
   run(ctx) {
     const t = ctx.models.turn;
-    if (!t.steady) return; // turn.pole-reach says why
+    if (!t.steady || t.wheelSpeedRatio === null) return; // turn.pole-reach says why
     ctx.report({
       subject: 'turn.design',
       label: `turn on a ${num(t.yokeRadius)} m yoke path`,

@@ -21,7 +21,7 @@ export const rollover = defineRule({
   },
   run(ctx) {
     const t = ctx.models.turn;
-    if (!t.steady) return;
+    if (!t.steady || t.rolloverSpeed === null) return;
     const allowed = lateralLimits(ctx.data, t);
     const advA = (allowed.rollover.advisory ?? allowed.rollover.hard)!;
     const tightest = tightestYokeRadius(t.speed, advA, t.reach);
