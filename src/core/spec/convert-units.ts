@@ -1,8 +1,9 @@
 import { parseQuantity } from '../units/parse-quantity.ts';
 import { unitOfKey, type UnitDef } from '../units/units.ts';
+import { INPUT_LIMITS } from '../input/input-limits.ts';
 import { issue, type InputIssue, type KeyPath } from './input-issue.ts';
 
-const EXAMPLES: Record<string, string> = { mm: '65 in', cm: '70 in', m: '40 ft', kg: '180 lb', 'km/h': '12 mph', N: '30 lbf', '%': '12 percent', g: '2 m/s^2', '°': '0.5 rad' };
+const EXAMPLES: Readonly<Record<string, string>> = { mm: '65 in', cm: '70 in', m: '40 ft', kg: '180 lb', 'km/h': '12 mph', N: '30 lbf', '%': '12 percent', g: '2 m/s^2', '°': '0.5 rad' };
 
 /**
  * Convert unit strings in place to numbers in the unit of their key, and
@@ -20,9 +21,14 @@ function walk(node: unknown, path: KeyPath, unit: UnitDef | undefined, issues: I
     return node;
   }
   if (typeof node === 'string' && unit) {
+    // The units library reads a long string in quadratic time: a value with its unit is short.
+    if (node.length > INPUT_LIMITS.unitStringChars) {
+      issues.push(issue(path, 'unitStringLong', { value: `"${node}"`, length: node.length, max: INPUT_LIMITS.unitStringChars, unit: unit.symbol, example: exampleOf(unit) }));
+      return node;
+    }
     const parsed = parseQuantity(node, unit);
     if (parsed.ok) return parsed.value;
-    issues.push(issue(path, 'unitString', { reason: parsed.reason, unit: unit.symbol, example: EXAMPLES[unit.symbol] ?? '' }));
+    issues.push(issue(path, 'unitString', { reason: parsed.reason, unit: unit.symbol, example: exampleOf(unit) }));
     return node;
   }
   if (Array.isArray(node)) {
@@ -33,3 +39,5 @@ function walk(node: unknown, path: KeyPath, unit: UnitDef | undefined, issues: I
   }
   return node;
 }
+
+const exampleOf = (unit: UnitDef): string => (Object.hasOwn(EXAMPLES, unit.symbol) ? EXAMPLES[unit.symbol] : '');
