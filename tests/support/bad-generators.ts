@@ -1,6 +1,96 @@
 // Inputs of the bad-input catalogue that are too big, repetitive or binary to
-// keep as files: each builds its content when the case runs.
+// keep as files: each builds its content when the case runs, in well under a
+// second (the workbooks are written by hand, not through a spreadsheet library).
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { parse, stringify } from 'yaml';
+import { INPUT_LIMITS } from '../../src/core/input/input-limits.ts';
+import { readZipDirectory, unpackPart } from '../../src/node/zip-directory.ts';
+import { bareWorkbook, rowXml, sheetXml } from './bare-workbook.ts';
+import { REPO, replaceOnce } from './run-cli.ts';
+import { deflatedZeros, zipBytes, type ZipEntry } from './zip-writer.ts';
+
+const L = INPUT_LIMITS;
+const demoText = () => readFileSync(join(REPO, 'specs', 'demo-two-crew.yaml'), 'utf8');
+
+/** The fill-in template's parts, unpacked, with one sheet's XML changed by `edit`. */
+function templateWith(sheetPart: string, edit: (xml: string) => string): Uint8Array {
+  const zip = new Uint8Array(readFileSync(join(REPO, 'templates', 'specification.xlsx')));
+  const dir = readZipDirectory(zip, L.workbookParts);
+  if (!dir.ok) throw new Error(dir.reason);
+  const entries: ZipEntry[] = dir.parts.map((p) => {
+    const data = unpackPart(zip, p, p.statedSize);
+    if (!(data instanceof Buffer)) throw new Error(`cannot unpack ${p.name}`);
+    return { name: p.name, data: p.name === sheetPart ? edit(data.toString('utf8')) : data };
+  });
+  return zipBytes(entries);
+}
+
+// The General sheet is the template's second sheet.
+const GENERAL = 'xl/worksheets/sheet2.xml';
+
+/** `count` list entries of the tiniest kind, as a flow list of empty mappings. */
+const emptyMappings = (count: number) => `spec_version: 1\nloads: [${Array.from({ length: count }, () => '{}').join(',')}]\n`;
+
 export const GENERATORS: Record<string, () => string | Uint8Array | Promise<string | Uint8Array>> = {
   /** A YAML document whose name is a string of 100,000 characters. */
   'long-name': () => `spec_version: 1\nname: ${'x'.repeat(100_000)}\n`,
+  /** The demo with its wheel diameter written as a 100 kB unit string (the units library took 10 s over one). */
+  'long-unit-string': () => replaceOnce(demoText(), 'diameter_mm: 940\n', `diameter_mm: "${'1 '.repeat(50_000)}mm"\n`),
+  /** 400,000 loads in flow style: past the size limit on a text file. */
+  'loads-past-size': () => emptyMappings(400_000),
+  /** Loads past the limit on entries while the file stays under 100 kB. */
+  'loads-past-entries': () => emptyMappings(L.textEntries + 1),
+  /** The demo with 101 aliases of one anchor. */
+  'many-aliases': () => `${demoText()}x_anchor: &a [1]\n${Array.from({ length: L.yamlAliases + 1 }, (_, i) => `x_${i}: *a`).join('\n')}\n`,
+  /** Nine levels of ten aliases each (90 aliases, within the count) that would expand to a billion values. */
+  'alias-expansion': () => {
+    const levels = ['l0: &l0 [x, x, x, x, x, x, x, x, x, x]'];
+    for (let k = 1; k <= 9; k++) levels.push(`l${k}: &l${k} [${Array.from({ length: 10 }, () => `*l${k - 1}`).join(', ')}]`);
+    return `${levels.join('\n')}\n`;
+  },
+  /** Lists inside lists, past the limit on nesting. */
+  'deep-brackets': () => `spec_version: 1\nloads: ${'['.repeat(L.textDepth + 1)}${']'.repeat(L.textDepth + 1)}\n`,
+  /** The demo as JSON, led by a byte-order mark, with a whole-number key given as text: read past the mark to the schema. */
+  'json-with-bom': () => {
+    const spec = parse(demoText());
+    spec.wheels.spokes = 'six';
+    return `\uFEFF${JSON.stringify(spec, null, 2)}\n`;
+  },
+  /** The demo YAML led by a byte-order mark, with the same mistake. */
+  'yaml-with-bom': () => `\uFEFF${replaceOnce(demoText(), 'spokes: 6\n', 'spokes: six\n')}`,
+  /** The template with one cell at the last row of the General sheet. */
+  'cell-at-last-row': () => templateWith(GENERAL, (xml) => xml.replace('</sheetData>', '<row r="1048576"><c r="A1048576" t="inlineStr"><is><t>x</t></is></c></row></sheetData>')),
+  /** The template whose General sheet claims the whole grid as its range, with no cell out there. */
+  'claimed-whole-grid': () => templateWith(GENERAL, (xml) => xml.replace(/<dimension ref="[^"]*"\/>/, '<dimension ref="A1:XFD1048576"/>')),
+  /** A General sheet of rows one past the limit, one small cell each. */
+  'rows-past-limit': () => {
+    const rows = Array.from({ length: L.sheetRows + 1 }, (_, i) => `<row r="${i + 1}"><c r="A${i + 1}"><v>1</v></c></row>`).join('');
+    return bareWorkbook([{ name: 'General', xml: sheetXml(rows) }]);
+  },
+  /** Cells one past the limit, in rows of 20 within the row limit. */
+  'cells-past-limit': () => {
+    const perRow = 20;
+    const rows = Array.from({ length: Math.ceil((L.workbookCells + 1) / perRow) }, (_, i) => rowXml(i + 1, Array.from({ length: perRow }, () => 1))).join('');
+    return bareWorkbook([{ name: 'General', xml: sheetXml(rows) }]);
+  },
+  /** A sheet of 200 MB of zeros whose directory states its size. */
+  'zip-bomb': () => bareWorkbook([{ name: 'General', entry: deflatedZeros(200e6) }]),
+  /** The same sheet whose directory states 1 kB: found out while unpacking. */
+  'zip-bomb-understated': () => bareWorkbook([{ name: 'General', entry: { ...deflatedZeros(200e6), statedSize: 1000 } }]),
+  /** A workbook of more parts than the limit. */
+  'zip-many-parts': () => bareWorkbook([{ name: 'General', xml: sheetXml('') }], Array.from({ length: L.workbookParts }, (_, i) => ({ name: `xl/extra/part${i}.xml`, data: '<x/>' }))),
+  /** A file one byte past the size limit on workbooks. */
+  'workbook-past-size': () => new Uint8Array(L.workbookBytes + 1),
+  /** The demo with 51 loads, one past the list's limit. */
+  'loads-past-list-limit': () => {
+    const spec = parse(demoText());
+    spec.loads = Array.from({ length: 51 }, (_, i) => ({ ...spec.loads[0], name: `load ${i + 1}` }));
+    return stringify(spec);
+  },
+  /** A stock instance of 101 priced stock lengths, one past the limit. */
+  'stock-lengths-past-limit': () =>
+    JSON.stringify({ kerf_mm: 3, stock: Array.from({ length: 101 }, (_, i) => ({ length_mm: 1000 + i, cost: 10 })), pieces: [{ length_mm: 500, quantity: 2 }] }, null, 2),
+  /** Text named .xlsx. */
+  'not-a-zip': () => 'spec_version: 1\n',
 };

@@ -25,7 +25,7 @@ export const MESSAGES = {
   notAnObject: { code: 1011, text: 'The specification must be a mapping of keys to values at the top level.' },
   unitString: { code: 1020, text: '{reason}; allowed: a number in {unit}, or a string such as "{example}".' },
   notFinite: { code: 1021, text: 'the value is {value}; allowed: a finite number.' },
-  unitStringLong: { code: 1022, text: 'the value {value} is text of {length} characters; allowed: a number in {unit}, or a number and unit of at most {max} characters (the limit on unit strings), such as "{example}".' },
+  unitStringLong: { code: 1022, text: 'the value {value} is too long to be a number with its unit; allowed: a number in {unit}, or a number and unit of at most {max} characters (the limit on unit strings), such as "{example}".' },
   required: { code: 1030, text: 'the required key {key} is missing.' },
   unknownKey: { code: 1031, text: 'unknown key {key}; allowed keys here: {allowed}.' },
   wrongType: { code: 1032, text: 'the value {value} is of the wrong type; allowed: {allowed}.' },

@@ -32,9 +32,10 @@ export const INPUT_LIMITS = {
   unitStringChars: 64,
 } as const;
 
-/** A size in bytes as a message gives it: `1.2 MB`, `840 kB`, `96 bytes`. */
+/** A size in bytes as a message gives it, to four figures so that a file just past a limit does not read as equal to it: `1.004 MB`. */
 export function bytesText(bytes: number): string {
-  if (bytes >= 1e6) return `${formatNumber(bytes / 1e6)} MB`;
-  if (bytes >= 1e3) return `${formatNumber(bytes / 1e3)} kB`;
+  if (bytes >= 1e9) return `${formatNumber(bytes / 1e9, '', 4)} GB`;
+  if (bytes >= 1e6) return `${formatNumber(bytes / 1e6, '', 4)} MB`;
+  if (bytes >= 1e3) return `${formatNumber(bytes / 1e3, '', 4)} kB`;
   return `${formatNumber(bytes, 'count')} bytes`;
 }

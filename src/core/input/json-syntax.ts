@@ -85,7 +85,7 @@ export function jsonSyntaxError(text: string): JsonSyntaxError | undefined {
         }
         if (c === '"') {
           if (!readString()) return fail(stringTrouble());
-        } else if (matches(NOT_FINITE)) {
+        } else if (startsWith(NOT_FINITE)) {
           return fail('a finite number', 'notFinite');
         } else if (!matches(NUMBER) && !matches(LITERAL)) {
           return fail('a value: a number, a string in double quotes, true, false, null, an object or a list');
@@ -114,6 +114,11 @@ export function jsonSyntaxError(text: string): JsonSyntaxError | undefined {
     return 'no line break, tab or other control character inside a string (write \\n or \\t)';
   }
 
+  function startsWith(re: RegExp): boolean {
+    re.lastIndex = i;
+    return re.test(text);
+  }
+
   function matches(re: RegExp): boolean {
     re.lastIndex = i;
     if (!re.test(text)) return false;
@@ -132,9 +137,9 @@ function expectation(state: State, stack: readonly string[]): string {
   return 'a value';
 }
 
-/** The text at an offset as an error shows it: the token there, or "the end of the file". */
+/** The text at an offset as an error shows it: the token there (a string as written, anything else in quotes), or "the end of the file". */
 export function foundAt(text: string, offset: number): string {
   if (offset >= text.length) return 'the end of the file';
   const token = /^(?:"[^"\n]{0,30}"?|\/\/[^\n]*|\/\*[^\n]*|#[^\n]*|[^\s,:[\]{}"]+|.)/.exec(text.slice(offset, offset + 80))?.[0] ?? text[offset];
-  return `"${token}"`;
+  return /^".*"$/.test(token) ? token : `"${token}"`;
 }

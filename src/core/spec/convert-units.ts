@@ -23,7 +23,7 @@ function walk(node: unknown, path: KeyPath, unit: UnitDef | undefined, issues: I
   if (typeof node === 'string' && unit) {
     // The units library reads a long string in quadratic time: a value with its unit is short.
     if (node.length > INPUT_LIMITS.unitStringChars) {
-      issues.push(issue(path, 'unitStringLong', { value: `"${node}"`, length: node.length, max: INPUT_LIMITS.unitStringChars, unit: unit.symbol, example: exampleOf(unit) }));
+      issues.push(issue(path, 'unitStringLong', { value: `"${node}"`, max: INPUT_LIMITS.unitStringChars, unit: unit.symbol, example: exampleOf(unit) }));
       return node;
     }
     const parsed = parseQuantity(node, unit);

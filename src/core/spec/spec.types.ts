@@ -548,6 +548,9 @@ export interface BuildSpecification {
      * How the growth rings lie in the parts' cross-section, for green sizing: flat-sawn (the width face is tangential to the rings, the thickness radial) or quarter-sawn (the width face radial, the thickness tangential). Omit where unknown: every cross dimension is then sized by the larger, tangential shrinkage (mechanics note, section 9). Turned parts (naves, linchpins) always take the tangential figure.
      */
     orientation?: 'flat-sawn' | 'quarter-sawn';
+    /**
+     * @maxItems 20
+     */
     lumber?: {
       species: Species;
       /**
@@ -560,6 +563,7 @@ export interface BuildSpecification {
       thickness_mm: number | string;
       /**
        * @minItems 1
+       * @maxItems 20
        *
        * Items: A length in the unit of its key; a string with another unit is converted.
        */
@@ -1144,6 +1148,9 @@ export interface CheckedSpecification {
      * How the growth rings lie in the parts' cross-section, for green sizing: flat-sawn (the width face is tangential to the rings, the thickness radial) or quarter-sawn (the width face radial, the thickness tangential). Omit where unknown: every cross dimension is then sized by the larger, tangential shrinkage (mechanics note, section 9). Turned parts (naves, linchpins) always take the tangential figure.
      */
     orientation?: 'flat-sawn' | 'quarter-sawn';
+    /**
+     * @maxItems 20
+     */
     lumber: {
       species: CheckedSpecies;
       /**
@@ -1156,6 +1163,7 @@ export interface CheckedSpecification {
       thickness_mm: number;
       /**
        * @minItems 1
+       * @maxItems 20
        *
        * Items: A length in the unit of its key; a string with another unit is converted.
        */
