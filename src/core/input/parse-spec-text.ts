@@ -2,7 +2,6 @@ import { LineCounter, parseDocument, isMap, isNode, isScalar, type Document } fr
 import { echo } from '../diagnostics/echo.ts';
 import { issue, type InputIssue } from '../spec/input-issue.ts';
 import type { KeyPath } from '../spec/input-issue.ts';
-import { INPUT_LIMITS } from './input-limits.ts';
 import { foundAt, jsonSyntaxError } from './json-syntax.ts';
 import type { Located, ReadSpec } from './read-spec-result.ts';
 import { entryLimitIssue } from './text-entries.ts';

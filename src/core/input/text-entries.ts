@@ -12,18 +12,23 @@ const ENTRY = new Set(['scalar', 'single-quoted-scalar', 'double-quoted-scalar',
 // Markers the lexer adds that take no room in the text.
 const MARKERS = new Set([CST.DOCUMENT, CST.FLOW_END, CST.SCALAR]);
 
+interface EntryLimits {
+  textEntries: number;
+  textDepth: number;
+}
+
 /** The first limit the text passes (entries or nesting), with the offset where it does; undefined within both. */
-export function entryLimitIssue(text: string): { issue: InputIssue; offset: number } | undefined {
+export function entryLimitIssue(text: string, limits: EntryLimits = INPUT_LIMITS): { issue: InputIssue; offset: number } | undefined {
   let entries = 0;
   let depth = 0;
   let offset = 0;
   for (const token of new Lexer().lex(text)) {
     const type = CST.tokenType(token);
-    if (type && ENTRY.has(type) && ++entries > INPUT_LIMITS.textEntries) {
-      return { issue: issue([], 'tooManyEntries', { max: INPUT_LIMITS.textEntries }), offset: Math.min(offset, text.length) };
+    if (type && ENTRY.has(type) && ++entries > limits.textEntries) {
+      return { issue: issue([], 'tooManyEntries', { max: limits.textEntries }), offset: Math.min(offset, text.length) };
     }
     if (type === 'flow-map-start' || type === 'flow-seq-start') {
-      if (++depth > INPUT_LIMITS.textDepth) return { issue: issue([], 'tooDeep', { max: INPUT_LIMITS.textDepth }), offset };
+      if (++depth > limits.textDepth) return { issue: issue([], 'tooDeep', { max: limits.textDepth }), offset };
     } else if (type === 'flow-map-end' || type === 'flow-seq-end') depth = Math.max(0, depth - 1);
     if (!MARKERS.has(token)) offset += token.length;
   }

@@ -30,7 +30,7 @@ export function parseQuantity(text: string, unit: UnitDef): ParsedQuantity {
     return { ok: true, value };
   } catch (e) {
     // The library's own refusals name the trouble; anything else is its internals and says nothing to a reader.
-    const why = e instanceof Qty.Error ? ` (${(e as Error).message})` : '';
+    const why = e instanceof Qty.Error ? ` (${e.message})` : '';
     return { ok: false, reason: `${shown} is not a quantity the units library can read${why}` };
   }
 }
