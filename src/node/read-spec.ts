@@ -1,4 +1,5 @@
 import { extname } from 'node:path';
+import { decodeUtf8 } from '../core/input/decode-text.ts';
 import { INPUT_LIMITS } from '../core/input/input-limits.ts';
 import { parseSpecText, textFormatOf } from '../core/input/parse-spec-text.ts';
 import { parseSpecWorkbook } from '../core/input/parse-spec-workbook.ts';
@@ -22,7 +23,10 @@ export async function readSpec(path: string, { workbooks = true } = {}): Promise
   if (!workbook && !format) return fail([], 'fileKind', { path });
   const read = workbook ? await readCapped(path, INPUT_LIMITS.workbookBytes, 'a workbook (.xlsx)') : await readCapped(path, INPUT_LIMITS.textBytes, `a ${format} file`);
   if (!read.ok) return fail([], read.key, read.params);
-  if (!workbook) return parseSpecText(read.bytes.toString('utf8'), format!, path);
+  if (!workbook) {
+    const decoded = decodeUtf8(read.bytes, path);
+    return decoded.ok ? parseSpecText(decoded.text, format!, path) : { ok: false, issues: [decoded.issue] };
+  }
   const limits = workbookLimitIssues(read.bytes, path);
   return limits.length ? { ok: false, issues: limits } : parseSpecWorkbook(read.bytes, path);
 }

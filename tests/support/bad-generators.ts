@@ -91,6 +91,10 @@ export const GENERATORS: Record<string, () => string | Uint8Array | Promise<stri
   /** A stock instance of 101 priced stock lengths, one past the limit. */
   'stock-lengths-past-limit': () =>
     JSON.stringify({ kerf_mm: 3, stock: Array.from({ length: 101 }, (_, i) => ({ length_mm: 1000 + i, cost: 10 })), pieces: [{ length_mm: 500, quantity: 2 }] }, null, 2),
+  /** The demo saved as UTF-16 (little-endian, with its byte-order mark), as some editors save "Unicode". */
+  'yaml-utf16': () => new Uint8Array(Buffer.from(`\uFEFF${demoText()}`, 'utf16le')),
+  /** A name in a legacy code page: "Ch\xe2teau" (Latin-1 â), which is no UTF-8. */
+  'yaml-latin1': () => new Uint8Array(Buffer.from('spec_version: 1\nname: Ch\u00e2teau chariot\n', 'latin1')),
   /** Text named .xlsx. */
   'not-a-zip': () => 'spec_version: 1\n',
 };

@@ -12,6 +12,7 @@ export const MESSAGES = {
   fileUnreadable: { code: 1004, text: 'Cannot read {path}: {reason}.' },
   fileKind: { code: 1005, text: '{path}: a specification is a .yaml, .yml, .json or .xlsx (fill-in workbook) file.' },
   fileNotRegular: { code: 1006, text: '{path} is {kind}, not a regular file; give a file saved on disk (a pipe or device is not read, so the command never waits on one).' },
+  fileEncoding: { code: 1008, text: '{path} is not UTF-8 text ({reason}); save it with the UTF-8 encoding.' },
   fileTooBig: { code: 1007, text: '{path} is {size}; {what} may be at most {max} (the limit on file size; a full specification is a few kilobytes).' },
   syntax: { code: 1010, text: 'The file is not valid {format}: {reason}.' },
   jsonComment: { code: 1012, text: 'JSON has no comments; use YAML (a .yaml file takes the same content and # comments), or remove the comment that starts here: {found}.' },
