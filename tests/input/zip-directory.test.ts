@@ -59,7 +59,7 @@ describe('the sheet scan', () => {
   it('counts rows and cells and finds the last of each, as the spreadsheet library does', async () => {
     const xml = sheetXml([rowXml(1, ['a', 1]), rowXml(7, [2, 3, 4])].join(''), 'A1:C8');
     const scan = scanSheet(xml, Infinity);
-    expect(scan).toEqual({ lastRow: 7, lastColumn: 3, cells: 5, stated: { row: 8, column: 3 } });
+    expect(scan).toEqual({ lastRow: 7, lastColumn: 3, cells: 5, stated: { row: 8, column: 3 }, styledColumns: 0 });
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.load(bareWorkbook([{ name: 'S', xml }]) as unknown as ArrayBuffer);
     const ws = wb.getWorksheet('S')!;
@@ -73,6 +73,6 @@ describe('the sheet scan', () => {
 
   it('reads elements with a namespace prefix and a stated range of one cell', () => {
     const xml = '<x:worksheet><x:dimension ref="B2"/><x:sheetData><x:row r="2"><x:c r="B2"/></x:row></x:sheetData></x:worksheet>';
-    expect(scanSheet(xml, Infinity)).toEqual({ lastRow: 2, lastColumn: 2, cells: 1, stated: { row: 2, column: 2 } });
+    expect(scanSheet(xml, Infinity)).toEqual({ lastRow: 2, lastColumn: 2, cells: 1, stated: { row: 2, column: 2 }, styledColumns: 0 });
   });
 });

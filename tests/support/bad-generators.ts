@@ -63,6 +63,14 @@ export const GENERATORS: Record<string, () => string | Uint8Array | Promise<stri
   'cell-at-last-row': () => templateWith(GENERAL, (xml) => xml.replace('</sheetData>', '<row r="1048576"><c r="A1048576" t="inlineStr"><is><t>x</t></is></c></row></sheetData>')),
   /** The template whose General sheet claims the whole grid as its range, with no cell out there. */
   'claimed-whole-grid': () => templateWith(GENERAL, (xml) => xml.replace(/<dimension ref="[^"]*"\/>/, '<dimension ref="A1:XFD1048576"/>')),
+  /** The template with a data validation over all of column C of the General sheet, as a spreadsheet program writes one for a column selected whole. */
+  'validation-whole-column': () => templateWith(GENERAL, (xml) => replaceOnce(xml, 'sqref="C3"', 'sqref="C3:C1048576"')),
+  /** The template with a merge of the whole grid below its rows (the library ran out of memory at 4 GB). */
+  'merge-whole-grid': () => templateWith(GENERAL, (xml) => replaceOnce(replaceOnce(xml, '<mergeCell ref="B1:F1"/>', '<mergeCell ref="B1:F1"/><mergeCell ref="A100:XFD1048576"/>'), '<mergeCells count="1"', '<mergeCells count="2"')),
+  /** The template with a named range over the whole General sheet. */
+  'name-whole-grid': () => templateWith('xl/workbook.xml', (xml) => replaceOnce(xml, '<calcPr', '<definedNames><definedName name="everything">General!$A$1:$XFD$1048576</definedName></definedNames><calcPr')),
+  /** The template with column widths set out to column 100,000,000 (the library made an object per column). */
+  'columns-past-format': () => templateWith(GENERAL, (xml) => replaceOnce(xml, '<col min="6" max="6"', '<col min="7" max="100000000" width="9"/><col min="6" max="6"')),
   /** A General sheet of rows one past the limit, one small cell each. */
   'rows-past-limit': () => {
     const rows = Array.from({ length: L.sheetRows + 1 }, (_, i) => `<row r="${i + 1}"><c r="A${i + 1}"><v>1</v></c></row>`).join('');

@@ -43,6 +43,7 @@ export const MESSAGES = {
   workbookParts: { code: 1045, text: '{path} holds {count} parts in its zip container; a workbook may hold at most {max} (the limit on workbook parts).' },
   workbookUnpacked: { code: 1046, text: '{path} unpacks to more than {max} (the limit on a workbook\'s unpacked size){where}; a filled workbook unpacks to under a megabyte.' },
   sheetTooBig: { code: 1047, text: 'the sheet "{sheet}" reaches {reach}; a sheet may reach at most row {rows} and column {columns} (the limit on sheet size). Clear the cells beyond the specification\'s own rows.' },
+  rangesTooBig: { code: 1049, text: '{path}: {what} covers {count} cells; merged cells, data validations and named ranges may cover at most {max} cells in all (the limit on ranges: each covered cell is stored one by one). Apply it to the rows in use only.' },
   workbookCells: { code: 1048, text: '{path} holds more than {max} cells (the limit on cells in all sheets); a filled workbook holds a few thousand.' },
   // Cross-field checks
   unknownSpecies: { code: 1101, text: 'unknown species "{value}"; known species: {allowed}.' },

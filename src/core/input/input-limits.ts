@@ -28,6 +28,8 @@ export const INPUT_LIMITS = {
   sheetColumns: 1_000,
   /** Cells in all sheets together. */
   workbookCells: 100_000,
+  /** Cells covered by merged cells, data validations and named ranges, in all: the spreadsheet library stores each one. */
+  rangeCells: 100_000,
   /** A floor-test record (.csv), bytes: about a million samples. */
   csvBytes: 20_000_000,
   /** A value written with its unit as text ("5 ft 4 in"), characters. */
