@@ -26,6 +26,7 @@ export const MESSAGES = {
   notAnObject: { code: 1011, text: 'The specification must be a mapping of keys to values at the top level.' },
   unitString: { code: 1020, text: '{reason}; allowed: a number in {unit}, or a string such as "{example}".' },
   notFinite: { code: 1021, text: 'the value is {value}; allowed: a finite number.' },
+  controlCharacter: { code: 1023, text: 'the text {value} holds the control character {which}; allowed: printable text, tabs and line breaks.' },
   unitStringLong: { code: 1022, text: 'the value {value} is too long to be a number with its unit; allowed: a number in {unit}, or a number and unit of at most {max} characters (the limit on unit strings), such as "{example}".' },
   required: { code: 1030, text: 'the required key {key} is missing.' },
   unknownKey: { code: 1031, text: 'unknown key {key}; allowed keys here: {allowed}.' },
