@@ -30,6 +30,12 @@ export function jsonSyntaxError(text: string): JsonSyntaxError | undefined {
   const afterValue = () => {
     state = stack.length ? 'commaOrClose' : 'end';
   };
+  // Past a closing bracket: the collection it closes is a value done.
+  const closeCollection = () => {
+    i++;
+    stack.pop();
+    afterValue();
+  };
   for (;;) {
     while (i < text.length && SPACE.has(text[i])) i++;
     const c = text[i];
@@ -48,19 +54,14 @@ export function jsonSyntaxError(text: string): JsonSyntaxError | undefined {
         if (c === ',') {
           i++;
           state = stack[stack.length - 1] === 'object' ? 'key' : 'value';
-        } else if (c === close) {
-          i++;
-          stack.pop();
-          afterValue();
-        } else return fail(`"," or "${close}"`);
+        } else if (c === close) closeCollection();
+        else return fail(`"," or "${close}"`);
         continue;
       }
       case 'keyOrClose':
       case 'key':
         if (c === '}' && state === 'keyOrClose') {
-          i++;
-          stack.pop();
-          afterValue();
+          closeCollection();
           continue;
         }
         if (c === '}') return fail('another key after the comma (JSON allows no trailing comma)');
@@ -71,9 +72,7 @@ export function jsonSyntaxError(text: string): JsonSyntaxError | undefined {
       case 'value':
       case 'valueOrClose':
         if (c === ']' && state === 'valueOrClose') {
-          i++;
-          stack.pop();
-          afterValue();
+          closeCollection();
           continue;
         }
         if (c === ']' || c === '}') return fail(stack.length && text.slice(0, i).trimEnd().endsWith(',') ? 'another value after the comma (JSON allows no trailing comma)' : 'a value');
