@@ -195,7 +195,7 @@ const CASES: Case[] = [
     name: 'a JSON spec with a trailing comma',
     file: 'spec.json',
     text: replaceOnce(changed(() => {}, 'json'), '"ground": "turf"', '"ground": "turf",'),
-    issues: [{ path: '', at: ['"ground": "turf",\n  }', '}'], says: ['not valid JSON', 'property name'] }],
+    issues: [{ path: '', at: ['"ground": "turf",\n  }', '}'], says: ['not valid JSON', 'no trailing comma', 'found "}"'] }],
   },
   {
     name: 'a JSON spec with text in a number field',

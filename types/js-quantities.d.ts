@@ -10,6 +10,8 @@ declare module 'js-quantities' {
   interface QtyStatic {
     (value: string): Qty;
     parse(value: string): Qty | null;
+    /** The class of the errors the library throws on purpose (an unknown unit, incompatible units). */
+    Error: new (message?: string) => Error;
   }
   const Qty: QtyStatic;
   export default Qty;

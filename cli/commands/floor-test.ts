@@ -28,7 +28,7 @@ export async function floorTestCommand(file: string, opts: FloorTestOptions, con
     return EXIT.badInput;
   }
   const input = resolve(con.cwd, file);
-  const read = readDropCsvFile(input);
+  const read = await readDropCsvFile(input);
   if (!read.ok) {
     con.err(formatIssues(file, read.issues));
     return EXIT.badInput;

@@ -18,11 +18,12 @@ export interface NewOptions {
   force: boolean;
 }
 
-const KINDS: Record<string, 'workbook' | 'yaml'> = { '.xlsx': 'workbook', '.yaml': 'yaml', '.yml': 'yaml' };
+// A Map: the extension is the user's, and must not find an object's inherited keys.
+const KINDS = new Map<string, 'workbook' | 'yaml'>([['.xlsx', 'workbook'], ['.yaml', 'yaml'], ['.yml', 'yaml']]);
 
 /** `axletree new <file.xlsx|file.yaml>`: a fill-in specification, blank or from a spec. */
 export async function newCommand(file: string, opts: NewOptions, con: Console): Promise<number> {
-  const kind = KINDS[extname(file).toLowerCase()];
+  const kind = KINDS.get(extname(file).toLowerCase());
   if (!kind) {
     con.err(`axletree new: ${file}: give a name ending in .xlsx (a workbook) or .yaml (a commented YAML file).\n`);
     return EXIT.badInput;

@@ -3,11 +3,12 @@
 // starting with # are comments (a record can say where it came from), blank
 // lines are skipped. Fields are comma-separated and may be double-quoted.
 
-import { readFileSync, statSync } from 'node:fs';
 import type { DropRecord } from '../core/floor-test/floor-test-types.ts';
 import { issue, type InputIssue } from '../core/spec/input-issue.ts';
 import type { MessageKey } from '../core/diagnostics/messages.ts';
 import type { Located } from '../core/input/read-spec-result.ts';
+import { INPUT_LIMITS } from '../core/input/input-limits.ts';
+import { pathKind, readCapped } from './read-capped.ts';
 
 export const TIME_COLUMN = 'time_s';
 export const DISPLACEMENT_COLUMN = 'displacement_mm';
@@ -19,16 +20,14 @@ const MAX_ISSUES = 10;
 export type CsvIssue = InputIssue & { at?: Located };
 export type ReadDrop = { ok: true; record: DropRecord; ignored: string[] } | { ok: false; issues: CsvIssue[] };
 
-export function readDropCsvFile(path: string): ReadDrop {
-  let text: string;
-  try {
-    if (statSync(path).isDirectory()) return fail('fileUnreadable', { path, reason: 'it is a directory' });
-    text = readFileSync(path, 'utf8');
-  } catch (e) {
-    const missing = (e as { code?: string }).code === 'ENOENT';
-    return missing ? fail('fileMissing', { path }) : fail('fileUnreadable', { path, reason: (e as Error).message });
-  }
-  return parseDropCsv(text, path);
+/** The record in a CSV file: a regular file within the size limit (a pipe or a device is refused, never waited on). */
+export async function readDropCsvFile(path: string): Promise<ReadDrop> {
+  const kind = await pathKind(path);
+  if (kind === 'missing') return fail('fileMissing', { path });
+  if (kind === 'directory') return fail('fileUnreadable', { path, reason: 'it is a directory' });
+  const read = await readCapped(path, INPUT_LIMITS.csvBytes, 'a floor-test record (.csv)');
+  if (!read.ok) return fail(read.key, read.params);
+  return parseDropCsv(read.bytes.toString('utf8'), path);
 }
 
 export function parseDropCsv(text: string, path = 'input'): ReadDrop {

@@ -2,6 +2,7 @@
 // wording is reviewed in one place and codes never change meaning.
 // 1xxx: the specification as read; 29xx: the floor-test record. Each rule
 // holds its own findings' templates (2xxx) beside its code.
+import { echo, escapeControls } from './echo.ts';
 
 export const MESSAGES = {
   // Reading and schema
@@ -10,23 +11,41 @@ export const MESSAGES = {
   fileEmpty: { code: 1003, text: '{path} is empty; a specification needs at least spec_version, name, box, axle, wheels, pole, yoke, floor_straps, crew, team and operation.' },
   fileUnreadable: { code: 1004, text: 'Cannot read {path}: {reason}.' },
   fileKind: { code: 1005, text: '{path}: a specification is a .yaml, .yml, .json or .xlsx (fill-in workbook) file.' },
+  fileNotRegular: { code: 1006, text: '{path} is {kind}, not a regular file; give a file saved on disk (a pipe or device is not read, so the command never waits on one).' },
+  fileEncoding: { code: 1008, text: '{path} is not UTF-8 text ({reason}); save it with the UTF-8 encoding.' },
+  fileTooBig: { code: 1007, text: '{path} is {size}; {what} may be at most {max} (the limit on file size; a full specification is a few kilobytes).' },
   syntax: { code: 1010, text: 'The file is not valid {format}: {reason}.' },
+  jsonComment: { code: 1012, text: 'JSON has no comments; use YAML (a .yaml file takes the same content and # comments), or remove the comment that starts here: {found}.' },
+  jsonNotFinite: { code: 1013, text: '{found} is not a number JSON can hold; allowed: a finite number such as 12.5.' },
+  tooManyEntries: { code: 1014, text: 'the file holds more than {max} entries (keys, values and list items: the limit on entries); a full specification holds a few hundred.' },
+  tooDeep: { code: 1018, text: 'the brackets here open more than {max} lists or mappings inside one another (the limit on nesting); a specification nests a few levels.' },
+  yamlAliasCount: { code: 1015, text: 'the alias *{name} is one more than the {max} aliases a file may hold (the limit on aliases); write the values out instead.' },
+  yamlAliasExpansion: { code: 1019, text: 'the alias *{name} expands the file to more than {max} entries (the limit on entries, an aliased value counted each time it is used); write the values out instead.' },
+  yamlAliasSelf: { code: 1016, text: 'the alias *{name} stands inside the very node its anchor &{name} names, so its value would never end; point it at another node or write the value out.' },
+  yamlAliasUnresolved: { code: 1017, text: 'the alias *{name} has no anchor &{name} before it; set the anchor on a value above the alias, or write the value out.' },
   notAnObject: { code: 1011, text: 'The specification must be a mapping of keys to values at the top level.' },
   unitString: { code: 1020, text: '{reason}; allowed: a number in {unit}, or a string such as "{example}".' },
   notFinite: { code: 1021, text: 'the value is {value}; allowed: a finite number.' },
+  controlCharacter: { code: 1023, text: 'the text {value} holds the control character {which}; allowed: printable text, tabs and line breaks.' },
+  unitStringLong: { code: 1022, text: 'the value {value} is too long to be a number with its unit; allowed: a number in {unit}, or a number and unit of at most {max} characters (the limit on unit strings), such as "{example}".' },
   required: { code: 1030, text: 'the required key {key} is missing.' },
   unknownKey: { code: 1031, text: 'unknown key {key}; allowed keys here: {allowed}.' },
   wrongType: { code: 1032, text: 'the value {value} is of the wrong type; allowed: {allowed}.' },
   outOfRange: { code: 1033, text: 'the value {value} is out of range; allowed: {allowed}.' },
   notInList: { code: 1034, text: 'the value {value} is not allowed; allowed: {allowed}.' },
   badText: { code: 1035, text: 'the value {value} is not allowed; {allowed}.' },
-  tooMany: { code: 1036, text: 'the list has the wrong number of entries; allowed: {allowed}.' },
+  tooMany: { code: 1036, text: 'the list has {count} entries; allowed: {allowed}.' },
   // Reading a specification workbook (104x)
   sheetMissing: { code: 1040, text: 'the workbook has no sheet "{sheet}" ({what}); every section sheet must be there, left blank where a section is not used.' },
   sheetExtra: { code: 1041, text: 'the sheet "{sheet}" is not part of a specification workbook; allowed sheets: {allowed}. Remove it, or give a renamed section sheet its name back.' },
   rowUnknown: { code: 1042, text: 'the key column holds "{key}", which is not a key of this sheet; allowed keys here: {allowed}.' },
   rowTwice: { code: 1043, text: 'the key "{key}" has two rows (also at {other}); keep one.' },
   notAWorkbook: { code: 1044, text: 'Cannot read {path} as an .xlsx workbook: {reason}.' },
+  workbookParts: { code: 1045, text: '{path} holds {count} parts in its zip container; a workbook may hold at most {max} (the limit on workbook parts).' },
+  workbookUnpacked: { code: 1046, text: '{path} unpacks to more than {max} (the limit on a workbook\'s unpacked size){where}; a filled workbook unpacks to under a megabyte.' },
+  sheetTooBig: { code: 1047, text: 'the sheet "{sheet}" reaches {reach}; a sheet may reach at most row {rows} and column {columns} (the limit on sheet size). Clear the cells beyond the specification\'s own rows.' },
+  rangesTooBig: { code: 1049, text: '{path}: {what} covers {count} cells; merged cells, data validations and named ranges may cover at most {max} cells in all (the limit on ranges: each covered cell is stored one by one). Apply it to the rows in use only.' },
+  workbookCells: { code: 1048, text: '{path} holds more than {max} cells (the limit on cells in all sheets); a filled workbook holds a few thousand.' },
   // Cross-field checks
   unknownSpecies: { code: 1101, text: 'unknown species "{value}"; known species: {allowed}.' },
   unknownLeather: { code: 1102, text: 'unknown material "{value}"; known materials: {allowed}.' },
@@ -85,11 +104,24 @@ export const MESSAGES = {
 
 export type MessageKey = keyof typeof MESSAGES;
 
+/**
+ * Params that carry text from the input (a value, a key, a sheet's name, the
+ * text found at an error): shown escaped and cut to a few dozen characters.
+ * Every other param is the tool's own words and is only escaped.
+ */
+const ECHOED = new Set(['value', 'key', 'sheet', 'found', 'name', 'column']);
+
+/** Fill a template's {placeholders} from params, each shown safely (see ECHOED); `missing` answers a placeholder without a param. */
+export function fill(template: string, params: Readonly<Record<string, string | number>>, missing: (name: string) => string): string {
+  return template.replace(/\{(\w+)\}/g, (_, name: string) => {
+    if (!Object.hasOwn(params, name)) return missing(name);
+    const text = String(params[name]);
+    return ECHOED.has(name) ? echo(text) : escapeControls(text);
+  });
+}
+
 /** Fill a message's {placeholders}; an unfilled one is a bug and shows as such. */
 export function say(key: MessageKey, params: Record<string, string | number> = {}): { code: number; text: string } {
   const m = MESSAGES[key];
-  const text = m.text.replace(/\{(\w+)\}/g, (_, name: string) =>
-    name in params ? String(params[name]) : `{${name}?}`,
-  );
-  return { code: m.code, text };
+  return { code: m.code, text: fill(m.text, params, (name) => `{${name}?}`) };
 }

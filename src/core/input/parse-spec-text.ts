@@ -1,7 +1,13 @@
 import { LineCounter, parseDocument, isMap, isNode, isScalar, type Document } from 'yaml';
+import { echo } from '../diagnostics/echo.ts';
 import { issue, type InputIssue } from '../spec/input-issue.ts';
 import type { KeyPath } from '../spec/input-issue.ts';
+import { foundAt, jsonSyntaxError } from './json-syntax.ts';
 import type { Located, ReadSpec } from './read-spec-result.ts';
+import { entryLimitIssue } from './text-entries.ts';
+import { aliasIssues } from './yaml-aliases.ts';
+
+type LocatedIssue = InputIssue & { at?: Located };
 
 /** The format of a specification by its file name's extension; undefined for one that is not a text spec. */
 export function textFormatOf(name: string): 'YAML' | 'JSON' | undefined {
@@ -9,41 +15,65 @@ export function textFormatOf(name: string): 'YAML' | 'JSON' | undefined {
   return ext === '.yaml' || ext === '.yml' ? 'YAML' : ext === '.json' ? 'JSON' : undefined;
 }
 
-export function parseSpecText(text: string, format: string, path = 'input'): ReadSpec {
+export function parseSpecText(input: string, format: string, path = 'input'): ReadSpec {
+  // A byte-order mark some editors write first is no part of the content.
+  const text = input.startsWith('\uFEFF') ? input.slice(1) : input;
   if (text.trim() === '') return { ok: false, issues: [issue([], 'fileEmpty', { path })] };
-  const lines = new LineCounter();
+  const lines = lineTable(text);
+  const at = (offset: number): Located => {
+    const pos = lines.linePos(offset);
+    return { line: pos.line, column: pos.col };
+  };
+  const tooMany = entryLimitIssue(text);
+  if (tooMany) return { ok: false, issues: [{ ...tooMany.issue, at: at(tooMany.offset) }] };
   if (format === 'JSON') {
     // The YAML parser would accept comments and trailing commas; JSON must not.
-    const strict = strictJson(text, lines);
+    const strict = strictJson(text, at);
     if (strict) return { ok: false, issues: [strict] };
   }
   // JSON is read by the YAML parser too: one reader, positions for both.
-  const doc = parseDocument(text, { lineCounter: lines, uniqueKeys: true, prettyErrors: false });
+  const doc = parseDocument(text, { uniqueKeys: true, prettyErrors: false });
   if (doc.errors.length) {
     return {
       ok: false,
-      issues: doc.errors.map((e) => {
-        // linePos is only filled when prettyErrors is on; the offset always is.
-        const pos = e.linePos?.[0] ?? lines.linePos(e.pos[0]);
-        return { ...issue([], 'syntax', { format, reason: e.message.split('\n')[0] }), at: pos ? { line: pos.line, column: pos.col } : undefined };
-      }),
+      // The first few: a broken file can make an error of every line after the break.
+      issues: doc.errors.slice(0, MAX_SYNTAX_ERRORS).map((e) => ({ ...issue([], 'syntax', { format, reason: `${e.message.split('\n')[0]}; found ${echo(foundAt(text, e.pos[0]))}` }), at: at(e.pos[0]) })),
     };
   }
-  const raw: unknown = doc.toJS({ maxAliasCount: 100 });
+  const aliases = aliasIssues(doc);
+  if (aliases.length) return { ok: false, issues: aliases.map((a) => ({ ...a.issue, at: at(a.offset) })) };
+  // The aliases are checked above (count, expansion, cycles); the parser's own count would refuse a legitimate file more eagerly.
+  const raw: unknown = doc.toJS({ maxAliasCount: -1 });
   if (raw === null || raw === undefined) return { ok: false, issues: [issue([], 'fileEmpty', { path })] };
   return { ok: true, raw, locate: (p, key) => locate(doc, lines, p, key) };
 }
 
-function strictJson(text: string, lines: LineCounter): (InputIssue & { at?: Located }) | undefined {
+const MAX_SYNTAX_ERRORS = 10;
+
+/** Where each line starts, for line and column from an offset. */
+function lineTable(text: string): LineCounter {
+  const lines = new LineCounter();
+  lines.addNewLine(0);
+  for (let i = text.indexOf('\n'); i >= 0; i = text.indexOf('\n', i + 1)) lines.addNewLine(i + 1);
+  return lines;
+}
+
+function strictJson(text: string, at: (offset: number) => Located): LocatedIssue | undefined {
   try {
     JSON.parse(text);
     return undefined;
-  } catch (e) {
-    const message = (e as Error).message;
-    const offset = /position (\d+)/.exec(message)?.[1];
-    parseDocument(text, { lineCounter: lines }); // fills the line table
-    const pos = offset !== undefined ? lines.linePos(Number(offset)) : undefined;
-    return { ...issue([], 'syntax', { format: 'JSON', reason: message.replace(/ in JSON at position \d+.*$/, '') }), at: pos ? { line: pos.line, column: pos.col } : undefined };
+  } catch {
+    const e = jsonSyntaxError(text);
+    // The runtime refused what the scan accepts (it never should): its own words, at the start.
+    if (!e) return { ...issue([], 'syntax', { format: 'JSON', reason: 'the runtime JSON parser refused it' }), at: at(0) };
+    const found = foundAt(text, e.offset);
+    const i =
+      e.kind === 'comment'
+        ? issue([], 'jsonComment', { found })
+        : e.kind === 'notFinite'
+          ? issue([], 'jsonNotFinite', { found })
+          : issue([], 'syntax', { format: 'JSON', reason: `expected ${e.expected}; found ${echo(found)}` });
+    return { ...i, at: at(e.offset) };
   }
 }
 

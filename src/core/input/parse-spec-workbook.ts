@@ -5,8 +5,9 @@ import { issue, type InputIssue, type KeyPath } from '../spec/input-issue.ts';
 import { specSections, type Field, type Section, type Table } from '../spec/spec-fields.ts';
 import type { Located, ReadSpec } from './read-spec-result.ts';
 import { fieldValue } from './cell-value.ts';
-import { cellName, COL, COVER_SHEET, HEADER_ROW, LISTS_SHEET, RESULT_CATEGORY, TABLE_ENTRY_OFFSET, TABLE_FIRST_COL, TABLE_HEADER_OFFSET, tableKey } from './workbook-layout.ts';
+import { cellName, COL, columnName, COVER_SHEET, HEADER_ROW, LISTS_SHEET, RESULT_CATEGORY, TABLE_ENTRY_OFFSET, TABLE_FIRST_COL, TABLE_HEADER_OFFSET, tableKey } from './workbook-layout.ts';
 import { setAt } from './spec-values.ts';
+import { INPUT_LIMITS } from './input-limits.ts';
 
 type LocatedIssue = InputIssue & { at?: Located };
 
@@ -30,9 +31,11 @@ class WorkbookReader {
 
   read(): ReadSpec {
     this.checkSheets();
+    // A sheet past the size limits is refused, not read: its rows are walked cell by cell.
+    const tooBig = new Set(this.wb.worksheets.filter((ws) => !this.withinLimits(ws)).map((ws) => ws.name));
     for (const s of this.sections) {
       const ws = this.wb.getWorksheet(s.sheet);
-      if (ws) this.readSection(ws, s);
+      if (ws && !tooBig.has(ws.name)) this.readSection(ws, s);
     }
     if (this.issues.length) return { ok: false, issues: this.issues };
     return { ok: true, raw: this.raw, locate: (p) => this.locate(p) };
@@ -50,6 +53,15 @@ class WorkbookReader {
       if (names.has(ws.name) || ws.name === COVER_SHEET || ws.name === LISTS_SHEET) continue;
       this.issues.push(this.at(issue([], 'sheetExtra', { sheet: ws.name, allowed: allowed.join(', ') }), ws.name, 1, 1));
     }
+  }
+
+  /** The limits the file was checked against before it was opened, checked again for a workbook read from bytes directly. */
+  private withinLimits(ws: ExcelJS.Worksheet): boolean {
+    const { sheetRows, sheetColumns } = INPUT_LIMITS;
+    if (ws.rowCount <= sheetRows && ws.columnCount <= sheetColumns) return true;
+    const reach = `row ${ws.rowCount} and column ${columnName(ws.columnCount)}`;
+    this.issues.push(this.at(issue([], 'sheetTooBig', { sheet: ws.name, reach, rows: sheetRows, columns: columnName(sheetColumns) }), ws.name, 1, 1));
+    return false;
   }
 
   private at(i: InputIssue, sheet: string, row: number, col: number): LocatedIssue {

@@ -29,9 +29,15 @@ export function tableKey(section: Section, table: Table): string {
   return [...section.path, ...table.path].join('.');
 }
 
-export function cellName(sheet: string, row: number, col: number): string {
+/** A column's letters: 1 is A, 27 is AA. */
+export function columnName(col: number): string {
   let letters = '';
   for (let c = col; c > 0; c = Math.floor((c - 1) / 26)) letters = String.fromCharCode(65 + ((c - 1) % 26)) + letters;
+  return letters;
+}
+
+export function cellName(sheet: string, row: number, col: number): string {
+  const letters = columnName(col);
   const quoted = /^[A-Za-z0-9_]+$/.test(sheet) ? sheet : `'${sheet.replace(/'/g, "''")}'`;
   return `${quoted}!${letters}${row}`;
 }

@@ -640,6 +640,8 @@ export interface BuildSpecification {
     orientation?: 'flat-sawn' | 'quarter-sawn';
     /**
      * Timber you have or can buy, one entry per size: the stock plan cuts the parts from it.
+     *
+     * @maxItems 20
      */
     lumber?: {
       /**
@@ -658,6 +660,7 @@ export interface BuildSpecification {
        * The lengths to be had, in mm, separated by semicolons in one cell (2400; 3000; 3600). Examples in specs/: 900 to 3600.
        *
        * @minItems 1
+       * @maxItems 20
        *
        * Items: A length in the unit of its key; a string with another unit is converted.
        */
@@ -1346,6 +1349,8 @@ export interface CheckedSpecification {
     orientation?: 'flat-sawn' | 'quarter-sawn';
     /**
      * Timber you have or can buy, one entry per size: the stock plan cuts the parts from it.
+     *
+     * @maxItems 20
      */
     lumber: {
       /**
@@ -1364,6 +1369,7 @@ export interface CheckedSpecification {
        * The lengths to be had, in mm, separated by semicolons in one cell (2400; 3000; 3600). Examples in specs/: 900 to 3600.
        *
        * @minItems 1
+       * @maxItems 20
        *
        * Items: A length in the unit of its key; a string with another unit is converted.
        */

@@ -62,7 +62,11 @@ function toIssue(e: ErrorObject, root: Schema): InputIssue {
       return issue(path, 'badText', { value, allowed: `allowed: text of ${describeRange({ minimum: (e.parentSchema as Record<string, number>).minLength ?? 0, maximum: (e.parentSchema as Record<string, number>).maxLength })} characters` });
     case 'minItems':
     case 'maxItems':
-      return issue(path, 'tooMany', { allowed: `${describeRange({ minimum: (e.parentSchema as Record<string, number>).minItems ?? 0, maximum: (e.parentSchema as Record<string, number>).maxItems })} entries` });
+      // Only the bound that applies: "at most 50 entries", not "at least 0 and at most 50".
+      return issue(path, 'tooMany', {
+        count: Array.isArray(e.data) ? e.data.length : 0,
+        allowed: `${describeRange({ minimum: (e.parentSchema as Record<string, number>).minItems, maximum: (e.parentSchema as Record<string, number>).maxItems })} entries`,
+      });
     default:
       return { path, code: 1039, message: e.message ?? 'invalid value' };
   }
