@@ -2,10 +2,11 @@
 import { run } from './run.ts';
 import { EXIT } from './exit-codes.ts';
 import { faultLine } from './fault-line.ts';
-import { whenSafe } from '../src/node/critical-section.ts';
-
 // Ctrl-C stops at once, except while an output set is being swapped into place: then right after it, so the last complete set stands.
-process.on('SIGINT', () => whenSafe(() => process.exit(130)));
+// (Imported when the signal comes, so start-up loads nothing of src/; a command that writes has it loaded already.)
+process.on('SIGINT', () => {
+  void import('../src/node/critical-section.ts').then(({ whenSafe }) => whenSafe(() => process.exit(130)));
+});
 
 try {
   process.exitCode = await run(process.argv.slice(2), {

@@ -8,7 +8,6 @@ import type { Console } from './console.ts';
 import { COMMANDS } from './declarations/index.ts';
 import { EXIT } from './exit-codes.ts';
 import { faultLine } from './fault-line.ts';
-import { OutputError } from '../src/node/output-error.ts';
 import { VERSION } from './version.ts';
 
 /** Options of axletree itself, given before any command. */
@@ -18,8 +17,8 @@ export async function run(argv: string[], con: Console): Promise<number> {
   try {
     return await dispatch(argv, con);
   } catch (e) {
-    // An output place that cannot be written is the user's to fix, not a fault of the tool.
-    if (e instanceof OutputError) {
+    // An output place that cannot be written is the user's to fix, not a fault of the tool (src/node/output-error.ts; matched by name so start-up loads nothing of src/).
+    if (e instanceof Error && e.name === 'OutputError') {
       con.err(`axletree: ${e.message}.\n`);
       return EXIT.badInput;
     }

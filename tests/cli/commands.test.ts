@@ -84,7 +84,7 @@ describe('stock --out', () => {
     await writeFile(join(dir, 'cuts.json'), JSON.stringify(INSTANCE));
     const r = await runCli(['stock', 'cuts.json', '--out', 'plan', '--json'], dir);
     expect(r.code).toBe(0);
-    expect(await readdir(join(dir, 'plan'))).toEqual([STOCK_FILES.json, STOCK_FILES.text].sort());
+    expect(await readdir(join(dir, 'plan'))).toEqual([STOCK_FILES.json, STOCK_FILES.text, 'manifest.json'].sort());
     expect(await readFile(join(dir, 'plan', STOCK_FILES.json), 'utf8')).toBe(r.out);
     expect(r.err).toContain(join(dir, 'plan', STOCK_FILES.text));
     const text = await runCli(['stock', 'cuts.json'], dir);

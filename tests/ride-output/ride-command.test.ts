@@ -26,7 +26,7 @@ describe('axletree ride', () => {
     for (const key of ['crew', 'wheels', 'yokeForceMin_N', 'yokeForceMax_N', 'decayCycles', 'method', 'steps']) expect(c).toHaveProperty(key);
     const outDir = join(dir, 'axletree-out', 'demo-two-crew', 'ride');
     expect(c.series_csv).toBe(join(outDir, 'ride-rough-ridge.csv'));
-    expect((await readdir(outDir)).sort()).toEqual(['ride-rough-ridge-floor-forces.svg', 'ride-rough-ridge-heights.svg', 'ride-rough-ridge-support-forces.svg', 'ride-rough-ridge.csv', 'ride.md']);
+    expect((await readdir(outDir)).sort()).toEqual(['ride-rough-ridge-floor-forces.svg', 'ride-rough-ridge-heights.svg', 'ride-rough-ridge-support-forces.svg', 'ride-rough-ridge.csv', 'ride.md', 'manifest.json'].sort());
     const csv = (await readFile(c.series_csv, 'utf8')).split('\n');
     expect(csv[0]).toMatch(/^time \(s\),.* height \(mm\),.* floor force \(N\)/);
     const md = await readFile(join(outDir, 'ride.md'), 'utf8');
