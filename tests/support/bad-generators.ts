@@ -1,6 +1,17 @@
 // Inputs of the bad-input catalogue that are too big, repetitive or binary to
 // keep as files: each builds its content when the case runs.
+import { dropCsv, syntheticRelease, type SyntheticRelease } from '../../scripts/synthetic-drop-record.ts';
+
+/** A floor sample pulled 10 mm off rest at 0.1 s, held, let go at 0.5 s: f_n 6 Hz, damping ratio 0.08. */
+const PLUCK: SyntheticRelease = { held_mm: 10, natural_frequency_hz: 6, damping_ratio: 0.08, noise_mm: 0.05, pull_s: 0.1, release_s: 0.5, seed: 11 };
 export const GENERATORS: Record<string, () => string | Uint8Array | Promise<string | Uint8Array>> = {
   /** A YAML document whose name is a string of 100,000 characters. */
   'long-name': () => `spec_version: 1\nname: ${'x'.repeat(100_000)}\n`,
+  // Numbers that are not numbers, solvers that do not stop (issue 15).
+  /** A floor-test record of a floor held 10 mm down and let go. */
+  'pluck-down-record': () => dropCsv(syntheticRelease(PLUCK)),
+  /** The same, held 10 mm up. */
+  'pluck-up-record': () => dropCsv(syntheticRelease({ ...PLUCK, held_mm: -10 })),
+  /** A floor-test record that is a square wave of ±5 mm, period 0.2 s: no free vibration. */
+  'square-wave-record': () => dropCsv({ t_s: Array.from({ length: 2000 }, (_, i) => i / 1000), x_mm: Array.from({ length: 2000 }, (_, i) => (Math.floor(i / 100) % 2 ? 5 : -5)) }),
 };

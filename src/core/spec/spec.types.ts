@@ -433,7 +433,10 @@ export interface BuildSpecification {
      * A coordinate in the unit of its key; a string with another unit is converted.
      */
     y_mm?: number | string;
-    z_mm: Position;
+    /**
+     * A coordinate in the unit of its key; a string with another unit is converted.
+     */
+    z_mm: number | string;
   }[];
   /**
    * The horses. Give the lightest horse's mass one way, exactly: horse_mass_kg (weighed), or horse.girth_cm with horse.body_length_cm (a tape), or horse.type with horse.height_m (a preset band from rules/parameters/horses.yaml, whose low end the checks use).
@@ -548,6 +551,9 @@ export interface BuildSpecification {
      * How the growth rings lie in the parts' cross-section, for green sizing: flat-sawn (the width face is tangential to the rings, the thickness radial) or quarter-sawn (the width face radial, the thickness tangential). Omit where unknown: every cross dimension is then sized by the larger, tangential shrinkage (mechanics note, section 9). Turned parts (naves, linchpins) always take the tangential figure.
      */
     orientation?: 'flat-sawn' | 'quarter-sawn';
+    /**
+     * @maxItems 30
+     */
     lumber?: {
       species: Species;
       /**
@@ -560,6 +566,7 @@ export interface BuildSpecification {
       thickness_mm: number | string;
       /**
        * @minItems 1
+       * @maxItems 20
        *
        * Items: A length in the unit of its key; a string with another unit is converted.
        */
@@ -1029,7 +1036,10 @@ export interface CheckedSpecification {
      * A coordinate in the unit of its key; a string with another unit is converted.
      */
     y_mm: number;
-    z_mm: CheckedPosition;
+    /**
+     * A coordinate in the unit of its key; a string with another unit is converted.
+     */
+    z_mm: number;
   }[];
   /**
    * The horses. Give the lightest horse's mass one way, exactly: horse_mass_kg (weighed), or horse.girth_cm with horse.body_length_cm (a tape), or horse.type with horse.height_m (a preset band from rules/parameters/horses.yaml, whose low end the checks use).
@@ -1144,6 +1154,9 @@ export interface CheckedSpecification {
      * How the growth rings lie in the parts' cross-section, for green sizing: flat-sawn (the width face is tangential to the rings, the thickness radial) or quarter-sawn (the width face radial, the thickness tangential). Omit where unknown: every cross dimension is then sized by the larger, tangential shrinkage (mechanics note, section 9). Turned parts (naves, linchpins) always take the tangential figure.
      */
     orientation?: 'flat-sawn' | 'quarter-sawn';
+    /**
+     * @maxItems 30
+     */
     lumber: {
       species: CheckedSpecies;
       /**
@@ -1156,6 +1169,7 @@ export interface CheckedSpecification {
       thickness_mm: number;
       /**
        * @minItems 1
+       * @maxItems 20
        *
        * Items: A length in the unit of its key; a string with another unit is converted.
        */
