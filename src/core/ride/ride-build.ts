@@ -212,7 +212,9 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
     2 * Math.PI * Math.sqrt(yokeMass / yoke.k),
   ];
   const shortestTimeConstant = cg > 0 ? cg / (wheel.k + (ground?.k.value ?? 0)) : Infinity;
-  const unknown = unknownFloor.length ? `the floor's stiffness under ${unknownFloor.join(' and ')} is not known: the strap floor was not solved (see floor.convergence)` : undefined;
+  const unknown = !Number.isFinite(kRing)
+    ? `the wheel's own stiffness is not known (${i.wheelStiffness.working})`
+    : unknownFloor.length ? `the floor's stiffness under ${unknownFloor.join(' and ')} is not known: the strap floor was not solved (see floor.convergence)` : undefined;
   return { system, inputEnd, breaks, drop: which === 'drop' ? mm(spec.operation.drop_height_mm) : 0, speed, floorDamping, shortestPeriod: Math.min(...periods), shortestTimeConstant, working, sources, ...(unknown ? { unknown } : {}) };
 }
 

@@ -1,5 +1,5 @@
 import { nodeAt, ringNodes, wrapAngle } from './ring-mesh.ts';
-import { solveRingFrame, type RingLoad, type RingSolution, type RingSpring } from './ring-frame.ts';
+import { RingNotHeld, solveRingFrame, type RingLoad, type RingSolution, type RingSpring } from './ring-frame.ts';
 
 // The wheel as a ring frame (design basis, section 6): the felloe a closed
 // ring of straight beam elements on its mid-depth radius, the spokes axial
@@ -146,7 +146,36 @@ function tyreState(ring: WheelRing, nodes: readonly number[], spokeNodes: readon
   return solveRingFrame({ radius: ring.radius, nodes, EA: ring.EA, EI: ring.EI, springs: holds, loads: pushes, pressure: (ring.spokes * C0) / (TWO_PI * ring.radius) });
 }
 
+/**
+ * The ring under a ground load; a ring its spokes do not hold (felloe joints
+ * hinged so close together that a length of rim between two spokes is a
+ * mechanism) gives no numbers, only the reason, in `unsettled`.
+ */
 export function solveWheelRing(ring: WheelRing, load: WheelLoad): WheelRingResult {
+  try {
+    return solveHeldRing(ring, load);
+  } catch (e) {
+    if (!(e instanceof RingNotHeld)) throw e;
+    const hinged = (load.hinges ?? []).length;
+    const why = `${e.message}${hinged ? ` (${hinged} felloe joints hinged on ${ring.spokes} spokes: a length of rim between two spokes is a mechanism)` : ''}`;
+    return notHeld(ring, load, why);
+  }
+}
+
+/** A ring with no solution: every force nil, the give unknown (NaN), the reason kept. */
+function notHeld(ring: WheelRing, load: WheelLoad, why: string): WheelRingResult {
+  const nodes = [0];
+  return {
+    ring, load, nodes, moment: [0], hoop: [0], shear: [0],
+    spokes: spokeAngles(ring.spokes, load.spokeOffset).map((angle) => ({ angle, force: 0, active: false })),
+    peak: { node: 0, angle: 0, moment: 0, hoop: 0 },
+    span: (TWO_PI * ring.radius) / ring.spokes,
+    coefficient: NaN, rounds: 0, tokenForce: 0, contactDeflection: NaN,
+    unsettled: `the ring model could not be solved: ${why}`,
+  };
+}
+
+function solveHeldRing(ring: WheelRing, load: WheelLoad): WheelRingResult {
   const span = (TWO_PI * ring.radius) / ring.spokes;
   const angles = spokeAngles(ring.spokes, load.spokeOffset);
   const hingeAngles = load.hinges ?? [];
