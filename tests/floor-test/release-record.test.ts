@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { syntheticRelease, type SyntheticRelease } from '../../scripts/synthetic-drop-record.ts';
 import { estimateFloorTest } from '../../src/core/floor-test/estimate-floor-test.ts';
-import { FloorTestError } from '../../src/core/floor-test/floor-test-types.ts';
+import { refusalCode } from './refusal-code.ts';
 import { findRelease } from '../../src/core/floor-test/release.ts';
 import { noiseLevel } from '../../src/core/floor-test/noise-level.ts';
 
@@ -55,17 +55,8 @@ describe('a floor held and let go', () => {
 });
 
 describe('records that are not a free vibration', () => {
-  const code = (f: () => unknown): number | undefined => {
-    try {
-      f();
-    } catch (e) {
-      if (e instanceof FloorTestError) return e.code;
-      throw e;
-    }
-    return undefined;
-  };
   it('a square wave is refused by the fit check, not by a fault of the fitting library', () => {
     const t = Array.from({ length: 2000 }, (_, i) => i / 1000);
-    expect(code(() => estimateFloorTest({ t_s: t, x_mm: t.map((_, i) => (Math.floor(i / 100) % 2 ? 5 : -5)) }, 40))).toBe(2914);
+    expect(refusalCode(() => estimateFloorTest({ t_s: t, x_mm: t.map((_, i) => (Math.floor(i / 100) % 2 ? 5 : -5)) }, 40))).toBe(2914);
   });
 });
