@@ -4,7 +4,7 @@
 
 import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { syntheticDrop, type SyntheticDrop } from './synthetic-drop-record.ts';
+import { dropCsv, syntheticDrop, type SyntheticDrop } from './synthetic-drop-record.ts';
 
 /** Invented demo numbers: a 40 kg mass strapped to a floor sample of 60 N/mm, dropped 20 mm. */
 export const FLOOR_TEST_DEMO: SyntheticDrop = {
@@ -21,13 +21,11 @@ export const FLOOR_TEST_DEMO: SyntheticDrop = {
 
 const p = FLOOR_TEST_DEMO;
 const { t_s, x_mm } = syntheticDrop(p);
-const lines = [
-  '# SYNTHETIC demo record of our own invention, made by scripts/make-floor-test-demo.ts; not a measurement.',
-  `# Linear floor: f_n ${p.natural_frequency_hz.toFixed(4)} Hz (60 N/mm under ${p.mass_kg} kg), damping ratio ${p.damping_ratio}, drop ${p.drop_height_mm} mm, noise ${p.noise_mm} mm, seed ${p.seed}.`,
-  '# Run: npx axletree floor-test specs/floor-test-demo.csv --mass-kg 40',
-  'sample,time_s,displacement_mm',
-  ...t_s.map((t, i) => `${i},${t.toFixed(4)},${x_mm[i].toFixed(4)}`),
-];
+const text = dropCsv({ t_s, x_mm }, [
+  'SYNTHETIC demo record of our own invention, made by scripts/make-floor-test-demo.ts; not a measurement.',
+  `Linear floor: f_n ${p.natural_frequency_hz.toFixed(4)} Hz (60 N/mm under ${p.mass_kg} kg), damping ratio ${p.damping_ratio}, drop ${p.drop_height_mm} mm, noise ${p.noise_mm} mm, seed ${p.seed}.`,
+  'Run: npx axletree floor-test specs/floor-test-demo.csv --mass-kg 40',
+]);
 const out = fileURLToPath(new URL('../specs/floor-test-demo.csv', import.meta.url));
-writeFileSync(out, lines.join('\n') + '\n');
+writeFileSync(out, text);
 console.log(`wrote ${out} (${t_s.length} samples)`);

@@ -54,12 +54,12 @@ const CASES: Case[] = [
   {
     name: 'a negative length',
     text: edited(['length_mm: 2080', 'length_mm: -2080']),
-    issues: [{ path: 'axle.length_mm', at: ['length_mm: -2080', '-2080'], says: ['-2080', 'out of range', 'allowed: more than 0 and at most 4000 mm'] }],
+    issues: [{ path: 'axle.length_mm', at: ['length_mm: -2080', '-2080'], says: ['-2080', 'out of range', 'allowed: at least 500 and at most 4000 mm'] }],
   },
   {
     name: 'a zero length',
     text: edited(['length_mm: 1150', 'length_mm: 0']),
-    issues: [{ path: 'yoke.length_mm', at: ['yoke:\n  species: white-oak\n  length_mm: 0', '0'], says: ['value 0', 'out of range', 'allowed: more than 0'] }],
+    issues: [{ path: 'yoke.length_mm', at: ['yoke:\n  species: white-oak\n  length_mm: 0', '0'], says: ['value 0', 'out of range', 'allowed: at least 300 and at most 4000 mm'] }],
   },
   {
     name: 'an unknown species',
@@ -206,7 +206,7 @@ const CASES: Case[] = [
   {
     name: 'a re-serialised YAML spec with a negative frame width',
     text: changed((s) => (s.box.floor.frame.width_mm = -80), 'yaml'),
-    issues: [{ path: 'box.floor.frame.width_mm', at: ['width_mm: -80', '-80'], says: ['out of range', 'allowed: more than 0'] }],
+    issues: [{ path: 'box.floor.frame.width_mm', at: ['width_mm: -80', '-80'], says: ['out of range', 'allowed: at least 10 and at most 300 mm'] }],
   },
 ];
 

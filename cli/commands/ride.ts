@@ -69,6 +69,7 @@ export async function rideCommand(file: string, opts: RideOptions, con: Console)
 
 function rideSummaryText(name: string, results: readonly RideResult[], written: string[]): string {
   const lines = results.map((r) => {
+    if (r.stopped) return `  ${r.case}: not run: ${r.stopped}`;
     const crew = r.crew.map((c) => `${c.role} rise ${c.rise_mm.toFixed(1)} mm, off the floor ${c.airborne_ms.toFixed(1)} ms, floor DLF ${c.floor_dlf.toFixed(2)}`).join('; ');
     const decay = r.decayCycles === null ? 'no decay to 10 % in the run' : `${r.decayCycles.toFixed(1)} cycles to 10 %`;
     return `  ${r.case}: ${crew}; yoke ${r.yokeForceMin_N.toFixed(0)} to ${r.yokeForceMax_N.toFixed(0)} N; ${decay}`;

@@ -137,14 +137,17 @@ describe('floor cable net', () => {
     const c = 159 * Math.SQRT1_2;
     expect(o.frontAt(510 - 159 + c)).toBeCloseTo(560 - 159 + c, 9);
     const floor = floorNet(specOf('demo-two-crew'), rulesData);
-    const square = floorNet(prepared(deepMerge(readDemo('demo-two-crew'), { box: { floor: { frame: { bend_radius_mm: 0.001 } } } })), rulesData);
+    // Four jointed corners (no bend radius): every crossing is inside.
+    const squareRaw = readDemo('demo-two-crew') as { box: { floor: { frame: Record<string, unknown> } } };
+    delete squareRaw.box.floor.frame.bend_radius_mm;
+    const square = floorNet(prepared(squareRaw), rulesData);
     expect(square.net.nodes.length).toBe(floor.fbY.length * floor.ssX.length);
     expect(floor.net.nodes.length).toBeLessThan(square.net.nodes.length);
     for (const q of floor.net.nodes) expect(floor.outline.inside(q.x, q.y)).toBe(true);
   });
 
   it('declines a net too fine to solve in the time, and says so', () => {
-    const m = floorModel(specOf('demo-two-crew', { width_mm: 4, thickness_mm: 1, pitch_mm: 5 }), rulesData, STANDING);
+    const m = floorModel(specOf('demo-two-crew', { width_mm: 5, thickness_mm: 1, pitch_mm: 5 }), rulesData, STANDING);
     expect(m.converged).toBe(false);
     expect(m.stopped).toMatch(/max_nodes/);
     expect(Number.isNaN(m.maxTension_N)).toBe(true);

@@ -122,7 +122,7 @@ describe('cut list', () => {
     const rail = row(analysis(raw), 'hand rail');
     expect(rail.quantity).toBe(2);
     expect(rail.rough).toEqual({ length_mm: 950, width_mm: 36, thickness_mm: 36 });
-    const bad = prepareSpec(deepMerge(raw, { stock: { extra_parts: [{ name: 'x', species: 'teak', length_mm: 1, width_mm: 1, thickness_mm: 1 }] } }), rulesData);
+    const bad = prepareSpec(deepMerge(raw, { stock: { extra_parts: [{ name: 'x', species: 'teak', length_mm: 100, width_mm: 10, thickness_mm: 10 }] } }), rulesData);
     expect(bad.ok).toBe(false);
     if (!bad.ok) expect(bad.issues.map((i) => i.path.join('.'))).toContain('stock.extra_parts.0.species');
   });

@@ -5,7 +5,7 @@ import { syntheticDrop, normal, type SyntheticDrop } from '../../scripts/synthet
 import { estimateFloorTest } from '../../src/core/floor-test/estimate-floor-test.ts';
 import { dampingFromDecrement } from '../../src/core/floor-test/log-decrement.ts';
 import { noiseLevel } from '../../src/core/floor-test/noise-level.ts';
-import { FloorTestError } from '../../src/core/floor-test/floor-test-types.ts';
+import { refusalCode } from './refusal-code.ts';
 
 const BASE: SyntheticDrop = {
   mass_kg: 40,
@@ -95,24 +95,15 @@ describe('the pieces against closed forms', () => {
 });
 
 describe('records the estimator refuses', () => {
-  const code = (f: () => unknown): number | undefined => {
-    try {
-      f();
-    } catch (e) {
-      if (e instanceof FloorTestError) return e.code;
-      throw e;
-    }
-    return undefined;
-  };
   it('a record of noise alone: no drop seen', () => {
     const r = normal(3);
     const t = Array.from({ length: 500 }, (_, i) => i / 1000);
-    expect(code(() => estimateFloorTest({ t_s: t, x_mm: t.map(() => 0.1 * r()) }, 40))).toBe(2912);
+    expect(refusalCode(() => estimateFloorTest({ t_s: t, x_mm: t.map(() => 0.1 * r()) }, 40))).toBe(2912);
   });
   it('a floor that damps in one swing: too few half-cycles', () => {
-    expect(code(() => estimateFloorTest(syntheticDrop({ ...BASE, damping_ratio: 0.6 }), 40))).toBe(2913);
+    expect(refusalCode(() => estimateFloorTest(syntheticDrop({ ...BASE, damping_ratio: 0.6 }), 40))).toBe(2913);
   });
   it('a mass that is not positive', () => {
-    expect(code(() => estimateFloorTest(syntheticDrop(BASE), 0))).toBe(2911);
+    expect(refusalCode(() => estimateFloorTest(syntheticDrop(BASE), 0))).toBe(2911);
   });
 });

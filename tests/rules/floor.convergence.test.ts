@@ -73,7 +73,7 @@ describe(RULE, () => {
   });
 
   it('fails a net too fine to solve within the time, naming the limit', async () => {
-    const found = await findingsOf(RULE, raw({ floor_straps: { width_mm: 4, thickness_mm: 1, pitch_mm: 5 } }));
+    const found = await findingsOf(RULE, raw({ floor_straps: { width_mm: 5, thickness_mm: 1, pitch_mm: 5 } }));
     expect(found.map((f) => [f.severity, f.code, f.message_key, f.value])).toEqual(Array(5).fill(['fail', 2223, 'declined', null]));
     expect(found[0].message).toContain('max_nodes');
   });

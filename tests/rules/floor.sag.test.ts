@@ -98,7 +98,7 @@ describe(RULE, () => {
   });
 
   it('warns, saying why, when the floor could not be solved', async () => {
-    const found = await findingsOf(RULE, raw({ floor_straps: { width_mm: 4, thickness_mm: 1, pitch_mm: 5 } }));
+    const found = await findingsOf(RULE, raw({ floor_straps: { width_mm: 5, thickness_mm: 1, pitch_mm: 5 } }));
     expect(found.length).toBeGreaterThan(0);
     expect(found.every((f) => f.severity === 'warning' && f.code === 2215 && f.message_key === 'notSolved' && f.subject === 'floor.net')).toBe(true);
     expect(found[0].message).toContain('max_nodes');

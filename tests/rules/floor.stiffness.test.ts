@@ -39,7 +39,7 @@ describe(RULE, () => {
   });
 
   it('says so, as information, when the floor was not solved', async () => {
-    const found = await findingsOf(RULE, deepMerge(readDemo('demo-two-crew'), { floor_straps: { width_mm: 4, thickness_mm: 1, pitch_mm: 5 } }));
+    const found = await findingsOf(RULE, deepMerge(readDemo('demo-two-crew'), { floor_straps: { width_mm: 5, thickness_mm: 1, pitch_mm: 5 } }));
     expect(found.map((f) => [f.severity, f.code, f.message_key, f.subject])).toEqual([['info', 2232, 'notSolved', 'floor.net']]);
     expect(found[0].message).toContain('max_nodes');
   });

@@ -30,9 +30,9 @@ describe(TEMPLATE_FILE, () => {
     const [, from, to] = /\$A\$(\d+):\$A\$(\d+)/.exec(String(rule.formulae[0]))!;
     const listed = [...Array(Number(to) - Number(from) + 1).keys()].map((i) => lists.getCell(Number(from) + i, 1).value);
     expect(listed).toEqual(Object.keys(loadRulesData(defaultRulesDir()).species));
-    // A range check from the schema: the axle length is more than 0 and at most 4000 mm.
+    // A range check from the schema: the axle length is at least 500 and at most 4000 mm.
     const len = [...Array(axle.rowCount).keys()].map((i) => i + 1).find((r) => axle.getCell(r, 1).value === 'length_mm')!;
-    expect(axle.getCell(len, 3).dataValidation).toMatchObject({ type: 'decimal', operator: 'between', formulae: [0, 4000] });
+    expect(axle.getCell(len, 3).dataValidation).toMatchObject({ type: 'decimal', operator: 'between', formulae: [500, 4000] });
     expect(axle.getCell(len, 3).fill).not.toEqual(axle.getCell(len, 2).fill); // inputs look different from labels
   });
 });

@@ -60,9 +60,9 @@ interface Bad {
 const withPieces = (pieces: unknown[]) => ({ ...GOOD, pieces });
 const BAD: Bad[] = [
   { name: 'a piece longer than every stock', content: withPieces([...GOOD.pieces, { length_mm: 3100, quantity: 1 }]), path: 'pieces[2].length_mm', says: /longer than every stock length \(the longest is 3000 mm\)/ },
-  { name: 'a piece of zero length', content: withPieces([{ length_mm: 0, quantity: 1 }]), path: 'pieces[0].length_mm', says: /out of range; allowed: more than 0 mm/ },
-  { name: 'a negative stock length', content: { ...GOOD, stock: [{ length_mm: -3000 }] }, path: 'stock[0].length_mm', says: /out of range; allowed: more than 0 mm/ },
-  { name: 'a negative kerf', content: { ...GOOD, kerf_mm: -1 }, path: 'kerf_mm', says: /out of range; allowed: at least 0 mm/ },
+  { name: 'a piece of zero length', content: withPieces([{ length_mm: 0, quantity: 1 }]), path: 'pieces[0].length_mm', says: /out of range; allowed: more than 0 and at most 100000 mm/ },
+  { name: 'a negative stock length', content: { ...GOOD, stock: [{ length_mm: -3000 }] }, path: 'stock[0].length_mm', says: /out of range; allowed: more than 0 and at most 100000 mm/ },
+  { name: 'a negative kerf', content: { ...GOOD, kerf_mm: -1 }, path: 'kerf_mm', says: /out of range; allowed: at least 0 and at most 100 mm/ },
   { name: 'a quantity that is not whole', content: withPieces([{ length_mm: 500, quantity: 1.5 }]), path: 'pieces[0].quantity', says: /wrong type; allowed: a whole number/ },
   { name: 'a missing key', content: { kerf_mm: 3, stock: GOOD.stock }, path: '', says: /required key pieces is missing/ },
   { name: 'an unknown key', content: { ...GOOD, blade: 'rip' }, path: 'blade', says: /unknown key blade/ },

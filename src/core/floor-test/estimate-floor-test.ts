@@ -4,7 +4,9 @@
 // 1. Noise: the standard deviation from the second differences (noise-level.ts).
 // 2. First peak: the sample farthest from the record's starting level (the
 //    median of its first samples); the free vibration starts there. Before it
-//    lies the drop and the impact.
+//    lies the drop and the impact. A floor held and let go (release.ts) starts
+//    instead at the first turning point after the release, the hold's level
+//    taking the place of the starting level.
 // 3. Rough half period: turning points of the raw record with a band of a
 //    tenth of the first peak's excursion.
 // 4. Turning points again on the record smoothed over a sixteenth of a period,
@@ -19,8 +21,9 @@
 // 7. f_n and zeta reported from the fit; k = M (2 pi f_n)^2.
 
 import { fitDampedSine } from './damped-sine-fit.ts';
-import { FloorTestError, type DropRecord, type Extremum, type FloorTestEstimate } from './floor-test-types.ts';
+import { FloorTestError, type DampedSineFit, type DropRecord, type Extremum, type FloorTestEstimate } from './floor-test-types.ts';
 import { logDecrement } from './log-decrement.ts';
+import { findRelease } from './release.ts';
 import { median, noiseLevel } from './noise-level.ts';
 import { movingAverage, refineExtremum, turningPoints } from './turning-points.ts';
 
@@ -35,8 +38,13 @@ export function estimateFloorTest(record: DropRecord, mass_kg: number): FloorTes
   if (!(mass_kg > 0) || !Number.isFinite(mass_kg)) throw new FloorTestError('floorTestMass', { value: String(mass_kg) });
   const { t_s: t, x_mm: x } = record;
   const noise = noiseLevel(x);
-  const start = median(x.slice(0, Math.max(3, Math.floor(x.length / 50))));
-  const peak = farthestFrom(x, start);
+  const level = median(x.slice(0, Math.max(3, Math.floor(x.length / 50))));
+  // A held floor let go: the level before the free vibration is the hold's, and the fit starts after the release.
+  // Where the hold is where the record starts, both ways find the same first peak.
+  const held = findRelease(t, x, noise);
+  const release = held && held.peak !== farthestFrom(x, level) ? held : null;
+  const start = release ? release.level_mm : level;
+  const peak = release ? release.peak : farthestFrom(x, start);
   const excursion = Math.abs(x[peak] - start);
   if (!(excursion > HEIGHT_OVER_NOISE * noise) || excursion === 0) throw new FloorTestError('floorTestStill', { noise: noise.toFixed(3) });
   // Work on y with the first peak a maximum; the sign goes back at the end.
@@ -58,6 +66,7 @@ export function estimateFloorTest(record: DropRecord, mass_kg: number): FloorTes
   if (kept.length - 1 < MIN_HALF_CYCLES) throw fewCycles(kept.length - 1);
 
   const dec = logDecrement(kept);
+  if (!(dec.delta > 0)) throw new FloorTestError('floorTestFit', { reason: 'the half-cycle heights do not die away: the record is not the free vibration of a damped floor' });
   const first = kept[0];
   const last = kept[kept.length - 1];
   const segment = { from: peak, to: last.index };
@@ -68,7 +77,7 @@ export function estimateFloorTest(record: DropRecord, mass_kg: number): FloorTes
   const q = Math.exp(-dec.delta / 2);
   const h0 = dec.heights_mm[0] / (1 + q);
   const fd = 1 / dec.damped_period_s;
-  const fit = fitDampedSine(tau, xs, {
+  const fit = fitOrRefuse(tau, xs, {
     amplitude_mm: (sign * h0) / Math.cos(phi0),
     damping_ratio: zeta0,
     natural_frequency_hz: fd / Math.sqrt(1 - zeta0 ** 2),
@@ -93,8 +102,21 @@ export function estimateFloorTest(record: DropRecord, mass_kg: number): FloorTes
     free_vibration: { start_s: t[segment.from], end_s: t[segment.to], samples: xs.length, half_cycles: kept.length - 1 },
     extrema,
     fit,
-    notes: notes(dec.damping_ratio, fit.damping_ratio, kept.length - 1),
+    notes: [...(release ? [releaseNote(t[release.index], release.level_mm, t[peak])] : []), ...notes(dec.damping_ratio, fit.damping_ratio, kept.length - 1)],
   };
+}
+
+/** The fit, or the record refused where the least-squares steps cannot be solved (a record far from a damped sine). */
+function fitOrRefuse(...args: Parameters<typeof fitDampedSine>): DampedSineFit {
+  try {
+    return fitDampedSine(...args);
+  } catch (e) {
+    throw new FloorTestError('floorTestFit', { reason: `its least-squares step could not be solved: ${(e as Error).message}` });
+  }
+}
+
+function releaseNote(at_s: number, level_mm: number, peak_s: number): string {
+  return `The floor was held at ${level_mm.toFixed(3)} mm and let go at ${at_s.toFixed(3)} s (a release, not a drop): the free vibration is read from the first turning point after it, at ${peak_s.toFixed(3)} s.`;
 }
 
 function farthestFrom(x: readonly number[], level: number): number {

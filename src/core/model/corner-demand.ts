@@ -22,7 +22,10 @@ export function jointedCorners(spec: CheckedSpecification): string {
 
 export function cornerDemand(spec: CheckedSpecification, floor: FloorResult | undefined, force: ReturnType<typeof jointForceWith>): CornerDemand {
   if (!floor) return { cases: [], unknown: 'the strap-floor model gave no result' };
-  if (!floor.converged) return { cases: [], unknown: `the strap-floor model did not converge in the bump case (residual ${f1(floor.residual_N)} N against ${f1(floor.tolerance_N)} N)` };
+  if (!floor.converged) {
+    const how = Number.isFinite(floor.residual_N) ? `residual ${formatNumber(floor.residual_N)} N against ${formatNumber(floor.tolerance_N)} N` : 'the net was not solved: see floor.convergence';
+    return { cases: [], unknown: `the strap-floor model did not converge in the bump case (${how})` };
+  }
   const rail = (name: RailPull['rail']) => floor.rails.find((r) => r.rail === name)?.total_N ?? 0;
   const bent = spec.box.floor.frame.bend_radius_mm !== undefined;
   const ends: ('rear' | 'front')[] = bent ? ['rear'] : ['rear', 'front'];

@@ -5,12 +5,14 @@ export interface CrewOnFloor {
   role: string;
   /** Load put on the floor by this person (weight times the case's factor), N. */
   load_N: number;
-  /** Sag of the floor under the centre of the foot patch, mm. */
+  /** Sag of the floor under the centre of the foot patch (see sagRead), mm. */
   sag_mm: number;
   /** Load over sag, N/mm. */
   secantStiffness_N_per_mm: number;
   /** d(load)/d(sag) at this load, N/mm. */
   tangentStiffness_N_per_mm: number;
+  /** 'patch' where the centre of the foot patch is over the frame and the sag is the load-weighted mean under the patch instead. */
+  sagRead?: 'patch';
 }
 
 export interface RailPull {

@@ -30,10 +30,13 @@ export function leastOnGrid(holds: (x: number) => boolean, grid: readonly number
   return { value: null, atLower: false, evaluations: grid.length };
 }
 
-/** Bisection between lo (fails) and hi (holds). */
+/** Halvings at most: 60 take any bracket of doubles below a millionth of itself. */
+export const MAX_BISECTIONS = 60;
+
+/** Bisection between lo (fails) and hi (holds); the value holds whenever it stops. */
 function bisectInside(holds: (x: number) => boolean, lo: number, hi: number, relTol: number): { value: number; evaluations: number } {
   let evaluations = 0;
-  while (hi - lo > relTol * hi) {
+  while (hi - lo > relTol * hi && evaluations < MAX_BISECTIONS) {
     const mid = 0.5 * (lo + hi);
     evaluations++;
     if (holds(mid)) hi = mid;

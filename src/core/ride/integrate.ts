@@ -14,11 +14,15 @@ export interface IntegrateOptions {
   breaks?: readonly number[];
   /** Called after every step with the time, the state and the contact mode held during the step. */
   onStep(t0: number, t1: number, y: Float64Array, modeDuring: number): void;
+  /** Most steps, event bisection included; the run stops there (contacts chattering at every step). None where absent. */
+  maxSteps?: number;
 }
 
 export interface IntegrateStats {
   steps: number;
   events: number;
+  /** Why the run stopped before t1, if it did. */
+  stopped?: string;
 }
 
 export function rk4Stepper(n: number, f: Rhs) {
@@ -41,6 +45,7 @@ export function integrate(f: Rhs, mode: Mode, y0: Float64Array, t0: number, t1: 
   const y = Float64Array.from(y0), next = new Float64Array(n), trial = new Float64Array(n);
   let t = t0, m = mode(t, y), steps = 0, events = 0;
   while (t < t1 - 1e-12) {
+    if (steps >= (o.maxSteps ?? Infinity)) return { steps, events, stopped: `the integration stopped at ${t.toFixed(3)} s of ${t1.toFixed(3)} s after ${steps} steps (${events} contact events), its limit` };
     let h = Math.min(o.h, t1 - t);
     for (const b of o.breaks ?? []) if (b > t + 1e-12 && b < t + h) h = b - t;
     step(t, y, h, next);

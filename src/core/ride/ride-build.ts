@@ -58,9 +58,11 @@ export interface BuiltRide {
   /** Each parameter with its working and source. */
   working: string[];
   sources: string[];
+  /** Why the system cannot be run (a stiffness the floor model did not give), if so. */
+  unknown?: string;
 }
 
-const f = (v: number, d = 1) => v.toFixed(d);
+const f = (v: number, d = 1) => (Number.isFinite(v) ? v.toFixed(d) : 'not known');
 
 /** St Venant torsion constant of a b × h rectangle (Roark's formula), mm^4. */
 export function torsionConstant(b: number, h: number): number {
@@ -148,11 +150,17 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
   const legs = lim('ride.supports', 'legs_stiffness');
   const floorDamping = o.floorDampingRatio !== undefined ? { value: o.floorDampingRatio, source: 'set by the caller' } : floorDampingOf(i);
   sources.push(`floor damping: ${floorDamping.source}`);
+  const unknownFloor: string[] = [];
   const crew = spec.crew.map((c, n) => {
     const kf = i.floorStatic.crew[n].tangentStiffness_N_per_mm * 1e3;
     const k = (kf * legs) / (kf + legs);
     const cc = damp * 2 * floorDamping.value * Math.sqrt(k * c.mass_kg);
-    working.push(`${c.role}: floor ${f(kf / 1e3, 2)} kN/m (tangent, cable net) in series with the legs ${f(legs / 1e3, 0)} kN/m = ${f(k / 1e3, 2)} kN/m; ζ_floor = ${floorDamping.value}, c = ${f(cc, 0)} N·s/m`);
+    if (!(kf > 0) || !Number.isFinite(kf)) unknownFloor.push(c.role);
+    working.push(
+      unknownFloor.includes(c.role)
+        ? `${c.role}: the floor's stiffness under them is not known (the cable net was not solved: see floor.convergence)`
+        : `${c.role}: floor ${f(kf / 1e3, 2)} kN/m (tangent, cable net) in series with the legs ${f(legs / 1e3, 0)} kN/m = ${f(k / 1e3, 2)} kN/m; ζ_floor = ${floorDamping.value}, c = ${f(cc, 0)} N·s/m`,
+    );
     return { role: c.role, m: c.mass_kg, x: mm(c.x_mm), y: mm(c.y_mm), k, c: cc, xs: (c.mass_kg * G) / k };
   });
 
@@ -204,7 +212,10 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
     2 * Math.PI * Math.sqrt(yokeMass / yoke.k),
   ];
   const shortestTimeConstant = cg > 0 ? cg / (wheel.k + (ground?.k.value ?? 0)) : Infinity;
-  return { system, inputEnd, breaks, drop: which === 'drop' ? mm(spec.operation.drop_height_mm) : 0, speed, floorDamping, shortestPeriod: Math.min(...periods), shortestTimeConstant, working, sources };
+  const unknown = !Number.isFinite(kRing)
+    ? `the wheel's own stiffness is not known (${i.wheelStiffness.working})`
+    : unknownFloor.length ? `the floor's stiffness under ${unknownFloor.join(' and ')} is not known: the strap floor was not solved (see floor.convergence)` : undefined;
+  return { system, inputEnd, breaks, drop: which === 'drop' ? mm(spec.operation.drop_height_mm) : 0, speed, floorDamping, shortestPeriod: Math.min(...periods), shortestTimeConstant, working, sources, ...(unknown ? { unknown } : {}) };
 }
 
 /** The body's mass as felt at one wheel (heave, pitch and roll together). */

@@ -34,7 +34,8 @@ function groundFigures(ride: Record<RideCase, RideResult>, g: RoadGround, f: Gro
   const road = casesOver(g).map((c) => ride[c]);
   const crew = road.flatMap((r) => r.crew);
   const n = names(g);
-  const unsolved = 'the ride model gave no finite value (the floor was not solved: see floor.convergence)';
+  const stopped = road.find((r) => r.stopped)?.stopped;
+  const unsolved = `the ride model gave no finite value (${stopped ?? 'the floor was not solved: see floor.convergence'})`;
   return {
     [n.rise]: figureOrReason(Math.max(...crew.map((c) => c.rise_mm)), 'mm', unsolved),
     [n.airborne]: figureOrReason(Math.max(...crew.map((c) => c.airborne_ms)), 'ms', unsolved),
@@ -52,6 +53,6 @@ export function rideFigures(a: ModelView<'ride' | 'bumpFactors' | 'stoneFactors'
   return {
     ...groundFigures(ride, 'rough-ground', a.bumpFactors),
     ...groundFigures(ride, 'stone', a.stoneFactors),
-    drop_decay_cycles: figureOrReason(ride.drop.decayCycles, 'cycles', `after the drop test the crew's motion does not fall below ${formatPercent(fraction)} of its first amplitude within the ${formatQuantity(duration, 's')} run`),
+    drop_decay_cycles: figureOrReason(ride.drop.decayCycles, 'cycles', ride.drop.stopped ? `the drop test could not be run (${ride.drop.stopped})` : `after the drop test the crew's motion does not fall below ${formatPercent(fraction)} of its first amplitude within the ${formatQuantity(duration, 's')} run`),
   };
 }

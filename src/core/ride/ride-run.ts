@@ -28,14 +28,58 @@ const TITLES: Record<RideCase, string> = {
 };
 export const rideTitle = (c: RideCase) => TITLES[c];
 
+/**
+ * Most RK4 steps in one case, contact events included: the demonstration
+ * builds take 3,000 to 6,500; at this many the step is so short that some
+ * part of the model is far from a real chariot, and a run would take minutes.
+ */
+export const MAX_RIDE_STEPS = 200_000;
+
+/** Why the fixed step cannot carry the run, or null. */
+function stepTrouble(h: number, period: number, duration: number): string | null {
+  if (!(h > 0) || !Number.isFinite(h)) return 'the integration step is not a positive number (a stiffness or mass of the model is not known)';
+  const steps = Math.ceil(duration / h);
+  if (steps > MAX_RIDE_STEPS) return `a fixed step of ${(h * 1e6).toFixed(2)} µs (1/60 of the shortest period, ${(period * 1e3).toFixed(3)} ms) would take ${steps} steps over the ${duration} s run, more than the ${MAX_RIDE_STEPS} allowed`;
+  return null;
+}
+
+/** A case that could not be run: every measure NaN (not a number the rules can judge), the reason kept. */
+function notRun(b: BuiltRide, which: RideCase, title: string, reason: string): RideResult {
+  const sys = b.system;
+  return {
+    case: which,
+    title,
+    crew: sys.crew.map((c) => ({ role: c.role, rise_mm: NaN, airborne_ms: NaN, floor_dlf: NaN, lift_mm: NaN, decay_cycles: null })),
+    wheels: sys.wheels.map((w) => ({ wheel: w.side, airborne_ms: NaN, dlf: NaN })),
+    yokeForceMin_N: NaN,
+    yokeForceMax_N: NaN,
+    yokeForceStatic_N: NaN,
+    decayCycles: null,
+    method: `not run: ${reason}`,
+    stopped: reason,
+    steps: 0,
+    series: { t_s: [], channels: [] },
+    floorDamping: b.floorDamping,
+    working: b.working,
+    sources: b.sources,
+  };
+}
+
 export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResult {
   const sys = b.system;
   const n = sys.crew.length, N = 3 + n;
-  const rest = staticEquilibrium(sys);
-  const y0 = Float64Array.from(rest.y);
-  if (b.drop > 0) for (let i = 0; i < N; i++) if (i !== 1 && i !== 2) y0[i] += b.drop;
   // A fraction of the shortest period, and half the ground point's time constant (RK4 is then accurate on its decay).
   const h = Math.min(1e-3, b.shortestPeriod / (s.stepsPerPeriod ?? 60), b.shortestTimeConstant / 2);
+  const unfit = b.unknown ?? stepTrouble(h, b.shortestPeriod, s.duration);
+  if (unfit) return notRun(b, which, s.title, unfit);
+  let rest: ReturnType<typeof staticEquilibrium>;
+  try {
+    rest = staticEquilibrium(sys);
+  } catch (e) {
+    return notRun(b, which, s.title, (e as Error).message);
+  }
+  const y0 = Float64Array.from(rest.y);
+  if (b.drop > 0) for (let i = 0; i < N; i++) if (i !== 1 && i !== 2) y0[i] += b.drop;
   const scratch = newForces(sys), forces = newForces(sys);
   const dyScratch = new Float64Array(stateSize(sys));
   const wheelCount = sys.wheels.length;
@@ -73,6 +117,7 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
       h,
       eventTolerance: 1e-9,
       breaks: b.breaks,
+      maxSteps: MAX_RIDE_STEPS,
       onStep(t0, t1, y, mode) {
         const dt = t1 - t0;
         // Off the ground or the floor only while the gap is open, not where the contact law has cut the force.
@@ -102,6 +147,7 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
     },
   );
 
+  if (stats.stopped) return notRun(b, which, s.title, stats.stopped);
   const decays = turning.map((tp) => decayCycles(tp.points, s.decayFraction, Number.isNaN(firstContact) ? Infinity : firstContact));
   const anyNever = decays.some((d) => d.cycles === null);
   return {

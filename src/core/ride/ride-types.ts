@@ -76,6 +76,8 @@ export interface RideResult {
   decayCycles: number | null;
   /** Integration method and step, for the working. */
   method: string;
+  /** Why the case could not be run (its measures are then NaN and its series empty); absent where it ran. */
+  stopped?: string;
   steps: number;
   series: RideSeries;
   /** The crew-on-floor damping ratio used and where it came from. */

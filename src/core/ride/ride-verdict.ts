@@ -23,6 +23,8 @@ export const crewLeaves = (c: CrewRide, l: CrewLimits) => c.airborne_ms > l.airb
 export const decaysSlowly = (r: RideResult, maxCycles: number) => r.decayCycles === null || !(r.decayCycles <= maxCycles);
 
 export function meetsRideRules(rides: Partial<Record<RideCase, RideResult>>, crew: CrewLimits, maxCycles: number): boolean {
+  // A case that could not run shows nothing safe.
+  if (Object.values(rides).some((r) => r?.stopped)) return false;
   for (const c of ROUTINE_CASES) if (rides[c]?.crew.some((m) => crewLeaves(m, crew))) return false;
   return !rides.drop || !decaysSlowly(rides.drop, maxCycles);
 }

@@ -124,7 +124,8 @@ function field(raw: Node, path: string[], required: boolean): Field {
     ...(enumValues ? { enum: enumValues } : {}),
     ...(choicesOf(n) ? { choices: choicesOf(n) } : {}),
     ...(typeof item.minimum === 'number' ? { minimum: item.minimum } : {}),
-    ...(typeof item.exclusiveMinimum === 'number' ? { exclusiveMinimum: item.exclusiveMinimum } : {}),
+    // A property's own minimum above its definition's "more than 0" is the bound that holds.
+    ...(typeof item.exclusiveMinimum === 'number' && !(typeof item.minimum === 'number' && item.minimum > item.exclusiveMinimum) ? { exclusiveMinimum: item.exclusiveMinimum } : {}),
     ...(typeof item.maximum === 'number' ? { maximum: item.maximum } : {}),
     ...(n.default !== undefined ? { default: n.default } : {}),
     computedDefault: n['x-default'] === 'computed',

@@ -641,7 +641,7 @@ export interface BuildSpecification {
     /**
      * Timber you have or can buy, one entry per size: the stock plan cuts the parts from it.
      *
-     * @maxItems 20
+     * @maxItems 30
      */
     lumber?: {
       /**
@@ -1350,7 +1350,7 @@ export interface CheckedSpecification {
     /**
      * Timber you have or can buy, one entry per size: the stock plan cuts the parts from it.
      *
-     * @maxItems 20
+     * @maxItems 30
      */
     lumber: {
       /**

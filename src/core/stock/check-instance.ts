@@ -1,4 +1,5 @@
 import { issue, pathText, type InputIssue } from '../spec/input-issue.ts';
+import { limitIssue } from '../diagnostics/limit-messages.ts';
 import { schemaIssues } from '../spec/validate-schema.ts';
 import type { CuttingInstance, StockLength } from './cutting-types.ts';
 import schema from './instance.schema.json' with { type: 'json' };
@@ -11,7 +12,7 @@ export type CheckedInstance = { ok: true; instance: CuttingInstance } | { ok: fa
 export function checkCuttingInstance(raw: unknown): CheckedInstance {
   if (!validate(raw)) return { ok: false, issues: schemaIssues(validate.errors ?? [], schema) };
   const instance = raw as CuttingInstance;
-  const issues = [...stockIssues(instance.stock), ...pieceIssues(instance)];
+  const issues = [...stockIssues(instance.stock), ...pieceIssues(instance), ...countIssues(instance)];
   if (issues.length === 0) issues.push(...shortage(instance));
   return issues.length ? { ok: false, issues } : { ok: true, instance };
 }
@@ -25,6 +26,14 @@ function stockIssues(stock: StockLength[]): InputIssue[] {
   const priced = stock.findIndex((s) => s.cost !== undefined);
   if (priced >= 0) stock.forEach((s, j) => s.cost === undefined && out.push(issue(['stock', j, 'cost'], 'stockCostMissing', { other: pathText(['stock', priced, 'cost']) })));
   return out;
+}
+
+/** Most pieces in one plan: first-fit decreasing, which every plan starts from, takes seconds at this count and grows with its square. */
+export const MAX_PIECES = 100_000;
+
+function countIssues(inst: CuttingInstance): InputIssue[] {
+  const count = inst.pieces.reduce((n, p) => n + p.quantity, 0);
+  return count > MAX_PIECES ? [limitIssue(['pieces'], 'stockTooManyPieces', { count, max: MAX_PIECES })] : [];
 }
 
 // A single piece needs no kerf (its one cut may be the stock's end), so it

@@ -4,6 +4,9 @@ import { roundUpBound } from './objective-step.ts';
 import { patternBin } from './pattern.ts';
 import type { PatternMaster } from './pattern-master.ts';
 
+/** Rounds of fixing and re-pricing before a dive hands back what it fixed. */
+export const MAX_DIVE_ROUNDS = 1000;
+
 /**
  * Diving: fix every pattern the LP uses a whole number of times (or, if none,
  * one copy of the most used), re-price the master on what is left, repeat.
@@ -15,7 +18,8 @@ export function dive(p: CuttingProblem, master: PatternMaster, until: number, be
   const fixed: Bin[] = [];
   const demand = [...master.demand];
   const used = p.stocks.map(() => 0);
-  for (;;) {
+  // Each round fixes at least one stock piece; the clock or this limit stops a long dive, first-fit finishing it.
+  for (let round = 0; round < MAX_DIVE_ROUNDS; round++) {
     const lp = master.converge(until);
     if (!lp) return fixed;
     if (lp.bound !== null && binsObjective(p, fixed) + roundUpBound(lp.bound, p.step) >= best - 1e-9) return null;
@@ -43,4 +47,5 @@ export function dive(p: CuttingProblem, master: PatternMaster, until: number, be
     if (demand.every((d) => d === 0) || master.lp.now() > until) return fixed;
     master.reduce(demand, used);
   }
+  return fixed;
 }

@@ -1,5 +1,6 @@
 import { binLoad, stockUse, type Bin } from './bin.ts';
 import type { CuttingProblem } from './cutting-problem.ts';
+import { FirstRoom } from './first-room.ts';
 
 /**
  * First-fit decreasing: each piece, longest first, goes into the first stock
@@ -8,13 +9,14 @@ import type { CuttingProblem } from './cutting-problem.ts';
  */
 export function firstFit(p: CuttingProblem, start: Bin[], items: number[]): { bins: Bin[]; unplaced: number[] } {
   const bins = start.map((b) => ({ stock: b.stock, items: [...b.items] }));
-  const free = bins.map((b) => p.stocks[b.stock].capacity - binLoad(p, b));
+  const free = new FirstRoom(bins.length + items.length);
+  for (const b of bins) free.push(p.stocks[b.stock].capacity - binLoad(p, b));
   const left = stockUse(p, bins).map((n, s) => p.stocks[s].available - n);
   const unplaced: number[] = [];
   // Type indices run longest first.
   for (const i of [...items].sort((a, b) => a - b)) {
     const size = p.types[i].size;
-    let at = free.findIndex((f) => f >= size);
+    let at = free.first(size);
     if (at < 0) {
       const s = newStock(p, size, left);
       if (s < 0) {
@@ -23,11 +25,10 @@ export function firstFit(p: CuttingProblem, start: Bin[], items: number[]): { bi
       }
       left[s]--;
       bins.push({ stock: s, items: [] });
-      free.push(p.stocks[s].capacity);
-      at = bins.length - 1;
+      at = free.push(p.stocks[s].capacity);
     }
     bins[at].items.push(i);
-    free[at] -= size;
+    free.set(at, free.get(at) - size);
   }
   return { bins, unplaced };
 }

@@ -13,6 +13,9 @@ import { binPattern, patternBin, patternKey, type Pattern } from './pattern.ts';
 // feasible from the start. With the artificials the LP is a relaxation still,
 // so its optimum bounds every plan.
 
+/** Pricing rounds before the LP is taken as it stands (each adds at most one column per stock length; the clock usually stops it first). */
+export const MAX_PRICING_ROUNDS = 2000;
+
 export class PatternMaster {
   readonly patterns: Pattern[] = [];
   private readonly known = new Set<string>();
@@ -21,6 +24,8 @@ export class PatternMaster {
   private readonly T: number;
   /** Demand and availability the rows ask for now (reduced while diving). */
   demand: number[];
+  /** Column values of the last optimal solve, kept: adding a column leaves the model unsolved. */
+  private solved = new Float64Array(0);
 
   constructor(
     private readonly p: CuttingProblem,
@@ -56,11 +61,13 @@ export class PatternMaster {
     const { p, lp, model } = this;
     const positive = p.stocks.every((s) => s.weight > 0);
     let bound: number | null = null;
-    for (;;) {
+    for (let round = 0; ; round++) {
       model.run();
       if (model.getModelStatus() !== lp.constants.modelStatus.optimal) return null;
       const value = model.getObjectiveValue();
-      const dual = model.getSolution().rowDual;
+      const solution = model.getSolution();
+      this.solved = Float64Array.from(solution.colValue);
+      const dual = solution.rowDual;
       const best = boundedKnapsack(
         p.types.map((t, i) => ({ size: t.size, value: dual[i], bound: this.demand[i] })),
         p.stocks.map((s) => s.capacity),
@@ -77,13 +84,14 @@ export class PatternMaster {
       });
       if (!added) return { value, bound: Math.max(bound ?? -Infinity, value) };
       if (positive) bound = Math.max(bound ?? -Infinity, value / theta);
-      if (this.lp.now() > until) return { value, bound };
+      // Stopped by the clock or the round limit: the values are those of the last solve, the bound Farley's.
+      if (this.lp.now() > until || round + 1 >= MAX_PRICING_ROUNDS) return { value, bound };
     }
   }
 
-  /** LP values of the patterns at the last solve. */
+  /** LP values of the patterns at the last optimal solve (columns added since have none). */
   values(): Float64Array {
-    return this.model.getSolution().colValue.subarray(this.T);
+    return this.solved.subarray(this.T);
   }
 
   /** Ask the rows for less: what is left after fixing some stock pieces. */

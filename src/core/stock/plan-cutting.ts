@@ -41,10 +41,17 @@ export function planCutting(instance: CuttingInstance, lp: LpSolver | undefined,
   if (method === 'first-fit decreasing' || meetsBound || p.types.length === 0) {
     if (!ffdBins) throw new StockShortfallError(p, ffd.unplaced);
     // Already optimal; with a solver the bound shown is still the LP's.
-    const lpBound = lp && p.grid.exact && p.types.length > 0 ? patternLpBound(p, lp, deadline, ffdBins) : null;
-    return planFromBins(p, ffdBins, { lower_bound: Math.max(simple, lpBound ?? 0), proved: false, method: 'first-fit decreasing', baseline });
+    const bound = lp && p.grid.exact && p.types.length > 0 ? guarded(() => patternLpBound(p, lp, deadline, ffdBins)) : null;
+    const lpBound = typeof bound === 'number' ? bound : 0;
+    const note = bound !== null && typeof bound === 'object' ? ` (no LP bound: ${bound.failed})` : '';
+    return planFromBins(p, ffdBins, { lower_bound: Math.max(simple, lpBound), proved: false, method: `first-fit decreasing${note}`, baseline });
   }
-  const outcome = solveExactly(p, lp!, method, deadline, ffdBins);
+  const outcome = guarded(() => solveExactly(p, lp!, method, deadline, ffdBins));
+  if ('failed' in outcome) {
+    // The solver's fault is not the plan's: first-fit decreasing stands, with the length bound.
+    if (!ffdBins) throw new StockShortfallError(p, ffd.unplaced);
+    return planFromBins(p, ffdBins, { lower_bound: simple, proved: false, method: `first-fit decreasing (${outcome.failed})`, baseline });
+  }
   const solved = outcome.bins;
   // Off an exact grid the solver's bound belongs to a coarser problem.
   const bound = p.grid.exact && outcome.lowerBound !== null ? Math.max(outcome.lowerBound, simple) : simple;
@@ -58,6 +65,15 @@ export function planCutting(instance: CuttingInstance, lp: LpSolver | undefined,
     method: fromSolver ? `${outcome.method}${repaired ? ', repaired by first-fit decreasing' : ''}` : `first-fit decreasing (${outcome.method} found nothing better in time)`,
     baseline,
   });
+}
+
+/** A solver call, or what went wrong inside it (the LP solver can fail where its model is not solved). */
+function guarded<T>(f: () => T): T | { failed: string } {
+  try {
+    return f();
+  } catch (e) {
+    return { failed: `the LP solver failed: ${e instanceof Error ? e.message : String(e)}` };
+  }
 }
 
 function choose(p: CuttingProblem, a: Bin[] | null, b: Bin[] | null): Bin[] | null {

@@ -4,7 +4,7 @@ import type { CheckedSpecification } from '../../spec/spec.types.ts';
 import { G } from '../../units/units.ts';
 import type { FloorResult } from '../floor-result.ts';
 import { partClearances, type PartClearance } from './clearance.ts';
-import { floorNet, floorNodeCount, type FloorNet } from './floor-net.ts';
+import { floorLines, floorNet, floorNodeCount, type FloorNet } from './floor-net.ts';
 import { patchWeights } from './foot-patch.ts';
 import { crewResults, describeSegment, reactionSum, strapPulls, strapTensions, tensions, type Loaded, type StrapTension } from './floor-results.ts';
 import { SLACK_TENSION, solveNet } from './solve-net.ts';
@@ -82,9 +82,11 @@ export function floorModel(spec: CheckedSpecification, data: RulesData, factor: 
   const settings = floorSolveSettings(data, appliedLoad_N);
   const EA_N = data.leathers[s.material].modulus_MPa.value * s.width_mm * s.thickness_mm;
   const head = { factor: factor.value, factorSource: factor.source, tolerance_N: settings.tolerance_N, appliedLoad_N, weave: s.weave, pretension_N: s.pretension_N, EA_N };
-  const count = floorNodeCount(spec, refine);
+  // The lines are cheap to lay; their exact node count decides before the net is built and solved.
+  const laid = floorLines(spec, data, refine);
+  const count = floorNodeCount(laid.lines);
   if (count > settings.maxNodes) return declined(spec, head, count, settings.maxNodes);
-  const floor = floorNet(spec, data, refine);
+  const floor = floorNet(spec, data, refine, laid);
   const basis = frameOfFloor(spec, data, floor, arcStepDeg);
   const frame = new FloorFrame(basis.input);
   const F = anchors === 'fixed' ? new Float64Array(floor.net.straps.length ** 2) : frame.flexibility();
@@ -177,6 +179,6 @@ function declined(spec: CheckedSpecification, head: Pick<FloorModel, 'factor' | 
     straps: [],
     history: [],
     frame: null,
-    stopped: `the net would have about ${count} nodes, more than the ${maxNodes} the solver takes (max_nodes)`,
+    stopped: `the net would have ${count} nodes, more than the ${maxNodes} the solver takes (max_nodes)`,
   };
 }

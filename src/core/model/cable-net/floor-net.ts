@@ -28,15 +28,12 @@ export function strapPositions(span: number, pitch: number, from = 0): number[] 
   return Array.from({ length: n }, (_, i) => from + span / 2 + (i - (n - 1) / 2) * pitch);
 }
 
-/** Nodes the net will have, before building it (crossings, less none for rounded corners). */
-export function floorNodeCount(spec: CheckedSpecification, refine = 1): number {
-  const { depth_mm, width_mm } = spec.box.floor;
-  const p = spec.floor_straps.pitch_mm;
-  const grid = Math.floor(width_mm / p) * Math.floor(depth_mm / p);
-  return grid * (spec.floor_straps.weave === 'two-way' ? 2 * refine - 1 : refine);
+/** The strap lines of a specification's floor, before the net is built from them. */
+export interface FloorLines extends Omit<FloorNet, 'net'> {
+  lines: StrapLine[];
 }
 
-export function floorNet(spec: CheckedSpecification, data: RulesData, refine = 1): FloorNet {
+export function floorLines(spec: CheckedSpecification, data: RulesData, refine = 1): FloorLines {
   const { floor } = spec.box;
   const s = spec.floor_straps;
   const outline = new FloorOutline(floor.depth_mm, floor.width_mm, floor.frame.bend_radius_mm ?? 0, frameBar(spec).width);
@@ -62,5 +59,24 @@ export function floorNet(spec: CheckedSpecification, data: RulesData, refine = 1
       lines.push({ ...common, family: 'side-to-side', number: i + 1, of: ssX.length, cross: x, start: -h, end: h, rails: ['right', 'left'], stations });
     });
   }
-  return { net: buildNet(lines), outline, EA, pretension: s.pretension_N, pitch: s.pitch_mm, fbY, ssX };
+  return { lines, outline, EA, pretension: s.pretension_N, pitch: s.pitch_mm, fbY, ssX };
+}
+
+/** The nodes a net built from these lines has: its crossings once, its other stations, and the nodes refinement adds. */
+export function floorNodeCount(lines: readonly StrapLine[]): number {
+  const keys = new Set<string>();
+  let count = 0;
+  for (const l of lines) {
+    for (const st of l.stations) {
+      if (st.key === undefined) count++;
+      else keys.add(st.key);
+    }
+    count += (l.stations.length + 1) * (l.refine - 1);
+  }
+  return count + keys.size;
+}
+
+export function floorNet(spec: CheckedSpecification, data: RulesData, refine = 1, laid: FloorLines = floorLines(spec, data, refine)): FloorNet {
+  const { lines, ...rest } = laid;
+  return { net: buildNet(lines), ...rest };
 }

@@ -51,7 +51,9 @@ export function describeSegment(net: CableNet, index: number): string {
 }
 
 /**
- * Sag, secant and tangent stiffness under each person; the tangent from the
+ * Sag, secant and tangent stiffness under each person, read at the centre of
+ * their foot patch (or, where the centre is over the frame and does not sag,
+ * as the load-weighted mean under the patch); the tangent from the
  * sags a unit load on the patch adds, by `compliance` (the coupled tangent of
  * the solved state). Null (a net the solver declined, or no tangent) leaves
  * the tangent unknown (NaN).
@@ -60,14 +62,17 @@ export function crewResults(floor: FloorNet, sag: ArrayLike<number>, crew: reado
   const n = floor.net.nodes.length;
   return crew.map((c) => {
     const centre = pointWeights(floor.net, floor.outline, c.patch.x, c.patch.y);
-    const s = weightedSum(centre, sag);
+    // A centre over the frame (a person standing at the edge) does not sag: read the mean under the patch, where the load is.
+    const atCentre = weightedSum(centre, sag) > 0;
+    const read = atCentre ? centre : c.weights;
+    const s = weightedSum(read, sag);
     let tangent = NaN;
     if (compliance) {
       const unit = new Float64Array(n);
       for (const { node, w } of c.weights) unit[node] += w;
-      tangent = 1 / weightedSum(centre, compliance(unit));
+      tangent = 1 / weightedSum(read, compliance(unit));
     }
-    return { role: c.role, load_N: c.load_N, sag_mm: s, secantStiffness_N_per_mm: c.load_N / s, tangentStiffness_N_per_mm: tangent };
+    return { role: c.role, load_N: c.load_N, sag_mm: s, secantStiffness_N_per_mm: c.load_N / s, tangentStiffness_N_per_mm: tangent, ...(atCentre ? {} : { sagRead: 'patch' as const }) };
   });
 }
 

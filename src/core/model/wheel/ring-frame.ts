@@ -1,6 +1,14 @@
 import { SkylineCholesky } from '../cable-net/skyline.ts';
 import { endForces, globalStiffness, type BeamElement } from './beam-element.ts';
 
+/** The ring's stiffness matrix is singular: its springs leave part of it free to move (a mechanism). */
+export class RingNotHeld extends Error {
+  constructor() {
+    super('the ring is not held: its springs leave it free to move as a rigid body');
+    this.name = 'RingNotHeld';
+  }
+}
+
 // A closed plane ring of straight beam elements through nodes on a circle of
 // radius R, held by springs at some nodes (radial or tangential) and loaded by
 // point forces at nodes, solved by the direct stiffness method. The node at
@@ -174,7 +182,7 @@ export function solveRingFrame(f: RingFrame): RingSolution {
       load[3 * j + 1] += fy;
     });
   }
-  if (!K.factor()) throw new Error('the ring is not held: its springs leave it free to move as a rigid body');
+  if (!K.factor()) throw new RingNotHeld();
   const u = K.solve(load);
   const forces = elements.map((e, i): RingElementForces => {
     const ue = dofs(i).map((d) => u[d]);

@@ -1,5 +1,5 @@
 import { nodeAt, ringNodes, wrapAngle } from './ring-mesh.ts';
-import { solveRingFrame, type RingLoad, type RingSolution, type RingSpring } from './ring-frame.ts';
+import { RingNotHeld, solveRingFrame, type RingLoad, type RingSolution, type RingSpring } from './ring-frame.ts';
 
 // The wheel as a ring frame (design basis, section 6): the felloe a closed
 // ring of straight beam elements on its mid-depth radius, the spokes axial
@@ -93,6 +93,8 @@ export interface WheelRingResult {
   tokenForce: number;
   /** How far the rim moves in towards the nave under the ground load, mm (the wheel's own radial compliance, joints rigid). */
   contactDeflection: number;
+  /** Why the slack-spoke search stopped without settling (its last state is given), with the force left of the wrong sign; absent where it settled. */
+  unsettled?: string;
 }
 
 const TWO_PI = 2 * Math.PI;
@@ -144,7 +146,36 @@ function tyreState(ring: WheelRing, nodes: readonly number[], spokeNodes: readon
   return solveRingFrame({ radius: ring.radius, nodes, EA: ring.EA, EI: ring.EI, springs: holds, loads: pushes, pressure: (ring.spokes * C0) / (TWO_PI * ring.radius) });
 }
 
+/**
+ * The ring under a ground load; a ring its spokes do not hold (felloe joints
+ * hinged so close together that a length of rim between two spokes is a
+ * mechanism) gives no numbers, only the reason, in `unsettled`.
+ */
 export function solveWheelRing(ring: WheelRing, load: WheelLoad): WheelRingResult {
+  try {
+    return solveHeldRing(ring, load);
+  } catch (e) {
+    if (!(e instanceof RingNotHeld)) throw e;
+    const hinged = (load.hinges ?? []).length;
+    const why = `${e.message}${hinged ? ` (${hinged} felloe joints hinged on ${ring.spokes} spokes: a length of rim between two spokes is a mechanism)` : ''}`;
+    return notHeld(ring, load, why);
+  }
+}
+
+/** A ring with no solution: every force nil, the give unknown (NaN), the reason kept. */
+function notHeld(ring: WheelRing, load: WheelLoad, why: string): WheelRingResult {
+  const nodes = [0];
+  return {
+    ring, load, nodes, moment: [0], hoop: [0], shear: [0],
+    spokes: spokeAngles(ring.spokes, load.spokeOffset).map((angle) => ({ angle, force: 0, active: false })),
+    peak: { node: 0, angle: 0, moment: 0, hoop: 0 },
+    span: (TWO_PI * ring.radius) / ring.spokes,
+    coefficient: NaN, rounds: 0, tokenForce: 0, contactDeflection: NaN,
+    unsettled: `the ring model could not be solved: ${why}`,
+  };
+}
+
+function solveHeldRing(ring: WheelRing, load: WheelLoad): WheelRingResult {
   const span = (TWO_PI * ring.radius) / ring.spokes;
   const angles = spokeAngles(ring.spokes, load.spokeOffset);
   const hingeAngles = load.hinges ?? [];
@@ -167,7 +198,10 @@ export function solveWheelRing(ring: WheelRing, load: WheelLoad): WheelRingResul
     const outward = spokeNodes.map((node) => sol.u[3 * node] * Math.sin(nodes[node]) - sol.u[3 * node + 1] * Math.cos(nodes[node]));
     const would = outward.map((d) => C0 - ring.spokeStiffness * d);
     const next = nextActive(active, would, TOLERANCE * (load.P + C0));
-    if (next === null) {
+    const key = next?.map((a) => (a ? 1 : 0)).join('');
+    // Settled, or stopped: a set seen before (the search would cycle) or the last round, its state handed on with the reason.
+    const stop = next === null ? null : seen.has(key!) ? 'it came back to a set of bearing spokes it had tried' : round === 4 * ring.spokes ? `it changed the bearing spokes ${round} times, its limit` : undefined;
+    if (stop !== undefined) {
       const el = (j: number, which: 'N' | 'V') => (s: RingSolution | null) => (s ? s.elements[j][which] : 0);
       const elN = (j: number) => el(j, 'N')(sol) + el(j, 'N')(tyre);
       const elV = (j: number) => el(j, 'V')(sol) + el(j, 'V')(tyre);
@@ -189,12 +223,17 @@ export function solveWheelRing(ring: WheelRing, load: WheelLoad): WheelRingResul
         rounds: round,
         tokenForce: Math.max(...sol.strutForce),
         contactDeflection: -(sol.u[0] * Math.sin(nodes[0]) - sol.u[1] * Math.cos(nodes[0])),
+        ...(stop === null ? {} : { unsettled: `the search for slack spokes did not settle: ${stop}; a spoke is left ${wrongSign(active, would).toFixed(1)} N from the force its state allows` }),
       };
     }
-    const key = next.map((a) => (a ? 1 : 0)).join('');
-    if (seen.has(key)) break;
-    seen.add(key);
-    active = next;
+    seen.add(key!);
+    active = next!;
   }
-  throw new Error('the search for slack spokes did not settle');
+  // The last round always stops above; this only satisfies the compiler.
+  throw new Error('unreachable: the slack-spoke search ran past its last round');
+}
+
+/** The largest force of the wrong sign: a bearing spoke pulled, or a slack one that would push, N. */
+function wrongSign(active: readonly boolean[], would: readonly number[]): number {
+  return Math.max(0, ...would.map((w, i) => (active[i] ? -w : w)));
 }

@@ -30,11 +30,14 @@ export function wheelStiffness(ws: WheelRingSpec, P: number): WheelStiffness {
   const n = ws.ring.spokes;
   const count = ws.hinged || ws.ring.precompression > 0 ? n * PER_SPAN : PER_SPAN;
   const compliances: number[] = [];
+  let unsettled = 0;
   for (let i = 0; i < count; i++) {
     const at = ((2 * Math.PI) / n / PER_SPAN) * i;
     const joints = ws.joints.angles.map((j) => wrapAngle(j - at));
     const r = solveWheelRing(ws.ring, { P, spokeOffset: wrapAngle(-at), hinges: ws.hinged ? joints : [], nodesAt: joints });
+    if (!Number.isFinite(r.contactDeflection)) return unknownStiffness(r.unsettled ?? 'the ring model gave no deflection');
     compliances.push(r.contactDeflection / 1000 / P); // m/N
+    if (r.unsettled) unsettled++;
   }
   const mean = compliances.reduce((s, c) => s + c, 0) / compliances.length;
   const rolling = 1 / mean;
@@ -44,6 +47,11 @@ export function wheelStiffness(ws: WheelRingSpec, P: number): WheelStiffness {
     rolling,
     strike,
     softest,
-    working: `wheel ring (felloe bending and spoke compression, joints rigid${ws.hinged ? ', the dowelled felloe joints hinged' : ''}): radial stiffness ${fmt(strike / 1e3)} kN/m under a spoke, ${fmt(softest / 1e3)} kN/m at its softest, ${fmt(rolling / 1e3)} kN/m averaged over ${count} positions round the rim`,
+    working: `wheel ring (felloe bending and spoke compression, joints rigid${ws.hinged ? ', the dowelled felloe joints hinged' : ''}): radial stiffness ${fmt(strike / 1e3)} kN/m under a spoke, ${fmt(softest / 1e3)} kN/m at its softest, ${fmt(rolling / 1e3)} kN/m averaged over ${count} positions round the rim${unsettled ? `; at ${unsettled} of them the search for slack spokes did not settle and its last state stands (see member.felloe)` : ''}`,
   };
+}
+
+/** A wheel whose ring could not be solved: its stiffness not known (NaN), the reason in the working. */
+function unknownStiffness(why: string): WheelStiffness {
+  return { rolling: NaN, strike: NaN, softest: NaN, working: `wheel ring: its radial stiffness is not known: ${why}` };
 }

@@ -70,7 +70,7 @@ export const floorSag = defineRule({
             ? 'Raise the pretension, use thicker or wider straps, a closer pitch or a two-way weave; stand on a sample panel to judge the footing.'
             : 'None needed.',
         sources: net,
-        working: [...base, step(`sag at the centre of ${c.role}'s foot patch (interpolated between nodes)`, '', c.sag_mm, 'mm')],
+        working: [...base, step(c.sagRead === 'patch' ? `mean sag under ${c.role}'s foot patch, its centre being over the frame` : `sag at the centre of ${c.role}'s foot patch (interpolated between nodes)`, '', c.sag_mm, 'mm')],
       }),
     );
     const beyond = (v: number, limit: 'clearance_mm' | 'bump_clearance_mm', spec: LimitSpec) => grade(v, ctx.limit(limit), spec).severity !== 'pass';

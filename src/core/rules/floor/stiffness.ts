@@ -39,7 +39,7 @@ export const floorStiffness = defineRule({
         working: [
           ...base,
           step('k_s = P / sag', `${num(p.load_N)} / ${num(p.sag_mm)}`, p.secantStiffness_N_per_mm, 'N/mm'),
-          `K_t: the net's tangent stiffness matrix at the standing load; w spreads one newton over ${p.role}'s foot patch; i reads the sag at its centre`,
+          `K_t: the net's tangent stiffness matrix at the standing load; w spreads one newton over ${p.role}'s foot patch; i reads ${p.sagRead === 'patch' ? "the mean sag under the patch (its centre is over the frame, which does not sag)" : 'the sag at its centre'}`,
           step('k_t = 1 / (iᵀ K_t⁻¹ w)', '', p.tangentStiffness_N_per_mm, 'N/mm'),
           'the other crew stand where they are; a stiffening net has its tangent above its secant',
         ],

@@ -17,6 +17,7 @@ export const lashingSlip = defineRule({
     within: { code: 2511, text: "The {joint} lashing clamps with {capacity:N} of friction against at most {value:N} of sliding force ({case}), with the builder's estimated pretension of {pre:N} per wrap." },
     over: { code: 2512, text: "The {joint} joint may slip: {value:N} of sliding force ({case}) against {capacity:N} of clamp friction; the advisory limit is {advisory:N} and the hard limit {hard:N}, with the builder's estimated pretension of {pre:N} per wrap." },
     demandUnknown: DEMAND_UNKNOWN,
+    noClamp: { code: 2513, text: 'The {joint} lashing is laid without pretension, so its wraps clamp with no friction: the joint holds {value:N} of sliding force ({case}) only by what else stops it sliding.' },
   },
   run(ctx) {
     const mu = ctx.param('friction_wood_on_wood');
@@ -27,6 +28,24 @@ export const lashingSlip = defineRule({
       const capacity = slipCapacity(mu.value, l.wraps, l.pretension_N);
       const gov = governingDesign(d.cases, 'shear_N');
       const V = gov ? designValue(gov, 'shear_N') : 0;
+      if (capacity === 0) {
+        // No clamp to compare with: a utilisation would divide by nothing.
+        ctx.report({
+          subject: jointSubject(l.joint),
+          label: lashingLabel(l),
+          message: 'noClamp',
+          params: { joint: l.joint, case: gov ? caseName(d, gov) : 'no load' },
+          value: V,
+          unit: 'N',
+          severity: V > 0 ? 'fail' : 'pass',
+          sources: [...mu.sources, ...demandSourceIds(ctx.data, bump, stone)],
+          load_case: loadCaseOf(d, gov),
+          combination: gov?.combination ?? null,
+          fix: 'Lay the wraps tight (rawhide laid wet shrinks tight as it dries) and state the pretension, or notch or peg the joint so it cannot slide.',
+          working: [`${l.joint}: ${d.where}; ${lashingText(l)} at a pretension of 0 N`, ...forceWorking(d, gov, 'shear_N'), step('V_d, the largest design force in the contact face', '', V, 'N'), 'clamp friction = mu·2·n·T_pre = 0 with no pretension'],
+        });
+        continue;
+      }
       const level = (name: string, v: number | null) => (v === null ? [] : [step(`${name} limit = fraction × clamp friction`, `${num(v)} × ${num(capacity)}`, v * capacity, 'N')]);
       ctx.report({
         subject: jointSubject(l.joint),

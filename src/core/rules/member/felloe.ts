@@ -4,9 +4,9 @@ import { wheelRingSpec } from '../../model/wheel/wheel-ring-spec.ts';
 import { timberStrength } from '../../model/timber/design-strength.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
-import { placeOf, ringIntro } from '../wheel/ring-working.ts';
+import { placeOf, ringIntro, ringUnsettled, ringUnsettledReport } from '../wheel/ring-working.ts';
 import { strengthCheck, stressReport, type CaseCheck } from './member-finding.ts';
-import { STRESS_MESSAGES } from './member-messages.ts';
+import { NOT_CHECKED_MESSAGE, STRESS_MESSAGES } from './member-messages.ts';
 
 /**
  * Grain run-out of a felloe sawn from straight stock: a segment of 360°/pieces
@@ -40,7 +40,7 @@ export const felloeMember = defineRule({
   needs: ['mass', 'memberCases'],
   limits: { utilisation: { direction: 'max', unit: 'of the design strength' } },
   params: ['joint_grain_length_mm'],
-  messages: STRESS_MESSAGES,
+  messages: { ...STRESS_MESSAGES, ...NOT_CHECKED_MESSAGE },
   run(ctx) {
     const { spec, data } = ctx;
     const w = spec.wheels;
@@ -57,6 +57,8 @@ export const felloeMember = defineRule({
     const half = grainLength.value / 2 / ws.ring.radius;
     const cases = ctx.models.memberCases;
     const scans = scanWheelRing(ws, cases.map((c) => c.wheel_N), [-half, half]);
+    const unsettled = ringUnsettled(scans);
+    if (unsettled) return ctx.report(ringUnsettledReport('wheel.felloe', 'felloe in the ring of the wheel', 'felloe', unsettled, ringIntro(spec, lay, ws)));
     const span = (2 * Math.PI * ws.ring.radius) / w.spokes;
     const sectionSteps = (c: { wheel_N: number }, p: LoadPosition, node: number, sigma: number) => {
       const m = p.result.moment[node];

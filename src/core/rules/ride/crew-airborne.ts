@@ -6,7 +6,7 @@ import { grade } from '../../pipeline/grade.ts';
 import { step } from '../../pipeline/step.ts';
 import { ROAD_SHAPES, roadCase, type CrewRide, type RideResult, type RoadGround } from '../../ride/ride-types.ts';
 import { withinLimit } from '../within-limit.ts';
-import { notRunMessage, rideNotRun, rideSourceIds, rideWorking } from './ride-working.ts';
+import { NOT_RUN_FIX, notRunMessage, notRunReason, rideNotRun, rideSourceIds, rideWorking } from './ride-working.ts';
 
 const LIMITS = {
   airborne_ms: { direction: 'max', unit: 'ms' },
@@ -66,7 +66,7 @@ export const crewAirborne = defineRule({
   messages: {
     stays: { code: 2801, text: '{role} stays on the floor over the {case}: off it {airborne:ms} in all (limit {airborneLimit:ms}), at most {lift:mm} above it (limit {liftLimit:mm}); peak floor force {dlf:1} × their weight.' },
     leaves: { code: 2802, text: '{role} leaves the floor over the {case}: off it {airborne:ms} in all (limit {airborneLimit:ms}), at most {lift:mm} above it (limit {liftLimit:mm}); peak floor force {dlf:1} × their weight on landing.' },
-    notComputed: { code: 2803, text: 'The ride model could not be run for the {case}: the floor model did not settle (see floor.convergence).' },
+    notComputed: { code: 2803, text: 'The ride model could not be run for the {case}: {reason}.' },
     notRun: notRunMessage(2804, 'whether the crew stay on the floor over rough ground and at the stone'),
     stoneHeld: { code: 2805, text: '{role} keeps their footing at the {case}: off the floor {airborne:ms} in all (limit {airborneLimit:ms}), at most {lift:mm} above it (limit {liftLimit:mm}); peak floor force {dlf:1} × their weight.' },
     stoneThrown: { code: 2806, text: '{role} is thrown off the floor at the {case}: off it {airborne:ms} in all (limit {airborneLimit:ms}), at most {lift:mm} above it (limit {liftLimit:mm}); peak floor force {dlf:1} × their weight on landing.' },
@@ -106,7 +106,7 @@ export const crewAirborne = defineRule({
       const stone = rides[roadCase('stone', shape)];
       rough.crew.forEach((c, i) => {
         if (!finite(c)) {
-          ctx.report({ subject: `crew.${i}.${rough.case}`, label: `${c.role}, ${rough.title}`, load_case: 'rough-ground', combination: 'characteristic', message: 'notComputed', params: { case: rough.title }, severity: 'fail', fix: 'Fix what stops the floor model (see floor.convergence), then check again.', working: rideWorking(rough) });
+          ctx.report({ subject: `crew.${i}.${rough.case}`, label: `${c.role}, ${rough.title}`, load_case: 'rough-ground', combination: 'characteristic', message: 'notComputed', params: { case: rough.title, reason: notRunReason(rough) }, severity: 'fail', fix: NOT_RUN_FIX, working: rideWorking(rough) });
           return;
         }
         const s = stone.crew[i];

@@ -2,7 +2,7 @@ import { param } from '../../data/param.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
 import { withinLimit } from '../within-limit.ts';
-import { notRunMessage, rideNotRun, rideSourceIds, rideWorking } from './ride-working.ts';
+import { NOT_RUN_FIX, notRunMessage, rideNotRun, rideSourceIds, rideWorking } from './ride-working.ts';
 
 export const rideDecay = defineRule({
   id: 'ride.decay',
@@ -19,6 +19,7 @@ export const rideDecay = defineRule({
     slow: { code: 2812, text: "After the drop test the crew's motion takes {value:1} cycles to fall below {fraction:%} of its first amplitude, more than {limit:1}; floor damping ratio {zeta:1} ({zetaSource})." },
     unsettled: { code: 2813, text: "After the drop test the crew's motion does not fall below {fraction:%} of its first amplitude within the run; floor damping ratio {zeta:1} ({zetaSource})." },
     notRun: notRunMessage(2814, "how fast the crew's motion dies out"),
+    notComputed: { code: 2815, text: 'The ride model could not run the drop test: {reason}.' },
   },
   run(ctx) {
     const rides = ctx.models.ride;
@@ -26,6 +27,11 @@ export const rideDecay = defineRule({
     const lim = ctx.limit('cycles');
     const fraction = param(ctx.data, 'ride.inputs', 'decay_fraction');
     const r = rides.drop;
+    if (r.stopped) {
+      // The rule's worst is a warning: the crew rule fails the same build where the road cases could not run either.
+      ctx.report({ subject: 'ride.drop', label: `crew, ${r.title}`, message: 'notComputed', params: { reason: r.stopped }, severity: 'warning', load_case: 'drop', combination: 'characteristic', fix: NOT_RUN_FIX, working: rideWorking(r) });
+      return;
+    }
     const cycles = r.decayCycles;
     const slow = cycles === null || !withinLimit(cycles, lim);
     // The tuner runs many simulations: it is asked only where the decay is slow.

@@ -10,9 +10,14 @@ import type { CheckedSpecification } from '../../spec/spec.types.ts';
 // What the ride rules share: the ride model's working and the sources of its
 // data, and the finding for a run in which the ride model was not started.
 
+/** Why a case gave no finite measure: the ride model's own reason, or the floor's (its stiffness unknown). */
+export const notRunReason = (r: RideResult): string => r.stopped ?? 'the ride model gave no finite value (see floor.convergence)';
+
+export const NOT_RUN_FIX = 'Fix what stops the model (the reason above; see floor.convergence for the floor), then check again.';
+
 /** The ride model's parameters and method, for a finding's working. */
 export function rideWorking(r: RideResult): string[] {
-  return [`ride model (design basis, section 8), ${r.title}:`, ...r.working, `integration: ${r.method}, ${r.steps} steps`];
+  return [`ride model (design basis, section 8), ${r.title}:`, ...r.working, r.stopped ? `integration: not run: ${r.stopped}` : `integration: ${r.method}, ${r.steps} steps`];
 }
 
 /** Ids of the sources of the ride model's parameters this build reads in one case (rules/parameters/ride.yaml). */

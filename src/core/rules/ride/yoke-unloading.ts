@@ -3,7 +3,7 @@ import { defineRule } from '../../pipeline/define-rule.ts';
 import { step } from '../../pipeline/step.ts';
 import { ROAD_SHAPES, roadCase, type RideResult } from '../../ride/ride-types.ts';
 import { withinLimit } from '../within-limit.ts';
-import { notRunMessage, rideNotRun, rideSourceIds, rideWorking } from './ride-working.ts';
+import { NOT_RUN_FIX, notRunMessage, notRunReason, rideNotRun, rideSourceIds, rideWorking } from './ride-working.ts';
 
 const yokeSteps = (r: RideResult) => [
   ...rideWorking(r),
@@ -29,7 +29,7 @@ export const yokeUnloading = defineRule({
   messages: {
     holds: { code: 2821, text: 'Over the {case} the yoke force stays between {value:N} and {max:N} (standing {static:N}): the pole never pulls the yoke up on the necks.' },
     lifts: { code: 2822, text: 'Over the {case} the yoke force falls to {value:N}, below {limit:N} (standing {static:N}, peak {max:N}): the pole pulls the yoke up on the necks.' },
-    notComputed: { code: 2823, text: 'The yoke force over the {case} could not be found: the ride model gave no finite force.' },
+    notComputed: { code: 2823, text: 'The yoke force over the {case} could not be found: {reason}.' },
     notRun: notRunMessage(2824, 'the yoke force over rough ground and at the stone'),
     stoneHolds: { code: 2825, text: 'At the {case} the yoke force falls to {value:N} (standing {static:N}, peak {max:N}), lower than over rough ground, but the pole still rests on the yoke.' },
     stoneJerks: { code: 2826, text: 'At the {case} the yoke force falls to {value:N}, below {limit:N} (standing {static:N}, peak {max:N}): the pole jerks the yoke up on the necks for a moment.' },
@@ -44,7 +44,7 @@ export const yokeUnloading = defineRule({
       const s = rides[roadCase('stone', shape)];
       const common = { subject: `ride.${r.case}`, label: r.title, unit: 'N', sources: rideSourceIds(ctx.data, ctx.spec, r.case), load_case: 'rough-ground', combination: 'characteristic' as const };
       if (!Number.isFinite(r.yokeForceMin_N)) {
-        ctx.report({ ...common, message: 'notComputed', params: { case: r.title }, severity: 'warning', fix: 'Fix what stops the ride model (see floor.convergence), then check again.', working: yokeSteps(r) });
+        ctx.report({ ...common, message: 'notComputed', params: { case: r.title, reason: notRunReason(r) }, severity: 'warning', fix: NOT_RUN_FIX, working: rideWorking(r) });
         continue;
       }
       const apart = Number.isFinite(s.yokeForceMin_N) && s.yokeForceMin_N < r.yokeForceMin_N;

@@ -5,8 +5,8 @@ import { timberStrength } from '../../model/timber/design-strength.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
 import { strengthCheck, stressReport, type CaseCheck, type Working } from '../member/member-finding.ts';
-import { STRESS_MESSAGES } from '../member/member-messages.ts';
-import { placeOf, ringIntro } from './ring-working.ts';
+import { NOT_CHECKED_MESSAGE, STRESS_MESSAGES } from '../member/member-messages.ts';
+import { placeOf, ringIntro, ringUnsettled, ringUnsettledReport } from './ring-working.ts';
 
 /** The rim's forces at a joint: the largest moment, shear and hoop force in size over the contact positions, each with where it arose. */
 interface JointForces {
@@ -42,7 +42,7 @@ export const felloeJoint = defineRule({
   needs: ['mass', 'memberCases'],
   limits: { utilisation: { direction: 'max', unit: 'of the design strength' } },
   params: ['end_friction'],
-  messages: STRESS_MESSAGES,
+  messages: { ...STRESS_MESSAGES, ...NOT_CHECKED_MESSAGE },
   run(ctx) {
     const { spec, data } = ctx;
     const lay = ctx.models.mass.layout;
@@ -52,6 +52,8 @@ export const felloeJoint = defineRule({
     const ws = wheelRingSpec(spec, data, lay);
     const cases = ctx.models.memberCases;
     const scans = scanWheelRing(ws, cases.map((c) => c.wheel_N));
+    const unsettled = ringUnsettled(scans);
+    if (unsettled) return ctx.report(ringUnsettledReport('wheel.felloe.joint', 'felloe joint', 'felloe joint', unsettled, ringIntro(spec, lay, ws)));
     const d = joint.diameter_mm;
     const n = joint.count;
     const shear = timberStrength(data, part, 'shear', M);

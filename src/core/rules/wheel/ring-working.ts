@@ -41,3 +41,23 @@ export function placeOf(p: LoadPosition, node: number): string {
   const off = a > 180 ? a - 360 : a;
   return `${p.label}, ${Math.abs(off) < 1e-6 ? 'at the contact' : `${num(Math.abs(off))}° round the rim from the contact`}`;
 }
+
+/** The first ring solution whose slack-spoke search did not settle, as a reason, or null. */
+export function ringUnsettled(scans: readonly (readonly LoadPosition[])[]): string | null {
+  for (const row of scans) for (const p of row) if (p.result.unsettled) return `the wheel's ring model, ${p.label}: ${p.result.unsettled}`;
+  return null;
+}
+
+/** A ring rule's finding where the ring model did not settle: the part is not shown safe. */
+export function ringUnsettledReport(subject: string, label: string, part: string, reason: string, intro: Working[]) {
+  return {
+    subject,
+    label,
+    message: 'notChecked' as const,
+    params: { part, reason },
+    severity: 'fail' as const,
+    fix: 'Check the wheel by hand or change its build (spokes, felloe section, tyre); the ring model could not find which spokes bear.',
+    working: [...intro, reason],
+  };
+}
+

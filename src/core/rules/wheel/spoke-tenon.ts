@@ -5,8 +5,8 @@ import { navePart, timberPart } from '../../model/timber/timber-part.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
 import { strengthCheck, stressReport, type CaseCheck } from '../member/member-finding.ts';
-import { STRESS_MESSAGES } from '../member/member-messages.ts';
-import { ringIntro } from './ring-working.ts';
+import { NOT_CHECKED_MESSAGE, STRESS_MESSAGES } from '../member/member-messages.ts';
+import { ringIntro, ringUnsettled, ringUnsettledReport } from './ring-working.ts';
 
 /** The largest spoke force over the contact positions, with where it arose. */
 function largestSpokeForce(scan: readonly LoadPosition[]): { F: number; p: LoadPosition } {
@@ -28,7 +28,7 @@ export const spokeTenon = defineRule({
   needs: ['mass', 'memberCases'],
   limits: { utilisation: { direction: 'max', unit: 'of the design strength' } },
   params: ['tenon_thickness_fraction', 'bearing_extension_mm'],
-  messages: STRESS_MESSAGES,
+  messages: { ...STRESS_MESSAGES, ...NOT_CHECKED_MESSAGE },
   run(ctx) {
     const { spec, data } = ctx;
     const lay = ctx.models.mass.layout;
@@ -37,6 +37,8 @@ export const spokeTenon = defineRule({
     const ws = wheelRingSpec(spec, data, lay);
     const cases = ctx.models.memberCases;
     const scans = scanWheelRing(ws, cases.map((c) => c.wheel_N));
+    const unsettled = ringUnsettled(scans);
+    if (unsettled) return ctx.report(ringUnsettledReport('wheel.spoke.tenon', 'spoke tenon and shoulders', 'spoke tenon', unsettled, ringIntro(spec, lay, ws)));
     const frac = ctx.param('tenon_thickness_fraction');
     const ext = ctx.param('bearing_extension_mm');
     const { width_mm: b, thickness_mm: t } = w.spoke;
