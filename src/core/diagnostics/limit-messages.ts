@@ -5,7 +5,7 @@ import type { InputIssue, KeyPath } from '../spec/input-issue.ts';
 
 export const LIMIT_MESSAGES = {
   stockTooManyPieces: { code: 1240, text: 'the pieces to cut total {count}; allowed: at most {max} in one plan (plan the job in parts).' },
-  strapPitchWide: { code: 1241, text: 'the strap pitch {value} mm leaves fewer than two straps across the floor ({span} mm {across}); allowed: at most {max} mm.' },
+  strapPitchWide: { code: 1241, text: 'the strap pitch {value} mm leaves no strap across the floor ({span} mm {across}); allowed: less than {max} mm.' },
 } as const;
 
 export type LimitMessageKey = keyof typeof LIMIT_MESSAGES;

@@ -76,9 +76,9 @@ function geometry(spec: CheckedSpecification, out: InputIssue[]): void {
   const maxCorner = Math.min(depth + fw, (width + fw) / 2); // two front corners: each fits the depth, both the width
   if ((floor.frame.bend_radius_mm ?? 0) > maxCorner) out.push(issue(['box', 'floor', 'frame', 'bend_radius_mm'], 'frameCornerTight', { value: floor.frame.bend_radius_mm!, max: maxCorner }));
   if (spec.floor_straps.pitch_mm < spec.floor_straps.width_mm) out.push(issue(['floor_straps', 'pitch_mm'], 'strapPitch', { value: spec.floor_straps.pitch_mm, min: spec.floor_straps.width_mm }));
-  // Two straps each way at least, or the weave has no crossing to stand on (the floor model would have no node).
+  // A strap each way at least, or the weave has no crossing to stand on (the floor model would have no node).
   const [span, across] = depth <= width ? [depth, 'deep'] : [width, 'wide'];
-  if (spec.floor_straps.pitch_mm > span / 2) out.push(limitIssue(['floor_straps', 'pitch_mm'], 'strapPitchWide', { value: spec.floor_straps.pitch_mm, span, across, max: span / 2 }));
+  if (spec.floor_straps.pitch_mm >= span) out.push(limitIssue(['floor_straps', 'pitch_mm'], 'strapPitchWide', { value: spec.floor_straps.pitch_mm, span, across, max: span }));
   const margin = floor.usable_margin_mm;
   if (margin * 2 >= Math.min(depth, width)) out.push(issue(['box', 'floor', 'usable_margin_mm'], 'marginTooWide', { value: margin, max: Math.min(depth, width) / 2 }));
   spec.loads.forEach((l, i) => {
