@@ -435,3 +435,12 @@ describe('what the result cannot vouch for', () => {
     expect(markdownOf(r)).not.toContain('Figure not given');
   });
 });
+
+describe('numbers a model could not reach', () => {
+  it('a table cell holds none, never NaN or Infinity', async () => {
+    const { numberCell } = await import('../src/render/model/cells.ts');
+    expect(numberCell(Number.NaN, 'mm')).toMatchObject({ value: null });
+    expect(numberCell(Number.POSITIVE_INFINITY, 'N')).toMatchObject({ value: null });
+    expect(numberCell(12.5, 'mm')).toMatchObject({ value: 12.5 });
+  });
+});

@@ -8,7 +8,8 @@ import { runsText } from './runs-text.ts';
 export const textCell = (text: string, mark?: 'strong' | 'em'): Cell => (mark ? { kind: 'text', text, mark } : { kind: 'text', text });
 
 export function numberCell(value: number | null, unit: string, o: { none?: string; sig?: number } = {}): Cell {
-  return { kind: 'number', value, unit, ...o };
+  // A number a model could not reach (a ride case not run) is shown as none, never as NaN or Infinity.
+  return { kind: 'number', value: value !== null && Number.isFinite(value) ? value : null, unit, ...o };
 }
 
 export const percentCell = (value: number | null): Cell => ({ kind: 'percent', value });
