@@ -1,6 +1,7 @@
 import type { RulesData } from '../data/rules-data.ts';
 import type { InputKey } from '../pipeline/read-tracer.ts';
 import type { SpecEntry } from '../spec/spec-entry.ts';
+import { pathText } from '../spec/input-issue.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { builderEstimate } from './builder-estimates.ts';
 
@@ -69,7 +70,7 @@ export function inputInfo(key: InputKey, spec: CheckedSpecification, entries: re
     const value = at(spec, path);
     if (typeof value !== 'number') return null;
     const dotted = path.join('.');
-    const entry = entries.find((e) => e.path === entryPath(path));
+    const entry = entries.find((e) => e.path === pathText(path));
     const status: InputStatus | null = entry?.defaulted ? 'defaulted' : builderEstimate(dotted) ? 'given' : null;
     return status && { key, input: dotted, origin: 'spec', value, unit: entry?.unit ?? '', status };
   }
@@ -78,9 +79,6 @@ export function inputInfo(key: InputKey, spec: CheckedSpecification, entries: re
   if (typeof value !== 'number' || !Array.isArray(holder?.sources) || !holder.sources.includes('from-memory')) return null;
   return { key, input: dataAddress(data, path), origin: 'data', value, unit: dataUnit(data, path), status: 'from-memory' };
 }
-
-/** The spec entries' path form: list indices in brackets (`crew[0].x_mm`). */
-const entryPath = (path: Path) => path.map((p, i) => (typeof p === 'number' ? `[${p}]` : i === 0 ? p : `.${p}`)).join('');
 
 /** The specification and data with one input changed. */
 export function withInput(key: InputKey, value: number, spec: CheckedSpecification, data: RulesData): { spec: CheckedSpecification; data: RulesData } {
