@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { CORE_MESSAGES } from '../../src/core/diagnostics/core-messages.ts';
 import { MESSAGES } from '../../src/core/diagnostics/messages.ts';
-import { LIMIT_MESSAGES } from '../../src/core/diagnostics/limit-messages.ts';
 import { literalText, placeholders } from '../../src/core/format/template.ts';
 import { RULES } from '../../src/core/rules/index.ts';
 
@@ -15,7 +14,6 @@ describe('messages', () => {
     const all = [
       ...Object.entries(MESSAGES).map(([k, m]) => ({ where: k, code: m.code, text: m.text })),
       ...Object.entries(CORE_MESSAGES).map(([k, m]) => ({ where: k, code: m.code, text: m.text })),
-      ...Object.entries(LIMIT_MESSAGES).map(([k, m]) => ({ where: k, code: m.code, text: m.text })),
       ...ruleMessages,
     ];
     const texts = new Map<number, Map<string, string>>();

@@ -63,6 +63,9 @@ export const MESSAGES = {
   poleBendTight: { code: 1120, text: 'the yoke point lies inside the pole\'s bend circle: a bend of radius {value} mm cannot rise from the root to the yoke; allowed: a radius below {max} mm.' },
   wheelTooSmall: { code: 1121, text: 'the wheel has no room for spokes: radius {radius} mm less felloe depth {felloe} mm is not more than the nave radius {nave} mm.' },
   frameCornerTight: { code: 1122, text: 'the frame corner radius {value} mm is too large for the frame; allowed: at most {max} mm (the depth of the frame and half its width, on the rail centre line).' },
+  // Inputs too large for the tool to work through in its time and memory (not wrong, only more than a chariot or a workshop needs).
+  stockTooManyPieces: { code: 1240, text: 'the pieces to cut total {count}; allowed: at most {max} in one plan (plan the job in parts).' },
+  strapPitchWide: { code: 1241, text: 'the strap pitch {value} mm leaves no strap across the floor ({span} mm {across}); allowed: less than {max} mm.' },
   strapPitch: { code: 1124, text: 'the strap pitch {value} mm is less than the strap width {min} mm; the straps would overlap.' },
   marginTooWide: { code: 1125, text: 'the usable margin {value} mm leaves no usable floor; allowed: less than {max} mm (half the floor depth and width).' },
   poleRootOutsideBox: { code: 1126, text: 'the pole {key} at {value} mm is not under the box; allowed: {min} to {max} mm.' },

@@ -6,7 +6,6 @@ import { formIssues } from './form-checks.ts';
 import { formIssue } from './form-messages.ts';
 import { horseIssues } from './horse-checks.ts';
 import { issue, type InputIssue, type KeyPath } from './input-issue.ts';
-import { limitIssue } from '../diagnostics/limit-messages.ts';
 
 // Checks across fields that a JSON Schema cannot express. They run on a spec
 // that passed the schema, with defaults filled.
@@ -78,7 +77,7 @@ function geometry(spec: CheckedSpecification, out: InputIssue[]): void {
   if (spec.floor_straps.pitch_mm < spec.floor_straps.width_mm) out.push(issue(['floor_straps', 'pitch_mm'], 'strapPitch', { value: spec.floor_straps.pitch_mm, min: spec.floor_straps.width_mm }));
   // A strap each way at least, or the weave has no crossing to stand on (the floor model would have no node).
   const [span, across] = depth <= width ? [depth, 'deep'] : [width, 'wide'];
-  if (spec.floor_straps.pitch_mm >= span) out.push(limitIssue(['floor_straps', 'pitch_mm'], 'strapPitchWide', { value: spec.floor_straps.pitch_mm, span, across, max: span }));
+  if (spec.floor_straps.pitch_mm >= span) out.push(issue(['floor_straps', 'pitch_mm'], 'strapPitchWide', { value: spec.floor_straps.pitch_mm, span, across, max: span }));
   const margin = floor.usable_margin_mm;
   if (margin * 2 >= Math.min(depth, width)) out.push(issue(['box', 'floor', 'usable_margin_mm'], 'marginTooWide', { value: margin, max: Math.min(depth, width) / 2 }));
   spec.loads.forEach((l, i) => {

@@ -1,5 +1,4 @@
 import { issue, pathText, type InputIssue } from '../spec/input-issue.ts';
-import { limitIssue } from '../diagnostics/limit-messages.ts';
 import { schemaIssues } from '../spec/validate-schema.ts';
 import type { CuttingInstance, StockLength } from './cutting-types.ts';
 import schema from './instance.schema.json' with { type: 'json' };
@@ -33,7 +32,7 @@ export const MAX_PIECES = 100_000;
 
 function countIssues(inst: CuttingInstance): InputIssue[] {
   const count = inst.pieces.reduce((n, p) => n + p.quantity, 0);
-  return count > MAX_PIECES ? [limitIssue(['pieces'], 'stockTooManyPieces', { count, max: MAX_PIECES })] : [];
+  return count > MAX_PIECES ? [issue(['pieces'], 'stockTooManyPieces', { count, max: MAX_PIECES })] : [];
 }
 
 // A single piece needs no kerf (its one cut may be the stock's end), so it
