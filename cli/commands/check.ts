@@ -3,10 +3,12 @@ import { readSpec } from '../../src/node/read-spec.ts';
 import { OutputIsInputError } from '../../src/node/atomic-write.ts';
 import { resultJson, writeOutputs } from '../../src/node/write-outputs.ts';
 import { pdfPrinter, type PdfPrinter } from '../../src/node/pdf-printer.ts';
-import { drawHere } from '../../src/render/report-plots.ts';
+import { startPlotThread } from '../../src/node/plot-thread.ts';
 import { runCheck } from '../../src/core/pipeline/run-check.ts';
 import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
-import { prepareSpec } from '../../src/core/spec/prepare.ts';
+import { prepareSpec, type Prepared } from '../../src/core/spec/prepare.ts';
+import type { RulesData } from '../../src/core/data/rules-data.ts';
+import type { PlotDrawer } from '../../src/render/report-plots.ts';
 import type { Console } from '../console.ts';
 import { EXIT, exitOfVerdict } from '../exit-codes.ts';
 import { formatIssues } from '../format-issues.ts';
@@ -47,14 +49,24 @@ export async function checkCommand(file: string, opts: CheckOptions, con: Consol
     con.err(formatIssues(file, prepared.issues, read.locate));
     return EXIT.badInput;
   }
+  // Started now, the plot thread loads its library while the check runs.
+  const plots = startPlotThread();
+  try {
+    return await checkAndWrite(file, input, read.raw, prepared, data, opts, con, plots.draw);
+  } finally {
+    await plots.close();
+  }
+}
+
+async function checkAndWrite(file: string, input: string, raw: unknown, prepared: Extract<Prepared, { ok: true }>, data: RulesData, opts: CheckOptions, con: Console, draw: PlotDrawer): Promise<number> {
   // The solver is loaded only once the spec is known to be good.
   const result = runCheck(prepared.spec, prepared.entries, data, { lp: await loadLpSolver(), decisive: opts.decisive });
-  result.input = read.raw;
+  result.input = raw;
   const dir = resolve(con.cwd, opts.out ?? join('axletree-out', basename(file, extname(file))));
   let written: string[];
   const printer = await printerFor(opts, con);
   try {
-    written = await writeOutputs(result, dir, input, drawHere, { teach: opts.teach, printer });
+    written = await writeOutputs(result, dir, input, draw, { teach: opts.teach, printer });
   } catch (e) {
     if (e instanceof OutputIsInputError) {
       con.err(`axletree: ${e.message}; choose another --out directory.\n`);

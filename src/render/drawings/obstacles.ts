@@ -21,7 +21,7 @@ export function hits(b: Box, o: Obstacle): boolean {
     case 'box':
       return b.x < o.box.x + o.box.w && o.box.x < b.x + b.w && b.y < o.box.y + o.box.h && o.box.y < b.y + b.h;
     case 'segment':
-      return segmentCrossesBox(o.p, o.q, { x: b.x - o.pad, y: b.y - o.pad, w: b.w + 2 * o.pad, h: b.h + 2 * o.pad });
+      return segmentCrossesRect(o.p, o.q, b.x - o.pad, b.y - o.pad, b.x + b.w + o.pad, b.y + b.h + o.pad);
     case 'ring':
       return nearest(b, o.c) <= o.r + o.pad && farthest(b, o.c) >= o.r - o.pad;
     case 'disc':
@@ -44,26 +44,28 @@ function farthest(b: Box, c: Pt): number {
 
 /** True where any part of the segment pq lies in the box (Liang-Barsky clipping). */
 export function segmentCrossesBox(p: Pt, q: Pt, b: Box): boolean {
-  const d = [q[0] - p[0], q[1] - p[1]];
+  return segmentCrossesRect(p, q, b.x, b.y, b.x + b.w, b.y + b.h);
+}
+
+/**
+ * The same for the rectangle x0..x1, y0..y1, without allocating: label
+ * placement asks it for every candidate against every line of a drawing.
+ */
+function segmentCrossesRect(p: Pt, q: Pt, x0: number, y0: number, x1: number, y1: number): boolean {
+  // Most segments lie wholly to one side of a small label box.
+  if (Math.max(p[0], q[0]) < x0 || Math.min(p[0], q[0]) > x1 || Math.max(p[1], q[1]) < y0 || Math.min(p[1], q[1]) > y1) return false;
+  const dx = q[0] - p[0];
+  const dy = q[1] - p[1];
   let lo = 0;
   let hi = 1;
-  const edges: [number, number][] = [
-    [-d[0], p[0] - b.x],
-    [d[0], b.x + b.w - p[0]],
-    [-d[1], p[1] - b.y],
-    [d[1], b.y + b.h - p[1]],
-  ];
-  for (const [den, num] of edges) {
-    if (den === 0) {
-      if (num < 0) return false;
-      continue;
-    }
+  const clip = (den: number, num: number): boolean => {
+    if (den === 0) return num >= 0;
     const t = num / den;
     if (den < 0) lo = Math.max(lo, t);
     else hi = Math.min(hi, t);
-    if (lo > hi) return false;
-  }
-  return true;
+    return lo <= hi;
+  };
+  return clip(-dx, p[0] - x0) && clip(dx, x1 - p[0]) && clip(-dy, p[1] - y0) && clip(dy, y1 - p[1]);
 }
 
 /** An arc of radius r about c from angle a0 to a1 (radians, SVG's y down), as segments. */

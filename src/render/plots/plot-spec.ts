@@ -2,7 +2,7 @@
 // points and the horizontal and vertical reference lines, all sharing one
 // legend keyed by label (colour and dash together, series-style.ts). The y
 // axis holds every value drawn with a little room above and below, so no line
-// runs along the frame. Pure: the chart is data; src/render/plots/vega-svg.ts
+// runs along the frame. Pure: the chart is data; src/render/plots/vega-svg.mjs
 // draws it.
 
 import type { TopLevelSpec } from 'vega-lite';
