@@ -1,0 +1,33 @@
+// Peak memory of whole commands: the resident set at its highest over the
+// process's life (the plot thread's included), beside bare node's.
+// Target: `axletree check <demo> --json` under 150 MiB.
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { verdict } from './median.ts';
+
+const ROOT = fileURLToPath(new URL('..', import.meta.url));
+const PEAK = fileURLToPath(new URL('peak-rss.mjs', import.meta.url));
+export const MEMORY_TARGET_MIB = 150;
+
+function peakMiB(args: string[], cwd: string): number {
+  const r = spawnSync(process.execPath, ['--import', PEAK, ...args], { cwd, encoding: 'utf8', maxBuffer: 64 * 2 ** 20 });
+  const kb = /peak-rss-kb (\d+)\s*$/.exec(r.stderr);
+  if (!kb || r.status === null || r.status > 1) throw new Error(`node ${args.join(' ')} exited ${r.status}: ${r.stderr.slice(-400)}`);
+  return Number(kb[1]) / 1024;
+}
+
+export function benchMemory(): number {
+  const cwd = mkdtempSync(join(tmpdir(), 'axletree-memory-'));
+  try {
+    const node = peakMiB(['-e', '0'], cwd);
+    const check = Math.max(...[0, 1, 2].map(() => peakMiB([join(ROOT, 'bin', 'axletree.mjs'), 'check', join(ROOT, 'specs', 'demo-two-crew.yaml'), '--json', '--no-decisive'], cwd)));
+    const ok = check < MEMORY_TARGET_MIB;
+    console.log(`peak memory, whole processes: node -e 0 ${node.toFixed(0)} MiB; axletree check specs/demo-two-crew.yaml --json --no-decisive ${check.toFixed(0)} MiB (worst of 3, ${(check / node).toFixed(1)}x node)  target < ${MEMORY_TARGET_MIB} MiB ${verdict(ok)}`);
+    return ok ? 0 : 1;
+  } finally {
+    rmSync(cwd, { recursive: true, force: true });
+  }
+}
