@@ -6,10 +6,6 @@
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import { setFlagsFromString } from 'node:v8';
 
-// A check allocates many short-lived arrays (the ride model, the plots): a
-// larger young generation collects them less often (measured: about 4 % of a
-// demo check's time).
-setFlagsFromString('--max-semi-space-size=32');
 // The LP solver is 3.5 MB of WebAssembly; optimising its hot functions costs
 // about 80 MB and half a second of CPU, and a check's small LPs never repay it
 // (measured on the demo: peak memory 345 -> 255 MB, CPU 3.1 -> 2.6 s). The
