@@ -39,7 +39,7 @@ export function columnGeneration(p: CuttingProblem, lp: LpSolver, meter: WorkMet
     const bound = root?.bound ?? null;
     const target = bound !== null ? roundUpBound(bound, p.step) : -Infinity;
     if (objective() > target + 1e-9) dive(p, master, { best: objective(), target, offer: (bins) => offer(bins, 'column generation + diving, the residual by first-fit', true) });
-    if (objective() > target + 1e-9 && !meter.exhausted()) {
+    if (objective() > target + 1e-9 && !meter.exhausted('mipNodes')) {
       master.restore();
       if (best) master.include(best.bins);
       offer(master.mip(best?.bins ?? null), 'column generation + MIP');

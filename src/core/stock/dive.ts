@@ -31,7 +31,7 @@ export interface DiveOptions {
  */
 export function dive(p: CuttingProblem, master: PatternMaster, opts: DiveOptions): void {
   let best = opts.best;
-  const done = () => best <= opts.target + 1e-9 || master.meter.exhausted();
+  const done = () => best <= opts.target + 1e-9 || master.meter.exhausted('diveNodes');
   const visit = (fixed: Bin[], discrepancies: number, tabu: Set<string>): void => {
     master.meter.spend('diveNodes', 1);
     master.reduce(...residual(p, fixed));

@@ -27,7 +27,7 @@ export function solveExactly(p: CuttingProblem, lp: LpSolver, method: ExactMetho
   const cg = columnGeneration(p, lp, meter, start);
   const objective = cg.bins ? binsObjective(p, cg.bins) : Infinity;
   if (cg.lowerBound !== null && objective <= roundUpBound(cg.lowerBound, p.step) + 1e-9) return cg;
-  if (meter.exhausted()) return cg;
+  if (meter.exhausted('mipNodes')) return cg;
   const g = arcFlowGraph(p);
   if (g.arcs.length > ARC_PROOF_MAX_ARCS) return cg;
   const af = arcFlow(p, lp, meter, cg.bins ?? start, g);
