@@ -67,7 +67,7 @@ function benchSet(lp: LpSolver, name: string, set: BinPacking[], rows: boolean):
       console.log(`    ${r.b.name}: target ${r.b.target}, planned ${r.plan.pieces_used}, LP bound ${r.plan.lp_bound} (${r.plan.lp_value}), first-fit ${r.ffd}, CPU ${seconds(r.cpu_s)}, ${r.plan.method}${r.problems.length ? `; INVALID: ${r.problems[0]}` : ''}`);
   const checks = [atTarget === n, maxCpu < TARGET_CPU_S, maxGap <= TARGET_LP_GAP];
   console.log(
-    `  ${name} (${n} instances): at the target on ${atTarget}/${n} (target ${n}/${n}) ${verdict(checks[0])}; ` +
+    `  ${name}, ${n} instances: at the target on ${atTarget}/${n} (target ${n}/${n}) ${verdict(checks[0])}; ` +
       `CPU per instance max ${seconds(maxCpu)} (target < ${seconds(TARGET_CPU_S)}) ${verdict(checks[1])}, mean ${seconds(meanCpu)}; ` +
       `largest LP gap ${maxGap} (target <= ${TARGET_LP_GAP}) ${verdict(checks[2])}${invalid.length ? `; ${invalid.length} INVALID plans` : ''}`,
   );
@@ -82,8 +82,8 @@ export async function benchStockPlanner(rows = false): Promise<number> {
   planCutting(asInstance(generatedBinPacking('warm', 120, 1, 1)[0]), lp);
   let missed = 0;
   for (const [file, name] of [
-    ['orlib-binpack1.txt', 'u120 (OR-Library, Falkenauer 1996; optimum)'],
-    ['orlib-binpack2.txt', 'u250 (OR-Library, Falkenauer 1996; optimum)'],
+    ['orlib-binpack1.txt', 'u120 (OR-Library, Falkenauer 1996; target the optimum)'],
+    ['orlib-binpack2.txt', 'u250 (OR-Library, Falkenauer 1996; target the optimum)'],
   ]) {
     if (hasOrLibrary(file)) missed += benchSet(lp, name, readOrLibrary(file), rows);
     else console.log(`  ${name}: ${file} is not in ${fileURLToPath(DATA)} (kept outside the repository); set skipped`);
