@@ -44,7 +44,7 @@ describe('stock bars', () => {
       species: 'white-ash',
       section: { width_mm: 50, thickness_mm: 50 },
       plan: {
-        pieces_used: 2, cost: null, lower_bound: 1.4, optimal: true, gap: 0, patterns: [PATTERN],
+        pieces_used: 2, cost: null, lower_bound: 1.4, optimal: true, gap: 0, lp_value: null, lp_bound: null, lp_gap: null, patterns: [PATTERN],
         bought: [{ length_mm: 1000, count: 2, cost: null }], waste_mm: 600, waste_pct: 30, method: 'test', baseline: { pieces_used: 2, cost: null },
       },
     };

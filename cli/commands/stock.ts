@@ -74,6 +74,12 @@ export async function stockCommand(file: string, opts: StockOptions, con: Consol
   return EXIT.ok;
 }
 
+/** The LP bound rounded up to a whole step, and how far the plan is above it (none where no LP was solved). */
+function roundedText(plan: CuttingPlan): string {
+  if (plan.lp_bound === null || plan.lp_gap === null) return '';
+  return ` (rounded up ${formatNumber(plan.lp_bound, 'currency')}; the plan ${formatNumber(plan.lp_gap, 'currency')} above it)`;
+}
+
 function planTable(plan: CuttingPlan): string {
   const rows = plan.patterns.map((p) => [String(p.count), formatNumber(p.stock_length_mm, 'mm'), formatNumber(p.offcut_mm, 'mm'), cutsText(p)]);
   const head = ['count', 'stock mm', 'offcut mm', 'cuts, in cutting order'];
@@ -83,7 +89,7 @@ function planTable(plan: CuttingPlan): string {
   return [
     `stock plan: ${plan.pieces_used} stock piece${plan.pieces_used === 1 ? '' : 's'}${cost}; ${plan.optimal ? 'optimal' : 'not proven optimal'}`,
     `buy: ${boughtText(plan)}`,
-    `LP lower bound ${formatNumber(plan.lower_bound, 'currency')}, gap ${gapText(plan)}; waste ${formatNumber(plan.waste_mm, 'mm')} mm (${formatNumber(plan.waste_pct, '%')} %, kerfs and offcuts)`,
+    `LP lower bound ${formatNumber(plan.lower_bound, 'currency')}${roundedText(plan)}, gap ${gapText(plan)}; waste ${formatNumber(plan.waste_mm, 'mm')} mm (${formatNumber(plan.waste_pct, '%')} %, kerfs and offcuts)`,
     `method: ${plan.method}; first-fit decreasing alone: ${baselineText(plan)}`,
     '',
     line(head),

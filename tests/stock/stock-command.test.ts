@@ -33,7 +33,7 @@ describe('axletree stock on a good instance', () => {
     const r = await stock(GOOD, '--json');
     expect(r.code).toBe(0);
     const plan = JSON.parse(r.out);
-    for (const key of ['pieces_used', 'cost', 'lower_bound', 'optimal', 'patterns', 'bought', 'waste_mm', 'waste_pct', 'gap', 'method', 'baseline']) expect(plan).toHaveProperty(key);
+    for (const key of ['pieces_used', 'cost', 'lower_bound', 'optimal', 'patterns', 'bought', 'waste_mm', 'waste_pct', 'gap', 'lp_value', 'lp_bound', 'lp_gap', 'method', 'baseline']) expect(plan).toHaveProperty(key);
     // 14 spokes and 3 felloe blanks are all cut.
     const cut = (label: string) => plan.patterns.reduce((n: number, p: { count: number; cuts: { label: string }[] }) => n + p.count * p.cuts.filter((c) => c.label === label).length, 0);
     expect([cut('spoke'), cut('felloe blank')]).toEqual([14, 3]);

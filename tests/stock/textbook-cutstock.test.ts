@@ -34,6 +34,10 @@ describe.each<CuttingMethod>(['column generation', 'arc flow'])('CUTSTOCK by %s'
     expect(plan.pieces_used).toBe(OPTIMUM);
     expect(plan.optimal).toBe(true);
     expect(plan.gap).toBeCloseTo((OPTIMUM - LP_BOUND) / LP_BOUND, 6);
+    // The LP optimum, its round-up ceil(452.25) = 453 rolls, and the plan 0 rolls above it.
+    expect(plan.lp_value).toBeCloseTo(LP_BOUND, 6);
+    expect(plan.lp_bound).toBe(Math.ceil(LP_BOUND));
+    expect(plan.lp_gap).toBe(OPTIMUM - Math.ceil(LP_BOUND));
     expect(plan.cost).toBeNull();
     expect(plan.bought).toEqual([{ length_mm: 100, count: OPTIMUM, cost: null }]);
     expect(planProblems(CUTSTOCK, plan)).toEqual([]);
@@ -47,6 +51,8 @@ describe.each<CuttingMethod>(['column generation', 'arc flow'])('CUTSTOCK by %s'
 it('first-fit decreasing alone does worse, and says it is not proved', () => {
   const plan = planCutting(CUTSTOCK, undefined);
   expect(plan.method).toBe('first-fit decreasing');
+  // No solver, no LP: no LP bound is claimed.
+  expect([plan.lp_value, plan.lp_bound, plan.lp_gap]).toEqual([null, null, null]);
   expect(plan.pieces_used).toBeGreaterThan(OPTIMUM);
   expect(plan.optimal).toBe(false);
   expect(planProblems(CUTSTOCK, plan)).toEqual([]);

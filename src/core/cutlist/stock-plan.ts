@@ -3,12 +3,9 @@ import type { LpSolver } from '../stock/cutting-types.ts';
 import type { StockPlan } from './cutting-result.ts';
 import type { CuttingGroup, UnservedPart } from './group-parts.ts';
 
-/** Seconds the planner may spend on each group: a check should not wait long for its stock plan. */
-export const GROUP_TIME_LIMIT_S = 2;
-
 /** Solve each group and total the plan; the cost is the sum where every group is priced. */
 export function stockPlan(groups: CuttingGroup[], unserved: UnservedPart[], lp: LpSolver | undefined): StockPlan {
-  const planned = groups.map((g) => ({ species: g.species, section: g.section, plan: planCutting(g.instance, lp, { timeLimit_s: GROUP_TIME_LIMIT_S }) }));
+  const planned = groups.map((g) => ({ species: g.species, section: g.section, plan: planCutting(g.instance, lp) }));
   const bought = planned.reduce((s, g) => s + g.plan.bought.reduce((t, b) => t + b.length_mm * b.count, 0), 0);
   const waste = planned.reduce((s, g) => s + g.plan.waste_mm, 0);
   const priced = planned.length > 0 && planned.every((g) => g.plan.cost !== null);

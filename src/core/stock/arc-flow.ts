@@ -2,16 +2,19 @@ import type { Bin } from './bin.ts';
 import type { CuttingProblem } from './cutting-problem.ts';
 import type { LpSolver } from './cutting-types.ts';
 import { arcFlowGraph, type ArcFlowGraph } from './arc-flow-graph.ts';
-import { buildModel, feasibleValues, isOptimal, runMip, type LpColumn } from './lp-model.ts';
+import { buildModel, feasibleValues, isOptimal, runMip, solveCounted, type LpColumn } from './lp-model.ts';
 import { settleBins } from './settle-bins.ts';
 import type { SolverOutcome } from './solver-outcome.ts';
+import type { WorkMeter } from './work-meter.ts';
 
 // The arc-flow formulation (one MIP over the graph of arc-flow-graph.ts):
 // flow is conserved at every node, each stock leaves at its capacity, each
 // type's arcs carry at least its demand. Its LP relaxation gives the bound;
-// the MIP, solved to optimality, proves the plan.
+// the MIP, solved to optimality, proves the plan (Valerio de Carvalho,
+// Annals of Operations Research 86 (1999)). Its MIP stops at the meter's node
+// limit, never at a time limit.
 
-export function arcFlow(p: CuttingProblem, lp: LpSolver, deadline: number, start: Bin[] | null, g: ArcFlowGraph = arcFlowGraph(p)): SolverOutcome {
+export function arcFlow(p: CuttingProblem, lp: LpSolver, meter: WorkMeter, start: Bin[] | null, g: ArcFlowGraph = arcFlowGraph(p)): SolverOutcome {
   const nodeRow = new Map(g.nodes.map((v, k) => [v, k]));
   const N = g.nodes.length;
   const rows = {
@@ -29,9 +32,9 @@ export function arcFlow(p: CuttingProblem, lp: LpSolver, deadline: number, start
   for (const s of p.stocks) cols.push({ cost: s.weight, upper: s.available, rows: [0, nodeRow.get(s.capacity)!], values: [1, -1] });
   const model = buildModel(lp, rows, cols);
   try {
-    model.run();
+    solveCounted(model, meter);
     const lowerBound = isOptimal(lp, model) ? model.getObjectiveValue() : null;
-    runMip(lp, model, (deadline - lp.now()) / 1000, p.step, start ? startFlow(p, g, start) : undefined);
+    runMip(lp, model, meter, p.step, start ? startFlow(p, g, start) : undefined);
     const x = feasibleValues(lp, model);
     const settled = x ? settleBins(p, decompose(p, g, x, A)) : null;
     const ok = settled !== null && settled.unplaced.length === 0;

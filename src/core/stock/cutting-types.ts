@@ -42,6 +42,17 @@ export interface CuttingPlan {
   optimal: boolean;
   /** (objective − bound) / bound. */
   gap: number;
+  /**
+   * The LP relaxation's optimum (the Gilmore-Gomory pattern LP, or the arc-flow
+   * LP), in the objective's units; null where no LP was solved (no solver,
+   * lengths off the grid, a solver failure). Where the work limit stopped
+   * pricing before the LP converged, Farley's bound from the last duals.
+   */
+  lp_value: number | null;
+  /** lp_value rounded up to the objective's step (whole stock pieces by count): no plan does better. */
+  lp_bound: number | null;
+  /** The plan's objective less lp_bound: stock pieces (or cost) above the LP bound; 0 at the bound. */
+  lp_gap: number | null;
   patterns: CuttingPattern[];
   /** Stock bought, by length. */
   bought: { length_mm: number; count: number; cost: number | null }[];
@@ -53,9 +64,9 @@ export interface CuttingPlan {
   baseline: { pieces_used: number; cost: number | null };
 }
 
-/** The HiGHS module instance (npm `highs`), loaded once at the edge and handed in. */
 /**
- * The LP solver, loaded at the edge and handed in, with the clock its time
- * limits are read from (the core reads no clock of its own).
+ * The LP solver (the HiGHS module of npm `highs`), loaded once at the edge and
+ * handed in. The planner's limits are counted in work (work-meter.ts), so it
+ * needs no clock.
  */
-export type LpSolver = import('highs').Highs & { now(): number };
+export type LpSolver = import('highs').Highs;

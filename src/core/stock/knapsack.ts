@@ -14,8 +14,8 @@ export interface KnapsackBest {
   counts: number[];
 }
 
-/** For each capacity, the most valuable choice whose sizes sum to at most it. */
-export function boundedKnapsack(items: KnapsackItem[], capacities: number[]): KnapsackBest[] {
+/** For each capacity, the most valuable choice whose sizes sum to at most it; `cells` is the table's work. */
+export function boundedKnapsack(items: KnapsackItem[], capacities: number[]): { best: KnapsackBest[]; cells: number } {
   const top = Math.max(0, ...capacities);
   const parts: { item: number; copies: number; size: number; value: number }[] = [];
   items.forEach((it, item) => {
@@ -29,8 +29,10 @@ export function boundedKnapsack(items: KnapsackItem[], capacities: number[]): Kn
   });
   const best = new Float64Array(top + 1);
   const took = parts.map(() => new Uint8Array(top + 1));
+  let cells = 0;
   parts.forEach((part, j) => {
     const row = took[j];
+    cells += top + 1 - part.size;
     for (let c = top; c >= part.size; c--) {
       const v = best[c - part.size] + part.value;
       if (v > best[c] + 1e-12) {
@@ -39,7 +41,7 @@ export function boundedKnapsack(items: KnapsackItem[], capacities: number[]): Kn
       }
     }
   });
-  return capacities.map((cap) => {
+  const answers = capacities.map((cap) => {
     const counts = items.map(() => 0);
     let c = Math.min(cap, top);
     const value = c >= 0 ? best[c] : 0;
@@ -51,4 +53,5 @@ export function boundedKnapsack(items: KnapsackItem[], capacities: number[]): Kn
     }
     return { value, counts };
   });
+  return { best: answers, cells };
 }

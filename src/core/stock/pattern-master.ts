@@ -3,8 +3,9 @@ import type { Bin } from './bin.ts';
 import type { CuttingProblem } from './cutting-problem.ts';
 import type { LpSolver } from './cutting-types.ts';
 import { boundedKnapsack } from './knapsack.ts';
-import { addColumn, buildModel, feasibleValues, runMip, type LpColumn } from './lp-model.ts';
+import { addColumn, buildModel, feasibleValues, runMip, solveCounted, type LpColumn } from './lp-model.ts';
 import { binPattern, patternBin, patternKey, type Pattern } from './pattern.ts';
+import type { WorkMeter } from './work-meter.ts';
 
 // The master problem of column generation over cutting patterns, kept in one
 // HiGHS model that is re-solved warm as columns are added: "at least the
@@ -13,7 +14,7 @@ import { binPattern, patternBin, patternKey, type Pattern } from './pattern.ts';
 // feasible from the start. With the artificials the LP is a relaxation still,
 // so its optimum bounds every plan.
 
-/** Pricing rounds before the LP is taken as it stands (each adds at most one column per stock length; the clock usually stops it first). */
+/** Pricing rounds in one convergence before the LP is taken as it stands (each adds at most one column per stock length). */
 export const MAX_PRICING_ROUNDS = 2000;
 
 export class PatternMaster {
@@ -31,6 +32,7 @@ export class PatternMaster {
     private readonly p: CuttingProblem,
     readonly lp: LpSolver,
     start: Bin[] | null,
+    readonly meter: WorkMeter,
   ) {
     this.T = p.types.length;
     this.demand = p.types.map((t) => t.demand);
@@ -53,25 +55,26 @@ export class PatternMaster {
   }
 
   /**
-   * Price until no pattern has a negative reduced cost, or until `until`.
-   * Returns the LP value and a proved bound: the LP value when it converged,
-   * else Farley's (the duals scaled down until feasible), or null.
+   * Price until no pattern has a negative reduced cost, or until the meter
+   * runs out. Returns the LP value and a proved bound: the LP value when it
+   * converged, else Farley's (the duals scaled down until feasible), or null.
    */
-  converge(until: number): { value: number; bound: number | null } | null {
-    const { p, lp, model } = this;
+  converge(): { value: number; bound: number | null } | null {
+    const { p, lp, model, meter } = this;
     const positive = p.stocks.every((s) => s.weight > 0);
     let bound: number | null = null;
     for (let round = 0; ; round++) {
-      model.run();
+      solveCounted(model, meter);
       if (model.getModelStatus() !== lp.constants.modelStatus.optimal) return null;
       const value = model.getObjectiveValue();
       const solution = model.getSolution();
       this.solved = Float64Array.from(solution.colValue);
       const dual = solution.rowDual;
-      const best = boundedKnapsack(
+      const { best, cells } = boundedKnapsack(
         p.types.map((t, i) => ({ size: t.size, value: dual[i], bound: this.demand[i] })),
         p.stocks.map((s) => s.capacity),
       );
+      meter.spend('dpCells', cells);
       let theta = 1;
       let added = false;
       p.stocks.forEach((s, k) => {
@@ -79,13 +82,14 @@ export class PatternMaster {
         if (positive) theta = Math.max(theta, (best[k].value + mu) / s.weight);
         if (s.weight - mu - best[k].value < -1e-9 * Math.max(1, s.weight) && this.remember({ stock: k, counts: best[k].counts })) {
           addColumn(lp, model, this.column(this.patterns[this.patterns.length - 1]));
+          meter.spend('columns', 1);
           added = true;
         }
       });
       if (!added) return { value, bound: Math.max(bound ?? -Infinity, value) };
       if (positive) bound = Math.max(bound ?? -Infinity, value / theta);
-      // Stopped by the clock or the round limit: the values are those of the last solve, the bound Farley's.
-      if (this.lp.now() > until || round + 1 >= MAX_PRICING_ROUNDS) return { value, bound };
+      // Stopped by the meter or the round limit: the values are those of the last solve, the bound Farley's.
+      if (meter.exhausted() || round + 1 >= MAX_PRICING_ROUNDS) return { value, bound };
     }
   }
 
@@ -113,12 +117,12 @@ export class PatternMaster {
     );
   }
 
-  /** A MIP over every pattern generated so far, then back to the LP. */
-  mip(seconds: number, start: Bin[] | null): Bin[] | null {
+  /** A MIP over every pattern generated so far (within the meter's nodes), then back to the LP. */
+  mip(start: Bin[] | null): Bin[] | null {
     const { model, T, lp } = this;
     const zeros = new Array<number>(T).fill(0);
     model.changeColsBounds({ kind: 'range', from: 0, to: T - 1 }, zeros, zeros);
-    runMip(lp, model, seconds, this.p.step, start ? [...zeros, ...this.counts(start)] : undefined);
+    runMip(lp, model, this.meter, this.p.step, start ? [...zeros, ...this.counts(start)] : undefined);
     const x = feasibleValues(lp, model);
     const bins = x ? this.patterns.flatMap((pat, j) => Array.from({ length: Math.round(x[T + j]) }, () => patternBin(pat))) : null;
     model.clearIntegrality();

@@ -9,28 +9,27 @@ import { planFromBins } from './plan-from-bins.ts';
 import { simpleBound } from './simple-bound.ts';
 import { solveExactly, type ExactMethod } from './solve-exactly.ts';
 import { StockShortfallError } from './stock-shortfall.ts';
+import { DEFAULT_WORK_LIMITS, WorkMeter, type WorkLimits } from './work-meter.ts';
 
 export type CuttingMethod = ExactMethod | 'first-fit decreasing';
 
 /** Measured better on the OR-Library u120 and u250 sets (bench/stock-planner.ts, DEVELOPERS.md). */
 export const DEFAULT_METHOD: CuttingMethod = 'column generation';
-export const DEFAULT_TIME_LIMIT_S = 5;
 
 export interface PlanOptions {
-  /** Wall-clock budget for the whole plan. */
-  timeLimit_s?: number;
+  /** Work limits for the whole plan (counts, not time: the same input gives the same plan on any machine). */
+  work?: Partial<WorkLimits>;
   method?: CuttingMethod;
 }
 
 /**
  * The stock plan of one cutting problem. Without a solver (or with the
  * first-fit method) it is first-fit decreasing; with one, the chosen exact
- * method within the time limit, its shortfall repaired by first-fit, and
+ * method within the work limits, its shortfall repaired by first-fit, and
  * never worse than first-fit alone.
  */
 export function planCutting(instance: CuttingInstance, lp: LpSolver | undefined, opts: PlanOptions = {}): CuttingPlan {
-  // Without a solver nothing is timed: first-fit decreasing runs to its end.
-  const deadline = lp ? lp.now() + (opts.timeLimit_s ?? DEFAULT_TIME_LIMIT_S) * 1000 : Infinity;
+  const meter = new WorkMeter({ ...DEFAULT_WORK_LIMITS, ...opts.work });
   const method = lp ? (opts.method ?? DEFAULT_METHOD) : 'first-fit decreasing';
   const p = prepareProblem(instance);
   const ffd = firstFit(p, [], allItems(p));
@@ -41,28 +40,30 @@ export function planCutting(instance: CuttingInstance, lp: LpSolver | undefined,
   if (method === 'first-fit decreasing' || meetsBound || p.types.length === 0) {
     if (!ffdBins) throw new StockShortfallError(p, ffd.unplaced);
     // Already optimal; with a solver the bound shown is still the LP's.
-    const bound = lp && p.grid.exact && p.types.length > 0 ? guarded(() => patternLpBound(p, lp, deadline, ffdBins)) : null;
-    const lpBound = typeof bound === 'number' ? bound : 0;
+    const bound = lp && p.grid.exact && p.types.length > 0 ? guarded(() => patternLpBound(p, lp, meter, ffdBins)) : null;
+    const lpValue = typeof bound === 'number' ? bound : null;
     const note = bound !== null && typeof bound === 'object' ? ` (no LP bound: ${bound.failed})` : '';
-    return planFromBins(p, ffdBins, { lower_bound: Math.max(simple, lpBound), proved: false, method: `first-fit decreasing${note}`, baseline });
+    return planFromBins(p, ffdBins, { lower_bound: Math.max(simple, lpValue ?? 0), lp_value: lpValue, proved: false, method: `first-fit decreasing${note}`, baseline });
   }
-  const outcome = guarded(() => solveExactly(p, lp!, method, deadline, ffdBins));
+  const outcome = guarded(() => solveExactly(p, lp!, method, meter, ffdBins));
   if ('failed' in outcome) {
     // The solver's fault is not the plan's: first-fit decreasing stands, with the length bound.
     if (!ffdBins) throw new StockShortfallError(p, ffd.unplaced);
-    return planFromBins(p, ffdBins, { lower_bound: simple, proved: false, method: `first-fit decreasing (${outcome.failed})`, baseline });
+    return planFromBins(p, ffdBins, { lower_bound: simple, lp_value: null, proved: false, method: `first-fit decreasing (${outcome.failed})`, baseline });
   }
   const solved = outcome.bins;
   // Off an exact grid the solver's bound belongs to a coarser problem.
-  const bound = p.grid.exact && outcome.lowerBound !== null ? Math.max(outcome.lowerBound, simple) : simple;
+  const lpValue = p.grid.exact ? outcome.lowerBound : null;
+  const bound = lpValue !== null ? Math.max(lpValue, simple) : simple;
   const pick = choose(p, solved, ffdBins);
   if (!pick) throw new StockShortfallError(p, ffd.unplaced);
   const fromSolver = pick === solved;
   const repaired = fromSolver && outcome.repaired;
   return planFromBins(p, pick, {
     lower_bound: bound,
+    lp_value: lpValue,
     proved: fromSolver && outcome.proved && !repaired && p.grid.exact,
-    method: fromSolver ? `${outcome.method}${repaired ? ', repaired by first-fit decreasing' : ''}` : `first-fit decreasing (${outcome.method} found nothing better in time)`,
+    method: fromSolver ? `${outcome.method}${repaired ? ', repaired by first-fit decreasing' : ''}` : `first-fit decreasing (${outcome.method} found nothing better within its work limits)`,
     baseline,
   });
 }

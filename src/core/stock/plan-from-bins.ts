@@ -5,6 +5,8 @@ import { roundUpBound } from './objective-step.ts';
 
 export interface PlanFacts {
   lower_bound: number;
+  /** The LP relaxation's bound where an LP was solved on the exact grid, else null. */
+  lp_value: number | null;
   /** The solver proved the plan optimal (beyond meeting the bound). */
   proved: boolean;
   method: string;
@@ -46,12 +48,16 @@ export function planFromBins(p: CuttingProblem, bins: Bin[], facts: PlanFacts): 
   const objective = binsObjective(p, bins);
   const lb = facts.lower_bound;
   const waste_mm = tidy(bought_mm - cut_mm);
+  const lpBound = facts.lp_value === null ? null : tidy(roundUpBound(facts.lp_value, p.step));
   return {
     pieces_used: bins.length,
     cost: p.priced ? tidy(objective) : null,
     lower_bound: tidy(lb),
     optimal: facts.proved || objective <= roundUpBound(lb, p.step) + 1e-9,
     gap: lb > 0 ? tidy((objective - lb) / lb) : 0,
+    lp_value: facts.lp_value === null ? null : tidy(facts.lp_value),
+    lp_bound: lpBound,
+    lp_gap: lpBound === null ? null : tidy(objective - lpBound),
     patterns: [...patterns.values()].sort((a, b) => b.stock_length_mm - a.stock_length_mm || b.count - a.count),
     bought,
     waste_mm,
