@@ -7,10 +7,10 @@ import { existsSync, readFileSync, statSync } from 'node:fs';
 import { setFlagsFromString } from 'node:v8';
 
 // The LP solver is 3.5 MB of WebAssembly; optimising its hot functions costs
-// about 80 MB and half a second of CPU, and a check's small LPs never repay it
-// (measured on the demo: peak memory 345 -> 255 MB, CPU 3.1 -> 2.6 s). The
-// stock command, whose plans may be large, keeps the optimising tier.
-if (process.argv[2] !== 'stock') setFlagsFromString('--liftoff-only');
+// about 80 MB and half a second of CPU, and the planner's LPs never repay it
+// (measured: a demo check's peak memory 345 -> 255 MB, CPU 3.1 -> 2.6 s; the
+// bench's bin-packing sets take as long on the baseline compiler alone).
+setFlagsFromString('--liftoff-only');
 
 const dist = new URL('../dist/axletree.mjs', import.meta.url);
 
