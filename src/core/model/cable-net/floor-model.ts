@@ -110,7 +110,7 @@ export function floorModels(spec: CheckedSpecification, data: RulesData, factors
   const tightest = Math.min(...heads.map((h) => h.settings.tolerance_N));
   const rest = solveCoupled(floor.net, new Float64Array(floor.net.nodes.length), F, { tolerance_N: tightest, maxIterations }, undefined, K);
   const restFrame = frameResult(basis, frame, anchors, rest);
-  const out: FloorModel[] = new Array(factors.length);
+  const out = new Array<FloorModel>(factors.length);
   let below: CoupledSolution | undefined;
   for (const i of [...factors.keys()].sort((p, q) => heads[p].head.appliedLoad_N - heads[q].head.appliedLoad_N)) {
     const { head, settings } = heads[i];
