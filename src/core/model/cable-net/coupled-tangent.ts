@@ -37,6 +37,8 @@ export function coupledTangent(net: CableNet, F: ArrayLike<number>, spans: Array
   const W = new Float64Array(m * n);
   const from = new Int32Array(m).fill(n);
   const put = (s: number, node: number, v: number) => {
+    // A flat strap (the pretension alone) has no coupling: its column stays empty and costs nothing.
+    if (v === 0) return;
     const r = K.place(node);
     W[s * n + r] += v;
     if (r < from[s]) from[s] = r;
