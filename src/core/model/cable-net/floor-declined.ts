@@ -1,6 +1,6 @@
 import { G } from '../../units/units.ts';
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
-import type { FloorModel } from './floor-model.ts';
+import type { FloorModel } from './floor-state.ts';
 
 // A net too large to solve within the check's time: every result unknown
 // (NaN, which the floor's figures show as not applicable with the reason in

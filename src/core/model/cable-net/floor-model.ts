@@ -2,11 +2,11 @@ import { param } from '../../data/param.ts';
 import type { RulesData } from '../../data/rules-data.ts';
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
 import { G } from '../../units/units.ts';
-import type { FloorResult } from '../floor-result.ts';
-import { partClearances, type PartClearance } from './clearance.ts';
+import type { CaseFactor, FloorModel } from './floor-state.ts';
+import { partClearances } from './clearance.ts';
 import { floorLines, floorNet, floorNodeCount, type FloorNet } from './floor-net.ts';
 import { patchWeights } from './foot-patch.ts';
-import { crewResults, describeSegment, reactionSum, strapPulls, strapTensions, tensions, type Loaded, type StrapTension } from './floor-results.ts';
+import { crewResults, describeSegment, reactionSum, strapPulls, strapTensions, tensions, type Loaded } from './floor-results.ts';
 import { solveNet } from './solve-net.ts';
 import type { SolveSettings } from './solve-net.ts';
 import { solveCoupled, type CoupledSolution } from './coupled-solve.ts';
@@ -26,29 +26,7 @@ import type { FloorFrameResult } from '../floor-frame/frame-result.ts';
 // floor-frame/): the anchors move in as the rails bow and the straps slacken.
 // `anchors: 'fixed'` solves it on rigid anchors instead, for comparison.
 
-export interface CaseFactor {
-  value: number;
-  source: string;
-}
-
-/** The floor result with what the rules show in their working. */
-export interface FloorModel extends FloorResult {
-  weave: CheckedSpecification['floor_straps']['weave'];
-  EA_N: number;
-  pretension_N: number;
-  nodes: number;
-  segments: number;
-  /** The floor's sag over the pole and the axle beneath it. */
-  clearances: PartClearance[];
-  /** Each strap's largest tension (empty where the net was not solved). */
-  straps: StrapTension[];
-  /** Why the solver stopped short, when it did. */
-  stopped?: string;
-  /** Largest out-of-balance force before the first step and after each, N. */
-  history: number[];
-  /** The frame under this case's strap pulls; null where the net was not solved. */
-  frame: FloorFrameResult | null;
-}
+export type { CaseFactor, FloorModel } from './floor-state.ts';
 
 export interface FloorOptions {
   refine?: number;
