@@ -1,7 +1,7 @@
-import { solveDense } from '../floor-frame/dense-lu.ts';
 import { maxAbs, minimise, type EnergyProblem, type SolveSettings } from './energy-newton.ts';
 import type { CableNet } from './net.ts';
-import { planCurvatures, segmentState, strainEnergy, tangentStiffness, verticalPull, type SegmentState } from './segment.ts';
+import { segmentState, strainEnergy, verticalPull, type SegmentState } from './segment.ts';
+import { coupledTangent, mulF } from './coupled-tangent.ts';
 import { SkylineCholesky } from './skyline.ts';
 import { coupledPairs, nodeOrder } from './node-order.ts';
 import { SLACK_TENSION, solveNet, type NetSolution } from './solve-net.ts';
@@ -50,16 +50,6 @@ export function planLengths(net: CableNet, e: ArrayLike<number>, spans: ArrayLik
   return Float64Array.from(net.segments, (seg) => seg.flat * (1 - e[seg.strap] / spans[seg.strap]));
 }
 
-function mulF(F: ArrayLike<number>, x: ArrayLike<number>, m: number): Float64Array {
-  const y = new Float64Array(m);
-  for (let s = 0; s < m; s++) {
-    let v = 0;
-    for (let t = 0; t < m; t++) v += F[s * m + t] * x[t];
-    y[s] = v;
-  }
-  return y;
-}
-
 interface CoupledState {
   potential: number;
   scale: number;
@@ -72,64 +62,6 @@ interface CoupledState {
   e: Float64Array;
 }
 
-/** The linearised coupled system at a state: solves for (Δu, Δλ) given the node and pull residuals. */
-export interface CoupledTangent {
-  solve(ru: ArrayLike<number>, rH: ArrayLike<number>): { du: Float64Array; dl: Float64Array } | null;
-}
-
-/** Assemble and factor the coupled tangent; null where the net's tangent is not positive definite. */
-export function coupledTangent(net: CableNet, F: ArrayLike<number>, spans: ArrayLike<number>, states: readonly SegmentState[], K: SkylineCholesky, slackFraction: number, slackPretension = 1): CoupledTangent | null {
-  const n = net.nodes.length;
-  const m = net.straps.length;
-  K.zero();
-  const Kee = new Float64Array(m);
-  const cols: { node: number; v: number }[][] = net.straps.map(() => []);
-  net.segments.forEach((seg, i) => {
-    const st = states[i];
-    // A slack segment stands in with the geometric stiffness of its pretension: it only shapes the step (the energy
-    // decides it), and keeps a node hanging on slack straps from being thrown far. A taut one is exact.
-    const standIn = st.tension > 0 ? 0 : Math.max(slackFraction * seg.EA, slackPretension * ((seg.EA * (seg.flat - seg.rest)) / seg.rest));
-    const k = tangentStiffness(seg, st, standIn);
-    if (seg.a >= 0) K.add(seg.a, seg.a, k);
-    if (seg.b >= 0) K.add(seg.b, seg.b, k);
-    if (seg.a >= 0 && seg.b >= 0) K.add(seg.a, seg.b, -k);
-    const c = planCurvatures(seg, st);
-    const df = -seg.flat / spans[seg.strap]; // d(plan length)/d(e_s)
-    Kee[seg.strap] += c.ff * df * df;
-    if (seg.a >= 0) cols[seg.strap].push({ node: seg.a, v: c.fd * df });
-    if (seg.b >= 0) cols[seg.strap].push({ node: seg.b, v: -c.fd * df });
-  });
-  if (!K.factor()) return null;
-  const X = cols.map((col) => {
-    const b = new Float64Array(n);
-    for (const { node, v } of col) b[node] += v;
-    return K.solve(b);
-  });
-  const dotCol = (s: number, v: ArrayLike<number>) => cols[s].reduce((sum, { node, v: c }) => sum + c * v[node], 0);
-  const S = new Float64Array(m * m);
-  for (let s = 0; s < m; s++) for (let t = 0; t < m; t++) S[s * m + t] = (s === t ? Kee[s] : 0) - dotCol(s, X[t]);
-  // A = S·F + I.
-  const A = new Float64Array(m * m);
-  for (let s = 0; s < m; s++) {
-    for (let t = 0; t < m; t++) {
-      let v = s === t ? 1 : 0;
-      for (let k = 0; k < m; k++) v += S[s * m + k] * F[k * m + t];
-      A[s * m + t] = v;
-    }
-  }
-  return {
-    solve(ru, rH) {
-      const y = K.solve(ru);
-      const rhs = Float64Array.from(rH, (r, s) => r - dotCol(s, y));
-      const dl = solveDense(A, rhs, m);
-      if (!dl) return null;
-      const Fdl = mulF(F, dl, m);
-      const du = y.map((v, i) => v - X.reduce((sum, x, t) => sum + x[i] * Fdl[t], 0));
-      return { du, dl };
-    },
-  };
-}
-
 /** Each strap's mean pull H̄_s: its segments' horizontal tensions T·f/l weighted by their share of its span. */
 export function meanPulls(net: CableNet, states: readonly SegmentState[], spans: ArrayLike<number>): Float64Array {
   const H = new Float64Array(net.straps.length);
@@ -140,11 +72,12 @@ export function meanPulls(net: CableNet, states: readonly SegmentState[], spans:
   return H;
 }
 
-export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLike<number>, settings: SolveSettings, from?: { sag: ArrayLike<number>; pulls: ArrayLike<number> }): CoupledSolution {
+/** `matrix`: a skyline matrix laid out for this net, to reuse its numbering and storage across solves. */
+export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLike<number>, settings: SolveSettings, from?: { sag: ArrayLike<number>; pulls: ArrayLike<number> }, matrix?: SkylineCholesky): CoupledSolution {
   const n = net.nodes.length;
   const m = net.straps.length;
   const spans = strapSpans(net);
-  const K = new SkylineCholesky(n, coupledPairs(net), nodeOrder(net));
+  const K = matrix ?? new SkylineCholesky(n, coupledPairs(net), nodeOrder(net));
   const state = (x: Float64Array): CoupledState => {
     const lambda = x.subarray(n);
     const e = mulF(F, lambda, m);
@@ -185,7 +118,9 @@ export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLi
   const problem: EnergyProblem<CoupledState> = {
     state,
     direction: (_x, cur) => {
-      const T = coupledTangent(net, F, spans, cur.states, K, SLACK_TENSION);
+      // Slack segments get only the tiny stand-in, not their pretension's geometric stiffness: the step is then Newton's
+      // own and converges quadratically where segments end slack (the line search on the energy keeps it safe).
+      const T = coupledTangent(net, F, spans, cur.states, K, SLACK_TENSION, 0);
       if (!T) return 'the tangent stiffness is not positive definite';
       const d = T.solve(cur.residual, cur.pullGap);
       if (!d) return 'the coupled step could not be solved';

@@ -2,17 +2,18 @@ import { param } from '../../data/param.ts';
 import type { RulesData } from '../../data/rules-data.ts';
 import type { CheckedSpecification } from '../../spec/spec.types.ts';
 import { G } from '../../units/units.ts';
-import type { FloorResult } from '../floor-result.ts';
-import { partClearances, type PartClearance } from './clearance.ts';
+import type { CaseFactor, FloorModel } from './floor-state.ts';
+import { partClearances } from './clearance.ts';
 import { floorLines, floorNet, floorNodeCount, type FloorNet } from './floor-net.ts';
 import { patchWeights } from './foot-patch.ts';
-import { crewResults, describeSegment, reactionSum, strapPulls, strapTensions, tensions, type Loaded, type StrapTension } from './floor-results.ts';
-import { SLACK_TENSION, solveNet } from './solve-net.ts';
+import { crewResults, describeSegment, reactionSum, strapPulls, strapTensions, tensions, type Loaded } from './floor-results.ts';
+import { solveNet } from './solve-net.ts';
 import type { SolveSettings } from './solve-net.ts';
-import { coupledTangent, solveCoupled, strapSpans, type CoupledSolution } from './coupled-solve.ts';
+import { solveCoupled, type CoupledSolution } from './coupled-solve.ts';
+import { coupledCompliance } from './coupled-compliance.ts';
+import { declinedFloor, type FloorHead } from './floor-declined.ts';
 import { SkylineCholesky } from './skyline.ts';
 import { coupledPairs, nodeOrder } from './node-order.ts';
-import { segmentState } from './segment.ts';
 import type { CableNet } from './net.ts';
 import { FloorFrame, type FrameState } from '../floor-frame/frame-model.ts';
 import { ARC_STEP_DEG, frameOfFloor, type FrameBasis } from '../floor-frame/frame-of-floor.ts';
@@ -25,29 +26,7 @@ import type { FloorFrameResult } from '../floor-frame/frame-result.ts';
 // floor-frame/): the anchors move in as the rails bow and the straps slacken.
 // `anchors: 'fixed'` solves it on rigid anchors instead, for comparison.
 
-export interface CaseFactor {
-  value: number;
-  source: string;
-}
-
-/** The floor result with what the rules show in their working. */
-export interface FloorModel extends FloorResult {
-  weave: CheckedSpecification['floor_straps']['weave'];
-  EA_N: number;
-  pretension_N: number;
-  nodes: number;
-  segments: number;
-  /** The floor's sag over the pole and the axle beneath it. */
-  clearances: PartClearance[];
-  /** Each strap's largest tension (empty where the net was not solved). */
-  straps: StrapTension[];
-  /** Why the solver stopped short, when it did. */
-  stopped?: string;
-  /** Largest out-of-balance force before the first step and after each, N. */
-  history: number[];
-  /** The frame under this case's strap pulls; null where the net was not solved. */
-  frame: FloorFrameResult | null;
-}
+export type { CaseFactor, FloorModel } from './floor-state.ts';
 
 export interface FloorOptions {
   refine?: number;
@@ -75,26 +54,60 @@ export function nodalLoads(floor: FloorNet, crew: readonly Loaded[]): Float64Arr
   return P;
 }
 
+/** One floor state: the crew's weight times `factor`. */
 export function floorModel(spec: CheckedSpecification, data: RulesData, factor: CaseFactor, options: FloorOptions = {}): FloorModel {
+  return floorModels(spec, data, [factor], options)[0];
+}
+
+/**
+ * Several floor states of one specification in one go, in the order given:
+ * the net, its frame and the pretension alone are built and solved once, and
+ * the states are solved in rising load, each starting from the one below.
+ */
+export function floorModels(spec: CheckedSpecification, data: RulesData, factors: readonly CaseFactor[], options: FloorOptions = {}): FloorModel[] {
   const { refine = 1, anchors = 'coupled', arcStepDeg = ARC_STEP_DEG } = options;
   const s = spec.floor_straps;
-  const appliedLoad_N = spec.crew.reduce((sum, c) => sum + c.mass_kg * G * factor.value, 0);
-  const settings = floorSolveSettings(data, appliedLoad_N);
   const EA_N = data.leathers[s.material].modulus_MPa.value * s.width_mm * s.thickness_mm;
-  const head = { factor: factor.value, factorSource: factor.source, tolerance_N: settings.tolerance_N, appliedLoad_N, weave: s.weave, pretension_N: s.pretension_N, EA_N };
+  const heads = factors.map((factor) => {
+    const appliedLoad_N = spec.crew.reduce((sum, c) => sum + c.mass_kg * G * factor.value, 0);
+    const settings = floorSolveSettings(data, appliedLoad_N);
+    return { settings, head: { factor: factor.value, factorSource: factor.source, tolerance_N: settings.tolerance_N, appliedLoad_N, weave: s.weave, pretension_N: s.pretension_N, EA_N } };
+  });
+  if (!heads.length) return [];
   // The lines are cheap to lay; their exact node count decides before the net is built and solved.
   const laid = floorLines(spec, data, refine);
   const count = floorNodeCount(laid.lines);
-  if (count > settings.maxNodes) return declined(spec, head, count, settings.maxNodes);
+  const { maxNodes, maxIterations } = heads[0].settings;
+  if (count > maxNodes) return heads.map(({ head }) => declinedFloor(spec, head, count, maxNodes));
   const floor = floorNet(spec, data, refine, laid);
   const basis = frameOfFloor(spec, data, floor, arcStepDeg);
   const frame = new FloorFrame(basis.input);
   const F = anchors === 'fixed' ? new Float64Array(floor.net.straps.length ** 2) : frame.flexibility();
-  const crew = crewLoads(spec, floor, factor.value);
-  const loads = nodalLoads(floor, crew);
-  // The pretension alone: the same net and frame with no one aboard; its pulls and the sags on rigid anchors start the loaded solve.
-  const rest = solveCoupled(floor.net, new Float64Array(floor.net.nodes.length), F, settings);
-  const sol = solveCoupled(floor.net, loads, F, settings, { sag: solveNet(floor.net, loads, settings).sag, pulls: rest.pulls });
+  const K = new SkylineCholesky(floor.net.nodes.length, coupledPairs(floor.net), nodeOrder(floor.net));
+  // The pretension alone, to the tightest tolerance asked: the same net and frame with no one aboard.
+  const tightest = Math.min(...heads.map((h) => h.settings.tolerance_N));
+  const rest = solveCoupled(floor.net, new Float64Array(floor.net.nodes.length), F, { tolerance_N: tightest, maxIterations }, undefined, K);
+  const restFrame = frameResult(basis, frame, anchors, rest);
+  const out = new Array<FloorModel>(factors.length);
+  let below: CoupledSolution | undefined;
+  for (const i of [...factors.keys()].sort((p, q) => heads[p].head.appliedLoad_N - heads[q].head.appliedLoad_N)) {
+    const { head, settings } = heads[i];
+    const crew = crewLoads(spec, floor, head.factor);
+    const loads = nodalLoads(floor, crew);
+    // The lightest state starts from the sags on rigid anchors (a rough, cheap solve) and the pretension's pulls; each heavier one from the state below.
+    const start = below ?? { sag: solveNet(floor.net, loads, { tolerance_N: START_FRACTION * Math.max(head.appliedLoad_N, 1), maxIterations }, undefined, K).sag, pulls: rest.pulls };
+    const sol = solveCoupled(floor.net, loads, F, settings, start, K);
+    if (sol.converged) below = sol;
+    out[i] = floorState(spec, floor, head, crew, sol, rest, F, K, restFrame(frame.solve(sol.pulls)));
+  }
+  return out;
+}
+
+/** The rigid-anchor start is solved to this fraction of the load: a start, not a result. */
+const START_FRACTION = 1e-3;
+
+function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead, crew: Loaded[], sol: CoupledSolution, rest: CoupledSolution, F: Float64Array, K: SkylineCholesky, frame: FloorFrameResult): FloorModel {
+  const s = spec.floor_straps;
   const moved: FloorNet = { ...floor, net: withPlanLengths(floor.net, sol.flats) };
   const T = tensions(moved.net, sol.sag);
   let worst = 0;
@@ -110,7 +123,7 @@ export function floorModel(spec: CheckedSpecification, data: RulesData, factor: 
     maxTension_N,
     maxTensionAt: T.length ? describeSegment(floor.net, worst) : 'no straps',
     maxStress_MPa: maxTension_N / (s.width_mm * s.thickness_mm),
-    crew: crewResults(floor, sol.sag, crew, coupledCompliance(floor.net, sol, F)),
+    crew: crewResults(floor, sol.sag, crew, coupledCompliance(floor.net, sol, F, K)),
     rails: strapPulls(floor, sol.pulls),
     reactionSum_N: reactionSum(moved.net, sol.sag, T),
     nodes: floor.net.nodes.length,
@@ -118,31 +131,21 @@ export function floorModel(spec: CheckedSpecification, data: RulesData, factor: 
     clearances: partClearances(spec, floor, sol.sag),
     straps: strapTensions(moved.net, T),
     history: sol.history,
-    frame: frameResult(basis, frame, anchors, frame.solve(sol.pulls), rest),
+    frame,
     ...(stopped ? { stopped } : {}),
   };
 }
 
-/** The net with its segments' plan lengths after the anchors moved. */
+/** The segments' plan lengths after the anchors moved. */
 function withPlanLengths(net: CableNet, flats: ArrayLike<number>): CableNet {
   return { ...net, segments: net.segments.map((seg, i) => ({ ...seg, flat: flats[i] })) };
 }
 
-/** The coupled tangent's response to a unit load pattern: the sags it adds (frame included). */
-function coupledCompliance(net: CableNet, sol: CoupledSolution, F: ArrayLike<number>): ((p: Float64Array) => Float64Array) | null {
-  const states = net.segments.map((seg, i) => segmentState(seg, seg.a < 0 ? 0 : sol.sag[seg.a], seg.b < 0 ? 0 : sol.sag[seg.b], sol.flats[i]));
-  const K = new SkylineCholesky(net.nodes.length, coupledPairs(net), nodeOrder(net));
-  const spans = strapSpans(net);
-  // Only a net without pretension can have a slack strap with no stiffness at all; give it the solver's stand-in.
-  const T = coupledTangent(net, F, spans, states, K, 0, 0) ?? coupledTangent(net, F, spans, states, K, SLACK_TENSION, 0);
-  if (!T) return null;
-  const zero = new Float64Array(net.straps.length);
-  return (p) => T.solve(p, zero)?.du ?? new Float64Array(p.length).fill(NaN);
-}
-
-function frameResult(basis: FrameBasis, frame: FloorFrame, anchors: 'coupled' | 'fixed', state: FrameState, rest: CoupledSolution): FloorFrameResult {
+/** The frame's result for one state, given its state under that state's pulls; the pretension alone solved once. */
+function frameResult(basis: FrameBasis, frame: FloorFrame, anchors: 'coupled' | 'fixed', rest: CoupledSolution): (state: FrameState) => FloorFrameResult {
   const restState = frame.solve(rest.pulls);
-  return {
+  const pretension = { rails: restState.rails, minPull_N: Math.min(...rest.pulls), maxPull_N: Math.max(...rest.pulls), maxAnchorMove_mm: anchors === 'fixed' ? 0 : restState.maxAnchorMove_mm };
+  return (state) => ({
     anchors,
     species: basis.species,
     E_MPa: basis.E_MPa,
@@ -155,30 +158,7 @@ function frameResult(basis: FrameBasis, frame: FloorFrame, anchors: 'coupled' | 
     struts: state.struts.map((st, i) => ({ ...st, working: basis.struts[i].working })),
     unsupported: basis.unsupported,
     maxAnchorMove_mm: anchors === 'fixed' ? 0 : state.maxAnchorMove_mm,
-    pretension: { rails: restState.rails, minPull_N: Math.min(...rest.pulls), maxPull_N: Math.max(...rest.pulls), maxAnchorMove_mm: anchors === 'fixed' ? 0 : restState.maxAnchorMove_mm },
+    pretension,
     sources: basis.sources,
-  };
-}
-
-/** A net too large to solve within the check's time: every result unknown (NaN), reported as not converged. */
-function declined(spec: CheckedSpecification, head: Pick<FloorModel, 'factor' | 'factorSource' | 'tolerance_N' | 'appliedLoad_N' | 'weave' | 'pretension_N' | 'EA_N'>, count: number, maxNodes: number): FloorModel {
-  return {
-    ...head,
-    converged: false,
-    iterations: 0,
-    residual_N: NaN,
-    maxTension_N: NaN,
-    maxTensionAt: 'not solved',
-    maxStress_MPa: NaN,
-    crew: spec.crew.map((c) => ({ role: c.role, load_N: c.mass_kg * G * head.factor, sag_mm: NaN, secantStiffness_N_per_mm: NaN, tangentStiffness_N_per_mm: NaN })),
-    rails: [],
-    reactionSum_N: NaN,
-    nodes: count,
-    segments: NaN,
-    clearances: [],
-    straps: [],
-    history: [],
-    frame: null,
-    stopped: `the net would have ${count} nodes, more than the ${maxNodes} the solver takes (max_nodes)`,
-  };
+  });
 }

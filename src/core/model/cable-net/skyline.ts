@@ -73,28 +73,50 @@ export class SkylineCholesky {
     return true;
   }
 
+  /** Row i's place in the stored matrix (the caller's numbering to the stored one). */
+  place(i: number): number {
+    return this.#order[i];
+  }
+
   /** Solve A x = b with the factor; b in the caller's numbering. */
   solve(b: ArrayLike<number>): Float64Array {
+    const y = new Float64Array(this.n);
+    for (let i = 0; i < this.n; i++) y[this.#order[i]] = b[i];
+    this.forward(y);
+    this.backward(y);
+    const x = new Float64Array(this.n);
+    for (let i = 0; i < this.n; i++) x[i] = y[this.#order[i]];
+    return x;
+  }
+
+  /**
+   * L y = b in place, b in the stored numbering. Rows before `from` must hold
+   * zeros (they stay zero): a right-hand side that starts late costs less.
+   */
+  forward(y: Float64Array, from = 0): void {
     if (!this.#factored) throw new Error('factor the matrix before solving');
     const a = this.#a;
     const first = this.#first;
     const start = this.#start;
-    const y = new Float64Array(this.n);
-    for (let i = 0; i < this.n; i++) y[this.#order[i]] = b[i];
-    for (let i = 0; i < this.n; i++) {
+    for (let i = from; i < this.n; i++) {
       const ri = start[i] - first[i];
       let s = y[i];
-      for (let k = first[i]; k < i; k++) s -= a[ri + k] * y[k];
+      for (let k = Math.max(first[i], from); k < i; k++) s -= a[ri + k] * y[k];
       y[i] = s / a[ri + i];
     }
+  }
+
+  /** Lᵀ x = y in place, in the stored numbering. */
+  backward(y: Float64Array): void {
+    if (!this.#factored) throw new Error('factor the matrix before solving');
+    const a = this.#a;
+    const first = this.#first;
+    const start = this.#start;
     for (let i = this.n - 1; i >= 0; i--) {
       const ri = start[i] - first[i];
       y[i] /= a[ri + i];
       const yi = y[i];
       for (let k = first[i]; k < i; k++) y[k] -= a[ri + k] * yi;
     }
-    const x = new Float64Array(this.n);
-    for (let i = 0; i < this.n; i++) x[i] = y[this.#order[i]];
-    return x;
   }
 }

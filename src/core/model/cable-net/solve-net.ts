@@ -60,9 +60,10 @@ export function tangentMatrix(net: CableNet, matrix?: SkylineCholesky, sag?: Arr
   return K;
 }
 
-export function solveNet(net: CableNet, loads: ArrayLike<number>, settings: SolveSettings, start?: ArrayLike<number>): NetSolution {
+/** `matrix`: a skyline matrix laid out for this net, to reuse its numbering and storage. */
+export function solveNet(net: CableNet, loads: ArrayLike<number>, settings: SolveSettings, start?: ArrayLike<number>, matrix?: SkylineCholesky): NetSolution {
   const n = net.nodes.length;
-  let K: SkylineCholesky | undefined;
+  let K = matrix;
   const m = minimise(
     {
       state: (v) => {

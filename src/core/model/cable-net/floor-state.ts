@@ -1,0 +1,31 @@
+import type { CheckedSpecification } from '../../spec/spec.types.ts';
+import type { FloorResult } from '../floor-result.ts';
+import type { FloorFrameResult } from '../floor-frame/frame-result.ts';
+import type { PartClearance } from './clearance.ts';
+import type { StrapTension } from './floor-results.ts';
+
+// One solved (or declined) state of the strap floor, as floor-model.ts gives it.
+
+export interface CaseFactor {
+  value: number;
+  source: string;
+}
+
+/** The floor result with what the rules show in their working. */
+export interface FloorModel extends FloorResult {
+  weave: CheckedSpecification['floor_straps']['weave'];
+  EA_N: number;
+  pretension_N: number;
+  nodes: number;
+  segments: number;
+  /** The floor's sag over the pole and the axle beneath it. */
+  clearances: PartClearance[];
+  /** Each strap's largest tension (empty where the net was not solved). */
+  straps: StrapTension[];
+  /** Why the solver stopped short, when it did. */
+  stopped?: string;
+  /** Largest out-of-balance force before the first step and after each, N. */
+  history: number[];
+  /** The frame under this case's strap pulls; null where the net was not solved. */
+  frame: FloorFrameResult | null;
+}
