@@ -42,6 +42,8 @@ export interface ModelValues {
   bumpFactors: BumpFactors;
   /** The stone strike's dynamic factors (operation.bump_height_mm, bump_length_mm), from the ride model or, provisional, the data's stone_factor_bound. */
   stoneFactors: BumpFactors;
+  /** The four loaded floor states solved together (the next four models each pick one). */
+  floorLoaded: { bump: FloorModel; stone: FloorModel; design: FloorModel; designRough: FloorModel };
   /** The strap floor under the crew's weight times the routine rough ground's factor (characteristic). */
   floorBump: FloorModel;
   /** The strap floor under the crew's weight times the stone's factor (accidental: every action × 1.0). */

@@ -1,5 +1,5 @@
 import { cuttingResult } from '../cutlist/cutting-model.ts';
-import { floorModel } from '../model/cable-net/floor-model.ts';
+import { floorModel, floorModels } from '../model/cable-net/floor-model.ts';
 import { lashingDemands } from '../model/lashing-demand.ts';
 import { loadCases } from '../model/load-cases.ts';
 import { massModel } from '../model/mass-model.ts';
@@ -128,35 +128,51 @@ export const stoneFactorsDef = defineModel({
   compute: ({ ride }, { data }) => groundFactors(ride, 'stone', param(data, 'load-cases', 'stone_factor_bound')),
 });
 
+/**
+ * The four loaded floor states of the check solved together: the net, its
+ * frame and the pretension built and solved once, each state started from the
+ * one below it (floorModels). Each of the four models below picks its own.
+ */
+export const floorLoadedDef = defineModel({
+  id: 'floorLoaded',
+  needs: ['bumpFactors', 'stoneFactors'],
+  params: [...FLOOR, ...COMBINATION_PARAMS],
+  compute: ({ bumpFactors, stoneFactors }, { spec, data }) => {
+    const [bump, stone, design, designRough] = floorModels(spec, data, [bumpFactors.crew, stoneFactors.crew, designFloorFactor(data, null), designFloorFactor(data, bumpFactors.crew)]);
+    return { bump, stone, design, designRough };
+  },
+});
+
+/** The floor over routine rough ground: the crew's weight times its dynamic factor (characteristic). */
 export const floorBumpDef = defineModel({
   id: 'floorBump',
-  needs: ['bumpFactors'],
-  params: FLOOR,
-  compute: ({ bumpFactors }, { spec, data }) => floorModel(spec, data, bumpFactors.crew),
+  needs: ['floorLoaded'],
+  params: [],
+  compute: ({ floorLoaded }) => floorLoaded.bump,
 });
 
 /** The floor under the stone: an accidental case, every action × 1.0, so also its design state. */
 export const floorStoneDef = defineModel({
   id: 'floorStone',
-  needs: ['stoneFactors'],
-  params: FLOOR,
-  compute: ({ stoneFactors }, { spec, data }) => floorModel(spec, data, stoneFactors.crew),
+  needs: ['floorLoaded'],
+  params: [],
+  compute: ({ floorLoaded }) => floorLoaded.stone,
 });
 
 /** The floor under the fundamental combination, the crew standing: their weight × γ_Q. */
 export const floorDesignDef = defineModel({
   id: 'floorDesign',
-  needs: [],
-  params: [...FLOOR, ...COMBINATION_PARAMS],
-  compute: (_, { spec, data }) => floorModel(spec, data, designFloorFactor(data, null)),
+  needs: ['floorLoaded'],
+  params: [],
+  compute: ({ floorLoaded }) => floorLoaded.design,
 });
 
 /** The floor under the fundamental combination over rough ground: the crew's weight and its dynamic increment × γ_Q. */
 export const floorDesignRoughDef = defineModel({
   id: 'floorDesignRough',
-  needs: ['bumpFactors'],
-  params: [...FLOOR, ...COMBINATION_PARAMS],
-  compute: ({ bumpFactors }, { spec, data }) => floorModel(spec, data, designFloorFactor(data, bumpFactors.crew)),
+  needs: ['floorLoaded'],
+  params: [],
+  compute: ({ floorLoaded }) => floorLoaded.designRough,
 });
 
 export const memberCasesDef = defineModel({
@@ -228,7 +244,7 @@ export const draughtDef = defineModel({
 
 /** Every model, in no particular order: the graph finds the order from their needs. */
 export const MODELS: readonly ModelDef[] = [
-  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, wheelStiffnessDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, cuttingDef, lashingDemandsDef,
+  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, wheelStiffnessDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorLoadedDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, cuttingDef, lashingDemandsDef,
   figuresDef, loadsDef, sceneDef, plotsDef,
   horseDef, draughtDef,
 ];
