@@ -7,15 +7,15 @@
 
 export class PeakTracker {
   max = -Infinity;
-  #t0 = NaN;
-  #g0 = NaN;
-  #t1 = NaN;
-  #g1 = NaN;
+  private t0 = NaN;
+  private g0 = NaN;
+  private t1 = NaN;
+  private g1 = NaN;
 
   add(t: number, g: number): void {
-    if (t <= this.#t1 + 1e-12) return; // a point met twice (a sample on a step end)
+    const t0 = this.t0, g0 = this.g0, t1 = this.t1, g1 = this.g1;
+    if (t <= t1 + 1e-12) return; // a point met twice (a sample on a step end)
     if (g > this.max) this.max = g;
-    const [t0, g0, t1, g1] = [this.#t0, this.#g0, this.#t1, this.#g1];
     if (g1 >= g0 && g1 >= g) {
       // Divided differences of the parabola through (t0, g0), (t1, g1), (t, g).
       const d01 = (g1 - g0) / (t1 - t0), d12 = (g - g1) / (t - t1);
@@ -28,6 +28,9 @@ export class PeakTracker {
         }
       }
     }
-    [this.#t0, this.#g0, this.#t1, this.#g1] = [t1, g1, t, g];
+    this.t0 = t1;
+    this.g0 = g1;
+    this.t1 = t;
+    this.g1 = g;
   }
 }
