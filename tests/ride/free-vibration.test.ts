@@ -10,12 +10,21 @@ const wn = Math.sqrt(k / m);
 
 function freeVibration(zeta: number, x0 = 0.01, duration = 6) {
   const c = 2 * zeta * Math.sqrt(k * m);
-  const tp = new TurningPoints();
+  const tp = new TurningPoints(0, 0, 1);
   const record: { t: number; x: number }[] = [];
+  let v0 = 0;
   integrate((_t, y, dy) => { dy[0] = y[1]; dy[1] = (-k * y[0] - c * y[1]) / m; }, () => 0, Float64Array.of(x0, 0), 0, duration, {
-    h: (2 * Math.PI) / wn / 60,
+    rtol: 1e-9,
+    atol: 1e-12,
+    h0: (2 * Math.PI) / wn / 60,
     eventTolerance: 1e-9,
-    onStep(_t0, t1, y) { tp.add(t1, y[0], y[1]); record.push({ t: t1, x: y[0] }); },
+    onStep(t0, t1, y, _m, dense) {
+      tp.step(t0, t1, v0, y[1], dense);
+      v0 = y[1];
+      record.push({ t: t1, x: y[0] });
+      // the dense output between the step's ends, against the closed form as well
+      record.push({ t: 0.5 * (t0 + t1), x: dense.value(0, 0.5 * (t0 + t1)) });
+    },
   });
   return { tp, record };
 }

@@ -40,7 +40,9 @@ describe('the ride model', () => {
     const closed = contactMode(sys, 0, y0, scratch);
     let worst = 0, opened = false;
     integrate((t, y, dy) => derivative(sys, t, y, dy), (t, y) => contactMode(sys, t, y, scratch), y0, 0, 3, {
-      h: 2e-4,
+      rtol: 1e-9,
+      atol: 1e-12,
+      h0: 2e-4,
       eventTolerance: 1e-9,
       onStep(_t0, t1, y, mode) {
         worst = Math.max(worst, Math.abs(energy(sys, t1, y) - E0));

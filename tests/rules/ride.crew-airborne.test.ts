@@ -19,7 +19,7 @@ describe(RULE, () => {
     ]);
     expect(found[0].subject_label).toBe('driver, rough-ground ridge across both tracks');
     expect(found.every((f) => f.severity === 'pass')).toBe(true);
-    expect(found[0].working_text).toContain('Runge-Kutta');
+    expect(found[0].working_text).toContain('Dormand-Prince 5(4)');
     expect(found[0].working_text).toMatch(/stone strike under both wheels: off the floor 0\sms, at most 0\smm above it: no further than over rough ground/);
     // The limits and the model's stiffnesses are from memory (rules/limits/ride.yaml, rules/parameters/ride.yaml); the contact law is Hunt and Crossley's.
     expect(found[0].sources).toEqual(expect.arrayContaining(['design-basis-ride', 'hunt-crossley-1975', 'from-memory']));

@@ -8,5 +8,5 @@ import type { DampingNeeded } from './damping-tuner.ts';
 
 export function dampingFigure(d: DampingNeeded | null): FigureEntry {
   if (d === null) return { not_applicable: "the floor-damping tuner did not run: it runs only where ride.decay finds the crew's motion dies out too slowly" };
-  return figureOrReason(d.ratio, '1', `no floor damping ratio up to ${formatNumber(d.grid[d.grid.length - 1])} keeps the crew on the floor over rough ground and their motion within the decay rule's cycles`);
+  return figureOrReason(d.ratio, '1', `no floor damping ratio up to ${formatNumber(d.bounds[1])} keeps the crew on the floor over rough ground and their motion within the decay rule's cycles`);
 }

@@ -1,6 +1,9 @@
+import { illinois } from './illinois.ts';
+import type { DenseOutput } from './integrate.ts';
+
 // Cycles until a motion falls below a fraction of its first amplitude
 // (mechanics note, section 8). The turning points of the motion (where its
-// rate changes sign) are found step by step; from the largest one after the
+// rate changes sign) are found step by step on the integrator's dense output; from the largest one after the
 // input has ended, the time at which the turning points fall below the
 // fraction is interpolated on the logarithm of their size, and divided by the
 // period measured from the turning points' spacing. For a linear single-degree
@@ -12,22 +15,19 @@ export interface TurningPoint {
   z: number;
 }
 
-/** Collects turning points from a stepped record of displacement z and rate v. */
+/** Ends a run early once it returns true, given each crew member's turning points so far and the time of the first wheel contact. */
+export type Enough = (turning: readonly (readonly TurningPoint[])[], firstContact: number) => boolean;
+
+/** Collects turning points from the accepted steps of a run, located on each step's dense output. */
 export class TurningPoints {
   readonly points: TurningPoint[] = [];
-  #t = NaN;
-  #z = NaN;
-  #v = NaN;
-  add(t: number, z: number, v: number): void {
-    const [t0, z0, v0] = [this.#t, this.#z, this.#v];
-    [this.#t, this.#z, this.#v] = [t, z, v];
-    if (!(v0 > 0 && v <= 0) && !(v0 < 0 && v >= 0)) return;
-    // The rate's zero by linear interpolation; the displacement there from the cubic Hermite through both ends.
-    const h = t - t0;
-    const s = v0 / (v0 - v);
-    const s2 = s * s, s3 = s2 * s;
-    const z1 = (2 * s3 - 3 * s2 + 1) * z0 + (s3 - 2 * s2 + s) * h * v0 + (-2 * s3 + 3 * s2) * z + (s3 - s2) * h * v;
-    this.points.push({ t: t0 + s * h, z: z1 });
+  /** The rest position the displacement is measured from, and the state indices of the displacement and its rate. */
+  constructor(readonly rest: number, readonly zIndex: number, readonly vIndex: number) {}
+  /** One accepted step from t0 to t1, the rate v0 at its start and v1 at its end; the rate's zero by Illinois, the displacement there from the same dense output. */
+  step(t0: number, t1: number, v0: number, v1: number, dense: DenseOutput): void {
+    if (!(v0 > 0 && v1 <= 0) && !(v0 < 0 && v1 >= 0)) return;
+    const t = illinois((x) => dense.value(this.vIndex, x), t0, t1, v0, v1, 1e-9 * Math.max(1, t1));
+    this.points.push({ t, z: dense.value(this.zIndex, t) - this.rest });
   }
 }
 

@@ -14,6 +14,7 @@ import { rigidBody } from './body-inertia.ts';
 import { groundContact, inSeries, rideParam, roughGround, stone, type ProfileValue } from './ride-data.ts';
 import { groundOf, underBothWheels, type RideCase } from './ride-types.ts';
 import { wheelEnvelope, type Envelope } from './road-envelope.ts';
+import type { Enough } from './decay.ts';
 import type { RideSystem, RoadInput } from './ride-system.ts';
 
 // The ride model's parameters from the specification, the mass model, the
@@ -38,6 +39,10 @@ export interface RideOptions {
   duration?: number;
   /** Every damper off (for the energy check). */
   undamped?: boolean;
+  /** The integrator's relative tolerance in place of RIDE_TOLERANCE (the benchmark's search). */
+  tolerance?: number;
+  /** Ends the run early (the tuner's short runs). */
+  enough?: Enough;
 }
 
 export interface BuiltRide {

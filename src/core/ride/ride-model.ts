@@ -13,6 +13,8 @@ export function rideCaseOf(i: RideInput, which: RideCase, o: RideOptions = {}): 
     sampleInterval: rideParam(i.data, 'ride.inputs', 'sample_interval_s').value,
     decayFraction: rideParam(i.data, 'ride.inputs', 'decay_fraction').value,
     title: rideTitle(which),
+    ...(o.tolerance !== undefined ? { tolerance: o.tolerance } : {}),
+    ...(o.enough ? { enough: o.enough } : {}),
   });
 }
 

@@ -1,23 +1,38 @@
 import { G } from '../units/units.ts';
 import type { BuiltRide } from './ride-build.ts';
-import { decayCycles, TurningPoints } from './decay.ts';
-import { integrate } from './integrate.ts';
+import { decayCycles, TurningPoints, type Enough } from './decay.ts';
+import { integrate, type DenseOutput } from './integrate.ts';
+import { PeakTracker } from './peak-tracker.ts';
 import { anyWheelPushes, contactMode, crewShut, derivative, newForces, stateSize, wheelShut } from './ride-system.ts';
 import type { RideChannel, RideResult, RideCase } from './ride-types.ts';
 import { staticEquilibrium } from './static-equilibrium.ts';
 
 // One ride case from its built system: the static equilibrium, the run by
-// RK4 with contact events, and the results (mechanics note, section 8).
+// the adaptive Dormand-Prince integrator with contact events, and the results
+// (mechanics note, section 8).
 
 export interface RunSettings {
   duration: number;
   sampleInterval: number;
   /** Decay measured down to this fraction of the first amplitude. */
   decayFraction: number;
-  /** Step as a fraction of the shortest period. */
-  stepsPerPeriod?: number;
+  /** The integrator's relative tolerance (RIDE_TOLERANCE where absent). */
+  tolerance?: number;
+  /** Most trial steps (MAX_RIDE_STEPS where absent). */
+  maxSteps?: number;
+  /** Ends the run early once it returns true, given each crew member's turning points so far and the first wheel contact (a short run for the tuner). */
+  enough?: Enough;
   title: string;
 }
+
+/**
+ * The integrator's relative tolerance (the absolute one is a thousandth of it,
+ * in metres and metres per second, as in the odex reference): a decade
+ * tighter than the loosest that keeps the crew's rise and the peak wheel
+ * force within 0.1 % of odex at 1e-10 on the demonstration builds' five
+ * cases (1e-4; bench/ride.ts searches it for the rough-ground ridge).
+ */
+export const RIDE_TOLERANCE = 1e-5;
 
 const TITLES: Record<RideCase, string> = {
   'rough-ridge': 'rough-ground ridge across both tracks',
@@ -29,18 +44,25 @@ const TITLES: Record<RideCase, string> = {
 export const rideTitle = (c: RideCase) => TITLES[c];
 
 /**
- * Most RK4 steps in one case, contact events included: the demonstration
- * builds take 3,000 to 6,500; at this many the step is so short that some
- * part of the model is far from a real chariot, and a run would take minutes.
+ * Most trial steps in one case, rejected ones and events included: the
+ * demonstration builds take a few hundred to a few thousand; at this many some
+ * part of the model is far from a real chariot (a mass or stiffness so far off
+ * that its period is a few microseconds), and a run would take minutes.
  */
 export const MAX_RIDE_STEPS = 200_000;
 
-/** Why the fixed step cannot carry the run, or null. */
-function stepTrouble(h: number, period: number, duration: number): string | null {
-  if (!(h > 0) || !Number.isFinite(h)) return 'the integration step is not a positive number (a stiffness or mass of the model is not known)';
-  const steps = Math.ceil(duration / h);
-  if (steps > MAX_RIDE_STEPS) return `a fixed step of ${(h * 1e6).toFixed(2)} µs (1/60 of the shortest period, ${(period * 1e3).toFixed(3)} ms) would take ${steps} steps over the ${duration} s run, more than the ${MAX_RIDE_STEPS} allowed`;
-  return null;
+/**
+ * Points at which each accepted step is read for the peaks: two inside, on
+ * the dense output, and its end. With the parabola through a peak's
+ * neighbours (peak-tracker.ts) this keeps the peak wheel force of the
+ * demonstration builds' drop and stone strikes within 0.04 % of odex at
+ * 1e-10 at every tolerance from 1e-4 down; the end alone left 0.1-1 %.
+ */
+const INNER = 3;
+
+/** Why the model cannot be integrated at all, or null. */
+function unfit(period: number): string | null {
+  return period > 0 && Number.isFinite(period) ? null : 'the shortest period of the model is not a positive number (a stiffness or mass of the model is not known)';
 }
 
 /** A case that could not be run: every measure NaN (not a number the rules can judge), the reason kept. */
@@ -68,10 +90,8 @@ function notRun(b: BuiltRide, which: RideCase, title: string, reason: string): R
 export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResult {
   const sys = b.system;
   const n = sys.crew.length, N = 3 + n;
-  // A fraction of the shortest period, and half the ground point's time constant (RK4 is then accurate on its decay).
-  const h = Math.min(1e-3, b.shortestPeriod / (s.stepsPerPeriod ?? 60), b.shortestTimeConstant / 2);
-  const unfit = b.unknown ?? stepTrouble(h, b.shortestPeriod, s.duration);
-  if (unfit) return notRun(b, which, s.title, unfit);
+  const trouble = b.unknown ?? unfit(b.shortestPeriod);
+  if (trouble) return notRun(b, which, s.title, trouble);
   let rest: ReturnType<typeof staticEquilibrium>;
   try {
     rest = staticEquilibrium(sys);
@@ -81,92 +101,110 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
   const y0 = Float64Array.from(rest.y);
   if (b.drop > 0) for (let i = 0; i < N; i++) if (i !== 1 && i !== 2) y0[i] += b.drop;
   const scratch = newForces(sys), forces = newForces(sys);
-  const dyScratch = new Float64Array(stateSize(sys));
+  const dyScratch = new Float64Array(stateSize(sys)), probe = new Float64Array(stateSize(sys));
   const wheelCount = sys.wheels.length;
 
   const crewStatic = sys.crew.map((_, i) => rest.y[3 + i]);
-  const crewRise = sys.crew.map(() => 0), crewLift = sys.crew.map(() => 0), crewAir = sys.crew.map(() => 0), crewPeak = sys.crew.map(() => 0);
-  const wheelAir = sys.wheels.map(() => 0), wheelPeak = sys.wheels.map(() => 0);
-  let yokeMin = Infinity, yokeMax = -Infinity, firstContact = b.drop > 0 ? NaN : b.inputEnd;
-  const turning = sys.crew.map(() => new TurningPoints());
+  const peaks = () => sys.crew.map(() => new PeakTracker());
+  const crewRise = peaks(), crewLift = peaks(), crewPeak = peaks();
+  const crewAir = sys.crew.map(() => 0);
+  const wheelAir = sys.wheels.map(() => 0), wheelPeak = sys.wheels.map(() => new PeakTracker());
+  const yokeMax = new PeakTracker(), yokeLow = new PeakTracker();
+  let firstContact = b.drop > 0 ? NaN : b.inputEnd;
+  const turning = sys.crew.map((_, i) => new TurningPoints(crewStatic[i], 3 + i, N + 3 + i));
+  const turningPoints = turning.map((tp) => tp.points);
 
   const t_s: number[] = [];
   const ch = (name: string, unit: string): RideChannel => ({ name, unit, values: [] });
   const crewCh = sys.crew.map((c) => [ch(`${c.role} height`, 'mm'), ch(`${c.role} floor force`, 'N')]);
   const wheelCh = sys.wheels.map((w) => [ch(`${w.side} wheel centre height`, 'mm'), ch(`${w.side} wheel ground force`, 'N')]);
   const yokeCh = ch('yoke force', 'N');
-  let nextSample = 0;
-  const prev = Float64Array.from(y0);
-  const sample = (t: number, y: ArrayLike<number>) => {
+  const restAt = (w: { y: number }) => rest.y[0] + (sys.axleX - sys.body.x) * rest.y[1] + (w.y - sys.body.y) * rest.y[2];
+  /** The peaks' record at one point: step ends and dense samples, in time order. */
+  const record = (t: number, y: ArrayLike<number>) => {
     derivative(sys, t, y, dyScratch, forces);
+    for (let i = 0; i < n; i++) {
+      const c = sys.crew[i];
+      crewRise[i].add(t, y[3 + i] - crewStatic[i]);
+      crewLift[i].add(t, y[3 + i] - (y[0] + (c.x - sys.body.x) * y[1] + (c.y - sys.body.y) * y[2]));
+      crewPeak[i].add(t, forces.crew[i]);
+    }
+    for (let i = 0; i < wheelCount; i++) wheelPeak[i].add(t, forces.wheel[i]);
+    yokeMax.add(t, forces.yoke);
+    yokeLow.add(t, -forces.yoke);
+  };
+  const sample = (t: number, y: ArrayLike<number>) => {
+    record(t, y);
     t_s.push(t);
     sys.crew.forEach((_, i) => { crewCh[i][0].values.push((y[3 + i] - crewStatic[i]) * 1e3); crewCh[i][1].values.push(forces.crew[i]); });
-    sys.wheels.forEach((w, i) => { wheelCh[i][0].values.push((y[0] + (sys.axleX - sys.body.x) * y[1] + (w.y - sys.body.y) * y[2] - (rest.y[0] + (sys.axleX - sys.body.x) * rest.y[1] + (w.y - sys.body.y) * rest.y[2])) * 1e3); wheelCh[i][1].values.push(forces.wheel[i]); });
+    sys.wheels.forEach((w, i) => { wheelCh[i][0].values.push((y[0] + (sys.axleX - sys.body.x) * y[1] + (w.y - sys.body.y) * y[2] - restAt(w)) * 1e3); wheelCh[i][1].values.push(forces.wheel[i]); });
     yokeCh.values.push(forces.yoke);
   };
   sample(0, y0);
-  nextSample = s.sampleInterval;
-  const interp = new Float64Array(y0.length);
-  for (let i = 0; i < n; i++) turning[i].add(0, y0[3 + i] - crewStatic[i], y0[N + 3 + i]);
+  let nextSample = s.sampleInterval;
+  const v0 = new Float64Array(n);
+  for (let i = 0; i < n; i++) v0[i] = y0[N + 3 + i];
 
+  const tolerance = s.tolerance ?? RIDE_TOLERANCE;
   const stats = integrate(
     (t, y, dy) => derivative(sys, t, y, dy),
     (t, y) => contactMode(sys, t, y, scratch),
     y0, 0, s.duration,
     {
-      h,
+      rtol: tolerance,
+      atol: tolerance * 1e-3,
+      h0: b.shortestPeriod / 60,
       eventTolerance: 1e-9,
       breaks: b.breaks,
-      maxSteps: MAX_RIDE_STEPS,
-      onStep(t0, t1, y, mode) {
+      maxSteps: s.maxSteps ?? MAX_RIDE_STEPS,
+      onStep(t0: number, t1: number, y: Float64Array, mode: number, dense: DenseOutput) {
         const dt = t1 - t0;
         // Off the ground or the floor only while the gap is open, not where the contact law has cut the force.
         for (let i = 0; i < wheelCount; i++) if (!wheelShut(mode, i)) wheelAir[i] += dt;
         for (let i = 0; i < n; i++) if (!crewShut(sys, mode, i)) crewAir[i] += dt;
         if (Number.isNaN(firstContact) && anyWheelPushes(sys, mode)) firstContact = t0;
-        derivative(sys, t1, y, dyScratch, forces);
+        // The series and the peaks read the dense output between the step's ends (a peak is refined by a parabola through its neighbours: peak-tracker.ts).
+        for (let j = 1; j <= INNER; j++) {
+          const tj = t0 + (dt * j) / INNER;
+          while (nextSample <= tj + 1e-12) {
+            dense.at(Math.min(nextSample, t1), probe);
+            sample(nextSample, probe);
+            nextSample += s.sampleInterval;
+          }
+          if (j < INNER) dense.at(tj, probe);
+          record(tj, j < INNER ? probe : y);
+        }
         for (let i = 0; i < n; i++) {
-          const c = sys.crew[i];
-          crewRise[i] = Math.max(crewRise[i], y[3 + i] - crewStatic[i]);
-          const floorAt = y[0] + (c.x - sys.body.x) * y[1] + (c.y - sys.body.y) * y[2];
-          crewLift[i] = Math.max(crewLift[i], y[3 + i] - floorAt);
-          crewPeak[i] = Math.max(crewPeak[i], forces.crew[i]);
-          turning[i].add(t1, y[3 + i] - crewStatic[i], y[N + 3 + i]);
+          turning[i].step(t0, t1, v0[i], y[N + 3 + i], dense);
+          v0[i] = y[N + 3 + i];
         }
-        for (let i = 0; i < wheelCount; i++) wheelPeak[i] = Math.max(wheelPeak[i], forces.wheel[i]);
-        yokeMin = Math.min(yokeMin, forces.yoke);
-        yokeMax = Math.max(yokeMax, forces.yoke);
-        while (nextSample <= t1 + 1e-12) {
-          const a = (nextSample - t0) / dt;
-          for (let k = 0; k < y0.length; k++) interp[k] = prev[k] + a * (y[k] - prev[k]);
-          sample(nextSample, interp);
-          nextSample += s.sampleInterval;
-        }
-        prev.set(y);
+        return s.enough?.(turningPoints, firstContact) ?? false;
       },
     },
   );
 
   if (stats.stopped) return notRun(b, which, s.title, stats.stopped);
+  const rises = crewRise.map((p, i) => Math.max(0, p.max, ...turningPoints[i].map((q) => q.z)));
   const decays = turning.map((tp) => decayCycles(tp.points, s.decayFraction, Number.isNaN(firstContact) ? Infinity : firstContact));
   const anyNever = decays.some((d) => d.cycles === null);
+  const shortRun = stats.t < s.duration - 1e-9 ? `, ended at ${stats.t.toFixed(3)} s once the decay was decided` : '';
   return {
     case: which,
     title: s.title,
     crew: sys.crew.map((c, i) => ({
       role: c.role,
-      rise_mm: crewRise[i] * 1e3,
+      rise_mm: rises[i] * 1e3,
       airborne_ms: crewAir[i] * 1e3,
-      floor_dlf: crewPeak[i] / (c.m * G),
-      lift_mm: crewLift[i] * 1e3,
+      floor_dlf: crewPeak[i].max / (c.m * G),
+      lift_mm: Math.max(0, crewLift[i].max) * 1e3,
       decay_cycles: decays[i].cycles,
     })),
-    wheels: sys.wheels.map((w, i) => ({ wheel: w.side, airborne_ms: wheelAir[i] * 1e3, dlf: wheelPeak[i] / rest.forces.wheel[i] })),
-    yokeForceMin_N: yokeMin,
-    yokeForceMax_N: yokeMax,
+    wheels: sys.wheels.map((w, i) => ({ wheel: w.side, airborne_ms: wheelAir[i] * 1e3, dlf: wheelPeak[i].max / rest.forces.wheel[i] })),
+    yokeForceMin_N: -yokeLow.max,
+    yokeForceMax_N: yokeMax.max,
     yokeForceStatic_N: rest.forces.yoke,
     decayCycles: anyNever ? null : Math.max(...decays.map((d) => d.cycles!)),
-    method: `classical Runge-Kutta (RK4), fixed step ${(h * 1e3).toFixed(3)} ms (the least of 1/${s.stepsPerPeriod ?? 60} of the shortest period ${(b.shortestPeriod * 1e3).toFixed(1)} ms, half the ground's time constant ${Number.isFinite(b.shortestTimeConstant) ? `${(b.shortestTimeConstant * 1e3).toFixed(2)} ms` : '(none)'} and 1 ms), contact changes located by bisection to 1 ns (${stats.events} events)`,
+    method: `Dormand-Prince 5(4) with its dense output, adaptive step (relative tolerance ${tolerance}, absolute ${tolerance * 1e-3} m and m/s; ${stats.steps} steps accepted, ${stats.rejected} rejected or cut back, ${stats.evaluations} evaluations), every contact opening and closing located on the dense output to 1 ns and the step ended there (${stats.events} events); series and peaks read from the dense output${shortRun}`,
     steps: stats.steps,
     series: { t_s, channels: [...crewCh.flat(), ...wheelCh.flat(), yokeCh] },
     floorDamping: b.floorDamping,

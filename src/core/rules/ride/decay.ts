@@ -48,7 +48,7 @@ export const rideDecay = defineRule({
       combination: 'characteristic' as const,
       fix: need === null
         ? 'None needed.'
-        : `Damp the floor more: ${need.ratio === null ? `no floor damping ratio up to ${num(need.grid[need.grid.length - 1])} meets the ride rules` : `a floor damping ratio of ${num(need.ratio)} would meet the ride rules`}; measure a floor sample with axletree floor-test and name it in the specification.`,
+        : `Damp the floor more: ${need.ratio === null ? `no floor damping ratio up to ${num(need.bounds[1])} meets the ride rules` : `a floor damping ratio of ${num(need.ratio)} would meet the ride rules`}; measure a floor sample with axletree floor-test and name it in the specification.`,
       working: [
         ...rideWorking(r),
         ...r.crew.map((c) => (c.decay_cycles === null ? `${c.role}: not below the fraction within the run` : step(`${c.role}: cycles to fall below the fraction`, '', c.decay_cycles, '1'))),
