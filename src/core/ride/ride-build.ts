@@ -93,7 +93,7 @@ const envelopes = new WeakMap<RideInput, Map<string, Envelope>>();
 
 function envelopeOf(i: RideInput, bump: Bump, r: number): Envelope {
   let byBump = envelopes.get(i);
-  if (!byBump) envelopes.set(i, (byBump = new Map()));
+  if (!byBump) envelopes.set(i, (byBump = new Map<string, Envelope>()));
   const key = `${bump.height} ${bump.length} ${r}`;
   let env = byBump.get(key);
   if (!env) byBump.set(key, (env = wheelEnvelope(bump, r)));
