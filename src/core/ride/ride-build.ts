@@ -13,7 +13,7 @@ import { G, mm, UNITS } from '../units/units.ts';
 import { rigidBody } from './body-inertia.ts';
 import { groundContact, inSeries, rideParam, roughGround, stone, type ProfileValue } from './ride-data.ts';
 import { groundOf, underBothWheels, type RideCase } from './ride-types.ts';
-import { wheelEnvelope, type Envelope } from './road-envelope.ts';
+import { wheelEnvelope, type Bump, type Envelope } from './road-envelope.ts';
 import type { Enough } from './decay.ts';
 import type { RideSystem, RoadInput } from './ride-system.ts';
 
@@ -86,6 +86,18 @@ export function floorDampingOf(i: RideInput): { value: number; source: string } 
   if (measured) return measured;
   const l = rideParam(i.data, 'ride.supports', 'floor_damping_ratio');
   return { value: l.value, source: `ride.supports.floor_damping_ratio, rules/parameters/ride.yaml: ${l.source}` };
+}
+
+/** The wheel's path over each bump, tabulated once per ride input: its cases over the same ground and the tuner's runs share it. */
+const envelopes = new WeakMap<RideInput, Map<string, Envelope>>();
+
+function envelopeOf(i: RideInput, bump: Bump, r: number): Envelope {
+  let byBump = envelopes.get(i);
+  if (!byBump) envelopes.set(i, (byBump = new Map<string, Envelope>()));
+  const key = `${bump.height} ${bump.length} ${r}`;
+  let env = byBump.get(key);
+  if (!env) byBump.set(key, (env = wheelEnvelope(bump, r)));
+  return env;
 }
 
 export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): BuiltRide {
@@ -181,7 +193,7 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
     const profile = over === 'rough-ground' ? roughGround(spec, data) : stone(spec);
     sources.push(...profile.height.sources, ...profile.length.sources);
     const bump = { height: o.bumpHeight ?? profile.height.value, length: o.bumpLength ?? profile.length.value };
-    const env: Envelope = wheelEnvelope(bump, r);
+    const env = envelopeOf(i, bump, r);
     const lead = 0.05 - env.start; // the wheel starts 50 mm short of where it first touches
     const struck = underBothWheels(which) ? [true, true] : [true, false];
     road = (w, t, out) => {

@@ -42,3 +42,16 @@ export function nodeAt(nodes: readonly number[], angle: number): number {
   if (i < 0) throw new Error(`the ring mesh has no node at ${angle} rad`);
   return i;
 }
+
+/** A mesh's node angles seen from a frame turned by `by` (each angle plus `by`), ascending in [0, 2π). */
+export function turnedMesh(nodes: readonly number[], by: number): number[] {
+  return nodes.map((a) => {
+    const w = wrapAngle(a + by);
+    return TWO_PI - w < SAME ? 0 : w;
+  }).sort((a, b) => a - b);
+}
+
+/** Whether two ascending meshes hold the same nodes. */
+export function sameMesh(a: readonly number[], b: readonly number[]): boolean {
+  return a.length === b.length && a.every((x, i) => Math.abs(x - b[i]) < SAME);
+}

@@ -1,5 +1,7 @@
 import { nodeAt, ringNodes, wrapAngle } from './ring-mesh.ts';
 import { RingNotHeld, solveRingFrame, type RingLoad, type RingSolution, type RingSpring } from './ring-frame.ts';
+import { RingSystem } from './ring-system.ts';
+import { searchSlackSpokes } from './slack-spokes.ts';
 
 // The wheel as a ring frame (design basis, section 6): the felloe a closed
 // ring of straight beam elements on its mid-depth radius, the spokes axial
@@ -99,37 +101,12 @@ export interface WheelRingResult {
 
 const TWO_PI = 2 * Math.PI;
 
-/** A spoke force this small against the loads (P + C0) is nil: it neither drops a spoke nor brings one back. */
-const TOLERANCE = 1e-6;
-
 /** Bending stiffness across a spoke, as a fraction of k·L² (under a millionth of a real spoke's; much smaller and a ring hinged at every joint loses digits). */
 const TOKEN = 1e-7;
 
 /** Spoke angles from the contact. */
 export function spokeAngles(spokes: number, offset: number): number[] {
   return Array.from({ length: spokes }, (_, k) => wrapAngle(offset + (TWO_PI * k) / spokes));
-}
-
-/**
- * The next set of bearing spokes, one change at a time: the spoke whose force
- * would be the most tensile leaves, or else the slack spoke that would be the
- * most compressed comes back; null when every bearing spoke pushes and no
- * slack one would. (Dropping every tensile spoke at once can overshoot: a
- * ring hinged at the contact may put them all in tension before it settles
- * on the two spokes beside the contact.)
- */
-function nextActive(active: readonly boolean[], would: readonly number[], tol: number): boolean[] | null {
-  let worst = -1;
-  active.forEach((a, i) => {
-    if (a && would[i] < -tol && (worst < 0 || would[i] < would[worst])) worst = i;
-  });
-  if (worst < 0) {
-    active.forEach((a, i) => {
-      if (!a && would[i] > tol && (worst < 0 || would[i] > would[worst])) worst = i;
-    });
-  }
-  if (worst < 0) return null;
-  return active.map((a, i) => (i === worst ? !a : a));
 }
 
 /** The pre-compression state alone: the free ring under the spokes' pushes and the tyre's pressure (three token holds; in balance, they take nothing). */
@@ -175,65 +152,73 @@ function notHeld(ring: WheelRing, load: WheelLoad, why: string): WheelRingResult
   };
 }
 
-function solveHeldRing(ring: WheelRing, load: WheelLoad): WheelRingResult {
-  const span = (TWO_PI * ring.radius) / ring.spokes;
+/** The ring's mesh under a load: nodes at the contact, opposite it, at every spoke and hinge and at the angles asked for. */
+export function wheelMesh(ring: WheelRing, load: WheelLoad) {
   const angles = spokeAngles(ring.spokes, load.spokeOffset);
   const hingeAngles = load.hinges ?? [];
-  if (hingeAngles.length > 0 && ring.precompression > 0) throw new Error('a pre-compressed tyre ties the felloe joints: the ring has no hinges');
   const nodes = ringNodes([0, Math.PI, ...angles, ...hingeAngles, ...(load.nodesAt ?? [])], TWO_PI / ring.spokes / ring.elementsPerSpan);
-  const spokeNodes = angles.map((a) => nodeAt(nodes, a));
-  const hinges = hingeAngles.map((a) => nodeAt(nodes, a));
-  const C0 = ring.precompression;
-  const tyre = tyreState(ring, nodes, spokeNodes);
-  const n = nodes.length;
-  const struts = spokeNodes.map((node) => ({ node, EI: (ring.token ?? TOKEN) * ring.spokeStiffness * ring.spokeLength ** 2, length: ring.spokeLength }));
-  let active = angles.map(() => true);
-  const seen = new Set<string>([active.map(() => 1).join('')]);
-  for (let round = 1; round <= 4 * ring.spokes; round++) {
-    const springs = spokeNodes.filter((_, i) => active[i]).map((node): RingSpring => ({ node, direction: 'radial', k: ring.spokeStiffness }));
-    // A slack spoke no longer pushes: its C0 comes off the rim.
-    const released = spokeNodes.filter((_, i) => !active[i] && C0 > 0).map((node): RingLoad => ({ node, radial: -C0, tangential: 0 }));
-    const sol = solveRingFrame({ radius: ring.radius, nodes, EA: ring.EA, EI: ring.EI, springs, struts, hinges, loads: [{ node: 0, radial: -load.P, tangential: 0 }, ...released] });
-    // Each spoke's force from its node's inward movement under the ground load (the nave fixed), whether or not it bore this round.
-    const outward = spokeNodes.map((node) => sol.u[3 * node] * Math.sin(nodes[node]) - sol.u[3 * node + 1] * Math.cos(nodes[node]));
-    const would = outward.map((d) => C0 - ring.spokeStiffness * d);
-    const next = nextActive(active, would, TOLERANCE * (load.P + C0));
-    const key = next?.map((a) => (a ? 1 : 0)).join('');
-    // Settled, or stopped: a set seen before (the search would cycle) or the last round, its state handed on with the reason.
-    const stop = next === null ? null : seen.has(key!) ? 'it came back to a set of bearing spokes it had tried' : round === 4 * ring.spokes ? `it changed the bearing spokes ${round} times, its limit` : undefined;
-    if (stop !== undefined) {
-      const el = (j: number, which: 'N' | 'V') => (s: RingSolution | null) => (s ? s.elements[j][which] : 0);
-      const elN = (j: number) => el(j, 'N')(sol) + el(j, 'N')(tyre);
-      const elV = (j: number) => el(j, 'V')(sol) + el(j, 'V')(tyre);
-      const moment = sol.moment.map((m, j) => m + (tyre ? tyre.moment[j] : 0));
-      const hoop = nodes.map((_, j) => (elN((j - 1 + n) % n) + elN(j)) / 2);
-      const shear = nodes.map((_, j) => Math.max(Math.abs(elV((j - 1 + n) % n)), Math.abs(elV(j))));
-      const peakNode = moment.reduce((best, m, j) => (Math.abs(m) > Math.abs(moment[best]) ? j : best), 0);
-      return {
-        ring,
-        load,
-        nodes,
-        moment,
-        hoop,
-        shear,
-        spokes: angles.map((angle, i) => ({ angle, force: active[i] ? Math.max(0, would[i]) : 0, active: active[i] })),
-        peak: { node: peakNode, angle: nodes[peakNode], moment: moment[peakNode], hoop: hoop[peakNode] },
-        span,
-        coefficient: load.P > 0 ? Math.abs(moment[peakNode]) / (load.P * span) : 0,
-        rounds: round,
-        tokenForce: Math.max(...sol.strutForce),
-        contactDeflection: -(sol.u[0] * Math.sin(nodes[0]) - sol.u[1] * Math.cos(nodes[0])),
-        ...(stop === null ? {} : { unsettled: `the search for slack spokes did not settle: ${stop}; a spoke is left ${wrongSign(active, would).toFixed(1)} N from the force its state allows` }),
-      };
-    }
-    seen.add(key!);
-    active = next!;
-  }
-  // The last round always stops above; this only satisfies the compiler.
-  throw new Error('unreachable: the slack-spoke search ran past its last round');
+  return { angles, hingeAngles, nodes };
 }
 
-/** The largest force of the wrong sign: a bearing spoke pulled, or a slack one that would push, N. */
-function wrongSign(active: readonly boolean[], would: readonly number[]): number {
-  return Math.max(0, ...would.map((w, i) => (active[i] ? -w : w)));
+/** The ring on its spokes' token struts, hinged at `hinges`: what stays while the bearing spokes change. */
+export function wheelSystem(ring: WheelRing, nodes: readonly number[], spokeNodes: readonly number[], hinges: readonly number[]): RingSystem {
+  const struts = spokeNodes.map((node) => ({ node, EI: (ring.token ?? TOKEN) * ring.spokeStiffness * ring.spokeLength ** 2, length: ring.spokeLength }));
+  return new RingSystem({ radius: ring.radius, nodes, EA: ring.EA, EI: ring.EI, struts, hinges });
+}
+
+/** The bearing spokes as radial springs. */
+export function bearingSprings(ring: WheelRing, spokeNodes: readonly number[], active: readonly boolean[]): RingSpring[] {
+  return spokeNodes.filter((_, i) => active[i]).map((node): RingSpring => ({ node, direction: 'radial', k: ring.spokeStiffness }));
+}
+
+/** The ground load P at the contact node, and a slack spoke's C0 off the rim (it no longer pushes). */
+export function groundLoads(ring: WheelRing, P: number, contact: number, spokeNodes: readonly number[], active: readonly boolean[]): RingLoad[] {
+  const C0 = ring.precompression;
+  const released = spokeNodes.filter((_, i) => !active[i] && C0 > 0).map((node): RingLoad => ({ node, radial: -C0, tangential: 0 }));
+  return [{ node: contact, radial: -P, tangential: 0 }, ...released];
+}
+
+function solveHeldRing(ring: WheelRing, load: WheelLoad): WheelRingResult {
+  const span = (TWO_PI * ring.radius) / ring.spokes;
+  if ((load.hinges ?? []).length > 0 && ring.precompression > 0) throw new Error('a pre-compressed tyre ties the felloe joints: the ring has no hinges');
+  const { angles, hingeAngles, nodes } = wheelMesh(ring, load);
+  const spokeNodes = angles.map((a) => nodeAt(nodes, a));
+  const hinges = hingeAngles.map((a) => nodeAt(nodes, a));
+  const tyre = tyreState(ring, nodes, spokeNodes);
+  const n = nodes.length;
+  const system = wheelSystem(ring, nodes, spokeNodes, hinges);
+  const end = searchSlackSpokes({
+    nodes, spokeNodes, k: ring.spokeStiffness, C0: ring.precompression, P: load.P, limit: 4 * ring.spokes,
+    solve: (active) => system.factorWith(bearingSprings(ring, spokeNodes, active)).solve(system.loadVector(groundLoads(ring, load.P, 0, spokeNodes, active))),
+  });
+  const { active, would, u } = end;
+  const sol = system.solution(u, bearingSprings(ring, spokeNodes, active));
+  const el = (j: number, which: 'N' | 'V') => (s: RingSolution | null) => (s ? s.elements[j][which] : 0);
+  const elN = (j: number) => el(j, 'N')(sol) + el(j, 'N')(tyre);
+  const elV = (j: number) => el(j, 'V')(sol) + el(j, 'V')(tyre);
+  const moment = sol.moment.map((m, j) => m + (tyre ? tyre.moment[j] : 0));
+  const hoop = nodes.map((_, j) => (elN((j - 1 + n) % n) + elN(j)) / 2);
+  const shear = nodes.map((_, j) => Math.max(Math.abs(elV((j - 1 + n) % n)), Math.abs(elV(j))));
+  const peakNode = moment.reduce((best, m, j) => (Math.abs(m) > Math.abs(moment[best]) ? j : best), 0);
+  return {
+    ring,
+    load,
+    nodes,
+    moment,
+    hoop,
+    shear,
+    spokes: angles.map((angle, i) => ({ angle, force: active[i] ? Math.max(0, would[i]) : 0, active: active[i] })),
+    peak: { node: peakNode, angle: nodes[peakNode], moment: moment[peakNode], hoop: hoop[peakNode] },
+    span,
+    coefficient: load.P > 0 ? Math.abs(moment[peakNode]) / (load.P * span) : 0,
+    rounds: end.rounds,
+    tokenForce: Math.max(...sol.strutForce),
+    contactDeflection: contactDeflection(u, nodes, 0),
+    ...(end.unsettled === undefined ? {} : { unsettled: end.unsettled }),
+  };
+}
+
+/** How far a node moves in towards the hub, mm. */
+export function contactDeflection(u: Float64Array, nodes: readonly number[], node: number): number {
+  return -(u[3 * node] * Math.sin(nodes[node]) - u[3 * node + 1] * Math.cos(nodes[node]));
 }

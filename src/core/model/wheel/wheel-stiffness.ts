@@ -1,7 +1,6 @@
 import { formatNumber as fmt } from '../../format/number-format.ts';
-import { solveWheelRing } from './wheel-ring.ts';
+import { RimGiveScan } from './rim-give.ts';
 import type { WheelRingSpec } from './wheel-ring-spec.ts';
-import { wrapAngle } from './ring-mesh.ts';
 
 // The wheel's own radial stiffness from its ring frame (design basis,
 // section 8): the felloe bending between the spokes and the spokes' axial
@@ -31,12 +30,12 @@ export function wheelStiffness(ws: WheelRingSpec, P: number): WheelStiffness {
   const count = ws.hinged || ws.ring.precompression > 0 ? n * PER_SPAN : PER_SPAN;
   const compliances: number[] = [];
   let unsettled = 0;
+  // One ring assembled for the positions that share a mesh, a factor for each set of bearing spokes.
+  const scan = new RimGiveScan(ws, P);
   for (let i = 0; i < count; i++) {
-    const at = ((2 * Math.PI) / n / PER_SPAN) * i;
-    const joints = ws.joints.angles.map((j) => wrapAngle(j - at));
-    const r = solveWheelRing(ws.ring, { P, spokeOffset: wrapAngle(-at), hinges: ws.hinged ? joints : [], nodesAt: joints });
-    if (!Number.isFinite(r.contactDeflection)) return unknownStiffness(r.unsettled ?? 'the ring model gave no deflection');
-    compliances.push(r.contactDeflection / 1000 / P); // m/N
+    const r = scan.at(((2 * Math.PI) / n / PER_SPAN) * i);
+    if (!Number.isFinite(r.deflection)) return unknownStiffness(r.unsettled ?? 'the ring model gave no deflection');
+    compliances.push(r.deflection / 1000 / P); // m/N
     if (r.unsettled) unsettled++;
   }
   const mean = compliances.reduce((s, c) => s + c, 0) / compliances.length;
