@@ -16,6 +16,7 @@ import { smallPatternLp } from '../../src/core/stock/small-pattern-lp.ts';
 import { WorkMeter } from '../../src/core/stock/work-meter.ts';
 import { bruteForceOptimum, seeded } from '../support/brute-force-cutting.ts';
 import { randomInstance } from '../support/random-cutting.ts';
+import { CUTSTOCK, LP_BOUND } from '../support/textbook-cutstock.ts';
 
 const rand = seeded(16_3);
 const instances = Array.from({ length: 80 }, () => randomInstance(rand, 10));
@@ -46,19 +47,9 @@ describe('the pattern search against exhaustive search', () => {
 
 describe('the pattern LP on the dense simplex', () => {
   it('CUTSTOCK: the published LP value 452.25 rolls', () => {
-    // Gilmore & Gomory, Operations Research 9 (1961), as the GAMS model library's CUTSTOCK: roll 100;
-    // pieces 45, 36, 31, 14 wanted 97, 610, 395, 211; LP optimum 452.25.
-    const inst: CuttingInstance = {
-      kerf_mm: 0,
-      stock: [{ length_mm: 100 }],
-      pieces: [
-        { length_mm: 45, quantity: 97 },
-        { length_mm: 36, quantity: 610 },
-        { length_mm: 31, quantity: 395 },
-        { length_mm: 14, quantity: 211 },
-      ],
-    };
-    expect(smallPatternLp(prepareProblem(inst), null, new WorkMeter())).toBeCloseTo(452.25, 9);
+    // Gilmore & Gomory, Operations Research 9 (1961), as the GAMS model library's CUTSTOCK (tests/support/textbook-cutstock.ts).
+    expect(smallPatternLp(prepareProblem(CUTSTOCK), null, new WorkMeter())).toBeCloseTo(LP_BOUND, 9);
+    expect(LP_BOUND).toBe(452.25);
   });
 
   it.each(instances.map((inst, n) => ({ n, inst })))('random instance $n: the LP solver finds the same optimum', ({ inst }) => {
