@@ -1,40 +1,20 @@
-// Both exact methods against exhaustive search on small random instances
-// (seeded, so the same every run) where first-fit decreasing alone misses
-// the optimum: the same optimum, proved, a valid plan, a bound that does not
-// exceed the optimum, and a shortfall where exhaustive search finds no plan.
+// Both exact methods, and the default plan of a small problem (the pattern
+// search of small-plan.ts, no LP solver), against exhaustive search on small
+// random instances (seeded, so the same every run) where first-fit
+// decreasing alone misses the optimum: the same optimum, proved, a valid
+// plan, a bound that does not exceed the optimum, and a shortfall where
+// exhaustive search finds no plan.
 import { beforeAll, describe, expect, it } from 'vitest';
 import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
-import type { CuttingInstance, LpSolver } from '../../src/core/stock/cutting-types.ts';
+import type { CuttingInstance, CuttingPlan, LpSolver } from '../../src/core/stock/cutting-types.ts';
 import { planCutting, type CuttingMethod } from '../../src/core/stock/plan-cutting.ts';
 import { StockShortfallError } from '../../src/core/stock/stock-shortfall.ts';
 import { planProblems } from '../../src/core/stock/validate-plan.ts';
 import { bruteForceOptimum, seeded } from '../support/brute-force-cutting.ts';
+import { randomInstance } from '../support/random-cutting.ts';
 
 const INSTANCES = 30;
 const MAX_PIECES = 8;
-
-function randomInstance(rand: () => number): CuttingInstance {
-  const int = (lo: number, hi: number) => lo + Math.floor(rand() * (hi - lo + 1));
-  const nStock = rand() < 0.6 ? 2 : 1;
-  const priced = rand() < 0.6;
-  const limited = rand() < 0.3;
-  const lengths = [...new Set(Array.from({ length: nStock }, () => int(60, 200)))];
-  const stock = lengths.map((length_mm) => ({
-    length_mm,
-    ...(priced ? { cost: int(5, 40) / 2 } : {}),
-    ...(limited ? { available: int(1, 4) } : {}),
-  }));
-  const longest = Math.max(...lengths);
-  const pieces: CuttingInstance['pieces'] = [];
-  let total = int(1, MAX_PIECES);
-  while (total > 0) {
-    const quantity = int(1, total);
-    // Pieces of a sixth to three fifths of the stock make packing matter.
-    pieces.push({ length_mm: int(Math.round(longest / 6), Math.round((longest * 3) / 5)), quantity, label: `part ${pieces.length + 1}` });
-    total -= quantity;
-  }
-  return { kerf_mm: int(0, 3), stock, pieces };
-}
 
 /** What first-fit decreasing alone achieves; Infinity where it cannot keep within the stock available. */
 function firstFitObjective(inst: CuttingInstance): number {
@@ -53,7 +33,7 @@ const rand = seeded(20240611);
 const cases: { n: number; inst: CuttingInstance; optimum: number }[] = [];
 const impossible: CuttingInstance[] = [];
 for (let tries = 0; cases.length < INSTANCES && tries < 20_000; tries++) {
-  const inst = randomInstance(rand);
+  const inst = randomInstance(rand, MAX_PIECES);
   const optimum = bruteForceOptimum(inst);
   if (optimum === Infinity) {
     if (impossible.length < 5) impossible.push(inst);
@@ -65,17 +45,36 @@ beforeAll(async () => {
   lp = await loadLpSolver();
 });
 
+function expectOptimum(inst: CuttingInstance, plan: CuttingPlan, optimum: number): void {
+  expect(planProblems(inst, plan)).toEqual([]);
+  expect(plan.cost ?? plan.pieces_used).toBeCloseTo(optimum, 6);
+  expect(plan.optimal).toBe(true);
+  expect(plan.lower_bound).toBeLessThanOrEqual(optimum + 1e-6);
+}
+
 describe.each<CuttingMethod>(['column generation', 'arc flow'])('%s against exhaustive search', (method) => {
   it.each(cases)('random instance $n', ({ inst, optimum }) => {
-    const plan = planCutting(inst, lp, { method });
-    expect(planProblems(inst, plan)).toEqual([]);
-    expect(plan.cost ?? plan.pieces_used).toBeCloseTo(optimum, 6);
-    expect(plan.optimal).toBe(true);
-    expect(plan.lower_bound).toBeLessThanOrEqual(optimum + 1e-6);
+    expectOptimum(inst, planCutting(inst, lp, { method }), optimum);
   });
 
   it('reports a shortfall where no plan exists', () => {
     for (const inst of impossible) expect(() => planCutting(inst, lp, { method })).toThrow(StockShortfallError);
+  });
+});
+
+describe('the default plan of a small problem against exhaustive search', () => {
+  it.each(cases)('random instance $n: the pattern search, with the pattern LP value of the LP solver', ({ inst, optimum }) => {
+    const plan = planCutting(inst, lp);
+    expectOptimum(inst, plan, optimum);
+    expect(plan.method).toBe('pattern search, proved optimal');
+    // The same LP (Gilmore and Gomory, Operations Research 9 (1961)) on the dense simplex as on the LP solver: the same optimum.
+    const solver = planCutting(inst, lp, { method: 'column generation' });
+    expect(plan.lp_value).toBeCloseTo(solver.lp_value!, 6);
+    expect(plan.lp_bound).toBeCloseTo(solver.lp_bound!, 6);
+  });
+
+  it('reports a shortfall where no plan exists', () => {
+    for (const inst of impossible) expect(() => planCutting(inst, lp)).toThrow(StockShortfallError);
   });
 });
 

@@ -30,13 +30,23 @@ function failing(real: LpSolver): LpSolver {
 const INSTANCE: CuttingInstance = { kerf_mm: 0, stock: [{ length_mm: 1000 }], pieces: [{ length_mm: 600, quantity: 4 }, { length_mm: 450, quantity: 4 }] };
 
 describe('a solver that fails', () => {
+  // Asked for by name: left to the default, a problem this small is planned without the LP solver (small-plan.ts).
   it('leaves the first-fit plan, saying why, and the plan is sound', () => {
-    const plan = planCutting(INSTANCE, failing(lp));
+    const plan = planCutting(INSTANCE, failing(lp), { method: 'column generation' });
     expect(planProblems(INSTANCE, plan)).toEqual([]);
     expect(plan.method).toMatch(/^first-fit decreasing \(the LP solver failed: The model has not been solved\)/);
     expect(plan.pieces_used).toBe(6);
     // The bound falls back to the stock length: 4200 / 1000.
     expect(plan.lower_bound).toBeCloseTo(4.2, 9);
+  });
+
+  it('by default a problem this small never reaches the solver, and is planned the same as with it', () => {
+    const plan = planCutting(INSTANCE, failing(lp));
+    expect(planProblems(INSTANCE, plan)).toEqual([]);
+    expect(plan.pieces_used).toBe(6);
+    // The pattern LP: each 600 on its own piece (4), the 450s two to a piece (2), so 6 = the plan, proved.
+    expect(plan.lp_value).toBeCloseTo(6, 9);
+    expect(plan.optimal).toBe(true);
   });
 
   it('with the real solver the same instance is planned as before', () => {

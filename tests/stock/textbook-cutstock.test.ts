@@ -1,26 +1,11 @@
-// The textbook cutting-stock example: Gilmore & Gomory, Operations Research 9
-// (1961), as the standard example in the GAMS model library (CUTSTOCK), named
-// in ../shared/design/reference-figures.md "Cutting stock": roll width 100;
-// pieces 45, 36, 31, 14 with demands 97, 610, 395, 211; LP bound 452.25
-// rolls, integer optimum 453.
+// The textbook cutting-stock example (tests/support/textbook-cutstock.ts:
+// Gilmore & Gomory 1961, as GAMS CUTSTOCK): LP bound 452.25 rolls, integer optimum 453.
 import { beforeAll, describe, expect, it } from 'vitest';
 import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
-import type { CuttingInstance, LpSolver } from '../../src/core/stock/cutting-types.ts';
+import type { LpSolver } from '../../src/core/stock/cutting-types.ts';
 import { planCutting, type CuttingMethod } from '../../src/core/stock/plan-cutting.ts';
 import { planProblems } from '../../src/core/stock/validate-plan.ts';
-
-const CUTSTOCK: CuttingInstance = {
-  kerf_mm: 0,
-  stock: [{ length_mm: 100 }],
-  pieces: [
-    { length_mm: 45, quantity: 97 },
-    { length_mm: 36, quantity: 610 },
-    { length_mm: 31, quantity: 395 },
-    { length_mm: 14, quantity: 211 },
-  ],
-};
-const LP_BOUND = 452.25; // GAMS CUTSTOCK (Gilmore & Gomory 1961)
-const OPTIMUM = 453; // GAMS CUTSTOCK (Gilmore & Gomory 1961)
+import { CUTSTOCK, LP_BOUND, OPTIMUM } from '../support/textbook-cutstock.ts';
 
 let lp: LpSolver;
 beforeAll(async () => {

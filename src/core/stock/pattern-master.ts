@@ -4,6 +4,7 @@ import type { CuttingProblem } from './cutting-problem.ts';
 import type { LpSolver } from './cutting-types.ts';
 import { boundedKnapsack } from './knapsack.ts';
 import { addColumn, buildModel, feasibleValues, runMip, solveCounted, type LpColumn } from './lp-model.ts';
+import { artificialCost, startPatterns } from './master-start.ts';
 import { binPattern, patternBin, patternKey, type Pattern } from './pattern.ts';
 import type { WorkMeter } from './work-meter.ts';
 
@@ -45,7 +46,7 @@ export class PatternMaster {
       rows.upper.push(s.available);
     });
     for (const pat of startPatterns(p, start)) this.remember(pat);
-    const big = (p.types.reduce((s, t) => s + t.demand, 0) + 1) * Math.max(1, ...p.stocks.map((s) => s.weight));
+    const big = artificialCost(p);
     const artificial: LpColumn[] = p.types.map((_, i) => ({ cost: big, upper: Infinity, rows: [i], values: [1] }));
     this.model = buildModel(lp, rows, [...artificial, ...this.patterns.map((pat) => this.column(pat))]);
   }
@@ -170,17 +171,4 @@ export class PatternMaster {
     const s = this.p.stocks[pat.stock];
     return { cost: s.weight, upper: s.available, rows, values };
   }
-}
-
-// The starting bins' patterns, then one single-type pattern per piece type
-// and stock that holds it, so the master is never short of columns.
-function startPatterns(p: CuttingProblem, start: Bin[] | null): Pattern[] {
-  const out: Pattern[] = (start ?? []).map((b) => binPattern(p, b));
-  p.types.forEach((t, i) => {
-    p.stocks.forEach((s, k) => {
-      const n = Math.min(t.demand, Math.floor(s.capacity / t.size));
-      if (n > 0) out.push({ stock: k, counts: p.types.map((_, j) => (j === i ? n : 0)) });
-    });
-  });
-  return out;
 }

@@ -7,6 +7,7 @@ import { allItems, firstFit } from './first-fit.ts';
 import { roundUpBound } from './objective-step.ts';
 import { planFromBins } from './plan-from-bins.ts';
 import { simpleBound } from './simple-bound.ts';
+import { planSmall } from './small-plan.ts';
 import { solveExactly, type ExactMethod } from './solve-exactly.ts';
 import { StockShortfallError } from './stock-shortfall.ts';
 import { DEFAULT_WORK_LIMITS, WorkMeter, type WorkLimits } from './work-meter.ts';
@@ -36,6 +37,9 @@ export function planCutting(instance: CuttingInstance, lp: LpSolver | undefined,
   const ffdBins = ffd.unplaced.length === 0 ? downsize(p, ffd.bins) : null;
   const baseline = baselineOf(p, ffdBins);
   const simple = simpleBound(p);
+  // Without a method asked for, a small problem needs no LP solver (small-plan.ts).
+  const small = lp && opts.method === undefined ? planSmall(p, ffdBins, simple, meter, baseline) : null;
+  if (small) return small;
   const meetsBound = ffdBins !== null && binsObjective(p, ffdBins) <= roundUpBound(simple, p.step) + 1e-9;
   if (method === 'first-fit decreasing' || meetsBound || p.types.length === 0) {
     if (!ffdBins) throw new StockShortfallError(p, ffd.unplaced);
