@@ -10,6 +10,8 @@ export interface OdexOptions {
   maxSteps?: number;
   /** Called at evenly spaced times with the state there (dense output). */
   grid?: { interval: number; at(t: number, y: number[]): void };
+  /** Called after every accepted step from t0 to t1 with the state at t1 and the step's dense output (component i at time t); in place of grid. */
+  steps?: (t0: number, t1: number, y: number[], dense: (i: number, t: number) => number) => void;
 }
 
 export interface OdexResult {
@@ -38,8 +40,10 @@ export function odexSolve(f: (t: number, y: number[]) => number[], t0: number, y
   s.relativeTolerance = o.relativeTolerance;
   s.absoluteTolerance = o.absoluteTolerance;
   s.maxSteps = o.maxSteps ?? 1_000_000;
-  s.denseOutput = o.grid !== undefined;
-  const out = o.grid ? s.grid(o.grid.interval, (t, y) => o.grid!.at(t, y)) : undefined;
+  s.denseOutput = o.grid !== undefined || o.steps !== undefined;
+  const each = o.steps;
+  // The first call is the starting point, with no step and no dense output.
+  const out = each ? (n: number, t0: number, t1: number, y: number[], dense: (i: number, t: number) => number) => void (n > 1 && each(t0, t1, y, dense)) : o.grid ? s.grid(o.grid.interval, (t, y) => o.grid!.at(t, y)) : undefined;
   const r = s.solve(f, t0, [...y0], t1, out);
   if (r.outcome !== 0) throw new Error(`odex stopped before the end (outcome ${r.outcome} after ${r.nStep} steps)`);
   return r;

@@ -16,25 +16,30 @@ import type { RideCase, RideResult } from '../../src/core/ride/ride-types.ts';
 // grid of full simulations of the drop and both rough-ground cases, then
 // bisection on full simulations to the same tolerance.
 
-function bruteForce(i: RideInput, tolerance: number): number | null {
+function bruteForce(i: RideInput, tolerance: number): { value: number | null; runs: number } {
   const limits = crewLimits(i.data);
   const maxCycles = limitLevel(i.data, 'ride.decay', 'cycles', 'hard');
+  let runs = 0;
   const holds = (zeta: number) => {
     const rides: Partial<Record<RideCase, RideResult>> = {};
     for (const c of ['drop', 'rough-ridge', 'rough-one-wheel'] as RideCase[]) {
       rides[c] = rideCaseOf(i, c, { floorDampingRatio: zeta });
+      runs++;
       if (!meetsRideRules(rides, limits, maxCycles)) return false;
     }
     return true;
   };
-  return leastOnGrid(holds, DAMPING_GRID, tolerance).value;
+  return { value: leastOnGrid(holds, DAMPING_GRID, tolerance).value, runs };
 }
 
 const validation = (name: string) => parse(readFileSync(new URL(`../../specs/validation/${name}.yaml`, import.meta.url), 'utf8'));
 
 describe('the floor-damping tuner', () => {
+  /** The demo on a rougher ridge (35 mm in 600 mm, demo data), where the crew leave the floor at the decay's ratio and the crew rule decides. */
+  const rougher = () => ({ ...readDemo('demo-two-crew'), operation: { ...(readDemo('demo-two-crew').operation as object), rough_ground: { height_mm: 35, length_mm: 600 } } });
   const cases: [string, () => unknown][] = [
     ['demo-two-crew', () => readDemo('demo-two-crew')],
+    ['demo-two-crew on a rougher ridge', rougher],
     ['demo-rear-axle', () => readDemo('demo-rear-axle')],
     // The validation specs whose decay is slow, where the check runs the tuner.
     ['wetwang-two-pony', () => validation('wetwang-two-pony')],
@@ -44,7 +49,7 @@ describe('the floor-damping tuner', () => {
     it(`agrees with the brute-force bisection on full runs to its tolerance: ${name}`, () => {
       const i = rideInput(new Analysis(prepared(raw()), rulesData));
       const need = floorDampingNeeded(i);
-      const ref = bruteForce(i, need.tolerance);
+      const ref = bruteForce(i, need.tolerance).value;
       expect(need.ratio).not.toBeNull();
       expect(ref).not.toBeNull();
       // Both are the least ratio to 0.5 %: within a tolerance of each other (the bisection's own width).
@@ -53,11 +58,20 @@ describe('the floor-damping tuner', () => {
     });
   }
 
-  it('finds the demo\'s decay in a handful of short drop runs, confirmed by one full run of the rules', () => {
-    const need = floorDampingNeeded(rideInput(new Analysis(prepared(readDemo('demo-rear-axle')), rulesData)));
-    expect(need.shortRuns).toBeLessThanOrEqual(4);
-    expect(need.working).toMatch(/confirmed by full runs/);
-    expect(need.working).toContain('3 full runs');
+  for (const demo of ['demo-two-crew', 'demo-rear-axle']) {
+    it(`finds the decay of ${demo} in at most three short drop runs, confirmed by one full run of each case`, () => {
+      const need = floorDampingNeeded(rideInput(new Analysis(prepared(readDemo(demo)), rulesData)));
+      expect(need.shortRuns).toBeLessThanOrEqual(3);
+      expect(need.working).toMatch(/confirmed by full runs/);
+      expect(need.working).toContain('3 full runs');
+    });
+  }
+
+  it('where the crew leave the floor at the decay\'s ratio, searches the crew rule on the rough-ground case alone', () => {
+    const i = rideInput(new Analysis(prepared(rougher()), rulesData));
+    const need = floorDampingNeeded(i);
+    expect(need.working).toMatch(/crew leave the floor over rough-ridge: secant on their excess/);
+    expect(need.simulations).toBeLessThanOrEqual(bruteForce(i, need.tolerance).runs / 2);
   });
 
   it('starts from the single-degree ratio of the logarithmic decrement', () => {

@@ -7,6 +7,7 @@ import { integrate } from '../../src/core/ride/integrate.ts';
 import { contactMode, derivative, newForces } from '../../src/core/ride/ride-system.ts';
 import { staticEquilibrium } from '../../src/core/ride/static-equilibrium.ts';
 import { rideByOdex } from '../../src/node/ride-odex.ts';
+import { rideParam } from '../../src/core/ride/ride-data.ts';
 import { deepMerge, prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 const analysis = (name: string) => new Analysis(prepared(readDemo(name)), rulesData);
@@ -58,7 +59,7 @@ describe('the ride model', () => {
     const a = analysis('demo-two-crew');
     for (const which of ['rough-ridge', 'stone-ridge'] as const) {
       const ours = rideCaseOf(rideInput(a), which);
-      const ref = rideByOdex(rideInput(a), which, 1e-10);
+      const ref = rideByOdex(buildRide(rideInput(a), which), rideParam(rulesData, 'ride.inputs', 'duration_s').value, 1e-10);
       ours.crew.forEach((c, i) => expect(Math.abs(c.rise_mm - ref.rise_mm[i]), which).toBeLessThan(0.05));
       expect(ours.crew[0].rise_mm).toBeGreaterThan(5);
     }

@@ -39,22 +39,28 @@ export interface Decay {
   period: number;
 }
 
-export function decayCycles(points: readonly TurningPoint[], fraction: number, after = -Infinity): Decay {
+/** The largest turning point at or after `after`, and the turning points from there on. */
+export function fromLargest(points: readonly TurningPoint[], after: number): readonly TurningPoint[] {
   const list = points.filter((p) => p.t >= after);
-  if (list.length < 2) return { cycles: null, firstAmplitude: list[0] ? Math.abs(list[0].z) : 0, period: NaN };
   let k0 = 0;
-  list.forEach((p, i) => (Math.abs(p.z) > Math.abs(list[k0].z) ? (k0 = i) : 0));
-  const A1 = Math.abs(list[k0].z);
+  list.forEach((p, k) => (Math.abs(p.z) > Math.abs(list[k0].z) ? (k0 = k) : 0));
+  return list.slice(k0);
+}
+
+export function decayCycles(points: readonly TurningPoint[], fraction: number, after = -Infinity): Decay {
+  const list = fromLargest(points, after);
+  const A1 = list.length ? Math.abs(list[0].z) : 0;
+  if (list.length < 2) return { cycles: null, firstAmplitude: A1, period: NaN };
   const target = fraction * A1;
-  for (let k = k0 + 1; k < list.length; k++) {
+  for (let k = 1; k < list.length; k++) {
     const a = Math.abs(list[k].z);
     if (a >= target) continue;
     const prev = Math.abs(list[k - 1].z);
     const s = prev > target && a > 0 ? Math.log(prev / target) / Math.log(prev / a) : 0;
     const tStar = list[k - 1].t + s * (list[k].t - list[k - 1].t);
-    const period = (2 * (list[k].t - list[k0].t)) / (k - k0);
-    return { cycles: (tStar - list[k0].t) / period, firstAmplitude: A1, period };
+    const period = (2 * (list[k].t - list[0].t)) / k;
+    return { cycles: (tStar - list[0].t) / period, firstAmplitude: A1, period };
   }
-  const n = list.length - 1 - k0;
-  return { cycles: null, firstAmplitude: A1, period: n > 0 ? (2 * (list[list.length - 1].t - list[k0].t)) / n : NaN };
+  const n = list.length - 1;
+  return { cycles: null, firstAmplitude: A1, period: (2 * (list[n].t - list[0].t)) / n };
 }

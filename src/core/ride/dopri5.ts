@@ -25,21 +25,32 @@ export class Dopri5 {
   readonly n: number;
   /** The derivative at the current point (stage 1; after an accepted step, stage 7 of it). */
   readonly k1: Float64Array;
-  readonly #k: Float64Array[];
+  // Stages 2 to 7 and the dense output's coefficients as fields, not arrays of arrays: read in the inner loops without destructuring.
+  readonly #k2: Float64Array;
+  readonly #k3: Float64Array;
+  readonly #k4: Float64Array;
+  readonly #k5: Float64Array;
+  readonly #k6: Float64Array;
+  readonly #k7: Float64Array;
   /** The trial step's new point. */
   readonly y1: Float64Array;
   readonly #tmp: Float64Array;
-  readonly #r: Float64Array[];
+  readonly #r1: Float64Array;
+  readonly #r2: Float64Array;
+  readonly #r3: Float64Array;
+  readonly #r4: Float64Array;
+  readonly #r5: Float64Array;
   #t0 = 0;
   #h = 0;
 
   constructor(readonly f: Rhs, n: number) {
     this.n = n;
     this.k1 = new Float64Array(n);
-    this.#k = [0, 1, 2, 3, 4, 5].map(() => new Float64Array(n));
-    this.y1 = new Float64Array(n);
-    this.#tmp = new Float64Array(n);
-    this.#r = [0, 1, 2, 3, 4].map(() => new Float64Array(n));
+    const v = () => new Float64Array(n);
+    [this.#k2, this.#k3, this.#k4, this.#k5, this.#k6, this.#k7] = [v(), v(), v(), v(), v(), v()];
+    this.y1 = v();
+    this.#tmp = v();
+    [this.#r1, this.#r2, this.#r3, this.#r4, this.#r5] = [v(), v(), v(), v(), v()];
   }
 
   /**
@@ -49,7 +60,7 @@ export class Dopri5 {
    */
   step(t: number, y: Float64Array, h: number, rtol: number, atol: number): number {
     const { n, f, k1, y1 } = this;
-    const [k2, k3, k4, k5, k6, k7] = this.#k;
+    const k2 = this.#k2, k3 = this.#k3, k4 = this.#k4, k5 = this.#k5, k6 = this.#k6, k7 = this.#k7;
     const w = this.#tmp;
     for (let i = 0; i < n; i++) w[i] = y[i] + h * A21 * k1[i];
     f(t + C2 * h, w, k2);
@@ -75,8 +86,8 @@ export class Dopri5 {
   /** After a trial step from (t, y) that passed the error test: the dense output over it. */
   dense(t: number, y: Float64Array, h: number): void {
     const { n, k1, y1 } = this;
-    const [, k3, k4, k5, k6, k7] = this.#k;
-    const [r1, r2, r3, r4, r5] = this.#r;
+    const k3 = this.#k3, k4 = this.#k4, k5 = this.#k5, k6 = this.#k6, k7 = this.#k7;
+    const r1 = this.#r1, r2 = this.#r2, r3 = this.#r3, r4 = this.#r4, r5 = this.#r5;
     for (let i = 0; i < n; i++) {
       const dy = y1[i] - y[i], b = h * k1[i] - dy;
       r1[i] = y[i];
@@ -91,18 +102,20 @@ export class Dopri5 {
 
   /** The step is taken: its last stage, f at the new point, is the next step's first. */
   carry(): void {
-    this.k1.set(this.#k[5]);
+    this.k1.set(this.#k7);
   }
 
   /** Component i of the last accepted step's continuous extension at time t. */
   value(i: number, t: number): number {
     const s = (t - this.#t0) / this.#h, s1 = 1 - s;
-    const [r1, r2, r3, r4, r5] = this.#r;
+    const r1 = this.#r1, r2 = this.#r2, r3 = this.#r3, r4 = this.#r4, r5 = this.#r5;
     return r1[i] + s * (r2[i] + s1 * (r3[i] + s * (r4[i] + s1 * r5[i])));
   }
 
   /** The whole state of the last accepted step's continuous extension at time t, into out. */
   at(t: number, out: Float64Array): void {
-    for (let i = 0; i < this.n; i++) out[i] = this.value(i, t);
+    const s = (t - this.#t0) / this.#h, s1 = 1 - s;
+    const r1 = this.#r1, r2 = this.#r2, r3 = this.#r3, r4 = this.#r4, r5 = this.#r5;
+    for (let i = 0; i < this.n; i++) out[i] = r1[i] + s * (r2[i] + s1 * (r3[i] + s * (r4[i] + s1 * r5[i])));
   }
 }

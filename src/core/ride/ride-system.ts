@@ -173,16 +173,25 @@ export function derivative(s: RideSystem, t: number, y: ArrayLike<number>, dy: F
  */
 export function contactMode(s: RideSystem, t: number, y: ArrayLike<number>, scratch: Forces): number {
   derivative(s, t, y, MODE_SINK, scratch);
+  return modeOf(s, scratch);
+}
+
+/** The contact mode of forces already evaluated (see contactMode). Written without closures: it runs at every step. */
+export function modeOf(s: RideSystem, f: Forces): number {
   const n = contactCount(s);
   let bits = 0, b = 1;
-  const set = (F: number, x: number) => {
-    if (x > 0) bits |= b;
-    if (F > 0) bits |= b << n;
-    b <<= 1;
-  };
-  for (let i = 0; i < scratch.wheel.length; i++) set(scratch.wheel[i], scratch.wheelIndent[i]);
-  for (let i = 0; i < scratch.crew.length; i++) set(scratch.crew[i], scratch.crewIndent[i]);
-  if (s.yoke.oneSided) set(scratch.yoke, scratch.yokeIndent);
+  for (let i = 0; i < f.wheel.length; i++, b <<= 1) {
+    if (f.wheelIndent[i] > 0) bits |= b;
+    if (f.wheel[i] > 0) bits |= b << n;
+  }
+  for (let i = 0; i < f.crew.length; i++, b <<= 1) {
+    if (f.crewIndent[i] > 0) bits |= b;
+    if (f.crew[i] > 0) bits |= b << n;
+  }
+  if (s.yoke.oneSided) {
+    if (f.yokeIndent > 0) bits |= b;
+    if (f.yoke > 0) bits |= b << n;
+  }
   return bits;
 }
 const MODE_SINK = new Float64Array(64);

@@ -19,6 +19,9 @@ export interface CrewLimits {
 /** The crew member is off the floor too long or too high. */
 export const crewLeaves = (c: CrewRide, l: CrewLimits) => c.airborne_ms > l.airborne_ms || c.lift_mm > l.rise_mm;
 
+/** How far the crew member is beyond the crew rule: the larger of the time off the floor and the lift over their limits, less one; above zero exactly where crewLeaves (continuous in the floor damping, for the tuner's search). */
+export const crewExcess = (c: CrewRide, l: CrewLimits) => Math.max(c.airborne_ms / l.airborne_ms, c.lift_mm / l.rise_mm) - 1;
+
 /** The motion takes more than the allowed cycles to fall below the fraction (or never does in the run). */
 export const decaysSlowly = (r: RideResult, maxCycles: number) => r.decayCycles === null || !(r.decayCycles <= maxCycles);
 

@@ -1,56 +1,37 @@
-import { decayCycles, type TurningPoint } from './decay.ts';
+import { decayCycles, fromLargest, type TurningPoint } from './decay.ts';
+import { decayShortfall, turningPointsNeeded } from './decay-shortfall.ts';
 import type { RideInput } from './ride-build.ts';
 import { rideCaseOf } from './ride-model.ts';
 
 // A short drop run for the floor-damping tuner: the drop test at a floor
-// damping ratio, ended as soon as the crew's decay is decided, and its
-// effective logarithmic decrement ln(1/f)/N, N the cycles to fall below the
-// fraction f of the first amplitude (decay.ts). Decided means every crew
-// member's turning points have fallen below the fraction (N is then what the
-// full run gives, unless a later turning point rose above the first
-// amplitude, which a dying motion does not do: the tuner's full confirmation
-// run checks it), or have gone on for a cycle past the rule's allowance
-// without (N is then estimated from the mean decrement between the largest
-// turning point and the last: ln(1/f) over it per cycle).
+// damping ratio, ended as soon as every crew member's turning points reach
+// the ones the decay's shortfall reads (decay-shortfall.ts: ⌊2M⌋ + 1 half
+// cycles past the largest), with the decay rule's own verdict on the same
+// turning points beside it. The tuner searches on the shortfall (continuous in
+// the damping); the verdict checks that the two agree.
 
-/** Turning points past the largest, as half cycles, after which a motion that has not fallen below the fraction is given up on. */
-const halfCycles = (maxCycles: number) => 2 * (maxCycles + 1);
-
-/** The turning points after a time, and the index of the largest among them. */
-function fromLargest(points: readonly TurningPoint[], after: number): { list: TurningPoint[]; k0: number } {
-  const list = points.filter((p) => p.t >= after);
-  let k0 = 0;
-  list.forEach((p, k) => (Math.abs(p.z) > Math.abs(list[k0].z) ? (k0 = k) : 0));
-  return { list, k0 };
+export interface ShortDrop {
+  /** The slowest crew member's shortfall: at most zero where the decay holds; Infinity where the run could not be made or the motion does not turn. */
+  shortfall: number;
+  /** The decay rule's verdict on the same turning points: every crew member within the cycles allowed. */
+  holds: boolean;
 }
 
-/** The cycles to the fraction, or the estimate from the mean decrement where the points have not reached it. */
-function cyclesOf(points: readonly TurningPoint[], fraction: number, after: number): number {
-  const d = decayCycles(points, fraction, after);
-  if (d.cycles !== null) return d.cycles;
-  const { list, k0 } = fromLargest(points, after);
-  const last = list.length - 1;
-  if (last <= k0) return Infinity;
-  const perCycle = (2 * Math.log(Math.abs(list[k0].z) / Math.abs(list[last].z))) / (last - k0);
-  return perCycle > 0 ? Math.log(1 / fraction) / perCycle : Infinity;
-}
-
-/** The effective decrement ln(1/f)/N of the slowest crew member after the drop at floor damping ratio zeta (0 where the motion does not die out). */
-export function shortDropDecrement(i: RideInput, zeta: number, fraction: number, maxCycles: number): number {
+export function shortDrop(i: RideInput, zeta: number, fraction: number, maxCycles: number): ShortDrop {
   let seen: readonly (readonly TurningPoint[])[] = [];
   let after = Infinity;
   const r = rideCaseOf(i, 'drop', {
     floorDampingRatio: zeta,
     enough(turning, firstContact) {
       [seen, after] = [turning, Number.isNaN(firstContact) ? Infinity : firstContact];
-      return turning.every((pts) => {
-        if (decayCycles(pts, fraction, after).cycles !== null) return true;
-        const { list, k0 } = fromLargest(pts, after);
-        return list.length - 1 - k0 >= halfCycles(maxCycles);
-      });
+      return turning.every((pts) => fromLargest(pts, after).length > turningPointsNeeded(maxCycles));
     },
   });
-  if (r.stopped) return 0;
-  const cycles = Math.max(...seen.map((pts) => cyclesOf(pts, fraction, after)));
-  return Number.isFinite(cycles) && cycles > 0 ? Math.log(1 / fraction) / cycles : 0;
+  if (r.stopped) return { shortfall: Infinity, holds: false };
+  const each = seen.map((pts) => decayShortfall(pts, fraction, maxCycles, after));
+  const holds = seen.every((pts) => {
+    const c = decayCycles(pts, fraction, after).cycles;
+    return c !== null && c <= maxCycles;
+  });
+  return { shortfall: each.some(Number.isNaN) ? Infinity : Math.max(...each), holds };
 }
