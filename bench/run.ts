@@ -34,11 +34,11 @@ for (const { file, raw } of demos) {
   const p = prepareSpec(raw, data);
   if (p.ok) missed += benchFloor(file, p.spec, data);
 }
-{
-  const p = prepareSpec(demos.find((d) => d.file === 'demo-two-crew.yaml')!.raw, data);
+for (const { raw } of demos.filter((d) => d.file.startsWith('demo-'))) {
+  const p = prepareSpec(raw, data);
   if (p.ok) missed += benchRide(p.spec, data);
 }
-console.log('stock planner:');
+console.log('stock planner (OR-Library and generated bin packing):');
 missed += await benchStockPlanner();
 missed += benchStartup();
 missed += benchMemory();
