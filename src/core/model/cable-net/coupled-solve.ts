@@ -1,7 +1,7 @@
 import { maxAbs, minimise, type EnergyProblem, type SolveSettings } from './energy-newton.ts';
 import type { CableNet } from './net.ts';
 import { segmentState, strainEnergy, verticalPull, type SegmentState } from './segment.ts';
-import { coupledTangent, mulF } from './coupled-tangent.ts';
+import { coupledTangent, couplingPreconditioner, mulF, type CouplingPreconditioner } from './coupled-tangent.ts';
 import { SkylineCholesky } from './skyline.ts';
 import { coupledPairs, nodeOrder } from './node-order.ts';
 import { SLACK_TENSION, solveNet, type NetSolution } from './solve-net.ts';
@@ -72,12 +72,18 @@ export function meanPulls(net: CableNet, states: readonly SegmentState[], spans:
   return H;
 }
 
-/** `matrix`: a skyline matrix laid out for this net, to reuse its numbering and storage across solves. */
-export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLike<number>, settings: SolveSettings, from?: { sag: ArrayLike<number>; pulls: ArrayLike<number> }, matrix?: SkylineCholesky): CoupledSolution {
+/** Storage shared by the solves of one net: its skyline matrix (numbering and storage) and the strap system's preconditioner. */
+export interface CoupledWorkspace {
+  matrix?: SkylineCholesky;
+  coupling?: CouplingPreconditioner;
+}
+
+export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLike<number>, settings: SolveSettings, from?: { sag: ArrayLike<number>; pulls: ArrayLike<number> }, workspace: CoupledWorkspace = {}): CoupledSolution {
   const n = net.nodes.length;
   const m = net.straps.length;
   const spans = strapSpans(net);
-  const K = matrix ?? new SkylineCholesky(n, coupledPairs(net), nodeOrder(net));
+  const K = workspace.matrix ?? new SkylineCholesky(n, coupledPairs(net), nodeOrder(net));
+  const coupling = workspace.coupling ?? couplingPreconditioner();
   const state = (x: Float64Array): CoupledState => {
     const lambda = x.subarray(n);
     const e = mulF(F, lambda, m);
@@ -120,7 +126,7 @@ export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLi
     direction: (_x, cur) => {
       // Slack segments get only the tiny stand-in, not their pretension's geometric stiffness: the step is then Newton's
       // own and converges quadratically where segments end slack (the line search on the energy keeps it safe).
-      const T = coupledTangent(net, F, spans, cur.states, K, SLACK_TENSION, 0);
+      const T = coupledTangent(net, F, spans, cur.states, K, SLACK_TENSION, 0, coupling);
       if (!T) return 'the tangent stiffness is not positive definite';
       const d = T.solve(cur.residual, cur.pullGap);
       if (!d) return 'the coupled step could not be solved';
