@@ -21,7 +21,16 @@ import type { SkylineCholesky } from './skyline.ts';
 
 /** The linearised coupled system at a state: solves for (Δu, Δλ) given the node and pull residuals. */
 export interface CoupledTangent {
-  solve(ru: ArrayLike<number>, rH: ArrayLike<number>): { du: Float64Array; dl: Float64Array } | null;
+  solve(ru: ArrayLike<number>, rH: ArrayLike<number>, accuracy?: StrapAccuracy): { du: Float64Array; dl: Float64Array } | null;
+}
+
+/**
+ * How exactly GMRES solves the strap system: until its residual (N) is at most `relative` times its right-hand
+ * side's and, where given, at most `absolute_N`; never past a direct solve's rounding.
+ */
+export interface StrapAccuracy {
+  relative: number;
+  absolute_N?: number;
 }
 
 /** The factor of S·F + I at an earlier state, shared by the solves of one net to precondition their steps. */
@@ -36,7 +45,7 @@ export function couplingPreconditioner(): CouplingPreconditioner {
   return { factor: null, formed: 0, products: 0 };
 }
 
-/** GMRES's relative tolerance: the step as exact as a direct solve needs to be for Newton's quadratic convergence. */
+/** GMRES's tightest relative tolerance, and its tolerance unless the caller asks for less: a direct solve's, near enough. */
 const GMRES_TOLERANCE = 1e-10;
 /** GMRES steps before a fresh S is cheaper (forming it costs some tens of net solves). */
 const GMRES_STEPS = 16;
@@ -115,51 +124,72 @@ export function coupledTangent(
 ): CoupledTangent | null {
   const n = net.nodes.length;
   const m = net.straps.length;
-  const ns = net.segments.length;
-  K.zero();
-  const c: Coupling = { row: new Int32Array(2 * ns), strap: new Int32Array(2 * ns), value: new Float64Array(2 * ns), Kee: new Float64Array(m) };
-  net.segments.forEach((seg, i) => {
-    const st = states[i];
-    // A slack segment stands in with a small geometric stiffness: it only shapes the step (the energy decides it).
-    const standIn = st.tension > 0 ? 0 : Math.max(slackFraction * seg.EA, slackPretension * ((seg.EA * (seg.flat - seg.rest)) / seg.rest));
-    const k = tangentStiffness(seg, st, standIn);
-    if (seg.a >= 0) K.add(seg.a, seg.a, k);
-    if (seg.b >= 0) K.add(seg.b, seg.b, k);
-    if (seg.a >= 0 && seg.b >= 0) K.add(seg.a, seg.b, -k);
-    const curv = planCurvatures(seg, st);
+  const segs = net.segments;
+  const place = K.order;
+  const c: Coupling = { row: new Int32Array(2 * segs.length), strap: new Int32Array(2 * segs.length), value: new Float64Array(2 * segs.length), Kee: new Float64Array(m) };
+  let coupled = false;
+  for (let i = 0; i < segs.length; i++) {
+    const seg = segs[i];
+    const curv = planCurvatures(seg, states[i]);
     const df = -seg.flat / spans[seg.strap]; // d(plan length)/d(e_s)
     c.Kee[seg.strap] += curv.ff * df * df;
     c.strap[2 * i] = c.strap[2 * i + 1] = seg.strap;
     if (seg.a >= 0) {
-      c.row[2 * i] = K.place(seg.a);
+      c.row[2 * i] = place[seg.a];
       c.value[2 * i] = curv.fd * df;
     }
     if (seg.b >= 0) {
-      c.row[2 * i + 1] = K.place(seg.b);
+      c.row[2 * i + 1] = place[seg.b];
       c.value[2 * i + 1] = -curv.fd * df;
     }
-  });
-  if (!K.factor()) return null;
+    if (curv.fd !== 0) coupled = true;
+  }
+  // The net part, assembled and factored once it is needed: a flat net (the pretension alone, no load) never needs it.
+  let factored: boolean | undefined;
+  const netPart = (): boolean => {
+    if (factored !== undefined) return factored;
+    K.zero();
+    for (let i = 0; i < segs.length; i++) {
+      const seg = segs[i];
+      const st = states[i];
+      // A slack segment stands in with a small geometric stiffness: it only shapes the step (the energy decides it).
+      const standIn = st.tension > 0 ? 0 : Math.max(slackFraction * seg.EA, slackPretension * ((seg.EA * (seg.flat - seg.rest)) / seg.rest));
+      const k = tangentStiffness(seg, st, standIn);
+      if (seg.a >= 0) K.add(seg.a, seg.a, k);
+      if (seg.b >= 0) K.add(seg.b, seg.b, k);
+      if (seg.a >= 0 && seg.b >= 0) K.add(seg.a, seg.b, -k);
+    }
+    return (factored = K.factor());
+  };
+  if (coupled && !netPart()) return null;
   const solveK = (y: Float64Array) => {
     K.forward(y);
     K.backward(y);
   };
-  // (S·F + I)·v with one net solve.
+  // (S·F + I)·v with one net solve (none where nothing couples the net to the pulls).
+  const z = new Float64Array(n);
   const apply = (v: Float64Array, out: Float64Array) => {
     const w = mulF(F, v, m);
-    const z = new Float64Array(n);
-    spread(c, w, z);
-    solveK(z);
-    gather(c, z, out);
+    if (coupled) {
+      z.fill(0);
+      spread(c, w, z);
+      solveK(z);
+      gather(c, z, out);
+    }
     for (let s = 0; s < m; s++) out[s] = c.Kee[s] * w[s] - out[s] + v[s];
     kept.products++;
   };
   // This state's own factor, formed only where the kept one does not serve; undefined until then.
   let own: DenseLU | null | undefined;
-  const strapStep = (rhs: Float64Array): Float64Array | null => {
+  const strapStep = (rhs: Float64Array, accuracy: StrapAccuracy): Float64Array | null => {
     const prior = kept.factor;
     if (own === undefined && prior) {
-      const g = gmres(m, apply, rhs, { relativeTolerance: GMRES_TOLERANCE, maxIterations: GMRES_STEPS }, (v, out) => out.set(prior.solve(v)));
+      let norm = 0;
+      for (let s = 0; s < m; s++) norm += rhs[s] * rhs[s];
+      norm = Math.sqrt(norm);
+      const target = Math.min(accuracy.relative * norm, accuracy.absolute_N ?? Infinity);
+      const relativeTolerance = Math.max(GMRES_TOLERANCE, target / norm);
+      const g = gmres(m, apply, rhs, { relativeTolerance, maxIterations: GMRES_STEPS }, (v, out) => out.set(prior.solve(v)));
       if (g.converged) return g.x;
     }
     if (own === undefined) {
@@ -170,20 +200,29 @@ export function coupledTangent(
     return own ? own.solve(rhs) : null;
   };
   return {
-    solve(ru, rH) {
+    solve(ru, rH, accuracy = { relative: GMRES_TOLERANCE }) {
+      // y = K_uu⁻¹·r_u (stored numbering), zero without a net residual.
       const y = new Float64Array(n);
-      for (let i = 0; i < n; i++) y[K.place(i)] = ru[i];
-      solveK(y);
+      let loaded = false;
+      for (let i = 0; i < n; i++) if ((y[place[i]] = ru[i]) !== 0) loaded = true;
+      if (loaded) {
+        if (!netPart()) return null;
+        solveK(y);
+      }
       const rhs = new Float64Array(m);
-      gather(c, y, rhs);
+      if (coupled) gather(c, y, rhs);
       for (let s = 0; s < m; s++) rhs[s] = rH[s] - rhs[s];
-      const dl = strapStep(rhs);
+      const dl = strapStep(rhs, accuracy);
       if (!dl) return null;
-      const z = new Float64Array(n);
-      spread(c, mulF(F, dl, m), z);
-      solveK(z);
+      // Δu = y − K_uu⁻¹·K_ue·F·Δλ.
+      if (coupled) {
+        z.fill(0);
+        spread(c, mulF(F, dl, m), z);
+        solveK(z);
+        for (let r = 0; r < n; r++) y[r] -= z[r];
+      }
       const du = new Float64Array(n);
-      for (let i = 0; i < n; i++) du[i] = y[K.place(i)] - z[K.place(i)];
+      for (let i = 0; i < n; i++) du[i] = y[place[i]];
       return { du, dl };
     },
   };
