@@ -139,7 +139,10 @@ export class FloorFrame {
       f.fill(0);
       for (const a of straps[t]) f[this.#anchorDof[a]] += anchors[a].inward;
       for (const h of this.#held) f[h] = 0;
-      const d = this.#K.solve(f);
+      // The frame's matrix keeps the loop's own numbering (no reordering): solve in place.
+      this.#K.forward(f);
+      this.#K.backward(f);
+      const d = f;
       for (let s = 0; s < m; s++) {
         const [a, b] = straps[s];
         F[s * m + t] = anchors[a].inward * d[this.#anchorDof[a]] + anchors[b].inward * d[this.#anchorDof[b]];
