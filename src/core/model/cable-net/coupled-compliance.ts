@@ -7,7 +7,7 @@ import { SkylineCholesky } from './skyline.ts';
 import { SLACK_TENSION } from './solve-net.ts';
 
 /** The strap system's relative residual: the sags to about six figures, past the three reported. */
-const ACCURACY = { relative: 1e-6 };
+const ACCURACY = 1e-6;
 
 /** The coupled tangent's response to a unit load pattern at a solved state: the sags it adds (frame included). */
 export function coupledCompliance(net: CableNet, sol: CoupledSolution, F: ArrayLike<number>, K = new SkylineCholesky(net.nodes.length, coupledPairs(net), nodeOrder(net)), coupling: CouplingPreconditioner = couplingPreconditioner()): ((p: Float64Array) => Float64Array) | null {

@@ -21,22 +21,17 @@ import type { SkylineCholesky } from './skyline.ts';
 
 /** The linearised coupled system at a state: solves for (Δu, Δλ) given the node and pull residuals. */
 export interface CoupledTangent {
-  solve(ru: ArrayLike<number>, rH: ArrayLike<number>, accuracy?: StrapAccuracy): { du: Float64Array; dl: Float64Array } | null;
-}
-
-/**
- * How exactly GMRES solves the strap system: until its residual (N) is at most `relative` times its right-hand
- * side's and, where given, at most `absolute_N`; never past a direct solve's rounding.
- */
-export interface StrapAccuracy {
-  relative: number;
-  absolute_N?: number;
+  /**
+   * `accuracy`: how exactly GMRES solves the strap system, its residual relative to its right-hand side's
+   * (never past a direct solve's rounding; and to that rounding where no net solve is needed, as it costs little).
+   */
+  solve(ru: ArrayLike<number>, rH: ArrayLike<number>, accuracy?: number): { du: Float64Array; dl: Float64Array } | null;
 }
 
 /** The factor of S·F + I at an earlier state, shared by the solves of one net to precondition their steps. */
 export interface CouplingPreconditioner {
   factor: DenseLU | null;
-  /** How often S was formed and factored, and the GMRES steps taken, for the bench. */
+  /** How often S was formed and factored, and the GMRES products taken (for tests and profiling). */
   formed: number;
   products: number;
 }
@@ -181,14 +176,10 @@ export function coupledTangent(
   };
   // This state's own factor, formed only where the kept one does not serve; undefined until then.
   let own: DenseLU | null | undefined;
-  const strapStep = (rhs: Float64Array, accuracy: StrapAccuracy): Float64Array | null => {
+  const strapStep = (rhs: Float64Array, accuracy: number): Float64Array | null => {
     const prior = kept.factor;
     if (own === undefined && prior) {
-      let norm = 0;
-      for (let s = 0; s < m; s++) norm += rhs[s] * rhs[s];
-      norm = Math.sqrt(norm);
-      const target = Math.min(accuracy.relative * norm, accuracy.absolute_N ?? Infinity);
-      const relativeTolerance = Math.max(GMRES_TOLERANCE, target / norm);
+      const relativeTolerance = coupled ? Math.max(GMRES_TOLERANCE, accuracy) : GMRES_TOLERANCE;
       const g = gmres(m, apply, rhs, { relativeTolerance, maxIterations: GMRES_STEPS }, (v, out) => out.set(prior.solve(v)));
       if (g.converged) return g.x;
     }
@@ -200,7 +191,7 @@ export function coupledTangent(
     return own ? own.solve(rhs) : null;
   };
   return {
-    solve(ru, rH, accuracy = { relative: GMRES_TOLERANCE }) {
+    solve(ru, rH, accuracy = GMRES_TOLERANCE) {
       // y = K_uu⁻¹·r_u (stored numbering), zero without a net residual.
       const y = new Float64Array(n);
       let loaded = false;
