@@ -1,7 +1,7 @@
 import { maxAbs, minimise, type EnergyProblem, type SolveSettings } from './energy-newton.ts';
-import type { CableNet } from './net.ts';
-import { segmentState, strainEnergy, verticalPull, type SegmentState } from './segment.ts';
-import { coupledTangent, mulF } from './coupled-tangent.ts';
+import type { CableNet, Segment } from './net.ts';
+import { horizontalPull, scratchState, segmentState, strainEnergy, verticalPull, type SegmentState } from './segment.ts';
+import { coupledTangent, couplingPreconditioner, mulF, type CouplingPreconditioner } from './coupled-tangent.ts';
 import { SkylineCholesky } from './skyline.ts';
 import { coupledPairs, nodeOrder } from './node-order.ts';
 import { SLACK_TENSION, solveNet, type NetSolution } from './solve-net.ts';
@@ -47,7 +47,15 @@ export function strapSpans(net: CableNet): Float64Array {
 
 /** The segments' plan lengths with each strap shortened by e_s, spread evenly. */
 export function planLengths(net: CableNet, e: ArrayLike<number>, spans: ArrayLike<number>): Float64Array {
-  return Float64Array.from(net.segments, (seg) => seg.flat * (1 - e[seg.strap] / spans[seg.strap]));
+  const segs = net.segments;
+  const flats = new Float64Array(segs.length);
+  for (let i = 0; i < segs.length; i++) flats[i] = segs[i].flat * (1 - e[segs[i].strap] / spans[segs[i].strap]);
+  return flats;
+}
+
+/** Every segment's state at the sags u and plan lengths `flats` (the segments' own where omitted). */
+export function netStates(net: CableNet, u: ArrayLike<number>, flats?: ArrayLike<number>): SegmentState[] {
+  return net.segments.map((seg, i) => segmentState(seg, at(u, seg.a), at(u, seg.b), flats ? flats[i] : seg.flat));
 }
 
 interface CoupledState {
@@ -57,41 +65,59 @@ interface CoupledState {
   residual: Float64Array;
   /** H̄ − λ, N. */
   pullGap: Float64Array;
-  states: SegmentState[];
   flats: Float64Array;
   e: Float64Array;
 }
 
+/** A segment's part of its strap's mean pull: its horizontal tension weighted by its share of the strap's span. */
+const meanPullShare = (seg: Segment, st: SegmentState, spans: ArrayLike<number>) => (horizontalPull(st) * seg.flat) / spans[seg.strap];
+
 /** Each strap's mean pull H̄_s: its segments' horizontal tensions T·f/l weighted by their share of its span. */
 export function meanPulls(net: CableNet, states: readonly SegmentState[], spans: ArrayLike<number>): Float64Array {
   const H = new Float64Array(net.straps.length);
-  net.segments.forEach((seg, i) => {
-    const st = states[i];
-    H[seg.strap] += (st.tension * st.flat * seg.flat) / (st.length * spans[seg.strap]);
-  });
+  net.segments.forEach((seg, i) => (H[seg.strap] += meanPullShare(seg, states[i], spans)));
   return H;
 }
 
-/** `matrix`: a skyline matrix laid out for this net, to reuse its numbering and storage across solves. */
-export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLike<number>, settings: SolveSettings, from?: { sag: ArrayLike<number>; pulls: ArrayLike<number> }, matrix?: SkylineCholesky): CoupledSolution {
+/**
+ * How exactly a Newton step solves its strap system (GMRES's relative residual). An inexact step converges at
+ * this rate at worst (Dembo, Eisenstat & Steihaug, SIAM J. Numer. Anal. 19 (1982) 400-408), far below the steady
+ * rate where segments end just slack: the demo floors take the exact step's steps. Relative only, so the path does
+ * not depend on the tolerance it stops at.
+ */
+const STEP_ACCURACY = 1e-4;
+
+/** Storage shared by the solves of one net: its skyline matrix (numbering and storage) and the strap system's preconditioner. */
+export interface CoupledWorkspace {
+  matrix?: SkylineCholesky;
+  coupling?: CouplingPreconditioner;
+}
+
+export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLike<number>, settings: SolveSettings, from?: { sag: ArrayLike<number>; pulls: ArrayLike<number> }, workspace: CoupledWorkspace = {}): CoupledSolution {
   const n = net.nodes.length;
   const m = net.straps.length;
   const spans = strapSpans(net);
-  const K = matrix ?? new SkylineCholesky(n, coupledPairs(net), nodeOrder(net));
+  const K = workspace.matrix ?? new SkylineCholesky(n, coupledPairs(net), nodeOrder(net));
+  const coupling = workspace.coupling ?? couplingPreconditioner();
+  const segs = net.segments;
+  const st = scratchState();
   const state = (x: Float64Array): CoupledState => {
     const lambda = x.subarray(n);
     const e = mulF(F, lambda, m);
     const flats = planLengths(net, e, spans);
     const force = new Float64Array(n);
+    const H = new Float64Array(m);
     let energy = 0;
-    const states = net.segments.map((seg, i) => {
-      const st = segmentState(seg, at(x, seg.a), at(x, seg.b), flats[i]);
+    // One pass over the segments, filling one scratch state: forces, energy and mean pulls together.
+    for (let i = 0; i < segs.length; i++) {
+      const seg = segs[i];
+      segmentState(seg, at(x, seg.a), at(x, seg.b), flats[i], st);
       const f = verticalPull(st);
       if (seg.a >= 0) force[seg.a] += f;
       if (seg.b >= 0) force[seg.b] -= f;
       energy += strainEnergy(seg, st);
-      return st;
-    });
+      H[seg.strap] += meanPullShare(seg, st, spans);
+    }
     let frame = 0;
     for (let s = 0; s < m; s++) frame += 0.5 * lambda[s] * e[s];
     let work = 0;
@@ -102,27 +128,26 @@ export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLi
       work += loads[i] * x[i];
       scale += Math.abs(loads[i] * x[i]);
     }
-    const H = meanPulls(net, states, spans);
-    const pullGap = H.map((h, s) => h - lambda[s]);
+    const pullGap = new Float64Array(m);
+    for (let s = 0; s < m; s++) pullGap[s] = H[s] - lambda[s];
     return {
       potential: energy + frame - work,
       scale,
       worst: Math.max(maxAbs(residual), maxAbs(pullGap)),
       residual,
       pullGap,
-      states,
       flats,
       e,
     };
   };
   const problem: EnergyProblem<CoupledState> = {
     state,
-    direction: (_x, cur) => {
+    direction: (x, cur) => {
       // Slack segments get only the tiny stand-in, not their pretension's geometric stiffness: the step is then Newton's
       // own and converges quadratically where segments end slack (the line search on the energy keeps it safe).
-      const T = coupledTangent(net, F, spans, cur.states, K, SLACK_TENSION, 0);
+      const T = coupledTangent(net, F, spans, netStates(net, x, cur.flats), K, SLACK_TENSION, 0, coupling);
       if (!T) return 'the tangent stiffness is not positive definite';
-      const d = T.solve(cur.residual, cur.pullGap);
+      const d = T.solve(cur.residual, cur.pullGap, STEP_ACCURACY);
       if (!d) return 'the coupled step could not be solved';
       // Slope of Π along the step: −r_u·Δu − (F·(H̄ − λ))·Δλ.
       const FrH = mulF(F, cur.pullGap, m);
@@ -140,7 +165,7 @@ export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLi
   const start = new Float64Array(n + m);
   const sag = from?.sag ?? solveNet(net, loads, settings).sag;
   start.set(sag);
-  start.set(from?.pulls ?? meanPulls(net, net.segments.map((seg) => segmentState(seg, at(sag, seg.a), at(sag, seg.b))), spans), n);
+  start.set(from?.pulls ?? meanPulls(net, netStates(net, sag), spans), n);
   const result = minimise(problem, start, settings);
   const x = result.x;
   return {

@@ -53,7 +53,8 @@ export function minimise<S extends EnergyState>(problem: EnergyProblem<S>, start
     let trial: S | undefined;
     let next = x;
     for (let b = 0; b < MAX_BACKTRACKS; b++) {
-      next = x.map((v, i) => v + alpha * step[i]);
+      next = new Float64Array(x.length);
+      for (let i = 0; i < x.length; i++) next[i] = x[i] + alpha * step[i];
       trial = problem.state(next);
       // Near equilibrium the energy change falls to rounding level; allow for it.
       if (trial.potential <= cur.potential + ARMIJO * alpha * slope + 1e-13 * (cur.scale + trial.scale)) break;

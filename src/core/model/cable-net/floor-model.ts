@@ -9,8 +9,9 @@ import { patchWeights } from './foot-patch.ts';
 import { crewResults, describeSegment, reactionSum, strapPulls, strapTensions, tensions, type Loaded } from './floor-results.ts';
 import { solveNet } from './solve-net.ts';
 import type { SolveSettings } from './solve-net.ts';
-import { solveCoupled, type CoupledSolution } from './coupled-solve.ts';
+import { solveCoupled, type CoupledSolution, type CoupledWorkspace } from './coupled-solve.ts';
 import { coupledCompliance } from './coupled-compliance.ts';
+import { couplingPreconditioner } from './coupled-tangent.ts';
 import { declinedFloor, type FloorHead } from './floor-declined.ts';
 import { SkylineCholesky } from './skyline.ts';
 import { coupledPairs, nodeOrder } from './node-order.ts';
@@ -84,9 +85,11 @@ export function floorModels(spec: CheckedSpecification, data: RulesData, factors
   const frame = new FloorFrame(basis.input);
   const F = anchors === 'fixed' ? new Float64Array(floor.net.straps.length ** 2) : frame.flexibility();
   const K = new SkylineCholesky(floor.net.nodes.length, coupledPairs(floor.net), nodeOrder(floor.net));
+  // Every solve of this net shares the matrix and the strap system's preconditioner (each state starts near the last).
+  const workspace = { matrix: K, coupling: couplingPreconditioner() };
   // The pretension alone, to the tightest tolerance asked: the same net and frame with no one aboard.
   const tightest = Math.min(...heads.map((h) => h.settings.tolerance_N));
-  const rest = solveCoupled(floor.net, new Float64Array(floor.net.nodes.length), F, { tolerance_N: tightest, maxIterations }, undefined, K);
+  const rest = solveCoupled(floor.net, new Float64Array(floor.net.nodes.length), F, { tolerance_N: tightest, maxIterations }, undefined, workspace);
   const restFrame = frameResult(basis, frame, anchors, rest);
   const out = new Array<FloorModel>(factors.length);
   let below: CoupledSolution | undefined;
@@ -96,9 +99,9 @@ export function floorModels(spec: CheckedSpecification, data: RulesData, factors
     const loads = nodalLoads(floor, crew);
     // The lightest state starts from the sags on rigid anchors (a rough, cheap solve) and the pretension's pulls; each heavier one from the state below.
     const start = below ?? { sag: solveNet(floor.net, loads, { tolerance_N: START_FRACTION * Math.max(head.appliedLoad_N, 1), maxIterations }, undefined, K).sag, pulls: rest.pulls };
-    const sol = solveCoupled(floor.net, loads, F, settings, start, K);
+    const sol = solveCoupled(floor.net, loads, F, settings, start, workspace);
     if (sol.converged) below = sol;
-    out[i] = floorState(spec, floor, head, crew, sol, rest, F, K, restFrame(frame.solve(sol.pulls)));
+    out[i] = floorState(spec, floor, head, crew, sol, rest, F, workspace, restFrame(frame.solve(sol.pulls)));
   }
   return out;
 }
@@ -106,7 +109,7 @@ export function floorModels(spec: CheckedSpecification, data: RulesData, factors
 /** The rigid-anchor start is solved to this fraction of the load: a start, not a result. */
 const START_FRACTION = 1e-3;
 
-function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead, crew: Loaded[], sol: CoupledSolution, rest: CoupledSolution, F: Float64Array, K: SkylineCholesky, frame: FloorFrameResult): FloorModel {
+function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead, crew: Loaded[], sol: CoupledSolution, rest: CoupledSolution, F: Float64Array, workspace: Required<CoupledWorkspace>, frame: FloorFrameResult): FloorModel {
   const s = spec.floor_straps;
   const moved: FloorNet = { ...floor, net: withPlanLengths(floor.net, sol.flats) };
   const T = tensions(moved.net, sol.sag);
@@ -123,7 +126,7 @@ function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead
     maxTension_N,
     maxTensionAt: T.length ? describeSegment(floor.net, worst) : 'no straps',
     maxStress_MPa: maxTension_N / (s.width_mm * s.thickness_mm),
-    crew: crewResults(floor, sol.sag, crew, coupledCompliance(floor.net, sol, F, K)),
+    crew: crewResults(floor, sol.sag, crew, coupledCompliance(floor.net, sol, F, workspace.matrix, workspace.coupling)),
     rails: strapPulls(floor, sol.pulls),
     reactionSum_N: reactionSum(moved.net, sol.sag, T),
     nodes: floor.net.nodes.length,

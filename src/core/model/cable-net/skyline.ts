@@ -43,11 +43,13 @@ export class SkylineCholesky {
 
   /** Add v to entry (i, j) and, for i != j, to (j, i) (one symmetric entry). */
   add(i: number, j: number, v: number): void {
-    let I = this.#order[i];
-    let J = this.#order[j];
-    if (J > I) [I, J] = [J, I];
-    if (J < this.#first[I]) throw new Error(`entry (${i}, ${j}) is outside the declared pattern`);
-    this.#a[this.#start[I] + J - this.#first[I]] += v;
+    const p = this.#order[i];
+    const q = this.#order[j];
+    const I = p > q ? p : q;
+    const J = p > q ? q : p;
+    const first = this.#first[I];
+    if (J < first) throw new Error(`entry (${i}, ${j}) is outside the declared pattern`);
+    this.#a[this.#start[I] + J - first] += v;
   }
 
   /** Factor in place; false (and the matrix spoilt) when it is not positive definite. */
@@ -78,14 +80,20 @@ export class SkylineCholesky {
     return this.#order[i];
   }
 
+  /** Every row's place (`place` for all at once, for loops over the whole matrix). */
+  get order(): Int32Array {
+    return this.#order;
+  }
+
   /** Solve A x = b with the factor; b in the caller's numbering. */
   solve(b: ArrayLike<number>): Float64Array {
+    const order = this.#order;
     const y = new Float64Array(this.n);
-    for (let i = 0; i < this.n; i++) y[this.#order[i]] = b[i];
+    for (let i = 0; i < this.n; i++) y[order[i]] = b[i];
     this.forward(y);
     this.backward(y);
     const x = new Float64Array(this.n);
-    for (let i = 0; i < this.n; i++) x[i] = y[this.#order[i]];
+    for (let i = 0; i < this.n; i++) x[i] = y[order[i]];
     return x;
   }
 

@@ -1,6 +1,6 @@
 import type { CableNet } from './net.ts';
 import { coupledPairs, nodeOrder } from './node-order.ts';
-import { segmentState, strainEnergy, tangentStiffness, verticalPull } from './segment.ts';
+import { scratchState, segmentState, strainEnergy, tangentStiffness, verticalPull } from './segment.ts';
 import { SkylineCholesky } from './skyline.ts';
 import { maxAbs, minimise, type SolveSettings } from './energy-newton.ts';
 
@@ -36,8 +36,11 @@ const at = (u: ArrayLike<number>, i: number) => (i < 0 ? 0 : u[i]);
 export function internalForces(net: CableNet, sag: ArrayLike<number>, flats?: ArrayLike<number>): { force: Float64Array; energy: number } {
   const force = new Float64Array(net.nodes.length);
   let energy = 0;
-  for (const [i, seg] of net.segments.entries()) {
-    const st = segmentState(seg, at(sag, seg.a), at(sag, seg.b), flats ? flats[i] : seg.flat);
+  const st = scratchState();
+  const segs = net.segments;
+  for (let i = 0; i < segs.length; i++) {
+    const seg = segs[i];
+    segmentState(seg, at(sag, seg.a), at(sag, seg.b), flats ? flats[i] : seg.flat, st);
     const f = verticalPull(st);
     if (seg.a >= 0) force[seg.a] += f;
     if (seg.b >= 0) force[seg.b] -= f;
@@ -51,8 +54,11 @@ export function tangentMatrix(net: CableNet, matrix?: SkylineCholesky, sag?: Arr
   const K = matrix ?? new SkylineCholesky(net.nodes.length, coupledPairs(net), nodeOrder(net));
   K.zero();
   const u = sag ?? new Float64Array(net.nodes.length);
-  for (const [i, seg] of net.segments.entries()) {
-    const k = tangentStiffness(seg, segmentState(seg, at(u, seg.a), at(u, seg.b), flats ? flats[i] : seg.flat), slackFraction * seg.EA);
+  const st = scratchState();
+  const segs = net.segments;
+  for (let i = 0; i < segs.length; i++) {
+    const seg = segs[i];
+    const k = tangentStiffness(seg, segmentState(seg, at(u, seg.a), at(u, seg.b), flats ? flats[i] : seg.flat, st), slackFraction * seg.EA);
     if (seg.a >= 0) K.add(seg.a, seg.a, k);
     if (seg.b >= 0) K.add(seg.b, seg.b, k);
     if (seg.a >= 0 && seg.b >= 0) K.add(seg.a, seg.b, -k);

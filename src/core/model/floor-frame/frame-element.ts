@@ -54,8 +54,15 @@ export function elementStiffness(g: ElementGeometry, sec: Section): number[][] {
     [0, 0, 0, -s, c, 0],
     [0, 0, 0, 0, 0, 1],
   ];
-  const kT = k.map((row) => T[0].map((_, j) => row.reduce((sum, v, m) => sum + v * T[m][j], 0)));
-  return T[0].map((_, i) => T[0].map((__, j) => T.reduce((sum, row, m) => sum + row[i] * kT[m][j], 0)));
+  // Plain loops: this runs for every element of every frame built.
+  const kT = k.map((row) => {
+    const out = [0, 0, 0, 0, 0, 0];
+    for (let j = 0; j < 6; j++) for (let m = 0; m < 6; m++) out[j] += row[m] * T[m][j];
+    return out;
+  });
+  const K = T.map(() => [0, 0, 0, 0, 0, 0]);
+  for (let i = 0; i < 6; i++) for (let j = 0; j < 6; j++) for (let m = 0; m < 6; m++) K[i][j] += T[m][i] * kT[m][j];
+  return K;
 }
 
 export interface ElementForces {

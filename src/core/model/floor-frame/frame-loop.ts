@@ -109,12 +109,15 @@ export function frameLoop(shape: LoopShape, marks: readonly LoopMark[]): FrameLo
   for (const [i, p] of placed) stations[i].push(p);
   const nodes: LoopNode[] = [];
   const elements: LoopElement[] = [];
-  const nodeAt = new Map<string, number>();
+  // Each piece's node parameters (ascending) and their nodes, to find a mark's node by a search.
+  const params: number[][] = [];
+  const paramNodes: number[][] = [];
   pieces.forEach((pc, i) => {
-    const sorted = [...new Set(stations[i].filter((p) => p >= pc.from - EPS && p < pc.to - EPS))].sort((a, b) => a - b);
+    const sorted = stations[i].filter((p) => p >= pc.from - EPS && p < pc.to - EPS).sort((a, b) => a - b);
     const unique = sorted.filter((p, k) => k === 0 || p - sorted[k - 1] > EPS);
+    params.push(unique);
+    paramNodes.push(unique.map((_, k) => nodes.length + k));
     for (const p of unique) {
-      nodeAt.set(`${i}:${p}`, nodes.length);
       const prev = nodes.length - 1;
       nodes.push(pc.point(p));
       if (prev >= 0) elements.push({ a: prev, b: prev + 1, rail: pieces[i - (unique[0] === p ? 1 : 0)].rail });
@@ -123,12 +126,23 @@ export function frameLoop(shape: LoopShape, marks: readonly LoopMark[]): FrameLo
   elements.push({ a: nodes.length - 1, b: 0, rail: pieces[pieces.length - 1].rail });
   // A mark at a piece's end is the next piece's first node.
   const markNodes = placed.map(([i, p]) => {
-    if (Math.abs(p - pieces[i].to) <= EPS) return nodeAt.get(`${(i + 1) % pieces.length}:${pieces[(i + 1) % pieces.length].from}`)!;
-    for (const [key, n] of nodeAt) {
-      const [pi, pp] = key.split(':');
-      if (Number(pi) === i && Math.abs(Number(pp) - p) <= EPS) return n;
-    }
+    if (Math.abs(p - pieces[i].to) <= EPS) return paramNodes[(i + 1) % pieces.length][0];
+    const k = nearest(params[i], p);
+    if (k >= 0 && Math.abs(params[i][k] - p) <= EPS) return paramNodes[i][k];
     throw new Error(`no loop node for a mark on the ${pieces[i].rail} rail at ${p}`);
   });
   return { nodes, elements, markNodes, centreRadius: rc };
+}
+
+/** Index of the value nearest p in an ascending list (-1 when empty), by bisection. */
+function nearest(sorted: readonly number[], p: number): number {
+  if (!sorted.length) return -1;
+  let lo = 0;
+  let hi = sorted.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (sorted[mid] <= p) lo = mid;
+    else hi = mid;
+  }
+  return Math.abs(sorted[hi] - p) < Math.abs(sorted[lo] - p) ? hi : lo;
 }

@@ -129,13 +129,24 @@ export class FloorFrame {
   /** F[s][t]: the shortening of strap s under a unit pull of strap t (row-major; symmetric by Maxwell-Betti). */
   flexibility(): Float64Array {
     if (this.#flexibility) return this.#flexibility;
-    const m = this.input.straps.length;
+    const { straps, anchors } = this.input;
+    const m = straps.length;
     const F = new Float64Array(m * m);
+    const f = new Float64Array(3 * this.loop.nodes.length);
+    // Each strap's unit pull alone (its two anchor loads),
+    // and every strap's shortening read from the displacements.
     for (let t = 0; t < m; t++) {
-      const unit = new Float64Array(m);
-      unit[t] = 1;
-      const e = this.#shortening(this.#K.solve(this.#loads(unit)));
-      for (let s = 0; s < m; s++) F[s * m + t] = e[s];
+      f.fill(0);
+      for (const a of straps[t]) f[this.#anchorDof[a]] += anchors[a].inward;
+      for (const h of this.#held) f[h] = 0;
+      // The frame's matrix keeps the loop's own numbering (no reordering): solve in place.
+      this.#K.forward(f);
+      this.#K.backward(f);
+      const d = f;
+      for (let s = 0; s < m; s++) {
+        const [a, b] = straps[s];
+        F[s * m + t] = anchors[a].inward * d[this.#anchorDof[a]] + anchors[b].inward * d[this.#anchorDof[b]];
+      }
     }
     this.#flexibility = F;
     return F;
