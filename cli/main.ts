@@ -2,9 +2,20 @@
 import { run } from './run.ts';
 import { EXIT } from './exit-codes.ts';
 import { faultLine } from './fault-line.ts';
-// Ctrl-C stops at once, except while an output set is being swapped into place: then right after it, so the last complete set stands.
-// (Imported when the signal comes, so start-up loads nothing of src/; a command that writes has it loaded already.)
+// The first Ctrl-C asks a long run (batch, sweep, size) to stop after the
+// item in hand and write what it finished; a command with nothing to keep,
+// or a second Ctrl-C, stops at once, except while an output set is being
+// swapped into place: then right after it, so the last complete set stands.
+// (Imported when the signal comes, so start-up loads nothing of src/; a
+// command that writes has it loaded already.)
+const stop = new AbortController();
+let keepsPartial = false;
 process.on('SIGINT', () => {
+  if (keepsPartial && !stop.signal.aborted) {
+    stop.abort();
+    process.stderr.write('\naxletree: stopping after the item in hand; what is finished will be written (Ctrl-C again to stop at once)\n');
+    return;
+  }
   void import('../src/node/critical-section.ts').then(({ whenSafe }) => whenSafe(() => process.exit(130)));
 });
 
@@ -13,6 +24,10 @@ try {
     out: (s) => process.stdout.write(s),
     err: (s) => process.stderr.write(s),
     cwd: process.cwd(),
+    stop: stop.signal,
+    errIsTerminal: process.stderr.isTTY === true,
+    // A command that keeps a partial result says so when it starts its long part.
+    keepPartial: () => (keepsPartial = true),
   });
 } catch (e) {
   // run() answers its own faults; this catches what escapes even that.
