@@ -42,10 +42,11 @@ export function resultJson(result: CheckResult): string {
 
 /** Render everything first (the PDFs included), then write each file atomically; returns the paths written. */
 export async function writeOutputs(result: CheckResult, dir: string, inputPath: string, draw: PlotDrawer = drawHere, options: OutputOptions = {}): Promise<string[]> {
+  // The plots first: drawn on another thread, they are made while this one builds the report model and the workbook.
+  const drawing = drawReportPlots(result, draw);
   // One report model for all three outputs, so the workbook, report.md and report.html cannot disagree.
   const doc = reportDocument(result);
-  // The plots are drawn (perhaps in another thread) while the workbook is made.
-  const [plots, workbook] = await Promise.all([drawReportPlots(result, draw), renderWorkbook(result, doc)]);
+  const [plots, workbook] = await Promise.all([drawing, renderWorkbook(result, doc)]);
   const html = renderHtml(doc, plots);
   const summary = renderHtml(summaryDocument(result), plots);
   const printed: [string, Uint8Array][] = options.printer

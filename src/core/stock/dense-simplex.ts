@@ -7,6 +7,7 @@
 // cycling on degenerate vertices (Bland, Mathematics of Operations Research 2
 // (1977)); the inverse is rebuilt from the basis columns before optimality is
 // declared, so drift from the updates never reaches the value.
+import { squareTimesVector } from '../numeric/square-times-vector.ts';
 
 /** Reduced costs and pivots below this are taken as zero. */
 const TOL = 1e-9;
@@ -121,14 +122,7 @@ export class DenseSimplex {
 
   /** B^-1 a. */
   private ftran(a: Float64Array): Float64Array {
-    const { m, inv } = this;
-    const u = new Float64Array(m);
-    for (let i = 0; i < m; i++) {
-      let s = 0;
-      for (let r = 0; r < m; r++) s += inv[i * m + r] * a[r];
-      u[i] = s;
-    }
-    return u;
+    return squareTimesVector(this.inv, a, this.m);
   }
 
   private pivot(r: number, q: number, u: Float64Array): void {

@@ -1,4 +1,5 @@
 import { factorDense, type DenseLU } from '../floor-frame/dense-lu.ts';
+import { squareTimesVector } from '../../numeric/square-times-vector.ts';
 import { gmres } from './gmres.ts';
 import type { CableNet } from './net.ts';
 import { planCurvatures, tangentStiffness, type SegmentState } from './segment.ts';
@@ -46,15 +47,7 @@ const GMRES_TOLERANCE = 1e-10;
 const GMRES_STEPS = 16;
 
 /** y = F·x for the row-major m × m flexibility. */
-export function mulF(F: ArrayLike<number>, x: ArrayLike<number>, m: number): Float64Array {
-  const y = new Float64Array(m);
-  for (let s = 0; s < m; s++) {
-    let v = 0;
-    for (let t = 0; t < m; t++) v += F[s * m + t] * x[t];
-    y[s] = v;
-  }
-  return y;
-}
+export const mulF = squareTimesVector;
 
 /** K_ue as entries: two per segment (its ends' rows in the stored numbering; a fixed end holds 0), each in one strap's column. */
 interface Coupling {
