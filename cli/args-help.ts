@@ -35,7 +35,7 @@ export function usageLine(d: CommandDecl): string {
     const text = o.type === 'boolean' ? dashed(name) : `${dashed(name)} ${o.value ?? 'VALUE'}`;
     return o.required ? text : `[${text}]`;
   });
-  return ['axletree', d.name, ...d.positionals.map((p) => `<${p.name}>`), ...options].join(' ');
+  return ['axletree', d.name, ...d.positionals.map((p) => (p.many ? `<${p.name}>...` : `<${p.name}>`)), ...options].join(' ');
 }
 
 export function exitCodeLines(findings?: string): string[] {

@@ -24,6 +24,8 @@ export interface PositionalDecl {
   /** What it is, as a count error names it: "specification file". */
   what: string;
   help: string;
+  /** The last positional only: it takes one or more values (files, or a folder). */
+  many?: boolean;
 }
 
 export type OptionDecls = Readonly<Record<string, OptionDecl>>;
@@ -42,7 +44,7 @@ export interface CommandDecl<O extends OptionDecls = OptionDecls> {
   name: string;
   /** One line for the overview. */
   summary: string;
-  /** Exactly these, in this order. */
+  /** Exactly these, in this order (the last may take one or more: `many`). */
   positionals: readonly PositionalDecl[];
   options: O;
   /** More about the command for its --help: what it writes, the input format. */
@@ -127,6 +129,13 @@ function unknownOption(decl: CommandDecl, name: string, takers: string[]): strin
 }
 
 function countProblem(wanted: readonly PositionalDecl[], got: string[]): string | undefined {
+  const last = wanted.at(-1);
+  // A last positional marked `many` takes one or more.
+  if (last?.many) {
+    if (got.length >= wanted.length) return undefined;
+    const fixed = wanted.slice(0, -1).map((w) => w.what);
+    return `give ${[...fixed, `one or more ${last.what}s`].join(', then ')} (got ${got.length})`;
+  }
   if (got.length === wanted.length) return undefined;
   if (wanted.length === 0) return `takes no file or other argument (got ${got.map((g) => `"${g}"`).join(', ')})`;
   const what = wanted.length === 1 ? `exactly one ${wanted[0].what}` : `${wanted.length} arguments: ${wanted.map((w) => w.what).join(', ')}`;

@@ -62,6 +62,28 @@ describe('parseCommand', () => {
   });
 });
 
+describe('a last positional that takes one or more', () => {
+  const many = command({
+    name: 'many',
+    summary: 'several files',
+    positionals: [{ name: 'spec', what: 'specification file', help: 'files', many: true }],
+    options: {},
+    example: 'axletree many a b',
+    run: () => Promise.resolve(0),
+  });
+  const after = command({ ...many, positionals: [{ name: 'base', what: 'baseline', help: 'one' }, { name: 'other', what: 'build', help: 'more', many: true }] });
+
+  it('takes every one given', () => {
+    expect(parseCommand(many, ['a.yaml', 'b.yaml', 'c.yaml'])).toMatchObject({ kind: 'run', args: { positionals: ['a.yaml', 'b.yaml', 'c.yaml'] } });
+    expect(parseCommand(after, ['a.yaml', 'b.yaml'])).toMatchObject({ kind: 'run', args: { positionals: ['a.yaml', 'b.yaml'] } });
+  });
+
+  it('refuses none, naming what is wanted', () => {
+    expect(parseCommand(many, [])).toEqual({ kind: 'refused', message: 'give one or more specification files (got 0)' });
+    expect(parseCommand(after, ['a.yaml'])).toEqual({ kind: 'refused', message: 'give baseline, then one or more builds (got 1)' });
+  });
+});
+
 describe('exit codes', () => {
   it('a run over several inputs exits with the highest code', () => {
     expect(worstExit([])).toBe(EXIT.ok);
