@@ -4,8 +4,7 @@ import { OutputIsInputError } from '../../src/node/atomic-write.ts';
 import { resultJson, writeOutputs } from '../../src/node/write-outputs.ts';
 import { pdfPrinter, type PdfPrinter } from '../../src/node/pdf-printer.ts';
 import { startPlotThread } from '../../src/node/plot-thread.ts';
-import { runCheck } from '../../src/core/pipeline/run-check.ts';
-import { loadLpSolver } from '../../src/node/load-lp-solver.ts';
+import { checkLoadingSolver } from '../../src/node/solver-on-demand.ts';
 import { prepareSpec, type Prepared } from '../../src/core/spec/prepare.ts';
 import type { RulesData } from '../../src/core/data/rules-data.ts';
 import type { PlotDrawer } from '../../src/render/report-plots.ts';
@@ -59,8 +58,8 @@ export async function checkCommand(file: string, opts: CheckOptions, con: Consol
 }
 
 async function checkAndWrite(file: string, input: string, raw: unknown, prepared: Extract<Prepared, { ok: true }>, data: RulesData, opts: CheckOptions, con: Console, draw: PlotDrawer): Promise<number> {
-  // The solver is loaded only once the spec is known to be good.
-  const result = runCheck(prepared.spec, prepared.entries, data, { lp: await loadLpSolver(), decisive: opts.decisive });
+  // The LP solver is loaded only where the stock plan needs it.
+  const result = await checkLoadingSolver(prepared.spec, prepared.entries, data, { decisive: opts.decisive });
   result.input = raw;
   const dir = resolve(con.cwd, opts.out ?? join('axletree-out', basename(file, extname(file))));
   let written: string[];
