@@ -6,6 +6,7 @@ import type { Rule } from '../pipeline/define-rule.ts';
 import type { CompareResult, ComparedBuild } from './compare-result.ts';
 import { compareFigures } from './figure-diff.ts';
 import { compareFindings } from './finding-diff.ts';
+import { diffSpecs } from './spec-diff.ts';
 import { pairAccount, type ComparedSpec } from './pair-account.ts';
 
 export interface CompareArgs {
@@ -48,6 +49,7 @@ export function compareBuilds(a: CompareArgs): CompareResult {
     findings_differing: differing,
     findings_not_in_all: notInAll,
     decisive_inputs: results.map((r) => r.decisive_inputs ?? null),
+    spec_differences: diffSpecs(a.builds.map((b) => b.spec)),
     accounts,
     cautions: [...CAUTIONS],
   };

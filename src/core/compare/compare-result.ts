@@ -71,6 +71,8 @@ export interface CompareResult {
   findings_not_in_all: FindingComparison[];
   /** Each build's decisive inputs; null where the search was not run. */
   decisive_inputs: (DecisiveInput[] | null)[];
+  /** The values at which the prepared specifications are not all the same. */
+  spec_differences: SpecDifference[];
   accounts: PairAccount[];
   cautions: string[];
 }
