@@ -2,10 +2,11 @@
 // a command's code is imported when it runs.
 import type { CommandDecl } from '../args.ts';
 import { check } from './check.ts';
+import { compare } from './compare.ts';
 import { floorTest } from './floor-test.ts';
 import { newSpec } from './new.ts';
 import { ride } from './ride.ts';
 import { rules } from './rules.ts';
 import { stock } from './stock.ts';
 
-export const COMMANDS: readonly CommandDecl[] = [check, newSpec, rules, stock, ride, floorTest];
+export const COMMANDS: readonly CommandDecl[] = [check, compare, newSpec, rules, stock, ride, floorTest];

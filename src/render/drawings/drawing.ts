@@ -12,6 +12,8 @@ export interface Drawing {
   title: string;
   caption: string;
   svg: string;
+  /** The scale 1:n it is drawn at; absent for a diagram not to scale. */
+  scale?: number;
 }
 
 /** Width of the sheet, paper mm: the text width of A4 with 15 mm margins. */

@@ -20,7 +20,8 @@ const LEGEND = 31;
 
 const newtons = (v: number) => formatNumber(v, 'N');
 
-export function floorTension(a: BuildScene): Drawing {
+/** `coarsest`: as for the side elevation, a scale shared by builds compared side by side. */
+export function floorTension(a: BuildScene, coarsest = 0): Drawing {
   const { spec } = a;
   const floor = spec.box.floor;
   const m = a.floor;
@@ -30,6 +31,7 @@ export function floorTension(a: BuildScene): Drawing {
   const s = Math.max(
     fitScale(floor.depth_mm * panels, SHEET_WIDTH - 2 * MARGIN.side - (panels - 1) * MARGIN.gap),
     fitScale(floor.width_mm, 150), // and no taller than most of a page
+    coarsest,
   );
   const top = (m.straps.length ? Math.max(...m.straps.map((t) => t.maxTension_N)) : 0) || 1;
   const band = (t: number) => Math.min(SHADES.length - 1, Math.floor((t / top) * SHADES.length));
@@ -79,7 +81,7 @@ export function floorTension(a: BuildScene): Drawing {
     style: ['.frame-inner { stroke-width: 0.5; } .strap { stroke: none; } .foot { stroke-dasharray: 1 0.6; stroke-width: 0.35; } .key { stroke-width: 0.18; }'],
     parts: sheet.finish(),
   });
-  return { id: 'floor-straps', title: 'Floor straps by tension', caption, svg };
+  return { id: 'floor-straps', title: 'Floor straps by tension', caption, svg, scale: s };
 }
 
 function strap(sheet: SvgSheet, P: (x: number, y: number) => Pt, st: StrapTension, w: number, shade: string): void {

@@ -18,7 +18,8 @@ const RUN = 0.35;
 const mm = (v: number) => formatNumber(v, 'mm');
 const metres = (v_mm: number) => `${formatNumber(v_mm / 1000, 'm')} m`;
 
-export function planTurn(a: BuildScene): Drawing {
+/** `coarsest`: as for the side elevation, a scale shared by builds compared side by side. */
+export function planTurn(a: BuildScene, coarsest = 0): Drawing {
   const t = a.turn;
   const R = { yoke: t.yokeRadius * 1000, axle: t.axleRadius * 1000, inner: t.innerRadius * 1000, outer: t.outerRadius * 1000 };
   const L = t.reach * 1000;
@@ -41,7 +42,7 @@ export function planTurn(a: BuildScene): Drawing {
   const uMax = Math.max(...pts.map((p) => p[0]));
   const vMin = Math.min(...pts.map((p) => p[1]));
   const vMax = Math.max(...pts.map((p) => p[1]));
-  const s = fitScale(Math.max(uMax - uMin, ((vMax - vMin) * SHEET_WIDTH) / 110), SHEET_WIDTH - 2 * MARGIN.side);
+  const s = Math.max(fitScale(Math.max(uMax - uMin, ((vMax - vMin) * SHEET_WIDTH) / 110), SHEET_WIDTH - 2 * MARGIN.side), coarsest);
   const ox = SHEET_WIDTH / 2 - (uMin + uMax) / 2 / s;
   const oy = MARGIN.top + 6 + vMax / s; // v up on paper: the turn centre lies above the sheet
   const P = (p: Pt): Pt => [ox + p[0] / s, oy - p[1] / s];
@@ -108,7 +109,7 @@ export function planTurn(a: BuildScene): Drawing {
     style: ['.path-yoke { stroke-width: 0.5; } .path-axle { stroke-dasharray: 4 1 1 1; } .path-inner, .path-outer { stroke: #666; }', '.wheel-plan { stroke-width: 1.2; } .pole { stroke-width: 0.8; } .yoke-point { fill: #000; }'],
     parts: sheet.finish(),
   });
-  return { id: 'plan-turn', title: 'Plan of the planned turn', caption, svg };
+  return { id: 'plan-turn', title: 'Plan of the planned turn', caption, svg, scale: s };
 }
 
 /** The point at radius r and angle a (radians, anticlockwise from straight below the turn centre). */

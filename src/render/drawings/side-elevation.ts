@@ -21,7 +21,8 @@ const ARROW = 13;
 const mm = (v: number) => formatNumber(v, 'mm');
 const newtons = (v: number) => formatNumber(v, 'N');
 
-export function sideElevation(a: BuildScene): Drawing {
+/** `coarsest` draws at that scale (1:n) where the build alone would fit a larger one: builds compared side by side share one scale. */
+export function sideElevation(a: BuildScene, coarsest = 0): Drawing {
   const { spec } = a;
   const lay = a.layout;
   const r = lay.wheelRadius;
@@ -32,7 +33,7 @@ export function sideElevation(a: BuildScene): Drawing {
   const xMax = spec.pole.yoke_x_mm + spec.yoke.width_mm / 2;
   const crewTop = Math.max(0, ...spec.crew.map((c) => lay.floorTopZ + c.cg_height_mm));
   const zMax = Math.max(2 * r, spec.pole.yoke_height_mm + spec.yoke.height_mm / 2, lay.floorTopZ + spec.box.siding_height_mm, crewTop);
-  const s = fitScale(xMax - xMin, SHEET_WIDTH - MARGIN.left - MARGIN.right);
+  const s = Math.max(fitScale(xMax - xMin, SHEET_WIDTH - MARGIN.left - MARGIN.right), coarsest);
   const ox = MARGIN.left - xMin / s;
   const oy = MARGIN.top + 8 + zMax / s; // the ground line; 8 mm for the labels above the tallest part
   const P = (x: number, z: number): Pt => [ox + x / s, oy - z / s];
@@ -120,7 +121,7 @@ export function sideElevation(a: BuildScene): Drawing {
     ],
     parts: sheet.finish(),
   });
-  return { id: 'side-elevation', title: 'Side elevation', caption, svg };
+  return { id: 'side-elevation', title: 'Side elevation', caption, svg, scale: s };
 }
 
 function drawPole(a: BuildScene, sheet: SvgSheet, P: (x: number, z: number) => Pt, s: number): void {
