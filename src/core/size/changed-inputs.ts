@@ -8,8 +8,8 @@ import { specKey } from '../decisive/recording-proxy.ts';
 export function changedInputs(a: unknown, b: unknown, path: (string | number)[] = [], out = new Set<InputKey>()): Set<InputKey> {
   const isNode = (v: unknown) => typeof v === 'object' && v !== null;
   if (isNode(a) && isNode(b)) {
-    const ka = Object.keys(a as object);
-    const kb = Object.keys(b as object);
+    const ka = Object.keys(a);
+    const kb = Object.keys(b);
     for (const k of new Set([...ka, ...kb])) {
       const step = Array.isArray(a) || Array.isArray(b) ? Number(k) : k;
       changedInputs((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], [...path, step], out);

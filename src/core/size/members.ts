@@ -94,7 +94,7 @@ export function dimsOf(spec: Spec, s: Slot): number[] {
 }
 
 /** A copy of the parsed input with sections written in (only the objects on the way are copied). */
-export function withSections(raw: unknown, sections: readonly { slot: Slot; dims: Dims }[]): unknown {
+export function withSections(raw: unknown, sections: readonly { slot: { at: Path; fields: readonly string[] }; dims: Dims }[]): unknown {
   let out = raw;
   for (const { slot, dims } of sections) {
     const fields = Object.fromEntries(slot.fields.map((f, i) => [f, dims[i]]));
@@ -113,4 +113,9 @@ function setObject(root: unknown, at: Path, fields: Record<string, number>): unk
 /** The section in words: "75 × 60 mm" (width × depth) or "72 mm diameter". */
 export function dimsText(dims: Dims): string {
   return dims.length === 1 ? `${formatQuantity(dims[0], 'mm')} diameter` : `${formatNumber(dims[0], 'mm')} × ${formatQuantity(dims[1], 'mm')}`;
+}
+
+/** Sections named by their dotted field paths (`axle.width_mm`), as `withSections` takes them. */
+export function sectionsAt(changes: readonly { fields: readonly string[]; to: Dims }[]): { slot: { at: Path; fields: string[] }; dims: Dims }[] {
+  return changes.map((c) => ({ slot: { at: c.fields[0].split('.').slice(0, -1), fields: c.fields.map((f) => f.split('.').at(-1)!) }, dims: c.to }));
 }

@@ -139,7 +139,7 @@ export function optionsFor(ctx: OptionsContext, f: Finding): FindingOptions {
     const be = breakEven(info.value, { severity: 'fail', gap: passGap(f, f) }, range, probe, range.text);
     if (be.break_even === null) continue;
     // The passing end of the last bracket: the passing value tried nearest the break-even.
-    const to = passed.filter((v) => Math.sign(v - info.value) === Math.sign(be.break_even! - info.value)).sort((a, b) => Math.abs(a - be.break_even!) - Math.abs(b - be.break_even!))[0];
+    const to = passed.filter((v) => Math.sign(v - info.value) === Math.sign(be.break_even - info.value)).sort((a, b) => Math.abs(a - be.break_even) - Math.abs(b - be.break_even))[0];
     if (to === undefined) continue;
     const changed = withInput(info.key, to, ctx.spec, ctx.data);
     const whole = ctx.check.run(changed.spec);

@@ -20,8 +20,12 @@ export const WHOLE_TRIALS = 30;
 const CAP = 3000;
 
 export interface SizingContext {
+  /** The parsed input with the rest of the build as held (the sections proposed so far for other members written in). */
   raw: unknown;
+  /** The build as given: its sections are the ones changed from, its stock list the one chosen from. */
   spec: CheckedSpecification;
+  /** The whole check of `raw`: the mass and cost changes are reckoned from it. */
+  reference: TrialResult;
   /** The parsed input prepared again (schema, defaults, cross-field checks); null where it would be refused. */
   prepare(raw: unknown): CheckedSpecification | null;
   check: PartialCheck;
@@ -161,7 +165,7 @@ export function sizeMember(ctx: SizingContext, member: Member): MemberSizing {
       ...head(member, worst),
       found: true,
       sections: plans.map((p, i) => change(p, given(p), combo[i])),
-      ...effects(base, trial, member.rule),
+      ...effects(ctx.reference, trial, member.rule),
       worse: [],
       risen: j.risen,
       rejected,
