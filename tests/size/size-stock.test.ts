@@ -71,3 +71,19 @@ describe('size from the stock list', () => {
     expect(passesAgainst(base, check(withSections(raw, [{ slot, dims: smaller }])), 'member.pole')).toBe(false);
   });
 });
+
+describe('size from the series (--free)', () => {
+  it('proposes a section of whole 5 mm steps that passes when written back and checked', () => {
+    const raw = thinPole();
+    const spec = prepared(raw);
+    const base = check(raw);
+    const run = startSizing({ raw, spec, entries: [], data: rulesData, rules: RULES, inputs: { ride: true }, mode: 'free' });
+    while (run.next());
+    const pole = run.result().members.find((m) => m.rule === 'member.pole')!;
+    expect(pole.found).toBe(true);
+    expect(pole.sections[0].basis).toBe('series');
+    expect(pole.sections[0].to.every((v) => v % 5 === 0)).toBe(true);
+    const slot = membersOf(spec).find((m) => m.rule === 'member.pole')!.slots[0];
+    expect(passesAgainst(base, check(withSections(raw, [{ slot, dims: pole.sections[0].to }])), 'member.pole')).toBe(true);
+  });
+});

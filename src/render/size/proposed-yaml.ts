@@ -2,6 +2,7 @@ import { parseDocument, stringify } from 'yaml';
 import { sectionsAt, withSections } from '../../core/size/members.ts';
 import type { SectionChange } from '../../core/size/size-member.ts';
 import { formatQuantity } from '../../core/format/number-format.ts';
+import { SHORT_CAUTION } from '../../core/cautions.ts';
 
 // The specification with every proposed section written in, as YAML. From a
 // YAML or JSON file the text is edited in place, so its comments and order
@@ -12,7 +13,7 @@ const pathOf = (field: string) => field.split('.');
 
 function header(changes: readonly SectionChange[]): string {
   const lines = changes.map((c) => `#   ${c.fields.map((f, i) => `${f}: ${formatQuantity(c.from[i], 'mm')} -> ${formatQuantity(c.to[i], 'mm')}`).join(', ')}`);
-  return ['# Sections proposed by axletree size, written in below (check this file before building from it):', ...lines, ''].join('\n');
+  return [`# ${SHORT_CAUTION}`, '# Sections proposed by axletree size, written in below (check this file before building from it):', ...lines, ''].join('\n');
 }
 
 export function proposedYaml(sourceText: string | null, raw: unknown, changes: readonly SectionChange[]): string {
