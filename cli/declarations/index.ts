@@ -7,6 +7,7 @@ import { floorTest } from './floor-test.ts';
 import { newSpec } from './new.ts';
 import { ride } from './ride.ts';
 import { rules } from './rules.ts';
+import { size } from './size.ts';
 import { stock } from './stock.ts';
 
-export const COMMANDS: readonly CommandDecl[] = [check, compare, newSpec, rules, stock, ride, floorTest];
+export const COMMANDS: readonly CommandDecl[] = [check, compare, size, newSpec, rules, stock, ride, floorTest];
