@@ -69,19 +69,16 @@ describe('the review files', () => {
 
   it('workbook: the cautions, the same rows, and a link to each report', async () => {
     const wb = new ExcelJS.Workbook();
-    await wb.xlsx.load(await reviewWorkbook(table));
+    await wb.xlsx.load((await reviewWorkbook(table)) as unknown as ExcelJS.Buffer);
     const ws = wb.getWorksheet('Review')!;
-    const texts: string[] = [];
-    ws.eachRow((r) => r.eachCell((c) => texts.push(typeof c.value === 'object' && c.value && 'text' in c.value ? String(c.value.text) : String(c.value))));
-    expect(texts[0]).toBe(SHORT_CAUTION);
-    for (const c of CAUTIONS) expect(texts).toContain(c);
-    let link: ExcelJS.CellHyperlinkValue | undefined;
-    ws.eachRow((r) => r.eachCell((c) => {
-      if (typeof c.value === 'object' && c.value && 'hyperlink' in c.value) link = c.value as ExcelJS.CellHyperlinkValue;
-    }));
-    expect(link).toEqual({ text: 'odd <name>#1/report.html', hyperlink: 'odd%20%3Cname%3E%231/report.html' });
-    expect(texts).toContain(refused.error);
-    expect(texts).toContain(352.94625 + '');
+    const values: ExcelJS.CellValue[] = [];
+    ws.eachRow((r) => r.eachCell((c) => values.push(c.value)));
+    expect(values[0]).toBe(SHORT_CAUTION);
+    for (const c of CAUTIONS) expect(values).toContain(c);
+    expect(values).toContainEqual({ text: 'odd <name>#1/report.html', hyperlink: 'odd%20%3Cname%3E%231/report.html' });
+    expect(values).toContain(refused.error);
+    // Numbers stay numbers in the workbook.
+    expect(values).toContain(352.94625);
   });
 
 });
