@@ -5,6 +5,7 @@ import { cellText, headerText } from '../model/cell-text.ts';
 import { escapeHtml } from '../html/html-escape.ts';
 import { badgeHtml } from '../html/html-runs.ts';
 import { REPORT_CSS } from '../html/report-style.ts';
+import { htmlPage } from '../html/html-page.ts';
 import { reviewCautions } from './review-cautions.ts';
 import { REPORT_COLUMN, reviewTableBlock } from './review-table-block.ts';
 
@@ -38,19 +39,11 @@ export function reviewHtml(review: ReviewTable): string {
   const table = t.rows.length ? `<table class="review">\n<thead><tr>${head}</tr></thead>\n<tbody>\n${body.join('\n')}\n</tbody>\n</table>` : `<p>${escapeHtml(t.empty)}</p>`;
   const title = `Review of ${review.rows.length} proposal${review.rows.length === 1 ? '' : 's'}`;
   const list = (cls: string, items: readonly string[]) => `<ul${cls ? ` class="${cls}"` : ''}>\n${items.map((i) => `<li>${escapeHtml(i)}</li>`).join('\n')}\n</ul>`;
-  return `<!doctype html>
-<html lang="en">
-<head>
-<meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'">
-<title>${escapeHtml(title)}</title>
-<style>${REVIEW_CSS}</style>
-</head>
-<body>
-<main>
-<h1>${escapeHtml(title)}</h1>
-<p class="lede">${escapeHtml(`One row per proposal checked by ${review.tool.name} ${review.tool.version}: its verdict, worst findings, the inputs the verdict hangs on, cost and mass; the last column opens its full report.`)}</p>
+  const lede = `One row per proposal checked by ${review.tool.name} ${review.tool.version}: its verdict, worst findings, the inputs the verdict hangs on, cost and mass; the last column opens its full report.`;
+  return htmlPage(
+    title,
+    REVIEW_CSS,
+    `<p class="lede">${escapeHtml(lede)}</p>
 <h2 class="cautions">Cautions</h2>
 ${list('cautions', reviewCautions(review))}
 <h2>Proposals</h2>
@@ -59,8 +52,6 @@ ${table}
 ${list('', review.notes)}
 <hr>
 <p><em>${escapeHtml(SHORT_CAUTION)}</em></p>
-</main>
-</body>
-</html>
-`;
+`,
+  );
 }
