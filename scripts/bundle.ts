@@ -47,7 +47,8 @@ export async function bundle(outdir: string): Promise<Bundle | undefined> {
   if (!esbuild) return undefined;
   rmSync(outdir, { recursive: true, force: true });
   const result = await esbuild.build({
-    entryPoints: { axletree: 'cli/main.ts' },
+    // The batch review's check thread is started from its own file (src/node/review/worker-place.mjs finds it).
+    entryPoints: { axletree: 'cli/main.ts', 'review-worker': 'src/node/review/check-worker.ts' },
     absWorkingDir: ROOT,
     bundle: true,
     platform: 'node',

@@ -9,6 +9,7 @@ import { figureHtml } from './html-figure.ts';
 import { badgeHtml, runsHtml } from './html-runs.ts';
 import { tableHtml } from './html-table.ts';
 import { REPORT_CSS } from './report-style.ts';
+import { htmlPage } from './html-page.ts';
 
 // The report model as one self-contained HTML file, written directly from the
 // model: every text escaped, the style sheet inline, figures as inline SVG, no
@@ -71,21 +72,5 @@ function partsHtml(doc: ReportDocument, plots: ReportPlots): string {
 export function renderHtml(doc: ReportDocument, plots: ReportPlots): string {
   const closing = doc.closing ? `<hr>\n<p><em>${escapeHtml(doc.closing)}</em></p>\n` : '';
   const lede = doc.lede ? `<p class="lede">${escapeHtml(doc.lede)}</p>\n` : '';
-  return `<!doctype html>
-<html lang="en">
-<head>
-<meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'">
-<title>${escapeHtml(doc.title)}</title>
-<style>${REPORT_CSS}</style>
-</head>
-<body>
-<main>
-<h1>${escapeHtml(doc.title)}</h1>
-${lede}${partsHtml(doc, plots)}
-${closing}</main>
-</body>
-</html>
-`;
+  return htmlPage(doc.title, REPORT_CSS, `${lede}${partsHtml(doc, plots)}\n${closing}`);
 }
