@@ -12,6 +12,8 @@ import { benchMemory } from './memory.ts';
 import { benchOutputs } from './outputs.ts';
 import { benchRide } from './ride.ts';
 import { benchStartup } from './startup.ts';
+import { benchBatch } from './batch.ts';
+import { benchSize } from './size.ts';
 import { benchStockPlanner } from './stock-planner.ts';
 import { yardstickMs } from './yardstick.ts';
 
@@ -41,6 +43,10 @@ for (const { raw } of demos.filter((d) => d.file.startsWith('demo-'))) {
 console.log('stock planner (OR-Library and generated bin packing):');
 missed += await benchStockPlanner();
 missed += benchStartup();
+console.log('batch review:');
+missed += benchBatch();
+console.log('size:');
+missed += benchSize(benchSpecs().find((s) => s.file === 'teaching-flawed.yaml')!.raw, data, lp);
 missed += benchMemory();
 console.log(`${missed ? `${missed} target${missed > 1 ? 's' : ''} MISSED` : 'every target met'} (yardstick ${yardstick.toFixed(1)} ms this run)`);
 process.exitCode = missed ? 1 : 0;
