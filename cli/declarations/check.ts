@@ -1,3 +1,4 @@
+import { resolve } from 'node:path';
 import { command } from '../args.ts';
 import { EXIT } from '../exit-codes.ts';
 
@@ -41,8 +42,9 @@ proposals in hand and writes the table of those finished.`,
       con.err(`axletree check: ${jobs}\n`);
       return EXIT.badInput;
     }
-    const { isFolder } = await import('../is-folder.ts');
-    if (positionals.length === 1 && !(await isFolder(con.cwd, positionals[0]))) {
+    // One file is checked as it always was; so is a folder with no specification in it (check says what it is).
+    const { specsIn } = await import('../../src/node/review/expand-inputs.ts');
+    if (positionals.length === 1 && (await specsIn(resolve(con.cwd, positionals[0]))).length === 0) {
       const { checkCommand } = await import('../commands/check.ts');
       return checkCommand(positionals[0], opts, con);
     }

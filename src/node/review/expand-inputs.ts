@@ -23,6 +23,15 @@ export function isSpecName(name: string): boolean {
   return (SPEC_EXTENSIONS as readonly string[]).includes(extname(name).toLowerCase()) && !name.startsWith('.') && !name.startsWith('~$');
 }
 
+/** The specifications directly in a folder, in name order; none where the path is not a folder. */
+export async function specsIn(folder: string): Promise<string[]> {
+  const entries = await readdir(folder, { withFileTypes: true }).catch(() => []);
+  return entries
+    .filter((e) => !e.isDirectory() && isSpecName(e.name))
+    .map((e) => e.name)
+    .sort();
+}
+
 export async function expandInputs(args: readonly string[], cwd: string): Promise<GivenProposal[]> {
   const out: GivenProposal[] = [];
   const seen = new Set<string>();
@@ -38,8 +47,7 @@ export async function expandInputs(args: readonly string[], cwd: string): Promis
       add({ file: arg, input });
       continue;
     }
-    const entries = await readdir(input, { withFileTypes: true });
-    const specs = entries.filter((e) => !e.isDirectory() && isSpecName(e.name)).map((e) => e.name).sort();
+    const specs = await specsIn(input);
     if (specs.length === 0) add({ file: arg, input, refused: `the folder holds no specification (${SPEC_EXTENSIONS.join(', ')}) directly in it` });
     for (const name of specs) add({ file: join(arg, name), input: join(input, name) });
   }
