@@ -33,7 +33,8 @@ function table(rows: [string, string][]): string[] {
 export function usageLine(d: CommandDecl): string {
   const options = Object.entries(d.options).map(([name, o]) => {
     const text = o.type === 'boolean' ? dashed(name) : `${dashed(name)} ${o.value ?? 'VALUE'}`;
-    return o.required ? text : `[${text}]`;
+    const once = o.required ? text : `[${text}]`;
+    return o.multiple ? `${once}...` : once;
   });
   return ['axletree', d.name, ...d.positionals.map((p) => (p.many ? `<${p.name}>...` : `<${p.name}>`)), ...options].join(' ');
 }
@@ -51,7 +52,7 @@ export function exitCodeLines(findings?: string): string[] {
 export function commandHelp(d: CommandDecl): string {
   const options: [string, string][] = Object.entries(d.options).map(([name, o]) => {
     const choices = o.choices ? `; one of: ${o.choices.join(', ')}` : '';
-    const value = typeof o.default === 'string' ? ` (default ${o.default})` : '';
+    const value = `${typeof o.default === 'string' ? ` (default ${o.default})` : ''}${o.multiple ? '; may be given more than once' : ''}`;
     return [o.type === 'boolean' ? dashed(name) : `${dashed(name)} ${o.value ?? 'VALUE'}`, `${o.help}${choices}${value}`];
   });
   options.push(['-h, --help', 'show this help']);

@@ -7,5 +7,6 @@ import { newSpec } from './new.ts';
 import { ride } from './ride.ts';
 import { rules } from './rules.ts';
 import { stock } from './stock.ts';
+import { sweep } from './sweep.ts';
 
-export const COMMANDS: readonly CommandDecl[] = [check, newSpec, rules, stock, ride, floorTest];
+export const COMMANDS: readonly CommandDecl[] = [check, newSpec, rules, stock, ride, floorTest, sweep];
