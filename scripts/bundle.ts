@@ -47,7 +47,8 @@ export async function bundle(outdir: string): Promise<Bundle | undefined> {
   if (!esbuild) return undefined;
   rmSync(outdir, { recursive: true, force: true });
   const result = await esbuild.build({
-    entryPoints: { axletree: 'cli/main.ts' },
+    // The sweep's worker thread is an entry of its own: the sweep starts it from beside the chunk that holds the pool.
+    entryPoints: { axletree: 'cli/main.ts', 'sweep-worker': 'src/node/sweep/sweep-worker.ts' },
     absWorkingDir: ROOT,
     bundle: true,
     platform: 'node',
