@@ -41,6 +41,9 @@ export interface CheckerOptions {
 /** runCheck reports the floor-damping tuner's figure only where a rule asked for the tuner. */
 const TUNER = 'floorDampingNeeded' satisfies ModelId;
 
+/** Whole points kept by their values (small: a verdict and a few numbers each). */
+const POINTS_KEPT = 4096;
+
 interface RuleResult {
   findings: Finding[];
   asksTuner: boolean;
@@ -76,11 +79,17 @@ export function pointChecker(raw: unknown, data: RulesData, paths: readonly KeyP
   const cache = new ReuseCache(options.keepPerReader ?? 512);
   const stepsOf = new Map<InputKey, string[]>();
   const steps = (k: InputKey) => stepsOf.get(k) ?? stepsOf.set(k, k.slice('spec:'.length).split('.')).get(k)!;
-  /** The changed inputs a reader read, as a lookup key of their values; '' where it read none. */
-  const reuseKey = (keys: ReadonlySet<InputKey>, changed: ReadonlySet<InputKey>, spec: CheckedSpecification) => {
-    const hit = [...changed].filter((k) => keys.has(k));
-    return hit.length ? JSON.stringify(hit.map((k) => [k, valueAtKey(spec, steps(k))])) : '';
+  const readers = [...[...modelKeys.values()], ...ruleKeys];
+  /** For each set of changed inputs (most sweeps change the same few at every point): the changed inputs each reader read. */
+  const readByChange = new Map<string, InputKey[][]>();
+  const changedRead = (changed: ReadonlySet<InputKey>) => {
+    const id = [...changed].join('\n');
+    let lists = readByChange.get(id);
+    if (!lists) readByChange.set(id, (lists = readers.map((keys) => [...changed].filter((k) => keys.has(k)))));
+    return lists;
   };
+  /** A reader's changed inputs as a lookup key of their values at this point; '' where it read none. */
+  const reuseKey = (read: readonly InputKey[], spec: CheckedSpecification) => (read.length ? read.map((k) => String(valueAtKey(spec, steps(k)))).join('|') : '');
 
   const summarise = (results: readonly RuleResult[], g: ModelGraph): PointCheck => {
     const findings = results.flatMap((r) => r.findings);
@@ -98,24 +107,40 @@ export function pointChecker(raw: unknown, data: RulesData, paths: readonly KeyP
   const design = summarise(baseRules, graph);
   const figureUnits = figureUnitsOf({ ...graph.get('figures'), floor_damping_ratio_needed: dampingFigure(null) });
 
+  /** Points already checked, by their values: an envelope line crosses the grid, and bisection may come back. */
+  const pointKey = (values: readonly number[]) => values.join('|');
+  const done = new ReuseCache(POINTS_KEPT);
   const check = (values: readonly number[]): PointCheck => {
+    const key = pointKey(values);
+    const kept = done.get('point', key) as PointCheck | undefined;
+    if (kept) return kept;
+    const out = checkAfresh(values);
+    done.set('point', key, out);
+    return out;
+  };
+  const checkAfresh = (values: readonly number[]): PointCheck => {
     let pointRaw = raw;
     paths.forEach((p, i) => (pointRaw = setPath(pointRaw, p, values[i])));
-    const prepared = prepareSpec(pointRaw, data);
+    const prepared = prepareSpec(pointRaw, data, { entries: false });
     if (!prepared.ok) return { verdict: 'refused', worst_utilisation: null, worst: null, figures: options.figures.map(() => null), reason: refusalText(prepared.issues) };
     const spec = prepared.spec;
     const changed = changedKeys(base.spec, spec);
     if (changed.size === 0) return design;
 
+    const read = changedRead(changed);
+    // A reader that read every changed input is computed afresh: on a grid no later point repeats all of them.
+    const keeps = (list: readonly InputKey[]) => list.length < changed.size;
     const seed = new Map<ModelId, unknown>();
     const toKeep = new Map<ModelId, string>();
-    for (const [id, keys] of modelKeys) {
-      const key = reuseKey(keys, changed, spec);
+    let r = 0;
+    for (const id of modelKeys.keys()) {
+      const list = read[r++];
+      const key = reuseKey(list, spec);
       if (key === '') {
         if (!carriers.has(id)) seed.set(id, baseValues.get(id));
         continue;
       }
-      if (carriers.has(id)) continue;
+      if (carriers.has(id) || !keeps(list)) continue;
       const kept = cache.get(`model:${id}`, key);
       if (kept !== undefined) seed.set(id, kept);
       else toKeep.set(id, key);
@@ -123,12 +148,13 @@ export function pointChecker(raw: unknown, data: RulesData, paths: readonly KeyP
     const pointTracer = new ReadTracer();
     const g = new ModelGraph(MODELS, inputs(spec), { seed, tracer: pointTracer });
     const results = RULES.map((rule, i): RuleResult => {
-      const key = reuseKey(ruleKeys[i], changed, spec);
+      const list = read[modelKeys.size + i];
+      const key = reuseKey(list, spec);
       if (key === '') return baseRules[i];
-      const kept = cache.get(`rule:${rule.id}`, key) as RuleResult | undefined;
+      const kept = keeps(list) ? (cache.get(`rule:${rule.id}`, key) as RuleResult | undefined) : undefined;
       if (kept) return kept;
       const r = { findings: runRules([rule], spec, data, g, pointTracer), asksTuner: pointTracer.closure(`rule:${rule.id}`).models.has(`model:${TUNER}`) };
-      cache.set(`rule:${rule.id}`, key, r);
+      if (keeps(list)) cache.set(`rule:${rule.id}`, key, r);
       return r;
     });
     const out = summarise(results, g);

@@ -1,7 +1,8 @@
 // Values computed at earlier points of a sweep, kept by the values of the
 // inputs that reached them: a model that reads only one of two varied values
-// is computed once per value of it, not once per point. The oldest entries go
-// first once a reader holds its limit.
+// is computed once per value of it, not once per point. The first kept go
+// first once a reader holds its limit (points come in order, so the oldest
+// are the least likely to come back).
 
 export class ReuseCache {
   readonly #byReader = new Map<string, Map<string, unknown>>();
@@ -18,9 +19,6 @@ export class ReuseCache {
       return undefined;
     }
     this.hits++;
-    // Used again: now the newest.
-    m!.delete(key);
-    m!.set(key, v);
     return v;
   }
 

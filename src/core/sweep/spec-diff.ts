@@ -1,5 +1,4 @@
 import type { InputKey } from '../pipeline/read-tracer.ts';
-import { specKey } from '../decisive/recording-proxy.ts';
 import type { KeyPath } from '../spec/input-issue.ts';
 
 // What a point of a sweep changed against the design point, as the input keys
@@ -9,23 +8,21 @@ import type { KeyPath } from '../spec/input-issue.ts';
 
 export function changedKeys(base: unknown, point: unknown): Set<InputKey> {
   const out = new Set<InputKey>();
-  walk(base, point, [], out);
+  walk(base, point, 'spec:', out);
   return out;
 }
 
-function walk(a: unknown, b: unknown, path: KeyPath, out: Set<InputKey>): void {
-  const objA = typeof a === 'object' && a !== null;
-  const objB = typeof b === 'object' && b !== null;
-  if (!objA || !objB) {
-    if (!Object.is(a, b)) out.add(specKey(path));
+/** `key` is the input key of the node so far, ending in its separator ('spec:' at the root, 'spec:crew.0.' below). */
+function walk(a: unknown, b: unknown, key: string, out: Set<InputKey>): void {
+  if (typeof a !== 'object' || a === null || typeof b !== 'object' || b === null) {
+    if (!Object.is(a, b)) out.add(key.slice(0, -1));
     return;
   }
-  if (Array.isArray(a) && Array.isArray(b) && a.length !== b.length) out.add(specKey([...path, 'length']));
-  const keys = new Set<string>([...Object.keys(a), ...Object.keys(b)]);
-  for (const k of keys) {
-    const step = Array.isArray(a) || Array.isArray(b) ? Number(k) : k;
-    walk((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], [...path, step], out);
-  }
+  if (Array.isArray(a) && Array.isArray(b) && a.length !== b.length) out.add(`${key}length`);
+  const ra = a as Record<string, unknown>;
+  const rb = b as Record<string, unknown>;
+  for (const k in ra) walk(ra[k], rb[k], `${key}${k}.`, out);
+  for (const k in rb) if (!(k in ra)) out.add(`${key}${k}`);
 }
 
 /** A copy of root with the value at path set; objects missing on the way are made (a value left to its default). */

@@ -5,10 +5,14 @@ import type { SweepDefinition } from '../../core/sweep/sweep-result.ts';
 import type { SweepPoint } from '../../core/sweep/sweep-points.ts';
 import type { Lane } from './sweep-pool.ts';
 
-// Handing a sweep's points to its threads: contiguous runs of points (so a
-// thread's reuse of models holds across a run), sized from the time the last
-// run took so each takes about TARGET_MS whatever a point costs: short
-// enough for Ctrl-C to be seen soon, long enough to keep the threads busy.
+// Handing a sweep's points to its threads. The points go in the order of
+// their values (the first varied value slowest), so an envelope line's point
+// sits beside the grid's points of the same value and a model that reads
+// only the first value is computed once per value of it. Each thread starts
+// on a contiguous share of that order and, when it runs out, takes the back
+// half of the largest share left; it takes its share in runs sized from the
+// time the last run took, about TARGET_MS each: short enough for Ctrl-C to be
+// seen soon, long enough to keep the threads busy.
 
 const TARGET_MS = 400;
 const FIRST_RUN = 4;
@@ -20,15 +24,35 @@ export interface RunHooks {
   step?(done: number): void;
 }
 
+/** The points in the order of their values, first value slowest. */
+export function workOrder(points: readonly SweepPoint[]): SweepPoint[] {
+  return [...points].sort((a, b) => {
+    for (let i = 0; i < a.values.length; i++) if (a.values[i] !== b.values[i]) return a.values[i] - b.values[i];
+    return a.index - b.index;
+  });
+}
+
 export async function runPoints(lanes: readonly Lane[], points: readonly SweepPoint[], hooks: RunHooks = {}): Promise<{ outcomes: PointOutcome[]; stopped: boolean }> {
+  const order = workOrder(points);
   const outcomes: PointOutcome[] = [];
-  let next = 0;
+  const shares = lanes.map((_, i) => ({ next: Math.floor((i * order.length) / lanes.length), end: Math.floor(((i + 1) * order.length) / lanes.length) }));
   let size = FIRST_RUN;
+  const take = (own: { next: number; end: number }): SweepPoint[] => {
+    if (own.next >= own.end) {
+      const largest = shares.reduce((a, b) => (b.end - b.next > a.end - a.next ? b : a));
+      const left = largest.end - largest.next;
+      if (left <= 1) return left === 1 ? order.slice(largest.next, ++largest.next) : [];
+      own.next = largest.next + Math.ceil(left / 2);
+      own.end = largest.end;
+      largest.end = own.next;
+    }
+    const run = order.slice(own.next, Math.min(own.end, own.next + size));
+    own.next += run.length;
+    return run;
+  };
   await Promise.all(
-    lanes.map(async (lane) => {
-      while (next < points.length && !hooks.stop?.aborted) {
-        const run = points.slice(next, next + size);
-        next += run.length;
+    lanes.map(async (lane, i) => {
+      for (let run = take(shares[i]); run.length && !hooks.stop?.aborted; run = take(shares[i])) {
         const started = performance.now();
         const reply = await lane.request({ kind: 'points', points: run });
         if (!('outcomes' in reply)) throw new Error('a sweep thread answered points with something else');
