@@ -99,6 +99,22 @@ describe('axletree sweep', () => {
     expect(r.out).toContain('statics only: the ride model off');
   }, 120_000);
 
+  it('draws a Latin hypercube from its seed: the same seed, the same sweep', async () => {
+    const dir = await freshDir('axletree-sweep-lhs-');
+    const args = ['sweep', DEMO, '--vary', 'team.horse_mass_kg=300..600:3', '--vary', 'operation.turn_radius_m=8..20:3', '--samples', '5', '--seed', '3', '--statics', '--jobs', '1', '--json'];
+    const a = await runCli([...args, '--out', 'a'], dir);
+    const b = await runCli([...args, '--out', 'b'], dir);
+    expect(a.code).toBe(0);
+    expect(a.out).toBe(await readFile(join(dir, 'a', 'sweep.json'), 'utf8'));
+    expect(a.out).toBe(b.out);
+    const res = JSON.parse(a.out) as SweepResult;
+    expect(res.mode).toEqual({ kind: 'samples', samples: 5, seed: 3 });
+    expect(res.points).toHaveLength(5);
+    expect(res.robust).toBeNull();
+    expect(res.notes).toContain('Robust ranges need a grid: a Latin hypercube gives none.');
+    expect(res.envelope).toHaveLength(2);
+  }, 120_000);
+
   it('stopped by Ctrl-C, keeps the finished points as a complete smaller set', async () => {
     const dir = await freshDir('axletree-sweep-stop-');
     const stop = new AbortController();
