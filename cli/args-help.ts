@@ -25,8 +25,9 @@ function wrap(text: string, indent: number, first = indent): string {
 function table(rows: [string, string][]): string[] {
   const col = Math.min(24, Math.max(...rows.map(([n]) => n.length)) + 4);
   return rows.map(([name, text]) => {
-    const head = `  ${name}`.padEnd(col);
-    return head.length > col ? `${head}\n${' '.repeat(col)}${wrap(text, col)}` : `${head}${wrap(text, col)}`;
+    // A name that fills its column is followed by the text on the next line, so the two never touch.
+    const head = `  ${name}`;
+    return head.length >= col ? `${head}\n${' '.repeat(col)}${wrap(text, col)}` : `${head.padEnd(col)}${wrap(text, col)}`;
   });
 }
 

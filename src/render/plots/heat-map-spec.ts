@@ -6,6 +6,7 @@
 import type { TopLevelSpec } from 'vega-lite';
 import { SEVERITY_COLOURS } from '../severity-palette.ts';
 import { SERIES_COLOURS } from './series-style.ts';
+import { chartFrame } from './chart-frame.ts';
 
 export interface HeatCell {
   x0: number;
@@ -83,19 +84,7 @@ export function heatMapSpec(map: HeatMap, size = { width: HEAT_WIDTH, height: HE
     map.design && { data: { values: [map.design] }, mark: { type: 'point', shape: 'circle', filled: false, color: MARKS.design.colour, strokeWidth: 2, size: Math.max(160, markSize * 4), opacity: 1 }, encoding: { x, y } },
   ].filter(Boolean);
   return {
-    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
-    title: map.title,
-    width: size.width,
-    height: size.height,
-    background: '#ffffff',
-    config: {
-      font: 'sans-serif',
-      title: { fontSize: 13, anchor: 'start', offset: 8 },
-      axis: { labelFontSize: 11, titleFontSize: 11, titleFontWeight: 'normal', grid: false },
-      legend: { labelFontSize: 11, titleFontSize: 11 },
-      view: { stroke: '#444444' },
-      mark: { aria: false },
-    },
+    ...chartFrame(map.title, size, { axis: { grid: false }, legend: { labelFontSize: 11, titleFontSize: 11 } }),
     layer: layers,
   } as TopLevelSpec;
 }

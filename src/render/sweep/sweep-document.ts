@@ -3,7 +3,7 @@ import { SHORT_CAUTION } from '../../core/cautions.ts';
 import type { Edge } from '../../core/sweep/envelope.ts';
 import type { PointCheck } from '../../core/sweep/point-outcome.ts';
 import type { SweepResult } from '../../core/sweep/sweep-result.ts';
-import type { Block, ReportDocument, Row, Section } from '../model/document.ts';
+import type { Block, Cell, ReportDocument, Row, Section } from '../model/document.ts';
 import { SWEEP_PLOT_FILE, sweepPlotTitle } from './sweep-plot.ts';
 
 // The sweep's report as a document model: sweep.md and sweep.html are both
@@ -57,21 +57,21 @@ function countsText(r: SweepResult): string {
   return `${r.points.length} point(s) of ${how}, ${r.statics ? 'statics only (the ride model off)' : 'with the ride model'}: ${counts.map(([v, n]) => `${n} ${v}`).join(', ')}.`;
 }
 
+/** One row per interval of a varied value (its path first), or one row saying there is none. */
+function intervalRows<I>(path: string, intervals: readonly I[], none: string, width: number, cells: (i: I) => Cell[]): Row[] {
+  const name: Cell = { kind: 'text', text: path };
+  if (intervals.length === 0) return [{ cells: [name, { kind: 'text', text: none }, ...Array.from({ length: width - 2 }, (): Cell => ({ kind: 'text', text: '' }))] }];
+  return intervals.map((i) => ({ cells: [name, ...cells(i)] }));
+}
+
 function envelopeTable(r: SweepResult): Block {
-  const rows: Row[] = (r.envelope ?? []).flatMap((e) =>
-    e.intervals.length === 0
-      ? [{ cells: [{ kind: 'text', text: e.path }, { kind: 'text', text: 'no value passes' }, { kind: 'text', text: '' }, { kind: 'text', text: '' }, { kind: 'text', text: '' }] }]
-      : e.intervals.map(
-          (i): Row => ({
-            cells: [
-              { kind: 'text', text: e.path },
-              { kind: 'number', value: i.low, unit: e.unit },
-              { kind: 'number', value: i.high, unit: e.unit },
-              { kind: 'text', text: edgeWords(i.low_edge, e.unit) },
-              { kind: 'text', text: edgeWords(i.high_edge, e.unit) },
-            ],
-          }),
-        ),
+  const rows = (r.envelope ?? []).flatMap((e) =>
+    intervalRows(e.path, e.intervals, 'no value passes', 5, (i) => [
+      { kind: 'number', value: i.low, unit: e.unit },
+      { kind: 'number', value: i.high, unit: e.unit },
+      { kind: 'text', text: edgeWords(i.low_edge, e.unit) },
+      { kind: 'text', text: edgeWords(i.high_edge, e.unit) },
+    ]),
   );
   return {
     kind: 'table',
@@ -89,10 +89,11 @@ function envelopeTable(r: SweepResult): Block {
 }
 
 function robustTable(r: SweepResult): Block {
-  const rows: Row[] = (r.robust ?? []).flatMap((g) =>
-    g.intervals.length === 0
-      ? [{ cells: [{ kind: 'text', text: g.path }, { kind: 'text', text: 'none: every value fails somewhere' }, { kind: 'text', text: '' }] }]
-      : g.intervals.map((i): Row => ({ cells: [{ kind: 'text', text: g.path }, { kind: 'number', value: i.low, unit: g.unit }, { kind: 'number', value: i.high, unit: g.unit }] })),
+  const rows = (r.robust ?? []).flatMap((g) =>
+    intervalRows(g.path, g.intervals, 'none: every value fails somewhere', 3, (i) => [
+      { kind: 'number', value: i.low, unit: g.unit },
+      { kind: 'number', value: i.high, unit: g.unit },
+    ]),
   );
   return { kind: 'table', id: 'sweep-robust', columns: [{ label: 'varied value', align: 'left' }, { label: 'passes with any other from', align: 'right' }, { label: 'to', align: 'right' }], rows, empty: 'No robust range.' };
 }
