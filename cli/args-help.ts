@@ -25,15 +25,17 @@ function wrap(text: string, indent: number, first = indent): string {
 function table(rows: [string, string][]): string[] {
   const col = Math.min(24, Math.max(...rows.map(([n]) => n.length)) + 4);
   return rows.map(([name, text]) => {
-    const head = `  ${name}`.padEnd(col);
-    return head.length > col ? `${head}\n${' '.repeat(col)}${wrap(text, col)}` : `${head}${wrap(text, col)}`;
+    // A name that fills its column is followed by the text on the next line, so the two never touch.
+    const head = `  ${name}`;
+    return head.length >= col ? `${head}\n${' '.repeat(col)}${wrap(text, col)}` : `${head.padEnd(col)}${wrap(text, col)}`;
   });
 }
 
 export function usageLine(d: CommandDecl): string {
   const options = Object.entries(d.options).map(([name, o]) => {
     const text = o.type === 'boolean' ? dashed(name) : `${dashed(name)} ${o.value ?? 'VALUE'}`;
-    return o.required ? text : `[${text}]`;
+    const once = o.required ? text : `[${text}]`;
+    return o.multiple ? `${once}...` : once;
   });
   return ['axletree', d.name, ...d.positionals.map((p) => (p.many ? `<${p.name}>...` : `<${p.name}>`)), ...options].join(' ');
 }
@@ -51,7 +53,7 @@ export function exitCodeLines(findings?: string): string[] {
 export function commandHelp(d: CommandDecl): string {
   const options: [string, string][] = Object.entries(d.options).map(([name, o]) => {
     const choices = o.choices ? `; one of: ${o.choices.join(', ')}` : '';
-    const value = typeof o.default === 'string' ? ` (default ${o.default})` : '';
+    const value = `${typeof o.default === 'string' ? ` (default ${o.default})` : ''}${o.multiple ? '; may be given more than once' : ''}`;
     return [o.type === 'boolean' ? dashed(name) : `${dashed(name)} ${o.value ?? 'VALUE'}`, `${o.help}${choices}${value}`];
   });
   options.push(['-h, --help', 'show this help']);

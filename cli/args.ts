@@ -16,6 +16,8 @@ export interface OptionDecl {
   choices?: readonly string[];
   /** Shown as required in the usage line; the command itself says what is missing, with its message code. */
   required?: boolean;
+  /** A string option that may be given more than once: the command receives every value, in order. */
+  multiple?: boolean;
 }
 
 export interface PositionalDecl {
@@ -32,7 +34,7 @@ export type OptionDecls = Readonly<Record<string, OptionDecl>>;
 
 /** The values of the options as the command receives them. */
 export type Values<O extends OptionDecls> = {
-  -readonly [K in keyof O]: O[K] extends { type: 'boolean' } ? boolean : O[K] extends { default: string } ? string : string | undefined;
+  -readonly [K in keyof O]: O[K] extends { type: 'boolean' } ? boolean : O[K] extends { multiple: true } ? string[] : O[K] extends { default: string } ? string : string | undefined;
 };
 
 export interface Parsed<O extends OptionDecls> {
@@ -78,7 +80,7 @@ export function parseCommand<O extends OptionDecls>(decl: CommandDecl<O>, argv: 
     strict: false,
     tokens: true,
   });
-  const given = new Map<string, string | boolean>();
+  const given = new Map<string, string | boolean | string[]>();
   const positionals: string[] = [];
   let help = false;
   for (const t of tokens) {
@@ -87,12 +89,13 @@ export function parseCommand<O extends OptionDecls>(decl: CommandDecl<O>, argv: 
     const problem = t.name === HELP ? (t.value === undefined ? undefined : `option --help takes no value (got ${t.rawName}=${t.value})`) : optionProblem(decl, t, given, elsewhere);
     if (problem) return { kind: 'refused', message: problem };
     if (t.name === HELP) help = true;
+    else if (decl.options[t.name].multiple) given.set(t.name, [...((given.get(t.name) as string[] | undefined) ?? []), t.value!]);
     else given.set(t.name, t.value ?? true);
   }
   if (help) return { kind: 'help' };
   const count = countProblem(decl.positionals, positionals);
   if (count) return { kind: 'refused', message: count };
-  const values = Object.fromEntries(Object.entries(decl.options).map(([name, o]) => [name, given.get(name) ?? o.default ?? (o.type === 'boolean' ? false : undefined)]));
+  const values = Object.fromEntries(Object.entries(decl.options).map(([name, o]) => [name, given.get(name) ?? o.default ?? (o.type === 'boolean' ? false : o.multiple ? [] : undefined)]));
   return { kind: 'run', args: { values: values as Values<O>, positionals } };
 }
 
@@ -107,7 +110,7 @@ function optionProblem(decl: CommandDecl, t: OptionToken, given: Map<string, unk
   const o = Object.hasOwn(decl.options, t.name) ? decl.options[t.name] : undefined;
   const shown = dashed(t.name);
   if (!o) return unknownOption(decl, t.name, elsewhere(t.name));
-  if (given.has(t.name)) return `option ${shown} is given twice; give it once`;
+  if (given.has(t.name) && !o.multiple) return `option ${shown} is given twice; give it once`;
   if (o.type === 'boolean') return t.value === undefined ? undefined : `option ${shown} takes no value (got ${t.rawName}=${t.value})`;
   const form = `${shown} ${o.value ?? 'VALUE'}`;
   if (t.value === undefined) return `option ${shown} needs a value: ${form}`;

@@ -47,8 +47,9 @@ export async function bundle(outdir: string): Promise<Bundle | undefined> {
   if (!esbuild) return undefined;
   rmSync(outdir, { recursive: true, force: true });
   const result = await esbuild.build({
-    // The batch review's check thread is started from its own file (src/node/review/worker-place.mjs finds it).
-    entryPoints: { axletree: 'cli/main.ts', 'review-worker': 'src/node/review/check-worker.ts' },
+    // The batch review's check thread and the sweep's worker thread are entries of their own: each is started
+    // from beside the chunk that holds its pool (src/node/review/worker-place.mjs, src/node/sweep).
+    entryPoints: { axletree: 'cli/main.ts', 'review-worker': 'src/node/review/check-worker.ts', 'sweep-worker': 'src/node/sweep/sweep-worker.ts' },
     absWorkingDir: ROOT,
     bundle: true,
     platform: 'node',

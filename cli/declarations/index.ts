@@ -9,5 +9,6 @@ import { ride } from './ride.ts';
 import { rules } from './rules.ts';
 import { size } from './size.ts';
 import { stock } from './stock.ts';
+import { sweep } from './sweep.ts';
 
-export const COMMANDS: readonly CommandDecl[] = [check, compare, size, newSpec, rules, stock, ride, floorTest];
+export const COMMANDS: readonly CommandDecl[] = [check, compare, sweep, size, newSpec, rules, stock, ride, floorTest];

@@ -40,4 +40,13 @@ describe('the built command', () => {
     // 5 × (742 + 3) = 3725 mm > 3000 mm, and four fit one piece: two stock pieces.
     expect(JSON.parse(stock.stdout).pieces_used).toBe(2);
   });
+
+  it('starts the sweep\'s worker threads from the bundle\'s own entry', () => {
+    const spec = join(REPO, 'specs', 'demo-two-crew.yaml');
+    const sweep = runBuilt('sweep', spec, '--vary', 'team.horse_mass_kg=380..480:3', '--statics', '--jobs', '2', '--json', '--out', 'sweep');
+    expect(sweep.status).toBe(0);
+    const result = JSON.parse(sweep.stdout) as { points: { values: number[] }[]; complete: boolean };
+    expect(result).toMatchObject({ complete: true });
+    expect(result.points.map((p) => p.values[0])).toEqual([380, 430, 480]);
+  });
 });

@@ -14,13 +14,14 @@ export type Prepared = { ok: true; spec: CheckedSpecification; entries: SpecEntr
 /**
  * From parsed input to a checked specification: unit strings converted,
  * schema checked with defaults filled, computed defaults, cross-field checks.
- * The input object is not modified.
+ * The input object is not modified. `entries: false` leaves the entries
+ * (the list of every leaf and whether the user gave it) empty.
  */
-export function prepareSpec(raw: unknown, data: RulesData): Prepared {
+export function prepareSpec(raw: unknown, data: RulesData, options: { entries?: boolean } = {}): Prepared {
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) return { ok: false, issues: [issue([], 'notAnObject')] };
   const work = structuredClone(raw) as Record<string, unknown>;
   const unitIssues = convertUnitStrings(work);
-  const given = structuredClone(work);
+  const given = options.entries === false ? undefined : structuredClone(work);
   // A value the unit step rejected (NaN, Infinity, an unreadable string) is
   // reported once, by that step: the schema would add "null is of the wrong type".
   const rejected = new Set(unitIssues.map((i) => pathText(i.path)));
@@ -35,7 +36,8 @@ export function prepareSpec(raw: unknown, data: RulesData): Prepared {
   }
   const cross = crossChecks(spec, data);
   if (cross.length) return { ok: false, issues: cross };
-  return { ok: true, spec, entries: specEntries(spec, given, computed) };
+  // A sweep prepares thousands of variants and reads none of their entries.
+  return { ok: true, spec, entries: given === undefined ? [] : specEntries(spec, given, computed) };
 }
 
 /** Every leaf of the checked spec, marking what the user did not give. */

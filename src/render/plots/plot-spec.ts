@@ -8,6 +8,7 @@
 import type { TopLevelSpec } from 'vega-lite';
 import type { PlotData } from '../../core/plots/plot-data.ts';
 import { thinPoints } from './thin-points.ts';
+import { chartFrame } from './chart-frame.ts';
 import { cycle, DASHED, RULE_COLOURS, RULE_DASH, SERIES_COLOURS, SERIES_DASHES } from './series-style.ts';
 
 export const PLOT_WIDTH = 600;
@@ -46,20 +47,10 @@ export function plotSpec(plot: PlotData, size = { width: PLOT_WIDTH, height: PLO
     dotRows.length && { data: { values: dotRows }, mark: { type: 'point', filled: true, size: 60, opacity: 1 }, encoding: { x, y, color: colour } },
   ].filter(Boolean);
   return {
-    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
-    title: plot.title,
-    width: size.width,
-    height: size.height,
-    background: '#ffffff',
-    config: {
-      font: 'sans-serif',
-      title: { fontSize: 13, anchor: 'start', offset: 8 },
-      axis: { labelFontSize: 11, titleFontSize: 11, titleFontWeight: 'normal', gridColor: '#e4e4e4' },
+    ...chartFrame(plot.title, size, {
+      axis: { gridColor: '#e4e4e4' },
       legend: { orient: 'bottom', direction: 'vertical', columns: 2, labelFontSize: 11, columnPadding: 24 },
-      view: { stroke: '#444444' },
-      // No ARIA label per data point: the caption and title say what the plot shows, and the file stays small.
-      mark: { aria: false },
-    },
+    }),
     layer: layers,
   } as TopLevelSpec;
 }

@@ -1,0 +1,103 @@
+// The sweep's benchmark: whole sweeps of specs/demo-two-crew.yaml run as the
+// command runs them (worker threads started, the points, the envelope's
+// edges, the outputs rendered), timed by the clock and by the CPU time of the
+// process (all its threads): the machine is shared, so the CPU time over the
+// threads is the time the sweep takes on two idle cores, and the clock is
+// printed beside it. Targets: a statics-only sweep of 10,000 variants in
+// under 10 s on two threads; with the ride model, at least 30 variants a
+// second per core. Each is measured on a sweep where most points reuse the
+// design point's floor (the axle and the horses' mass: the floor is solved
+// once per axle position) and on the sweep the lead named, axle and crew
+// position, where every point moves the crew on the floor and re-solves it
+// (timed on a smaller grid; its rate gives the 10,000). Returns the count of
+// missed targets.
+import { performance } from 'node:perf_hooks';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { parse } from 'yaml';
+import { defaultRulesDir, loadRulesData } from '../src/node/load-rules-data.ts';
+import { prepareSpec } from '../src/core/spec/prepare.ts';
+import { parseVaries } from '../src/core/sweep/sweep-axis.ts';
+import { sweepPoints } from '../src/core/sweep/sweep-points.ts';
+import { valueAtKey } from '../src/core/sweep/spec-diff.ts';
+import type { SweepDefinition } from '../src/core/sweep/sweep-result.ts';
+import { startPool } from '../src/node/sweep/sweep-pool.ts';
+import { runPoints } from '../src/node/sweep/run-sweep.ts';
+import { finishSweep } from '../src/node/sweep/sweep-session.ts';
+import { renderSweep } from '../src/node/sweep/write-sweep.ts';
+import { verdict } from './median.ts';
+
+const DEMO = fileURLToPath(new URL('../specs/demo-two-crew.yaml', import.meta.url));
+const THREADS = 2;
+const STATICS_TARGET_S = 10;
+const STATICS_POINTS = 10_000;
+const RIDE_TARGET_PER_CORE = 30;
+
+interface Timed {
+  points: number;
+  wallS: number;
+  cpuS: number;
+}
+
+const quiet = { step: () => undefined, finish: () => undefined };
+
+/** One whole sweep, as `axletree sweep` runs it, without writing the files. */
+async function timeSweep(varies: string[], ride: boolean): Promise<Timed> {
+  const data = loadRulesData(defaultRulesDir());
+  const raw: unknown = parse(readFileSync(DEMO, 'utf8'));
+  const p = prepareSpec(raw, data);
+  if (!p.ok) throw new Error('the demo does not validate');
+  const axes = parseVaries(varies, p.spec);
+  if (!axes.ok) throw new Error(axes.message);
+  const design = axes.value.map((a) => valueAtKey(p.spec, a.steps) as number);
+  const mode = { kind: 'grid' as const };
+  const points = sweepPoints({ axes: axes.value, mode, design });
+  const figures = ['yoke_load_per_horse'];
+  const cpu0 = process.cpuUsage();
+  const t0 = performance.now();
+  const pool = await startPool({ raw, rulesDir: defaultRulesDir(), paths: axes.value.map((a) => a.steps), ride, figures }, THREADS);
+  if (!pool.ok) throw new Error(pool.reason);
+  try {
+    const def: SweepDefinition = { spec_name: p.spec.name, spec_file: 'demo-two-crew.yaml', statics: !ride, mode, axes: axes.value, design, figures: [{ name: figures[0], unit: 'N' }], total: points.length };
+    const run = await runPoints(pool.lanes, points);
+    const { result } = await finishSweep(pool.lanes, def, run.outcomes, { progress: () => quiet });
+    await renderSweep(result);
+  } finally {
+    await pool.close();
+  }
+  const cpu = process.cpuUsage(cpu0);
+  return { points: points.length, wallS: (performance.now() - t0) / 1000, cpuS: (cpu.user + cpu.system) / 1e6 };
+}
+
+const line = (label: string, t: Timed, extra: string) => console.log(`  ${label}: ${t.points} points, ${t.wallS.toFixed(1)} s by the clock, ${t.cpuS.toFixed(1)} s CPU; ${extra}`);
+
+export async function benchSweep(): Promise<number> {
+  let missed = 0;
+  console.log(`sweep (specs/demo-two-crew.yaml, ${THREADS} worker threads; CPU time over ${THREADS} is the time on ${THREADS} idle cores):`);
+
+  const reuse = await timeSweep(['axle.x_mm=150..350:100', 'team.horse_mass_kg=300..600:100'], false);
+  const reuseS = reuse.cpuS / THREADS;
+  line('statics, axle position x horse mass, 100 x 100', reuse, `${reuseS.toFixed(1)} s on ${THREADS} cores (target under ${STATICS_TARGET_S} s) ${verdict(reuseS < STATICS_TARGET_S)}`);
+  missed += reuseS < STATICS_TARGET_S ? 0 : 1;
+
+  const moved = await timeSweep(['axle.x_mm=150..350:10', 'crew[0].x_mm=200..450:10'], false);
+  const movedS = (moved.cpuS / moved.points) * STATICS_POINTS / THREADS;
+  line('statics, axle position x crew position, 10 x 10 (every point re-solves the floor)', moved, `${STATICS_POINTS} such points would take ${movedS.toFixed(0)} s on ${THREADS} cores (target under ${STATICS_TARGET_S} s) ${verdict(movedS < STATICS_TARGET_S)}`);
+  missed += movedS < STATICS_TARGET_S ? 0 : 1;
+
+  for (const [label, varies] of [
+    ['axle position x horse mass, 10 x 40', ['axle.x_mm=150..350:10', 'team.horse_mass_kg=300..600:40']],
+    ['axle position x crew position, 6 x 6 (every point re-solves the floor and the ride)', ['axle.x_mm=150..350:6', 'crew[0].x_mm=200..450:6']],
+  ] as const) {
+    const t = await timeSweep([...varies], true);
+    const perCore = t.points / t.cpuS;
+    line(`with the ride model, ${label}`, t, `${perCore.toFixed(1)} variants a second per core (target at least ${RIDE_TARGET_PER_CORE}) ${verdict(perCore >= RIDE_TARGET_PER_CORE)}`);
+    missed += perCore >= RIDE_TARGET_PER_CORE ? 0 : 1;
+  }
+  return missed;
+}
+
+if (process.argv[1] === fileURLToPath(import.meta.url)) {
+  const missed = await benchSweep();
+  console.log(`${missed ? `${missed} sweep target${missed > 1 ? 's' : ''} MISSED` : 'every sweep target met'}`);
+}
