@@ -16,7 +16,7 @@ export const sweep = command({
     out: { type: 'string', value: 'DIR', help: 'write the outputs into DIR (default axletree-out/sweep-<spec name>/, or .../sweep-<spec name>-shard-I-of-N/ for a shard)' },
     json: { type: 'boolean', default: false, help: 'print sweep.json on standard output and progress as JSON lines on standard error; the summary goes to standard error' },
   },
-  about: `writes: sweep.csv and sweep.json (every point: the varied values, the verdict,
+  about: `writes: sweep.csv (after a caution on a # line) and sweep.json (every point: the varied values, the verdict,
 the worst utilisation and the finding it is of, the chosen figures, the
 reason a refused point was refused), sweep.md and sweep.html (a line plot
 over one value or a heat map over two, the feasible envelope of each value
