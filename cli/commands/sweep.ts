@@ -18,6 +18,7 @@ import { writeSweep } from '../../src/node/sweep/write-sweep.ts';
 import { sweepJson } from '../../src/render/sweep/sweep-json.ts';
 import { sweepSummary } from '../../src/render/sweep/sweep-summary.ts';
 import type { SweepSetup } from '../../src/node/sweep/sweep-work.ts';
+import { SHORT_CAUTION } from '../../src/core/cautions.ts';
 import type { Console } from '../console.ts';
 import { EXIT, worstExit } from '../exit-codes.ts';
 import { formatIssues } from '../format-issues.ts';
@@ -95,7 +96,7 @@ export async function sweepCommand(positionals: string[], opts: SweepOptions, co
       const range = shardRange(points.length, shard.value.index, shard.value.of);
       const run = await checkPoints(pool.lanes, points.slice(range.start, range.end), hooks);
       const dir = resolve(con.cwd, opts.out ?? join('axletree-out', `sweep-${stem}-shard-${shard.value.index}-of-${shard.value.of}`));
-      const part = { axletree_sweep_part: 1 as const, definition: def, setup: { raw: read.raw, ride: setup.ride, figures }, rules_fingerprint: rulesFingerprint(rulesDir), shard: { ...shard.value, ...range }, finished: !run.stopped, outcomes: run.outcomes };
+      const part = { axletree_sweep_part: 1 as const, caution: SHORT_CAUTION, definition: def, setup: { raw: read.raw, ride: setup.ride, figures }, rules_fingerprint: rulesFingerprint(rulesDir), shard: { ...shard.value, ...range }, finished: !run.stopped, outcomes: run.outcomes };
       const written = await writeOr(con, () => writePart(dir, part, input));
       if (written === null) return EXIT.badInput;
       con.out(`sweep of ${def.spec_name}: shard ${shard.value.index}/${shard.value.of}, ${run.outcomes.length} of its ${range.end - range.start} points${run.stopped ? ' (stopped)' : ''}\nwrote ${dir}/ (join the shards with axletree sweep --merge)\n`);

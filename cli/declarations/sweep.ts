@@ -16,14 +16,15 @@ export const sweep = command({
     out: { type: 'string', value: 'DIR', help: 'write the outputs into DIR (default axletree-out/sweep-<spec name>/, or .../sweep-<spec name>-shard-I-of-N/ for a shard)' },
     json: { type: 'boolean', default: false, help: 'print sweep.json on standard output and progress as JSON lines on standard error; the summary goes to standard error' },
   },
-  about: `writes: sweep.csv and sweep.json (every point: the varied values, the verdict,
-the worst utilisation and the finding it is of, the chosen figures, the
-reason a refused point was refused), sweep.md and sweep.html (a line plot
-over one value or a heat map over two, the feasible envelope of each value
-with the others at the design point, and with two or three values the range
-of each that passes with any of the others) and sweep-plot.svg. A point whose
-spec is refused is a row with its reason. Ctrl-C stops after the points in
-hand and writes those finished. A shard writes sweep-part.json only.`,
+  about: `writes: sweep.csv (after a caution on a # line) and sweep.json (every
+point: the varied values, the verdict, the worst utilisation and the finding
+it is of, the chosen figures, the reason a refused point was refused),
+sweep.md and sweep.html (a line plot over one value or a heat map over two,
+the feasible envelope of each value with the others at the design point, and
+with two or three values the range of each that passes with any of the
+others) and sweep-plot.svg. A point whose spec is refused is a row with its
+reason. Ctrl-C stops after the points in hand and writes those finished. A
+shard writes sweep-part.json only.`,
   example: 'axletree sweep specs/demo-two-crew.yaml --vary axle.x_mm=150..350:21 --vary crew[0].x_mm=200..450:11 --statics',
   async run({ positionals, values }, con) {
     const { sweepCommand } = await import('../commands/sweep.ts');

@@ -93,8 +93,9 @@ describe('axletree sweep', () => {
     // The demo's floor is 560 mm deep.
     expect(res.points[2].reason).toMatch(/^axle\.x_mm: .*560/);
     const csv = (await readFile(join(dir, 'sweep.csv'), 'utf8')).trim().split('\n');
-    expect(csv[0]).toBe('point,axle.x_mm (mm),verdict,worst utilisation,worst rule,worst subject,yoke_load_per_horse (N),reason');
-    expect(csv[3]).toMatch(/^2,600,refused,,,,,"?axle\.x_mm: /);
+    expect(csv[0]).toMatch(/^# Planning aid, not a certification/);
+    expect(csv[1]).toBe('point,axle.x_mm (mm),verdict,worst utilisation,worst rule,worst subject,yoke_load_per_horse (N),reason');
+    expect(csv[4]).toMatch(/^2,600,refused,,,,,"?axle\.x_mm: /);
     expect(res.cautions.join(' ')).toContain('Statics only');
     expect(r.out).toContain('statics only: the ride model off');
   }, 120_000);
@@ -138,7 +139,7 @@ describe('axletree sweep', () => {
     expect(res.points.length).toBeLessThan(40);
     expect(res.envelope).toBeNull();
     expect(await setIsComplete(join(dir, 'out'))).toBe(true);
-    expect((await readFile(join(dir, 'out', 'sweep.csv'), 'utf8')).trim().split('\n')).toHaveLength(res.points.length + 1);
+    expect((await readFile(join(dir, 'out', 'sweep.csv'), 'utf8')).trim().split('\n')).toHaveLength(res.points.length + 2);
     expect(err).toContain('"stopped":true');
   }, 120_000);
 

@@ -60,7 +60,7 @@ describe('the sweep\'s outputs', () => {
     expect(md).toContain('This is a planning aid, not a certification');
     expect(md).toContain('Statics only');
     expect(files.get('sweep.html')).toContain('<svg');
-    expect(files.get('sweep.csv')!.split('\n')[0]).toBe('point,a_mm (mm),b_mm (mm),verdict,worst utilisation,worst rule,worst subject,load (N),reason');
+    expect(files.get('sweep.csv')!.split('\n')[1]).toBe('point,a_mm (mm),b_mm (mm),verdict,worst utilisation,worst rule,worst subject,load (N),reason');
   });
 
   it('number the plot\'s gradients afresh in each file', () => {

@@ -15,6 +15,7 @@ export const PART_FILE = 'sweep-part.json';
 
 export interface SweepPart {
   axletree_sweep_part: 1;
+  caution: string;
   definition: SweepDefinition;
   /** The spec as read (the points change it), and how each point is checked. */
   setup: { raw: unknown; ride: boolean; figures: string[] };

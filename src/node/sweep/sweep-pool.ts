@@ -9,6 +9,14 @@ export interface Lane {
   request(req: WorkRequest): Promise<WorkReply>;
 }
 
+/**
+ * A point allocates much that dies young (a prepared spec, the findings it
+ * re-checks); a young generation larger than the default is collected less
+ * often (4,000 points checked in one thread with 64 MB semi-spaces took
+ * about a fifth less CPU than with the default, on a loaded machine).
+ */
+const YOUNG_MB = 96;
+
 export type Pool = { ok: true; lanes: Lane[]; ready: Ready; close(): Promise<void> } | { ok: false; reason: string };
 
 /**
@@ -34,7 +42,7 @@ export async function startPool(setup: SweepSetup, jobs: number): Promise<Pool> 
     return { ok: true, lanes: [lane], ready: work.ready, close: () => Promise.resolve() };
   }
   const start = workerStart(setup);
-  const workers = Array.from({ length: jobs }, () => new Worker(start.url, { workerData: start.workerData }));
+  const workers = Array.from({ length: jobs }, () => new Worker(start.url, { workerData: start.workerData, resourceLimits: { maxYoungGenerationSizeMb: YOUNG_MB } }));
   const close = async () => {
     await Promise.all(workers.map((w) => w.terminate()));
   };
