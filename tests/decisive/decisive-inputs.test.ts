@@ -70,3 +70,18 @@ describe('decisive inputs of the central-axle demo', () => {
     }
   }, 120_000);
 });
+
+describe('an input read only through the ride model', () => {
+  // The ride's input carries the spec and data it was built from; a trial that
+  // reused it would run the ride on the old values, and the break-even of the
+  // routine bump's size would be wrong. The reference is a fresh whole check.
+  it('the bump size break-evens agree with a fresh whole check one per cent either side', () => {
+    const bump = result.decisive_inputs!.filter((d) => d.break_even !== null && /rough_ground\.(height|length)_mm$/.test(d.input));
+    expect(bump.length).toBeGreaterThanOrEqual(1);
+    for (const d of bump) {
+      const be = d.break_even!;
+      expect(severityAt(d, be * (be > d.value ? 0.99 : 1.01)), `${d.input} short of ${be}`).toBe(d.severity);
+      expect(severityAt(d, be * (be > d.value ? 1.01 : 0.99)), `${d.input} past ${be}`).toBe(d.to_severity);
+    }
+  }, 120_000);
+});

@@ -1,5 +1,6 @@
 import type { RulesData } from '../data/rules-data.ts';
 import type { Finding } from '../findings/finding.ts';
+import { carriesSpec, specObjects } from '../pipeline/carries-spec.ts';
 import { ModelGraph } from '../pipeline/model-graph.ts';
 import type { ModelInputs } from '../pipeline/define-model.ts';
 import type { Rule } from '../pipeline/define-rule.ts';
@@ -71,6 +72,12 @@ export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; sear
         if (info) infos.set(k, info);
       }
 
+  // A model whose value holds the spec or the data (the ride's input hands the
+  // spec on) would hand the old values to whatever re-runs after it: never reused.
+  const original = specObjects(a.spec);
+  for (const o of specObjects(a.data)) original.add(o);
+  const carriers = new Set([...a.computed].filter(([, v]) => carriesSpec(v, original)).map(([m]) => m));
+
   let reruns = 0;
   let work = 0;
   const memo = new Map<string, Map<string, Finding> | null>();
@@ -86,7 +93,7 @@ export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; sear
       if (!staleOf.has(key)) staleOf.set(key, tracer.staleModels(new Set([key])));
       const stale = staleOf.get(key)!;
       work += stale.has('floorDampingNeeded') ? TUNER_WEIGHT : stale.has('ride') ? RIDE_WEIGHT : 1;
-      const seed = new Map([...a.computed].filter(([m]) => !stale.has(m)));
+      const seed = new Map([...a.computed].filter(([m]) => !stale.has(m) && !carriers.has(m)));
       const graph = new ModelGraph(MODELS, { ...a.inputs, ...changed }, { seed });
       const readers = rules.filter((r) => readsOf.get(r.id)!.has(key));
       out = new Map(runRules(readers, changed.spec, changed.data, graph).map((f) => [findingKey(f), f]));

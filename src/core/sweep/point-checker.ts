@@ -15,7 +15,7 @@ import { pathText, type KeyPath } from '../spec/input-issue.ts';
 import { prepareSpec } from '../spec/prepare.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import type { LpSolver } from '../stock/cutting-types.ts';
-import { carriesSpec, specObjects } from './carries-spec.ts';
+import { carriesSpec, specObjects } from '../pipeline/carries-spec.ts';
 import type { PointCheck } from './point-outcome.ts';
 import { ReuseCache } from './reuse-cache.ts';
 import { changedKeys, setPath, valueAtKey } from './spec-diff.ts';

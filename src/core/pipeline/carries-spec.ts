@@ -1,8 +1,8 @@
 // A model whose value holds the specification itself, or a part of it (the
 // ride's input hands the spec on to the ride model), passes on whatever a
-// later reader reads through it. Reused at another point it would hand on the
-// old spec, so such a model is computed afresh at every point that changes
-// anything. Found once, on the design point's values.
+// later reader reads through it. Reused after the spec or the data changed it
+// would hand on the old values, so such a model is computed afresh at every
+// sweep point and every decisive-input trial. Found once, on the first values.
 
 /** Objects looked at before giving up and counting the value as a carrier (safe: it is then recomputed). */
 const BUDGET = 500_000;
