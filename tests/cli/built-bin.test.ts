@@ -1,10 +1,11 @@
 // The command bundled as `npm run build` bundles it, run as a process: from a
 // directory of its own, so the dist/ other tests may be running is left alone.
 import { spawnSync } from 'node:child_process';
-import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { bundle } from '../../scripts/bundle.ts';
+import { hasChromium } from '../../src/node/headless-chromium.ts';
 import { freshDir, REPO } from '../support/run-cli.ts';
 import pkg from '../../package.json' with { type: 'json' };
 
@@ -48,5 +49,15 @@ describe('the built command', () => {
     const result = JSON.parse(sweep.stdout) as { points: { values: number[] }[]; complete: boolean };
     expect(result).toMatchObject({ complete: true });
     expect(result.points.map((p) => p.values[0])).toEqual([380, 430, 480]);
+  });
+
+  it.skipIf(!hasChromium())('prints the report to PDF with the browser driver left out of the bundle', () => {
+    const spec = join(REPO, 'specs', 'demo-two-crew.yaml');
+    const check = runBuilt('check', spec, '--pdf', '--out', 'pdf-out');
+    expect(check.stderr).not.toMatch(/__dirname|Error/);
+    expect([0, 1]).toContain(check.status);
+    const pdf = join(work, 'pdf-out', 'report.pdf');
+    expect(existsSync(pdf)).toBe(true);
+    expect(statSync(pdf).size).toBeGreaterThan(10_000);
   });
 });
