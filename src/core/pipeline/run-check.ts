@@ -29,6 +29,8 @@ export interface RunOptions {
   ride?: boolean;
   /** True to find the inputs each decisive finding hangs on and their break-even values (many partial re-runs). */
   decisive?: boolean;
+  /** The decisive-input search's work limit (decisive-inputs.ts WORK_LIMIT by default; a batch gives a smaller one). */
+  decisiveWorkLimit?: number;
 }
 
 /**
@@ -59,7 +61,7 @@ export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data:
     severity_meanings: { ...SEVERITY_MEANING },
     ...splitFigures({ ...graph.get('figures'), floor_damping_ratio_needed: dampingFigure(damping) }),
     findings: ordered,
-    ...(options.decisive ? decisiveSection(decisiveInputs({ spec, entries, data, rules, findings: ordered, computed: graph.values(), inputs })) : {}),
+    ...(options.decisive ? decisiveSection(decisiveInputs({ spec, entries, data, rules, findings: ordered, computed: graph.values(), inputs, workLimit: options.decisiveWorkLimit })) : {}),
     mass: { parts: mass.parts, rolling_mass_kg: mass.rolling.mass_kg, yoke_mass_kg: mass.yoke.mass_kg, total_mass_kg: mass.total.mass_kg },
     balance: { cases: graph.get('loadCases') },
     loads: graph.get('loads'),

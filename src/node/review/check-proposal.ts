@@ -1,7 +1,6 @@
 import type { RulesData } from '../../core/data/rules-data.ts';
 import { runCheck } from '../../core/pipeline/run-check.ts';
 import { checkedRow, uncheckedRow } from '../../core/review/review-row.ts';
-import { checkWithWorkLimit } from '../../core/review/check-with-work-limit.ts';
 import { prepareSpec } from '../../core/spec/prepare.ts';
 import type { LpSolver } from '../../core/stock/cutting-types.ts';
 import { drawHere } from '../../render/report-plots.ts';
@@ -28,7 +27,7 @@ export async function checkProposal(job: ProposalJob, s: ProposalSettings, t: Pr
   // The main thread prepared it already; a change between the two would be a fault.
   if (!prepared.ok) throw new Error(`${job.file} prepared in the main thread but not in the check thread`);
   const { spec, entries } = prepared;
-  const result = s.workLimit === null ? runCheck(spec, entries, t.data, { lp: t.lp }) : checkWithWorkLimit(spec, entries, t.data, { lp: t.lp, workLimit: s.workLimit });
+  const result = runCheck(spec, entries, t.data, { lp: t.lp, decisive: s.workLimit !== null, decisiveWorkLimit: s.workLimit ?? undefined });
   result.input = job.raw;
   try {
     await writeOutputs(result, job.dir, job.input, drawHere, { teach: s.teach, printer: t.printer });
