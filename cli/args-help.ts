@@ -46,6 +46,7 @@ export function exitCodeLines(findings?: string): string[] {
     [String(EXIT.failed), findings ? `${EXIT_MEANING[EXIT.failed]}: ${findings}` : `${EXIT_MEANING[EXIT.failed]} (not given here: this command makes no findings)`],
     [String(EXIT.badInput), EXIT_MEANING[EXIT.badInput]],
     [String(EXIT.fault), EXIT_MEANING[EXIT.fault]],
+    [String(EXIT.stopped), EXIT_MEANING[EXIT.stopped]],
   ]);
 }
 

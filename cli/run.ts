@@ -15,7 +15,9 @@ const TOP = { version: ['--version'], help: ['--help', '-h'] } as const;
 
 export async function run(argv: string[], con: Console): Promise<number> {
   try {
-    return await dispatch(argv, con);
+    const code = await dispatch(argv, con);
+    // Only a long run that keeps its finished part is still here after Ctrl-C (cli/main.ts).
+    return con.stop?.aborted ? EXIT.stopped : code;
   } catch (e) {
     // An output place that cannot be written is the user's to fix, not a fault of the tool (src/node/output-error.ts; matched by name so start-up loads nothing of src/).
     if (e instanceof Error && e.name === 'OutputError') {

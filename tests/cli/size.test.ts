@@ -94,7 +94,7 @@ describe('axletree size', () => {
     stop.abort();
     let text = '';
     const code = await run(['size', thin, '--out', out, '--json'], { out: (s) => (text += s), err: () => undefined, cwd: dir, stop: stop.signal, keepPartial: () => undefined });
-    expect(code).toBe(1);
+    expect(code).toBe(130);
     expect(await setIsComplete(out)).toBe(true);
     const result = JSON.parse(text) as SizeResult;
     expect(result.complete).toBe(false);

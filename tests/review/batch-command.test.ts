@@ -148,7 +148,8 @@ describe('a batch review', () => {
     const table = JSON.parse(out) as Table;
     expect(table.rows.map((x) => x.file)).toEqual([files[0]]);
     expect(table).toMatchObject({ given: 3, stopped: true, not_checked: files.slice(1) });
-    expect(code).toBe(table.rows[0].verdict === 'fail' ? 1 : 0);
+    // Stopped: 130 whatever the finished row found, so a script never takes part of a batch for all of it.
+    expect(code).toBe(130);
     expect(err).toMatch(/"finished":false,"stopped":true/);
     // A complete, smaller set: the manifest matches the three files, which hold the finished row only.
     const rev = join(dir, 'rev');
