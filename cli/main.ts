@@ -19,6 +19,12 @@ process.on('SIGINT', () => {
   void import('../src/node/critical-section.ts').then(({ whenSafe }) => whenSafe(() => process.exit(130)));
 });
 
+// A reader that closes early (`| head`) is not a fault: the rest of stdout
+// goes nowhere, and the run still finishes and writes its outputs.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  if (e.code !== 'EPIPE') throw e;
+});
+
 try {
   process.exitCode = await run(process.argv.slice(2), {
     out: (s) => process.stdout.write(s),
