@@ -9,6 +9,8 @@ import type { JointDemand, Joint } from '../model/lashing-demand.ts';
 import type { LoadCaseResult } from '../model/load-case-result.ts';
 import type { MassModel } from '../model/mass-model.ts';
 import type { MemberCase } from '../model/member-cases.ts';
+import type { LoadPosition } from '../model/wheel/wheel-ring-scan.ts';
+import type { WheelRingSpec } from '../model/wheel/wheel-ring-spec.ts';
 import type { TurnModel } from '../model/turn.ts';
 import type { DampingNeeded } from '../ride/damping-tuner.ts';
 import type { GroundFactors } from '../ride/dynamic-factors.ts';
@@ -54,6 +56,8 @@ export interface ModelValues {
   floorDesignRough: FloorModel;
   /** The load cases the timber members are checked in, with their load-duration classes. */
   memberCases: MemberCase[];
+  /** The wheel's ring at every contact position, one list per member case (scanWheelRing). */
+  wheelRingScan: { ws: WheelRingSpec; scans: LoadPosition[][] };
   /** Cut list, leather list, wheel setting-out and stock plan. */
   cutting: CuttingResult;
   /** The force each lashed joint must pass, case by case. */

@@ -6,6 +6,7 @@ import { massModel } from '../model/mass-model.ts';
 import { memberCases, wheelInput } from '../model/member-cases.ts';
 import { wheelStiffness } from '../model/wheel/wheel-stiffness.ts';
 import { wheelRingSpec } from '../model/wheel/wheel-ring-spec.ts';
+import { scanWheelRing } from '../model/wheel/wheel-ring-scan.ts';
 import { turnModel } from '../model/turn.ts';
 import { floorDampingNeeded } from '../ride/damping-tuner.ts';
 import { groundFactors } from '../ride/dynamic-factors.ts';
@@ -182,6 +183,17 @@ export const memberCasesDef = defineModel({
   compute: ({ mass, loadCases, turn, bumpFactors, stoneFactors }, { spec, data }) => memberCases(spec, data, mass, loadCases, turn, wheelInput(bumpFactors), wheelInput(stoneFactors)),
 });
 
+/** The wheel's ring frame with the contact at every position, for each member case's ground load: solved once for the joints' and the spokes' checks. */
+export const wheelRingScanDef = defineModel({
+  id: 'wheelRingScan',
+  needs: ['mass', 'memberCases'],
+  params: TIMBER_STIFFNESS,
+  compute: ({ mass, memberCases }, { spec, data }) => {
+    const ws = wheelRingSpec(spec, data, mass.layout);
+    return { ws, scans: scanWheelRing(ws, memberCases.map((c) => c.wheel_N)) };
+  },
+});
+
 export const cuttingDef = defineModel({
   id: 'cutting',
   needs: ['mass'],
@@ -244,7 +256,7 @@ export const draughtDef = defineModel({
 
 /** Every model, in no particular order: the graph finds the order from their needs. */
 export const MODELS: readonly ModelDef[] = [
-  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, wheelStiffnessDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorLoadedDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, cuttingDef, lashingDemandsDef,
+  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, wheelStiffnessDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorLoadedDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, wheelRingScanDef, cuttingDef, lashingDemandsDef,
   figuresDef, loadsDef, sceneDef, plotsDef,
   horseDef, draughtDef,
 ];

@@ -1,6 +1,5 @@
 import { timberPart } from '../../model/timber/timber-part.ts';
-import { nodeAtWheelAngle, scanWheelRing, type LoadPosition } from '../../model/wheel/wheel-ring-scan.ts';
-import { wheelRingSpec } from '../../model/wheel/wheel-ring-spec.ts';
+import { nodeAtWheelAngle, type LoadPosition } from '../../model/wheel/wheel-ring-scan.ts';
 import { timberStrength } from '../../model/timber/design-strength.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
 import { num, step } from '../../pipeline/step.ts';
@@ -39,7 +38,7 @@ export const felloeJoint = defineRule({
   checks: "The dowels or tenons across each felloe joint carry the rim's shear and moment there, from the ring frame of the wheel with the contact anywhere near the joint, in every load case: dowels in shear against the timber's shear strength; a tenon in bearing across the grain of its socket and in bending at its mouth.",
   kind: 'check',
   method: ['design-basis-members', 'design-basis-materials', 'richardson-1891-rims'],
-  needs: ['mass', 'memberCases'],
+  needs: ['mass', 'memberCases', 'wheelRingScan'],
   limits: { utilisation: { direction: 'max', unit: 'of the design strength' } },
   params: ['end_friction'],
   messages: { ...STRESS_MESSAGES, ...NOT_CHECKED_MESSAGE },
@@ -49,9 +48,8 @@ export const felloeJoint = defineRule({
     const joint = spec.wheels.felloe.joint;
     const part = timberPart(spec, 'felloe');
     const M = spec.moisture_content_pct;
-    const ws = wheelRingSpec(spec, data, lay);
     const cases = ctx.models.memberCases;
-    const scans = scanWheelRing(ws, cases.map((c) => c.wheel_N));
+    const { ws, scans } = ctx.models.wheelRingScan;
     const unsettled = ringUnsettled(scans);
     if (unsettled) return ctx.report(ringUnsettledReport('wheel.felloe.joint', 'felloe joint', 'felloe joint', unsettled, ringIntro(spec, lay, ws)));
     const d = joint.diameter_mm;

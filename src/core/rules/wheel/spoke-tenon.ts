@@ -1,5 +1,4 @@
-import { scanWheelRing, type LoadPosition } from '../../model/wheel/wheel-ring-scan.ts';
-import { wheelRingSpec } from '../../model/wheel/wheel-ring-spec.ts';
+import type { LoadPosition } from '../../model/wheel/wheel-ring-scan.ts';
 import { timberStrength } from '../../model/timber/design-strength.ts';
 import { navePart, timberPart } from '../../model/timber/timber-part.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
@@ -25,7 +24,7 @@ export const spokeTenon = defineRule({
   checks: "The spoke's push, the largest any spoke takes in the ring frame of the wheel with the contact anywhere on the rim, in every load case: the tenon crushing along its own grain, and the spoke's shoulders bearing across the grain of the nave and of the felloe.",
   kind: 'check',
   method: ['design-basis-members', 'design-basis-materials', 'en-1995-1-1-6-1-5'],
-  needs: ['mass', 'memberCases'],
+  needs: ['mass', 'memberCases', 'wheelRingScan'],
   limits: { utilisation: { direction: 'max', unit: 'of the design strength' } },
   params: ['tenon_thickness_fraction', 'bearing_extension_mm'],
   messages: { ...STRESS_MESSAGES, ...NOT_CHECKED_MESSAGE },
@@ -34,9 +33,8 @@ export const spokeTenon = defineRule({
     const lay = ctx.models.mass.layout;
     const w = spec.wheels;
     const M = spec.moisture_content_pct;
-    const ws = wheelRingSpec(spec, data, lay);
     const cases = ctx.models.memberCases;
-    const scans = scanWheelRing(ws, cases.map((c) => c.wheel_N));
+    const { ws, scans } = ctx.models.wheelRingScan;
     const unsettled = ringUnsettled(scans);
     if (unsettled) return ctx.report(ringUnsettledReport('wheel.spoke.tenon', 'spoke tenon and shoulders', 'spoke tenon', unsettled, ringIntro(spec, lay, ws)));
     const frac = ctx.param('tenon_thickness_fraction');
