@@ -1,0 +1,29 @@
+// What the page and its check worker say to each other.
+import type { DecisiveInput, DecisiveSearch } from '../core/decisive/decisive-input.ts';
+import type { CheckResult } from '../core/result/check-result.ts';
+import type { InputIssue } from '../core/spec/input-issue.ts';
+
+export type ToWorker =
+  | { type: 'check'; id: number; raw: unknown }
+  /** The decisive inputs of the last valid spec: many re-runs, so only when asked. */
+  | { type: 'decisive'; id: number }
+  /** The report (HTML) or the result workbook of the last full check, to download. */
+  | { type: 'file'; id: number; kind: 'report' | 'workbook' }
+  /** A fill-in workbook opened on the page, read here (exceljs is large). */
+  | { type: 'open-workbook'; id: number; name: string; bytes: Uint8Array };
+
+export interface Picture {
+  id: string;
+  title: string;
+  svg: string;
+}
+
+export type FromWorker =
+  | { type: 'invalid'; id: number; issues: InputIssue[] }
+  /** Statics first (no ride model), then the full check. `ms`: the check's own time in the worker. */
+  | { type: 'result'; id: number; stage: 'statics' | 'full'; result: CheckResult; drawings: Picture[]; plots: Picture[]; ms: number }
+  | { type: 'decisive'; id: number; inputs: DecisiveInput[]; search: DecisiveSearch }
+  | { type: 'file'; id: number; name: string; mime: string; data: string | Uint8Array }
+  | { type: 'opened'; id: number; name: string; raw: unknown }
+  | { type: 'not-opened'; id: number; name: string; problems: string[] }
+  | { type: 'fault'; id: number; message: string };
