@@ -37,7 +37,7 @@ export function usageLine(d: CommandDecl): string {
     const once = o.required ? text : `[${text}]`;
     return o.multiple ? `${once}...` : once;
   });
-  return ['axletree', d.name, ...d.positionals.map((p) => (p.many ? `<${p.name}>...` : `<${p.name}>`)), ...options].join(' ');
+  return ['axletree', d.name, ...d.positionals.map((p) => (p.many ? `<${p.name}>...` : p.optional ? `[<${p.name}>]` : `<${p.name}>`)), ...options].join(' ');
 }
 
 export function exitCodeLines(findings?: string): string[] {

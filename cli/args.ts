@@ -28,6 +28,8 @@ export interface PositionalDecl {
   help: string;
   /** The last positional only: it takes one or more values (files, or a folder). */
   many?: boolean;
+  /** The last positional only: it may be left out. */
+  optional?: boolean;
 }
 
 export type OptionDecls = Readonly<Record<string, OptionDecl>>;
@@ -139,7 +141,8 @@ function countProblem(wanted: readonly PositionalDecl[], got: string[]): string 
     const fixed = wanted.slice(0, -1).map((w) => w.what);
     return `give ${[...fixed, `one or more ${last.what}s`].join(', then ')} (got ${got.length})`;
   }
-  if (got.length === wanted.length) return undefined;
+  if (got.length === wanted.length || (last?.optional && got.length === wanted.length - 1)) return undefined;
+  if (last?.optional && got.length > wanted.length) return `give at most ${wanted.length === 1 ? `one ${last.what}` : `${wanted.length} arguments`} (got ${got.length})`;
   if (wanted.length === 0) return `takes no file or other argument (got ${got.map((g) => `"${g}"`).join(', ')})`;
   const what = wanted.length === 1 ? `exactly one ${wanted[0].what}` : `${wanted.length} arguments: ${wanted.map((w) => w.what).join(', ')}`;
   return `give ${what} (got ${got.length})`;

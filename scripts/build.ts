@@ -8,6 +8,7 @@ import { fileURLToPath } from 'node:url';
 import { bundle } from './bundle.ts';
 import { defaultRulesDir } from '../src/node/load-rules-data.ts';
 import { writeRulesSnapshot } from '../src/node/rules-data-snapshot.ts';
+import { writeWorkbench } from './build-web.ts';
 
 const DIST = new URL('../dist/', import.meta.url);
 const made = await bundle(fileURLToPath(DIST));
@@ -21,3 +22,5 @@ if (!made) {
   writeRulesSnapshot(defaultRulesDir(), fileURLToPath(new URL('rules-data.json', DIST)));
   console.log(`build: dist/axletree.mjs and ${made.files - 1} chunks, ${(made.bytes / 2 ** 20).toFixed(1)} MiB, from ${made.inputs.length} project files`);
 }
+// The workbench page too, so `axletree serve` works after npm ci.
+if (made) await writeWorkbench();

@@ -8,13 +8,12 @@ import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import type { Plugin } from 'esbuild';
 import { loadRulesData } from '../src/node/load-rules-data.ts';
+import { INITIAL_SLOT } from '../src/node/workbench-page.ts';
 import { WORKBENCH_CSS } from '../src/web/workbench-style.ts';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const DEMO = 'specs/demo-two-crew.yaml';
 
-/** The slot `axletree serve` fills with the build it was given (YAML text). */
-export const INITIAL_SLOT = '<script id="axletree-initial" type="application/json"></script>';
 
 function virtuals(rulesDir: string, workerSource: string): Plugin {
   const data = loadRulesData(rulesDir);
@@ -64,10 +63,4 @@ export async function bundleWeb(rulesDir: string): Promise<WebBundle> {
     '',
   ].join('\n');
   return { html, bytes: Buffer.byteLength(html) };
-}
-
-/** The page with a build placed in its slot: the YAML text as a JSON string, escaped so it cannot end the slot. */
-export function withInitialBuild(html: string, yamlText: string, name: string): string {
-  const json = JSON.stringify({ name, text: yamlText }).replace(/</g, '\\u003c');
-  return html.replace(INITIAL_SLOT, `<script id="axletree-initial" type="application/json">${json}</script>`);
 }

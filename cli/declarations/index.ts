@@ -7,8 +7,9 @@ import { floorTest } from './floor-test.ts';
 import { newSpec } from './new.ts';
 import { ride } from './ride.ts';
 import { rules } from './rules.ts';
+import { serve } from './serve.ts';
 import { size } from './size.ts';
 import { stock } from './stock.ts';
 import { sweep } from './sweep.ts';
 
-export const COMMANDS: readonly CommandDecl[] = [check, compare, sweep, size, newSpec, rules, stock, ride, floorTest];
+export const COMMANDS: readonly CommandDecl[] = [check, compare, sweep, size, newSpec, rules, stock, ride, floorTest, serve];

@@ -2,11 +2,19 @@ import { builtinModules } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import { circles, readGraph } from './import-graph.ts';
 
-// The layers, lowest first; a file may import its own layer and those below.
+// The layers and what each may import (its own and those listed).
 // core: spec, units, models, rules, findings, the pipeline (pure);
 // render: the report model and its renderers (pure, strings or bytes out);
-// node: files, solvers, workers; cli: arguments and exit codes.
-const LAYERS = ['src/core/', 'src/render/', 'src/node/', 'cli/'] as const;
+// node: files, solvers, workers; cli: arguments and exit codes;
+// web: the workbench page and its worker (the browser's side of node).
+const LAYERS = ['src/core/', 'src/render/', 'src/node/', 'cli/', 'src/web/'] as const;
+const MAY_IMPORT: Record<(typeof LAYERS)[number], readonly string[]> = {
+  'src/core/': ['src/core/'],
+  'src/render/': ['src/core/', 'src/render/'],
+  'src/node/': ['src/core/', 'src/render/', 'src/node/'],
+  'cli/': ['src/core/', 'src/render/', 'src/node/', 'cli/'],
+  'src/web/': ['src/core/', 'src/render/', 'src/web/'],
+};
 const PURE = new Set(['src/core/', 'src/render/']);
 const BUILTINS = new Set([...builtinModules, ...builtinModules.map((m) => `node:${m}`)]);
 // What a pure layer must not touch even without an import: the process, the clock, chance.
@@ -20,12 +28,17 @@ describe('layers', () => {
     expect([...graph.keys()].filter((p) => layerOf(p) < 0)).toEqual([]);
   });
 
-  it('no file imports a higher layer', () => {
+  it('no file imports a layer it may not (a higher one, or node from the web page)', () => {
     const upward: string[] = [];
     for (const [p, f] of graph) {
-      for (const i of f.imports) if (layerOf(i) > layerOf(p)) upward.push(`${p} -> ${i}`);
+      for (const i of f.imports) if (layerOf(i) >= 0 && !MAY_IMPORT[LAYERS[layerOf(p)]].includes(LAYERS[layerOf(i)])) upward.push(`${p} -> ${i}`);
     }
     expect(upward).toEqual([]);
+  });
+
+  it('the web page imports no node built-ins (it runs in a browser)', () => {
+    const bad = [...graph].filter(([p]) => p.startsWith('src/web/')).flatMap(([p, f]) => f.packages.filter((pkg) => BUILTINS.has(pkg)).map((pkg) => `${p} imports ${pkg}`));
+    expect(bad).toEqual([]);
   });
 
   it('core and render import no node built-ins and touch no process, clock or randomness', () => {

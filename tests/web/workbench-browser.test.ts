@@ -1,0 +1,116 @@
+// The workbench in headless Chromium, served by `axletree serve` and opened
+// from disk: the verdict equals the command line's; moving the axle moves the
+// horse load and the verdict; a value out of range is marked at its field
+// while the last result stays; a YAML file opened and saved comes back
+// unchanged; a reload finds the build still there. Skipped, saying why, only
+// where no browser is installed (.ci/run installs Debian's chromium).
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { existsSync } from 'node:fs';
+import { parse } from 'yaml';
+import type { BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { CHROMIUM, hasChromium, launchChromium } from '../../scripts/headless-chromium.ts';
+import { writeWorkbench } from '../../scripts/build-web.ts';
+import { runCheck } from '../../src/core/pipeline/run-check.ts';
+import { prepareSpec } from '../../src/core/spec/prepare.ts';
+import { serveWorkbench, type RunningServer } from '../../src/node/serve-web.ts';
+import { WORKBENCH_PAGE, withInitialBuild } from '../../src/node/workbench-page.ts';
+import { rulesData } from '../support/fixtures.ts';
+import { REPO } from '../support/run-cli.ts';
+
+const browser = hasChromium();
+if (!browser) console.warn(`workbench-browser.test: skipped, no browser at ${CHROMIUM}; install Debian's chromium package to run it.`);
+
+const DEMO = join(REPO, 'specs', 'demo-two-crew.yaml');
+const demoText = readFileSync(DEMO, 'utf8');
+
+/** The command line's answer for a spec: the same runCheck `axletree check` calls. */
+function cliVerdict(raw: unknown): { verdict: string; yoke: number } {
+  const p = prepareSpec(raw, rulesData);
+  if (!p.ok) throw new Error('does not prepare');
+  const r = runCheck(p.spec, p.entries, rulesData);
+  return { verdict: r.verdict, yoke: r.figures.yoke_load.value };
+}
+
+const figureText = async (page: Page, name: string) => (await page.locator(`#figures tr[data-figure="${name}"] td`).first().textContent()) ?? '';
+
+describe.skipIf(!browser)('the workbench in headless Chromium', () => {
+  let context: BrowserContext;
+  let server: RunningServer;
+  let page: Page;
+
+  beforeAll(async () => {
+    if (!existsSync(WORKBENCH_PAGE)) await writeWorkbench();
+    server = await serveWorkbench(withInitialBuild(readFileSync(WORKBENCH_PAGE, 'utf8'), demoText, 'demo-two-crew.yaml'), 0);
+    context = await launchChromium();
+    page = await context.newPage();
+    await page.goto(server.url);
+    await page.locator('#verdict[data-stage="full"]').waitFor({ timeout: 60_000 });
+  }, 120_000);
+
+  afterAll(async () => {
+    await context?.close();
+    await server?.close();
+  });
+
+  it('shows the verdict the command line gives for the served build, with drawings and plots', async () => {
+    const cli = cliVerdict(parse(demoText));
+    expect(await page.locator('#verdict').getAttribute('data-verdict')).toBe(cli.verdict);
+    expect(await page.locator('#pictures figure.drawing svg').count()).toBeGreaterThanOrEqual(3);
+    expect(await page.locator('#pictures figure.plot[data-id="yoke-load"] svg').count()).toBe(1);
+    expect(await page.locator('#pictures figure.plot[data-id="turn-speed"] svg').count()).toBe(1);
+    expect(await page.locator('#cautions li').count()).toBeGreaterThanOrEqual(3);
+  }, 60_000);
+
+  it('follows an edit of the axle position: the horse load and the verdict move as the command line says', async () => {
+    const before = await figureText(page, 'yoke_load');
+    const raw = parse(demoText) as { axle: { x_mm: number } };
+    raw.axle.x_mm = 0;
+    const cli = cliVerdict(raw);
+    const checked = await page.locator('body').getAttribute('data-checked');
+    await page.locator('[id="f-axle.x_mm"]').fill('0');
+    await page.waitForFunction((old) => document.body.dataset.checked !== old && document.body.dataset.stage === 'full', checked, { timeout: 60_000 });
+    expect(await page.locator('#verdict').getAttribute('data-verdict')).toBe(cli.verdict);
+    const after = await figureText(page, 'yoke_load');
+    expect(after).not.toBe(before);
+    expect(Number(after.replace(/[^\d.-]/g, ''))).toBeCloseTo(cli.yoke, -1);
+  }, 60_000);
+
+  it('marks a value out of range at its field and keeps the last result on screen', async () => {
+    const verdict = await page.locator('#verdict').getAttribute('data-verdict');
+    const length = await page.locator('[id="f-axle.length_mm"]').inputValue();
+    await page.locator('[id="f-axle.length_mm"]').fill('10');
+    const msg = page.locator('[id="f-axle.length_mm-msg"]');
+    await msg.filter({ hasText: /\S/ }).waitFor({ timeout: 30_000 });
+    expect(await page.locator('[id="f-axle.length_mm"]').getAttribute('aria-invalid')).toBe('true');
+    // spec.schema.json: axle.length_mm from 500 to 4000 mm.
+    expect(await msg.innerText()).toMatch(/500/);
+    expect(await page.locator('#verdict').getAttribute('data-verdict')).toBe(verdict);
+    expect(await page.locator('#verdict .stale').innerText()).toMatch(/last valid build/);
+    await page.locator('[id="f-axle.length_mm"]').fill(length);
+    await page.waitForFunction(() => document.getElementById('f-axle.length_mm-msg')?.textContent === '', undefined, { timeout: 30_000 });
+  }, 60_000);
+
+  it('keeps the build in progress across a reload', async () => {
+    await page.locator('[id="f-axle.x_mm"]').fill('120');
+    await page.waitForTimeout(200);
+    await page.reload();
+    await page.locator('#verdict').waitFor({ timeout: 60_000 });
+    expect(await page.locator('[id="f-axle.x_mm"]').inputValue()).toBe('120');
+  }, 60_000);
+
+  it('opens a YAML file and saves it back unchanged, from the page opened from disk', async () => {
+    const local = await context.newPage();
+    await local.goto(pathToFileURL(WORKBENCH_PAGE).href);
+    const file = join(REPO, 'specs', 'demo-rear-axle.yaml');
+    await local.locator('#open-file').setInputFiles(file);
+    await local.locator('#status', { hasText: 'Opened demo-rear-axle.yaml' }).waitFor({ timeout: 30_000 });
+    await local.locator('#verdict').waitFor({ timeout: 60_000 });
+    const [download] = await Promise.all([local.waitForEvent('download'), local.locator('#save-yaml').click()]);
+    expect(download.suggestedFilename()).toBe('demo-rear-axle.yaml');
+    expect(readFileSync(await download.path(), 'utf8')).toBe(readFileSync(file, 'utf8'));
+    await local.close();
+  }, 90_000);
+});
