@@ -16,6 +16,7 @@ import { benchBatch } from './batch.ts';
 import { benchSize } from './size.ts';
 import { benchStockPlanner } from './stock-planner.ts';
 import { benchSweep } from './sweep.ts';
+import { benchWorkbench } from './workbench.ts';
 import { yardstickMs } from './yardstick.ts';
 
 const data = loadRulesData(defaultRulesDir());
@@ -49,6 +50,7 @@ missed += benchBatch();
 console.log('size:');
 missed += benchSize(benchSpecs().find((s) => s.file === 'teaching-flawed.yaml')!.raw, data, lp);
 missed += benchMemory();
+missed += await benchWorkbench(data);
 // Last: its worker threads would share the cores with the figures above.
 missed += await benchSweep();
 console.log(`${missed ? `${missed} target${missed > 1 ? 's' : ''} MISSED` : 'every target met'} (yardstick ${yardstick.toFixed(1)} ms this run)`);

@@ -3,6 +3,7 @@
 // ride cases after. A newer change waiting when the statics are done skips
 // the older full check, so typing never queues up stale work.
 import type { RulesData } from '../core/data/rules-data.ts';
+import { LiveChecker } from '../core/pipeline/live-check.ts';
 import { runCheck } from '../core/pipeline/run-check.ts';
 import type { CheckResult } from '../core/result/check-result.ts';
 import { parseSpecWorkbook } from '../core/input/parse-spec-workbook.ts';
@@ -14,13 +15,17 @@ import { drawingsOf } from '../render/report-drawings.ts';
 import { drawReportPlots } from '../render/report-plots.ts';
 import { plotSvg } from '../render/plots/plot-svg.ts';
 import { renderWorkbook } from '../render/workbook.ts';
-import type { FromWorker, Picture, ToWorker } from './messages.ts';
+import { viewOf, type FromWorker, type Picture, type ToWorker } from './messages.ts';
 import { LIVE_PLOTS } from './live-plots.ts';
 import rulesData from 'axletree:rules-data';
 
 const data = rulesData as RulesData;
 const post = (m: FromWorker) => (self as unknown as { postMessage(m: FromWorker): void }).postMessage(m);
 const clock = () => self.performance.now();
+
+// One for each stage: each reuses what the last check of its own kind computed.
+const staticsChecker = new LiveChecker(data);
+const fullChecker = new LiveChecker(data);
 
 let pending: Extract<ToWorker, { type: 'check' }> | undefined;
 let running = false;
@@ -49,15 +54,19 @@ async function checkLatest(): Promise<void> {
       }
       lastValid = { spec: prepared.spec, entries: prepared.entries, raw: job.raw };
       const t0 = clock();
-      const statics = runCheck(prepared.spec, prepared.entries, data, { ride: false });
+      const statics = staticsChecker.check(prepared.spec, prepared.entries, { ride: false });
       const ms = clock() - t0;
-      post({ type: 'result', id: job.id, stage: 'statics', result: statics, ...(await pictures(statics)), ms });
+      post({ type: 'result', id: job.id, stage: 'statics', result: viewOf(statics), ms });
+      await yieldToMessages();
+      if (pending) continue;
+      post({ type: 'pictures', id: job.id, stage: 'statics', ...(await pictures(statics)) });
       await yieldToMessages();
       if (pending) continue;
       const t1 = clock();
-      const full = runCheck(prepared.spec, prepared.entries, data);
+      const full = fullChecker.check(prepared.spec, prepared.entries, { ride: true });
       lastFull = full;
-      post({ type: 'result', id: job.id, stage: 'full', result: full, ...(await pictures(full)), ms: clock() - t1 });
+      post({ type: 'result', id: job.id, stage: 'full', result: viewOf(full), ms: clock() - t1 });
+      post({ type: 'pictures', id: job.id, stage: 'full', ...(await pictures(full)) });
       await yieldToMessages();
     }
   } catch (e) {

@@ -5,7 +5,6 @@
 import { Document, parseDocument } from 'yaml';
 import { parseSpecText, textFormatOf } from '../core/input/parse-spec-text.ts';
 import type { DecisiveInput } from '../core/decisive/decisive-input.ts';
-import type { CheckResult } from '../core/result/check-result.ts';
 import { pathText, type InputIssue, type KeyPath } from '../core/spec/input-issue.ts';
 import { CAUTIONS } from '../core/cautions.ts';
 import choices from 'axletree:choices';
@@ -15,12 +14,13 @@ import { crewPlan } from './crew-plan.ts';
 import { el } from './dom.ts';
 import { formSections } from './form-model.ts';
 import { renderForm, showIssues } from './form-view.ts';
-import type { FromWorker, ToWorker } from './messages.ts';
+import type { FromWorker, ResultView, ToWorker } from './messages.ts';
 import { decisiveView, figuresView, findingsView, legendView, picturesView, verdictView, type Shown } from './result-view.ts';
 import { putAt } from './spec-path.ts';
 
 const STORE = 'axletree.workbench.build';
-const DEBOUNCE_MS = 60;
+// The worker drops a change overtaken by a newer one, so a short wait is enough to gather a burst of keys.
+const DEBOUNCE_MS = 15;
 const sections = formSections();
 
 // --- the build being edited --------------------------------------------------
@@ -58,7 +58,9 @@ let latestCheck = 0;
 const ask = (m: ToWorker) => worker.postMessage(m);
 
 let shown: Shown | null = null;
-let baseline: CheckResult | null = null;
+let baseline: ResultView | null = null;
+/** The drawings and plots, parsed once when they arrive and moved from draw to draw. */
+let picturesNode: HTMLElement = picturesView([], []);
 let issues: InputIssue[] = [];
 let decisive: DecisiveInput[] | null = null;
 let decisiveBusy = false;
@@ -122,7 +124,7 @@ function drawResult(): void {
     verdictView(shown, stale),
     legendView(shown.result),
     ...(plan ? [plan] : []),
-    picturesView(shown.drawings, shown.plots),
+    picturesNode,
     findingsView(shown.result, baseline),
     figuresView(shown.result, baseline),
     decisiveView(decisive, decisiveBusy),
@@ -138,11 +140,17 @@ worker.onmessage = (e: MessageEvent<FromWorker>) => {
     issues = [];
     const form = formHost.querySelector('form');
     if (form) showIssues(form, issues);
-    shown = { result: m.result, stage: m.stage, ms: m.ms, drawings: m.drawings, plots: m.plots };
+    shown = { result: m.result, stage: m.stage, ms: m.ms };
     drawResult();
     if (editedAt) status.textContent = `Verdict ${m.stage === 'statics' ? '(statics)' : '(with the ride)'} ${Math.round(performance.now() - editedAt)} ms after the last edit.`;
     document.body.dataset.stage = m.stage;
     document.body.dataset.checked = String(m.id);
+  } else if (m.type === 'pictures') {
+    if (m.id < latestCheck) return;
+    const fresh = picturesView(m.drawings, m.plots);
+    picturesNode.replaceWith(fresh);
+    picturesNode = fresh;
+    document.body.dataset.pictures = `${m.id}-${m.stage}`;
   } else if (m.type === 'invalid') {
     if (m.id < latestCheck) return;
     issues = m.issues;

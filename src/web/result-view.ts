@@ -7,17 +7,14 @@ import { findingKey } from '../core/compare/finding-diff.ts';
 import type { DecisiveInput } from '../core/decisive/decisive-input.ts';
 import { SEVERITIES, type Severity } from '../core/findings/severity.ts';
 import { formatNumber } from '../core/format/number-format.ts';
-import type { CheckResult } from '../core/result/check-result.ts';
 import { markedSeverity } from '../render/severity-palette.ts';
 import { el, svgNode } from './dom.ts';
-import type { Picture } from './messages.ts';
+import type { Picture, ResultView } from './messages.ts';
 
 export interface Shown {
-  result: CheckResult;
+  result: ResultView;
   stage: 'statics' | 'full';
   ms: number;
-  drawings: Picture[];
-  plots: Picture[];
 }
 
 const badge = (s: Severity) => el('span', { class: `sev sev-${s}`, text: markedSeverity(s) });
@@ -38,11 +35,11 @@ export function verdictView(shown: Shown, stale: string | null): HTMLElement {
   );
 }
 
-export function legendView(r: CheckResult): HTMLElement {
+export function legendView(r: ResultView): HTMLElement {
   return el('details', { id: 'legend' }, el('summary', { text: 'What each severity means' }), el('dl', {}, ...SEVERITIES.flatMap((s) => [el('dt', {}, badge(s)), el('dd', { text: r.severity_meanings[s] })])));
 }
 
-export function findingsView(r: CheckResult, base: CheckResult | null): HTMLElement {
+export function findingsView(r: ResultView, base: ResultView | null): HTMLElement {
   const before = new Map(base?.findings.map((f) => [findingKey(f), f.severity]) ?? []);
   const rows = r.findings
     .filter((f) => f.severity !== 'info' && f.severity !== 'pass')
@@ -67,7 +64,7 @@ export function findingsView(r: CheckResult, base: CheckResult | null): HTMLElem
   );
 }
 
-export function figuresView(r: CheckResult, base: CheckResult | null): HTMLElement {
+export function figuresView(r: ResultView, base: ResultView | null): HTMLElement {
   const cmp = compareFigures(base ? [base, r] : [r]);
   const rows = cmp.map((c) => {
     const now = base ? c.values[1] : c.values[0];

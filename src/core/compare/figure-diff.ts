@@ -9,7 +9,7 @@ const finite = (v: number | null): v is number => v !== null && Number.isFinite(
  * A ratio against a baseline of zero, or a figure a build does not have, is
  * null (and the build's reason is given): never NaN or Infinity.
  */
-export function compareFigures(results: readonly CheckResult[]): FigureComparison[] {
+export function compareFigures(results: readonly Pick<CheckResult, 'figures' | 'figures_not_applicable'>[]): FigureComparison[] {
   const names: string[] = [];
   for (const r of results) for (const n of [...Object.keys(r.figures), ...Object.keys(r.figures_not_applicable)]) if (!names.includes(n)) names.push(n);
   return names.map((name) => {

@@ -8,6 +8,10 @@ import type { InputKey, ReadTracer } from '../pipeline/read-tracer.ts';
 
 type Key = (path: readonly (string | number)[]) => InputKey;
 
+/** Every view handed out: a model value holding one carries the spec or data it was read from. */
+const VIEWS = new WeakSet<object>();
+export const isRecordingView = (o: object): boolean => VIEWS.has(o);
+
 function recording<T extends object>(root: T, tracer: ReadTracer, keyOf: Key, isLeafValue: (parent: object, prop: string) => boolean): T {
   const views = new WeakMap<object, object>();
   const view = (target: object, path: (string | number)[]): object => {
@@ -24,6 +28,7 @@ function recording<T extends object>(root: T, tracer: ReadTracer, keyOf: Key, is
       },
     });
     views.set(target, p);
+    VIEWS.add(p);
     return p;
   };
   return view(root, []) as T;

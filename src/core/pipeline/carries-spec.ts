@@ -4,6 +4,8 @@
 // would hand on the old values, so such a model is computed afresh at every
 // sweep point and every decisive-input trial. Found once, on the first values.
 
+import { isRecordingView } from '../decisive/recording-proxy.ts';
+
 /** Objects looked at before giving up and counting the value as a carrier (safe: it is then recomputed). */
 const BUDGET = 500_000;
 
@@ -24,7 +26,7 @@ export function carriesSpec(value: unknown, inSpec: ReadonlySet<object>): boolea
   while (stack.length) {
     const n = stack.pop();
     if (typeof n !== 'object' || n === null || seen.has(n) || ArrayBuffer.isView(n)) continue;
-    if (inSpec.has(n)) return true;
+    if (inSpec.has(n) || isRecordingView(n)) return true;
     if (seen.size >= BUDGET) return true;
     seen.add(n);
     const children = n instanceof Map ? [...n.keys(), ...n.values()] : n instanceof Set ? [...n] : Object.values(n);

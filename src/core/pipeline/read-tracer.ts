@@ -30,6 +30,12 @@ export class ReadTracer {
     if (who !== undefined) add(this.#models, who, `model:${id}`);
   }
 
+  /** Takes over what a reader read in an earlier run (a model reused from it, not computed again). */
+  adopt(reader: string, earlier: ReadTracer): void {
+    for (const k of earlier.#inputs.get(reader) ?? []) add(this.#inputs, reader, k);
+    for (const m of earlier.#models.get(reader) ?? []) add(this.#models, reader, m);
+  }
+
   /** Every input the reader depends on, through the models it asked for, and those models. */
   closure(reader: string): { inputs: Set<InputKey>; models: Set<string> } {
     const inputs = new Set<InputKey>();

@@ -16,6 +16,7 @@ import type { LpSolver } from '../stock/cutting-types.ts';
 import type { Rule } from './define-rule.ts';
 import { ModelGraph } from './model-graph.ts';
 import { MODELS } from './models.ts';
+import type { ReadTracer } from './read-tracer.ts';
 import { runRules } from './run-rules.ts';
 import { decisiveInputs } from '../decisive/decisive-inputs.ts';
 import type { DecisiveInput, DecisiveSearch } from '../decisive/decisive-input.ts';
@@ -41,8 +42,25 @@ export interface RunOptions {
 export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data: RulesData, options: RunOptions = {}): CheckResult {
   const inputs = { lp: options.lp, ride: options.ride ?? true };
   const graph = new ModelGraph(MODELS, { spec, data, ...inputs });
-  const rules = options.rules ?? RULES;
-  const findings = runRules(rules, spec, data, graph);
+  return checkOnGraph(graph, { spec, entries, data, rules: options.rules ?? RULES, decisive: options.decisive ?? false, decisiveWorkLimit: options.decisiveWorkLimit });
+}
+
+export interface GraphCheck {
+  spec: CheckedSpecification;
+  entries: SpecEntry[];
+  data: RulesData;
+  rules: readonly Rule[];
+  decisive: boolean;
+  decisiveWorkLimit?: number;
+  /** The rules read the spec and data through these where a tracer records their reads (the graph's inputs are the same views). */
+  traced?: { spec: CheckedSpecification; data: RulesData; tracer: ReadTracer };
+}
+
+/** The check on a graph of models made by the caller: seeded with values an earlier check computed, or traced. */
+export function checkOnGraph(graph: ModelGraph, c: GraphCheck): CheckResult {
+  const { spec, entries, data, rules } = c;
+  const inputs = { lp: graph.inputs.lp, ride: graph.inputs.ride };
+  const findings = c.traced ? runRules(rules, c.traced.spec, c.traced.data, graph, c.traced.tracer) : runRules(rules, spec, data, graph);
   // Worst first, keeping rule order within a severity.
   const ordered = findings.map((f, i) => ({ f, i })).sort((a, b) => severityRank(b.f.severity) - severityRank(a.f.severity) || a.i - b.i).map((x) => x.f);
   // The floor-damping tuner runs only where a ride rule asked for it (the motion decays too slowly).
@@ -61,7 +79,7 @@ export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data:
     severity_meanings: { ...SEVERITY_MEANING },
     ...splitFigures({ ...graph.get('figures'), floor_damping_ratio_needed: dampingFigure(damping) }),
     findings: ordered,
-    ...(options.decisive ? decisiveSection(decisiveInputs({ spec, entries, data, rules, findings: ordered, computed: graph.values(), inputs, workLimit: options.decisiveWorkLimit })) : {}),
+    ...(c.decisive ? decisiveSection(decisiveInputs({ spec, entries, data, rules, findings: ordered, computed: graph.values(), inputs, workLimit: c.decisiveWorkLimit })) : {}),
     mass: { parts: mass.parts, rolling_mass_kg: mass.rolling.mass_kg, yoke_mass_kg: mass.yoke.mass_kg, total_mass_kg: mass.total.mass_kg },
     balance: { cases: graph.get('loadCases') },
     loads: graph.get('loads'),
