@@ -44,10 +44,10 @@ export function formKeys(sections: readonly FormSection[] = formSections()): str
 /** The range a field allows, in words: `20 to 250 kg`, `more than 0 mm`. */
 export function rangeText(f: Field): string {
   const unit = f.unit ? ` ${f.unit}` : '';
-  const low = f.minimum ?? f.exclusiveMinimum;
-  if (low !== undefined && f.maximum !== undefined) return `${f.exclusiveMinimum !== undefined && f.minimum === undefined ? 'more than ' : ''}${low} to ${f.maximum}${unit}`;
+  const low = f.minimum !== undefined ? `${f.minimum}` : f.exclusiveMinimum !== undefined ? `more than ${f.exclusiveMinimum}` : undefined;
+  if (low !== undefined && f.maximum !== undefined) return f.minimum !== undefined ? `${low} to ${f.maximum}${unit}` : `${low}, at most ${f.maximum}${unit}`;
   if (f.minimum !== undefined) return `at least ${f.minimum}${unit}`;
-  if (f.exclusiveMinimum !== undefined) return `more than ${f.exclusiveMinimum}${unit}`;
+  if (low !== undefined) return `${low}${unit}`;
   if (f.maximum !== undefined) return `at most ${f.maximum}${unit}`;
   return '';
 }

@@ -45,7 +45,7 @@ function control(path: KeyPath, f: Field, hooks: FormHooks, labelled: string): H
 function fieldRow(path: KeyPath, f: Field, hooks: FormHooks): HTMLElement {
   const id = controlId(path);
   const range = rangeText(f);
-  const notes = [f.unit && `unit ${f.unit}${f.unitStrings ? ' (or a value with its unit, such as "2 ft 6 in")' : ''}`, range && `allowed ${range}`, f.default !== undefined && `default ${textOfValue(f.default)}`, f.computedDefault && 'computed from other values when left empty', f.required && 'required'].filter(Boolean).join('; ');
+  const notes = [f.unit && `unit ${f.unit}${f.unitStrings ? (f.unit === 'mm' ? ' (or a length with its unit, such as "2 ft 6 in")' : ' (or a value with its unit)') : ''}`, range && `allowed ${range}`, f.default !== undefined && `default ${textOfValue(f.default)}`, f.computedDefault && 'computed from other values when left empty', f.required && 'required'].filter(Boolean).join('; ');
   return el(
     'div',
     { class: 'field', 'data-key': path.join('.') },

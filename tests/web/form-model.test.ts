@@ -49,3 +49,17 @@ describe('the workbench form', () => {
     expect(valueOfText('abc', axle)).toBe('abc');
   });
 });
+
+describe('a range in words', () => {
+  const base = { path: ['x'], key: 'x', label: 'X', type: 'number', unitStrings: false, unit: '%', computedDefault: false, required: false, help: '' } as const;
+  it.each([
+    [{ minimum: 20, maximum: 250 }, '20 to 250 %'],
+    [{ exclusiveMinimum: 0, maximum: 100 }, 'more than 0, at most 100 %'],
+    [{ exclusiveMinimum: 0 }, 'more than 0 %'],
+    [{ minimum: 1 }, 'at least 1 %'],
+    [{ maximum: 9 }, 'at most 9 %'],
+    [{}, ''],
+  ])('%o reads "%s"', (bounds, text) => {
+    expect(rangeText({ ...base, ...bounds })).toBe(text);
+  });
+});
