@@ -25,7 +25,7 @@ import { steadyWorkbookBytes } from './steady-bytes.ts';
  * specification's fill-in sheets come last. Every sheet is set up to print.
  * The same result always gives the same bytes.
  */
-export async function renderWorkbook(result: CheckResult, doc: ReportDocument = reportDocument(result)): Promise<Buffer> {
+export async function renderWorkbook(result: CheckResult, doc: ReportDocument = reportDocument(result)): Promise<Uint8Array> {
   const wb = new ExcelJS.Workbook();
   wb.creator = `${result.tool.name} ${result.tool.version}`;
   wb.title = doc.title;
@@ -42,5 +42,5 @@ export async function renderWorkbook(result: CheckResult, doc: ReportDocument = 
   addSourcesSheet(wb, doc);
   if (result.input !== undefined) addSpecificationSheets(wb, result.input, result.choices);
   opensOn(wb, summary);
-  return Buffer.from(await steadyWorkbookBytes(wb));
+  return steadyWorkbookBytes(wb);
 }

@@ -17,8 +17,8 @@ const MAY_IMPORT: Record<(typeof LAYERS)[number], readonly string[]> = {
 };
 const PURE = new Set(['src/core/', 'src/render/']);
 const BUILTINS = new Set([...builtinModules, ...builtinModules.map((m) => `node:${m}`)]);
-// What a pure layer must not touch even without an import: the process, the clock, chance.
-const IMPURE = [/\bprocess\./, /\bDate\.now\b/, /\bnew Date\(\s*\)/, /\bMath\.random\b/, /\bperformance\.now\b/, /\brequire\(/];
+// What a pure layer must not touch even without an import: the process, the clock, chance, Node's Buffer (the browser has none).
+const IMPURE = [/\bprocess\./, /\bDate\.now\b/, /\bnew Date\(\s*\)/, /\bMath\.random\b/, /\bperformance\.now\b/, /\brequire\(/, /\bBuffer\./];
 
 const graph = readGraph(['src', 'cli']);
 const layerOf = (p: string) => LAYERS.findIndex((l) => p.startsWith(l));

@@ -3,6 +3,7 @@
 // entries as `list[]`) must give exactly the form's keys.
 import { describe, expect, it } from 'vitest';
 import schema from '../../src/core/spec/spec.schema.json' with { type: 'json' };
+import type { Field } from '../../src/core/spec/spec-fields.ts';
 import { formKeys, formSections, rangeText } from '../../src/web/form-model.ts';
 import { valueOfText } from '../../src/web/field-input.ts';
 
@@ -51,7 +52,7 @@ describe('the workbench form', () => {
 });
 
 describe('a range in words', () => {
-  const base = { path: ['x'], key: 'x', label: 'X', type: 'number', unitStrings: false, unit: '%', computedDefault: false, required: false, help: '' } as const;
+  const base: Field = { path: ['x'], key: 'x', label: 'X', type: 'number', unitStrings: false, unit: '%', computedDefault: false, required: false, help: '' };
   it.each([
     [{ minimum: 20, maximum: 250 }, '20 to 250 %'],
     [{ exclusiveMinimum: 0, maximum: 100 }, 'more than 0, at most 100 %'],

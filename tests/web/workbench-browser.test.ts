@@ -4,13 +4,15 @@
 // while the last result stays; a YAML file opened and saved comes back
 // unchanged; a reload finds the build still there. Skipped, saying why, only
 // where no browser is installed (.ci/run installs Debian's chromium).
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { existsSync } from 'node:fs';
 import { parse } from 'yaml';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { run } from '../../cli/run.ts';
 import { CHROMIUM, hasChromium, launchChromium } from '../../scripts/headless-chromium.ts';
 import { writeWorkbench } from '../../scripts/build-web.ts';
 import { runCheck } from '../../src/core/pipeline/run-check.ts';
@@ -111,6 +113,50 @@ describe.skipIf(!browser)('the workbench in headless Chromium', () => {
     const [download] = await Promise.all([local.waitForEvent('download'), local.locator('#save-yaml').click()]);
     expect(download.suggestedFilename()).toBe('demo-rear-axle.yaml');
     expect(readFileSync(await download.path(), 'utf8')).toBe(readFileSync(file, 'utf8'));
+    await local.close();
+  }, 90_000);
+
+  it('downloads the result workbook and the report made in the page', async () => {
+    await page.locator('#verdict[data-stage="full"]').waitFor({ timeout: 60_000 });
+    const [book] = await Promise.all([page.waitForEvent('download', { timeout: 60_000 }), page.locator('#get-workbook').click()]);
+    expect(book.suggestedFilename()).toBe('result.xlsx');
+    const bytes = readFileSync(await book.path());
+    // A workbook is a zip: it starts with the local file header PK\x03\x04.
+    expect(bytes.subarray(0, 4)).toEqual(Buffer.from([0x50, 0x4b, 0x03, 0x04]));
+    expect(bytes.length).toBeGreaterThan(20_000);
+    const [report] = await Promise.all([page.waitForEvent('download', { timeout: 60_000 }), page.locator('#get-report').click()]);
+    const html = readFileSync(await report.path(), 'utf8');
+    expect(html).toContain('planning aid, not a certification');
+    expect(html).toContain('<svg');
+  }, 120_000);
+
+  it('moves a person with the arrow keys and shows each change against a pinned baseline', async () => {
+    await page.locator('#pin').click();
+    const x = Number(await page.locator('[id="f-crew.0.x_mm"]').inputValue());
+    const checked = await page.locator('body').getAttribute('data-checked');
+    await page.locator('.crew-plan .person[data-index="0"]').focus();
+    await page.keyboard.press('ArrowUp');
+    expect(await page.locator('[id="f-crew.0.x_mm"]').inputValue()).toBe(String(x + 10));
+    await page.waitForFunction((old) => document.body.dataset.checked !== old && document.body.dataset.stage === 'full', checked, { timeout: 60_000 });
+    // The figures table now has a baseline and a change column; the crew moved forward, so the yoke load changed.
+    expect(await page.locator('#figures thead th').count()).toBe(4);
+    const change = await page.locator('#figures tr[data-figure="yoke_load"] td').nth(2).textContent();
+    expect(change).toMatch(/^[+-]?\d/);
+    expect(change).not.toBe('0');
+    await page.locator('#unpin').click();
+  }, 90_000);
+
+  it('opens a filled-in workbook (read in the worker) with the build it holds', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'axletree-wb-'));
+    const book = join(dir, 'rear.xlsx');
+    expect(await run(['new', book, '--from', join(REPO, 'specs', 'demo-rear-axle.yaml')], { out: () => undefined, err: () => undefined, cwd: dir })).toBe(0);
+    const local = await context.newPage();
+    await local.goto(server.url);
+    await local.locator('#open-file').setInputFiles(book);
+    await local.locator('#status', { hasText: 'Opened rear.xlsx' }).waitFor({ timeout: 60_000 });
+    const rear = parse(readFileSync(join(REPO, 'specs', 'demo-rear-axle.yaml'), 'utf8')) as { name: string; axle: { x_mm: number } };
+    expect(await local.locator('[id="f-name"]').inputValue()).toBe(rear.name);
+    expect(await local.locator('[id="f-axle.x_mm"]').inputValue()).toBe(String(rear.axle.x_mm));
     await local.close();
   }, 90_000);
 });

@@ -21,7 +21,7 @@ const MAX_WIDTH = 48;
 /** A link's ink: the blue a reader knows a link by. */
 const LINK_INK = '#1F4E79';
 
-export async function reviewWorkbook(review: ReviewTable): Promise<Buffer> {
+export async function reviewWorkbook(review: ReviewTable): Promise<Uint8Array> {
   const wb = new ExcelJS.Workbook();
   wb.creator = `${review.tool.name} ${review.tool.version}`;
   wb.title = `Review of ${review.rows.length} proposal${review.rows.length === 1 ? '' : 's'}`;
@@ -51,5 +51,5 @@ export async function reviewWorkbook(review: ReviewTable): Promise<Buffer> {
   addHeading(ws, 'Notes');
   for (const note of review.notes) addMergedLine(ws, note, widths);
   setPrint(ws, { titleRows: header.number });
-  return Buffer.from(await steadyWorkbookBytes(wb));
+  return steadyWorkbookBytes(wb);
 }
