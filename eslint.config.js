@@ -22,9 +22,11 @@ export default tseslint.config(
         'error',
         {
           zones: [
-            { target: './src/core', from: ['./src/render', './src/node', './cli'], message: 'the core imports no higher layer' },
-            { target: './src/render', from: ['./src/node', './cli'], message: 'the renderers import no file access and no command' },
-            { target: './src/node', from: ['./cli'], message: 'the edge imports no command' },
+            { target: './src/core', from: ['./src/render', './src/node', './cli', './src/web'], message: 'the core imports no higher layer' },
+            { target: './src/render', from: ['./src/node', './cli', './src/web'], message: 'the renderers import no file access and no command' },
+            { target: './src/node', from: ['./cli', './src/web'], message: 'the edge imports no command and no page' },
+            { target: './cli', from: ['./src/web'], message: 'the commands import no page' },
+            { target: './src/web', from: ['./src/node', './cli'], message: 'the page runs in a browser: no file access, no command' },
           ],
         },
       ],
@@ -35,13 +37,20 @@ export default tseslint.config(
     files: ['src/core/**/*.ts', 'src/render/**/*.ts'],
     rules: {
       'no-restricted-imports': ['error', { patterns: [{ group: NODE_BUILTINS, message: 'core and render are pure: no node built-ins' }] }],
-      'no-restricted-globals': ['error', { name: 'process', message: 'only cli/main.ts touches the process' }],
+      'no-restricted-globals': ['error', { name: 'process', message: 'only cli/main.ts touches the process' }, { name: 'Buffer', message: 'the browser has no Buffer: use Uint8Array' }],
       'no-restricted-properties': [
         'error',
         { object: 'Date', property: 'now', message: 'the core reads no clock' },
         { object: 'Math', property: 'random', message: 'the core draws no random numbers' },
         { object: 'performance', property: 'now', message: 'the core reads no clock' },
       ],
+    },
+  },
+  {
+    files: ['src/web/**/*.ts'],
+    rules: {
+      'no-restricted-imports': ['error', { patterns: [{ group: NODE_BUILTINS, message: 'the page runs in a browser: no node built-ins' }] }],
+      'no-restricted-globals': ['error', { name: 'process', message: 'the page runs in a browser' }, { name: 'Buffer', message: 'the browser has no Buffer: use Uint8Array' }],
     },
   },
   {

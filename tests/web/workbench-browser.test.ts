@@ -159,4 +159,33 @@ describe.skipIf(!browser)('the workbench in headless Chromium', () => {
     expect(await local.locator('[id="f-axle.x_mm"]').inputValue()).toBe(String(rear.axle.x_mm));
     await local.close();
   }, 90_000);
+
+  it('drags a person on the floor plan with the pointer: the position follows, and the horse-load plot marks it', async () => {
+    const person = page.locator('.crew-plan .person[data-index="1"]');
+    const before = Number(await page.locator('[id="f-crew.1.x_mm"]').inputValue());
+    await person.scrollIntoViewIfNeeded();
+    const box = (await person.boundingBox())!;
+    const checked = await page.locator('body').getAttribute('data-checked');
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await page.mouse.down();
+    // Up the screen is forward on the plan.
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2 - 30, { steps: 5 });
+    await page.mouse.up();
+    const after = Number(await page.locator('[id="f-crew.1.x_mm"]').inputValue());
+    expect(after).toBeGreaterThan(before);
+    await page.waitForFunction((old) => document.body.dataset.checked !== old && document.body.dataset.pictures === `${document.body.dataset.checked}-full`, checked, { timeout: 60_000 });
+    expect(await page.locator('#pictures figure.plot[data-id="yoke-load"] svg').count()).toBe(1);
+  }, 90_000);
+
+  it('prints the answer without the form and the tools', async () => {
+    await page.emulateMedia({ media: 'print' });
+    try {
+      expect(await page.locator('#build').isVisible()).toBe(false);
+      expect(await page.locator('nav').isVisible()).toBe(false);
+      expect(await page.locator('#verdict').isVisible()).toBe(true);
+      expect(await page.locator('#cautions').isVisible()).toBe(true);
+    } finally {
+      await page.emulateMedia({ media: 'screen' });
+    }
+  }, 30_000);
 });
