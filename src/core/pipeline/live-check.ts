@@ -48,8 +48,8 @@ export class LiveChecker {
     const graph = new ModelGraph(MODELS, { spec: traced.spec, data: traced.data, ride: options.ride }, { tracer, seed });
     const result = checkOnGraph(graph, { spec, entries, data: this.data, rules: RULES, decisive: false, traced });
     const values = graph.values();
-    // Only values that hold none of the spec's views can be handed to the next check.
-    const carriers = new Set([...values].filter(([, v]) => carriesSpec(v, new Set())).map(([id]) => id));
+    // Only values that hold none of the spec's views can be handed to the next check (a reused one was looked at when it was made).
+    const carriers = new Set([...values].filter(([id, v]) => !seed.has(id) && carriesSpec(v, new Set())).map(([id]) => id));
     this.#kept = { ride: options.ride, spec: structuredClone(spec), values, tracer, carriers };
     this.reused = [...seed.keys()];
     return result;
