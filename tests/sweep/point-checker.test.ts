@@ -62,3 +62,16 @@ describe('a point of a sweep is the whole check of its spec', () => {
     expect(checker.check([600])).toMatchObject({ verdict: 'refused', figures: [null], reason: expect.stringContaining('axle.x_mm') });
   }, 60_000);
 });
+
+describe('reuse across the points of a grid', () => {
+  it('an envelope line\'s point (only the axle moved) keeps its floor for the grid\'s points at that axle position', async () => {
+    const paths: KeyPath[] = [['axle', 'x_mm'], ['team', 'horse_mass_kg']];
+    const design = (raw as { team: { horse_mass_kg: number } }).team.horse_mass_kg;
+    // The line point first, as the sweep's order puts it, then two grid points at the same axle position.
+    const checker = await agree(paths, [[180, design], [180, 300], [180, 330]], false);
+    if (!checker.ok) throw new Error('no checker');
+    // The strap floor reads the axle's position (its frame rests on the axle), not the horses: one solve for the three.
+    expect(checker.computed.get('floorStatic')).toBe(1);
+    expect(checker.computed.get('floorLoaded')).toBe(1);
+  }, 120_000);
+});

@@ -49,7 +49,7 @@ interface RuleResult {
   asksTuner: boolean;
 }
 
-export type Checker = { ok: true; check(values: readonly number[]): PointCheck; design: PointCheck; spec: CheckedSpecification; figureUnits: Record<string, string>; cache: ReuseCache } | { ok: false; reason: string };
+export type Checker = { ok: true; check(values: readonly number[]): PointCheck; design: PointCheck; spec: CheckedSpecification; figureUnits: Record<string, string>; cache: ReuseCache; computed: ReadonlyMap<ModelId, number> } | { ok: false; reason: string };
 
 const refusalText = (issues: readonly { path: KeyPath; message: string }[]) => issues.map((i) => `${pathText(i.path)}: ${i.message}`).join('; ');
 
@@ -77,6 +77,8 @@ export function pointChecker(raw: unknown, data: RulesData, paths: readonly KeyP
   const carriers = new Set([...baseValues].filter(([, v]) => carriesSpec(v, inSpec)).map(([id]) => id));
 
   const cache = new ReuseCache(options.keepPerReader ?? 512);
+  /** How many times each model was computed after the design point (the tests and the bench read it). */
+  const computed = new Map<ModelId, number>();
   const stepsOf = new Map<InputKey, string[]>();
   const steps = (k: InputKey) => stepsOf.get(k) ?? stepsOf.set(k, k.slice('spec:'.length).split('.')).get(k)!;
   const readers = [...[...modelKeys.values()], ...ruleKeys];
@@ -88,8 +90,8 @@ export function pointChecker(raw: unknown, data: RulesData, paths: readonly KeyP
     if (!lists) readByChange.set(id, (lists = readers.map((keys) => [...changed].filter((k) => keys.has(k)))));
     return lists;
   };
-  /** A reader's changed inputs as a lookup key of their values at this point; '' where it read none. */
-  const reuseKey = (read: readonly InputKey[], spec: CheckedSpecification) => (read.length ? read.map((k) => String(valueAtKey(spec, steps(k)))).join('|') : '');
+  /** A reader's changed inputs as a lookup key of their names and values at this point; '' where it read none. */
+  const reuseKey = (read: readonly InputKey[], spec: CheckedSpecification) => (read.length ? read.map((k) => `${k}=${String(valueAtKey(spec, steps(k)))}`).join('|') : '');
 
   const summarise = (results: readonly RuleResult[], g: ModelGraph): PointCheck => {
     const findings = results.flatMap((r) => r.findings);
@@ -128,8 +130,10 @@ export function pointChecker(raw: unknown, data: RulesData, paths: readonly KeyP
     if (changed.size === 0) return design;
 
     const read = changedRead(changed);
-    // A reader that read every changed input is computed afresh: on a grid no later point repeats all of them.
-    const keeps = (list: readonly InputKey[]) => list.length < changed.size;
+    // A reader that read every varied value (and every other changed input) is computed afresh: on a grid no
+    // later point repeats all of them. One that read fewer is kept, also where this point changed only what it
+    // read (an envelope line's point, the others at the design point): the grid's points come back to it.
+    const keeps = (list: readonly InputKey[]) => list.length < changed.size || list.length < paths.length;
     const seed = new Map<ModelId, unknown>();
     const toKeep = new Map<ModelId, string>();
     let r = 0;
@@ -158,10 +162,13 @@ export function pointChecker(raw: unknown, data: RulesData, paths: readonly KeyP
       return r;
     });
     const out = summarise(results, g);
-    for (const id of g.computed) if (toKeep.has(id)) cache.set(`model:${id}`, toKeep.get(id)!, g.peek(id));
+    for (const id of g.computed) {
+      if (toKeep.has(id)) cache.set(`model:${id}`, toKeep.get(id)!, g.peek(id));
+      computed.set(id, (computed.get(id) ?? 0) + 1);
+    }
     return out;
   };
-  return { ok: true, check, design, spec: base.spec, figureUnits, cache };
+  return { ok: true, check, design, spec: base.spec, figureUnits, cache, computed };
 }
 
 /** Every figure's unit ('' for one that does not apply at the design point). */
