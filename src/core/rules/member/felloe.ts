@@ -1,12 +1,25 @@
 import { timberPart } from '../../model/timber/timber-part.ts';
 import { angleFrom, scanWheelRing, type LoadPosition } from '../../model/wheel/wheel-ring-scan.ts';
-import { wheelRingSpec } from '../../model/wheel/wheel-ring-spec.ts';
 import { timberStrength } from '../../model/timber/design-strength.ts';
 import { defineRule } from '../../pipeline/define-rule.ts';
+import type { ModelValues } from '../../pipeline/model-values.ts';
 import { num, step } from '../../pipeline/step.ts';
 import { placeOf, ringIntro, ringUnsettled, ringUnsettledReport } from '../wheel/ring-working.ts';
 import { strengthCheck, stressReport, type CaseCheck } from './member-finding.ts';
 import { NOT_CHECKED_MESSAGE, STRESS_MESSAGES } from './member-messages.ts';
+
+// The ring scanned again with nodes at the ends of the length each joint
+// weakens, kept per ring scan: a re-run that reuses the wheel's ring (a sweep
+// point, a decisive-input trial, a workbench edit) reuses this one too.
+const withEnds = new WeakMap<ModelValues['wheelRingScan'], Map<number, LoadPosition[][]>>();
+
+function scanWithEnds(ring: ModelValues['wheelRingScan'], loads: readonly number[], half: number): LoadPosition[][] {
+  let byHalf = withEnds.get(ring);
+  if (!byHalf) withEnds.set(ring, (byHalf = new Map<number, LoadPosition[][]>()));
+  let scans = byHalf.get(half);
+  if (!scans) byHalf.set(half, (scans = scanWheelRing(ring.ws, loads, [-half, half])));
+  return scans;
+}
 
 /**
  * Grain run-out of a felloe sawn from straight stock: a segment of 360°/pieces
@@ -37,7 +50,7 @@ export const felloeMember = defineRule({
   checks: 'Bending of the felloe as a ring continuous over the spokes (a ring frame of the whole wheel, spokes that only push unless a tyre keeps them loaded), with the contact anywhere on the rim, in every load case: in the span at the full design strength, and beside each joint, where the grain of sawn segments runs out, at the strength across that grain.',
   kind: 'check',
   method: ['design-basis-members', 'design-basis-materials', 'roark-thin-ring'],
-  needs: ['mass', 'memberCases'],
+  needs: ['mass', 'memberCases', 'wheelRingScan'],
   limits: { utilisation: { direction: 'max', unit: 'of the design strength' } },
   params: ['joint_grain_length_mm'],
   messages: { ...STRESS_MESSAGES, ...NOT_CHECKED_MESSAGE },
@@ -51,12 +64,13 @@ export const felloeMember = defineRule({
     const M = spec.moisture_content_pct;
     const full = timberStrength(data, part, 'bending', M);
     const atJoint = timberStrength(data, part, 'bending', M, runout);
-    const ws = wheelRingSpec(spec, data, lay);
+    const ring = ctx.models.wheelRingScan;
+    const { ws } = ring;
     const S = ws.felloe;
     const grainLength = ctx.param('joint_grain_length_mm');
     const half = grainLength.value / 2 / ws.ring.radius;
     const cases = ctx.models.memberCases;
-    const scans = scanWheelRing(ws, cases.map((c) => c.wheel_N), [-half, half]);
+    const scans = scanWithEnds(ring, cases.map((c) => c.wheel_N), half);
     const unsettled = ringUnsettled(scans);
     if (unsettled) return ctx.report(ringUnsettledReport('wheel.felloe', 'felloe in the ring of the wheel', 'felloe', unsettled, ringIntro(spec, lay, ws)));
     const span = (2 * Math.PI * ws.ring.radius) / w.spokes;
