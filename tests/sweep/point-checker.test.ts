@@ -74,4 +74,11 @@ describe('reuse across the points of a grid', () => {
     expect(checker.computed.get('floorStatic')).toBe(1);
     expect(checker.computed.get('floorLoaded')).toBe(1);
   }, 120_000);
+
+  it('moving the crew re-solves the floor but keeps its net and frame (floorSetup reads no crew)', async () => {
+    const checker = await agree([['crew', 0, 'x_mm']], [[260], [300]], false);
+    if (!checker.ok) throw new Error('no checker');
+    expect(checker.computed.get('floorStatic')).toBe(2);
+    expect(checker.computed.get('floorSetup')).toBeUndefined();
+  }, 120_000);
 });

@@ -4,7 +4,7 @@ import type { LoadEntry } from '../loads/load-entry.ts';
 import type { PlotData } from '../plots/plot-data.ts';
 import type { BuildScene } from '../result/build-scene.ts';
 import type { FigureEntry } from '../result/figure.ts';
-import type { FloorModel } from '../model/cable-net/floor-model.ts';
+import type { FloorModel, FloorSetup } from '../model/cable-net/floor-model.ts';
 import type { JointDemand, Joint } from '../model/lashing-demand.ts';
 import type { LoadCaseResult } from '../model/load-case-result.ts';
 import type { MassModel } from '../model/mass-model.ts';
@@ -30,6 +30,8 @@ export interface ModelValues {
   staticCase: LoadCaseResult;
   /** The design turn at the design speed, crew as placed. */
   turn: TurnModel;
+  /** The strap net, its frame and the frame's flexibility, shared by every floor state. */
+  floorSetup: FloorSetup;
   /** The strap floor under the crew's weight alone (factor 1). */
   floorStatic: FloorModel;
   /** The wheel's own radial stiffness from its ring frame (rolling and striking). */

@@ -1,5 +1,5 @@
 import { cuttingResult } from '../cutlist/cutting-model.ts';
-import { floorModel, floorModels } from '../model/cable-net/floor-model.ts';
+import { floorModel, floorModels, floorSetup } from '../model/cable-net/floor-model.ts';
 import { lashingDemands } from '../model/lashing-demand.ts';
 import { loadCases } from '../model/load-cases.ts';
 import { massModel } from '../model/mass-model.ts';
@@ -77,11 +77,19 @@ export const turnDef = defineModel({
   compute: ({ mass, staticCase }, { spec, data }) => turnModel(spec, data, mass, staticCase.axle_load_N),
 });
 
+/** The strap net, its frame and the frame's flexibility: shared by every floor state, and independent of the crew. */
+export const floorSetupDef = defineModel({
+  id: 'floorSetup',
+  needs: [],
+  params: ['floor.solver.max_nodes'],
+  compute: (_, { spec, data }) => floorSetup(spec, data),
+});
+
 export const floorStaticDef = defineModel({
   id: 'floorStatic',
-  needs: [],
+  needs: ['floorSetup'],
   params: FLOOR,
-  compute: (_, { spec, data }) => floorModel(spec, data, { value: 1, source: 'the crew standing, no dynamic factor' }),
+  compute: ({ floorSetup }, { spec, data }) => floorModel(spec, data, { value: 1, source: 'the crew standing, no dynamic factor' }, {}, floorSetup),
 });
 
 /** The wheel's own radial stiffness from its ring frame, rolling (averaged round the rim) and striking (its stiffest). */
@@ -136,10 +144,10 @@ export const stoneFactorsDef = defineModel({
  */
 export const floorLoadedDef = defineModel({
   id: 'floorLoaded',
-  needs: ['bumpFactors', 'stoneFactors'],
+  needs: ['bumpFactors', 'stoneFactors', 'floorSetup'],
   params: [...FLOOR, ...COMBINATION_PARAMS],
-  compute: ({ bumpFactors, stoneFactors }, { spec, data }) => {
-    const [bump, stone, design, designRough] = floorModels(spec, data, [bumpFactors.crew, stoneFactors.crew, designFloorFactor(data, null), designFloorFactor(data, bumpFactors.crew)]);
+  compute: ({ bumpFactors, stoneFactors, floorSetup }, { spec, data }) => {
+    const [bump, stone, design, designRough] = floorModels(spec, data, [bumpFactors.crew, stoneFactors.crew, designFloorFactor(data, null), designFloorFactor(data, bumpFactors.crew)], {}, floorSetup);
     return { bump, stone, design, designRough };
   },
 });
@@ -256,7 +264,7 @@ export const draughtDef = defineModel({
 
 /** Every model, in no particular order: the graph finds the order from their needs. */
 export const MODELS: readonly ModelDef[] = [
-  massDef, loadCasesDef, staticCaseDef, turnDef, floorStaticDef, wheelStiffnessDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorLoadedDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, wheelRingScanDef, cuttingDef, lashingDemandsDef,
+  massDef, loadCasesDef, staticCaseDef, turnDef, floorSetupDef, floorStaticDef, wheelStiffnessDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorLoadedDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, wheelRingScanDef, cuttingDef, lashingDemandsDef,
   figuresDef, loadsDef, sceneDef, plotsDef,
   horseDef, draughtDef,
 ];

@@ -56,8 +56,38 @@ export function nodalLoads(floor: FloorNet, crew: readonly Loaded[]): Float64Arr
 }
 
 /** One floor state: the crew's weight times `factor`. */
-export function floorModel(spec: CheckedSpecification, data: RulesData, factor: CaseFactor, options: FloorOptions = {}): FloorModel {
-  return floorModels(spec, data, [factor], options)[0];
+export function floorModel(spec: CheckedSpecification, data: RulesData, factor: CaseFactor, options: FloorOptions = {}, setup?: FloorSetup): FloorModel {
+  return floorModels(spec, data, [factor], options, setup)[0];
+}
+
+/**
+ * The net, its frame and the frame's flexibility at the anchors: what every
+ * state of one floor shares, whoever stands on it (the crew's places and
+ * weights are not read). Built once per check for the standing floor and the
+ * four loaded states, and kept by a sweep or a workbench edit that moves only
+ * the crew. Nothing in it changes once built (the frame's factor is made in
+ * its constructor); each solve makes its own matrix and workspace.
+ */
+export interface FloorSetup {
+  /** The net's real node count, and the most the solver takes (rules/parameters/floor.yaml). */
+  count: number;
+  maxNodes: number;
+  /** Absent where the net has more nodes than that: the floor is declined, not solved. */
+  built?: { floor: FloorNet; basis: FrameBasis; frame: FloorFrame; F: Float64Array; pairs: [number, number][]; order: Int32Array; anchors: 'coupled' | 'fixed' };
+}
+
+export function floorSetup(spec: CheckedSpecification, data: RulesData, options: FloorOptions = {}): FloorSetup {
+  const { refine = 1, anchors = 'coupled', arcStepDeg = ARC_STEP_DEG } = options;
+  // The lines are cheap to lay; their exact node count decides before the net is built and solved.
+  const laid = floorLines(spec, data, refine);
+  const count = floorNodeCount(laid.lines);
+  const maxNodes = param(data, 'floor.solver', 'max_nodes').value;
+  if (count > maxNodes) return { count, maxNodes };
+  const floor = floorNet(spec, data, refine, laid);
+  const basis = frameOfFloor(spec, data, floor, arcStepDeg);
+  const frame = new FloorFrame(basis.input);
+  const F = anchors === 'fixed' ? new Float64Array(floor.net.straps.length ** 2) : frame.flexibility();
+  return { count, maxNodes, built: { floor, basis, frame, F, pairs: coupledPairs(floor.net), order: nodeOrder(floor.net), anchors } };
 }
 
 /**
@@ -65,8 +95,7 @@ export function floorModel(spec: CheckedSpecification, data: RulesData, factor: 
  * the net, its frame and the pretension alone are built and solved once, and
  * the states are solved in rising load, each starting from the one below.
  */
-export function floorModels(spec: CheckedSpecification, data: RulesData, factors: readonly CaseFactor[], options: FloorOptions = {}): FloorModel[] {
-  const { refine = 1, anchors = 'coupled', arcStepDeg = ARC_STEP_DEG } = options;
+export function floorModels(spec: CheckedSpecification, data: RulesData, factors: readonly CaseFactor[], options: FloorOptions = {}, setup?: FloorSetup): FloorModel[] {
   const s = spec.floor_straps;
   const EA_N = data.leathers[s.material].modulus_MPa.value * s.width_mm * s.thickness_mm;
   const heads = factors.map((factor) => {
@@ -75,16 +104,11 @@ export function floorModels(spec: CheckedSpecification, data: RulesData, factors
     return { settings, head: { factor: factor.value, factorSource: factor.source, tolerance_N: settings.tolerance_N, appliedLoad_N, weave: s.weave, pretension_N: s.pretension_N, EA_N } };
   });
   if (!heads.length) return [];
-  // The lines are cheap to lay; their exact node count decides before the net is built and solved.
-  const laid = floorLines(spec, data, refine);
-  const count = floorNodeCount(laid.lines);
-  const { maxNodes, maxIterations } = heads[0].settings;
-  if (count > maxNodes) return heads.map(({ head }) => declinedFloor(spec, head, count, maxNodes));
-  const floor = floorNet(spec, data, refine, laid);
-  const basis = frameOfFloor(spec, data, floor, arcStepDeg);
-  const frame = new FloorFrame(basis.input);
-  const F = anchors === 'fixed' ? new Float64Array(floor.net.straps.length ** 2) : frame.flexibility();
-  const K = new SkylineCholesky(floor.net.nodes.length, coupledPairs(floor.net), nodeOrder(floor.net));
+  const made = setup ?? floorSetup(spec, data, options);
+  if (!made.built) return heads.map(({ head }) => declinedFloor(spec, head, made.count, made.maxNodes));
+  const { floor, basis, frame, F, pairs, order, anchors } = made.built;
+  const { maxIterations } = heads[0].settings;
+  const K = new SkylineCholesky(floor.net.nodes.length, pairs, order);
   // Every solve of this net shares the matrix and the strap system's preconditioner (each state starts near the last).
   const workspace = { matrix: K, coupling: couplingPreconditioner() };
   // The pretension alone, to the tightest tolerance asked: the same net and frame with no one aboard.
