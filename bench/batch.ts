@@ -12,7 +12,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { performance } from 'node:perf_hooks';
 import { BATCH_WORK_LIMIT } from '../src/core/review/batch-work-limit.ts';
-import { verdict } from './median.ts';
+import { median, verdict } from './median.ts';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const BIN = join(ROOT, 'bin', 'axletree.mjs');
@@ -46,7 +46,6 @@ function timeOnce(args: string[], cwd: string): { ms: number; cpuMs: number | nu
   return { ms, cpuMs: cpu ? (Number(cpu[1]) + Number(cpu[2])) * 1000 : null, err: r.stderr };
 }
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 /** Prints the batch's time against its target; answers the number of targets missed. */
 export function benchBatch(): number {

@@ -1,5 +1,8 @@
 import { performance } from 'node:perf_hooks';
 
+/** The middle value (the upper middle of an even count). */
+export const median = (xs: readonly number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+
 /** Median milliseconds by `elapsed` (a stopwatch started before each call, read after it) of `runs` calls of f, after `warm` untimed ones. */
 function medianBy(elapsed: () => () => number, f: () => unknown, runs: number, warm: number): number {
   for (let i = 0; i < warm; i++) f();
@@ -8,7 +11,7 @@ function medianBy(elapsed: () => () => number, f: () => unknown, runs: number, w
     f();
     return read();
   });
-  return times.sort((a, b) => a - b)[Math.floor(runs / 2)];
+  return median(times);
 }
 
 const wall = () => {

@@ -10,6 +10,7 @@ import { tmpdir } from 'node:os';
 import { join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { performance } from 'node:perf_hooks';
+import { median } from './median.ts';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const BIN = join(ROOT, 'bin', 'axletree.mjs');
@@ -47,7 +48,6 @@ function timeOnce(args: string[], cwd: string): { ms: number; err: string } {
   return { ms, err: r.stderr };
 }
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 /** Run every case, print the table; answers the number of targets missed. */
 export function benchStartup(): number {

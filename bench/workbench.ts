@@ -14,7 +14,7 @@ import { readWorkbenchPage, withInitialBuild } from '../src/node/workbench-page.
 import { runCheck } from '../src/core/pipeline/run-check.ts';
 import { prepareSpec } from '../src/core/spec/prepare.ts';
 import type { RulesData } from '../src/core/data/rules-data.ts';
-import { medianMs, verdict } from './median.ts';
+import { median, medianMs, verdict } from './median.ts';
 
 export const WORKBENCH_TARGET_MS = 100;
 const DEMO = new URL('../specs/demo-two-crew.yaml', import.meta.url);
@@ -63,7 +63,6 @@ function editTimes(field: string, values: number[]) {
   };
 }
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 export async function benchWorkbench(data: RulesData): Promise<number> {
   const page = await readWorkbenchPage();

@@ -4,12 +4,12 @@ import type { CheckResult } from '../result/check-result.ts';
 import { RULES } from '../rules/index.ts';
 import type { SpecEntry } from '../spec/spec-entry.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
-import { changedKeys, valueAtKey } from '../sweep/spec-diff.ts';
+import { changedKeys, keySteps, valueAtKey } from '../sweep/spec-diff.ts';
 import { carriesSpec } from './carries-spec.ts';
 import { ModelGraph } from './model-graph.ts';
 import type { ModelId } from './model-values.ts';
 import { MODELS } from './models.ts';
-import { ReadTracer, type InputKey } from './read-tracer.ts';
+import { ReadTracer } from './read-tracer.ts';
 import { checkOnGraph } from './run-check.ts';
 
 // Checks of one build as it is edited, each reusing the models the edit does
@@ -29,8 +29,6 @@ interface Kept {
   carriers: ReadonlySet<ModelId>;
 }
 
-/** The keys as path steps, list indices as numbers. */
-const stepsOf = (k: InputKey) => k.slice('spec:'.length).split('.').map((s) => (/^\d+$/.test(s) ? Number(s) : s));
 const isLeaf = (v: unknown) => v !== undefined && (typeof v !== 'object' || v === null);
 
 export class LiveChecker {
@@ -60,7 +58,7 @@ export class LiveChecker {
     if (!kept || kept.ride !== ride) return new Map();
     const changed = changedKeys(kept.spec, spec);
     // A key or a list entry added or removed: checked afresh.
-    if ([...changed].some((k) => !isLeaf(valueAtKey(kept.spec, stepsOf(k))) || !isLeaf(valueAtKey(spec, stepsOf(k))))) return new Map();
+    if ([...changed].some((k) => !isLeaf(valueAtKey(kept.spec, keySteps(k))) || !isLeaf(valueAtKey(spec, keySteps(k))))) return new Map();
     const stale = kept.tracer.staleModels(changed);
     return new Map([...kept.values].filter(([id]) => !stale.has(id) && !kept.carriers.has(id)));
   }

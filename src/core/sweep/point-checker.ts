@@ -18,7 +18,7 @@ import type { LpSolver } from '../stock/cutting-types.ts';
 import { carriesSpec, specObjects } from '../pipeline/carries-spec.ts';
 import type { PointCheck } from './point-outcome.ts';
 import { ReuseCache } from './reuse-cache.ts';
-import { changedKeys, setPath, valueAtKey } from './spec-diff.ts';
+import { changedKeys, keySteps, setPath, valueAtKey } from './spec-diff.ts';
 
 // The check of one point of a sweep, reusing all it can. The design point is
 // checked once with every read traced (as the decisive-input search does);
@@ -80,7 +80,7 @@ export function pointChecker(raw: unknown, data: RulesData, paths: readonly KeyP
   /** How many times each model was computed after the design point (the tests and the bench read it). */
   const computed = new Map<ModelId, number>();
   const stepsOf = new Map<InputKey, string[]>();
-  const steps = (k: InputKey) => stepsOf.get(k) ?? stepsOf.set(k, k.slice('spec:'.length).split('.')).get(k)!;
+  const steps = (k: InputKey) => stepsOf.get(k) ?? stepsOf.set(k, keySteps(k)).get(k)!;
   const readers = [...[...modelKeys.values()], ...ruleKeys];
   /** For each set of changed inputs (most sweeps change the same few at every point): the changed inputs each reader read. */
   const readByChange = new Map<string, InputKey[][]>();

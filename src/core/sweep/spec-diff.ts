@@ -36,8 +36,7 @@ export function setPath(root: unknown, path: KeyPath, value: unknown): unknown {
 }
 
 /** The value at an input key's path (`spec:crew.0.x_mm`; `spec:crew.length` gives the list's length). */
-export function valueAtKey(spec: unknown, steps: readonly (string | number)[]): unknown {
-  let node = spec;
-  for (const s of steps) node = typeof node === 'object' && node !== null ? (node as Record<string | number, unknown>)[s] : undefined;
-  return node;
-}
+export { valueAt as valueAtKey } from '../input/spec-values.ts';
+
+/** The path steps of a spec input's key: `spec:crew.0.x_mm` to crew, 0, x_mm (a list index stays text: it reads the same). */
+export const keySteps = (k: InputKey): string[] => k.slice('spec:'.length).split('.');
