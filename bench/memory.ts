@@ -1,5 +1,5 @@
 // Peak memory of whole commands: the resident set at its highest over the
-// process's life (the plot thread's included), beside bare node's.
+// process's life, beside bare node's.
 // Target: `axletree check <demo> --json` under 150 MiB.
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';

@@ -1,13 +1,11 @@
-// Writing the report after the check, as `axletree check` does it: the plot
-// thread started before the check, then every output rendered and written as
-// one set (Markdown, HTML, the plots, the drawings, the workbook, JSON).
+// Writing the report after the check, as `axletree check` does it: every
+// output rendered and written as one set (Markdown, HTML, the plots, the drawings, the workbook, JSON).
 // Target: under 0.5 s after the check.
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
 import type { CheckResult } from '../src/core/result/check-result.ts';
-import { startPlotThread } from '../src/node/plot-thread.ts';
 import { writeOutputs } from '../src/node/write-outputs.ts';
 import { verdict } from './median.ts';
 
@@ -19,12 +17,10 @@ export async function benchOutputs(name: string, check: () => CheckResult, yards
   const times: number[] = [];
   try {
     for (let i = 0; i <= RUNS; i++) {
-      const thread = startPlotThread();
       const result = check();
       const t0 = performance.now();
-      await writeOutputs(result, join(dir, 'out'), join(dir, 'spec.yaml'), thread.draw);
+      await writeOutputs(result, join(dir, 'out'), join(dir, 'spec.yaml'));
       if (i > 0) times.push(performance.now() - t0);
-      await thread.close();
     }
   } finally {
     rmSync(dir, { recursive: true, force: true });

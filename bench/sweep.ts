@@ -61,7 +61,7 @@ async function timeSweep(varies: string[], ride: boolean): Promise<Timed> {
     const def: SweepDefinition = { spec_name: p.spec.name, spec_file: 'demo-two-crew.yaml', statics: !ride, mode, axes: axes.value, design, figures: [{ name: figures[0], unit: 'N' }], total: points.length };
     const run = await runPoints(pool.lanes, points);
     const { result } = await finishSweep(pool.lanes, def, run.outcomes, { progress: () => quiet });
-    await renderSweep(result);
+    renderSweep(result);
   } finally {
     await pool.close();
   }

@@ -11,7 +11,7 @@ const ROOT = fileURLToPath(new URL('..', import.meta.url));
 // Left to Node to load: HiGHS finds its WebAssembly beside its own file, and
 // odex is loaded through createRequire, and playwright-core (loaded only to
 // print a PDF) reads its own files through CommonJS's __dirname. The rest
-// bundles cleanly (exceljs and vega included; their output was compared with
+// bundles cleanly (exceljs included; their output was compared with
 // the unbundled run's).
 const EXTERNAL = ['highs', 'odex', 'playwright-core'];
 

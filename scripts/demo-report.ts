@@ -18,7 +18,7 @@ export function demoResult(demo: string, decisive = false): CheckResult {
   return runCheck(p.spec, p.entries, data, { decisive });
 }
 
-export async function demoReportHtml(demo: string, decisive = false): Promise<string> {
+export function demoReportHtml(demo: string, decisive = false): string {
   const result = demoResult(demo, decisive);
-  return renderHtml(reportDocument(result), await drawReportPlots(result));
+  return renderHtml(reportDocument(result), drawReportPlots(result));
 }

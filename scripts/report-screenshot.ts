@@ -10,7 +10,7 @@ import { launchChromium } from './headless-chromium.ts';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 const file = join(mkdtempSync(join(tmpdir(), 'axletree-report-')), 'report.html');
-await writeFileAtomic(file, await demoReportHtml('demo-two-crew', true));
+await writeFileAtomic(file, demoReportHtml('demo-two-crew', true));
 const browser = await launchChromium();
 try {
   const page = await browser.newPage();

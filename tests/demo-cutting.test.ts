@@ -89,7 +89,7 @@ describe('cutting figures of the demo specifications', () => {
 
     const md = markdownOf(r);
     for (const h of ['## Cut list', '## Leather and rawhide', '## Wheel setting-out', '## Stock plan']) expect(md, h).toContain(`\n${h}\n`);
-    const html = htmlOf(r, await drawReportPlots(r));
+    const html = htmlOf(r, drawReportPlots(r));
     expect(html).toContain(`<figure class="setting-out"><svg class="${scopeClass(settingOutSvg(r))}`);
     // Each drawing's style rules reach only that drawing, so the stock bars and the plots keep their paint.
     for (const [, scope, css] of html.matchAll(/<svg class="([^" ]+)[^>]*>(?:(?!<\/svg>)[\s\S])*?<style>([\s\S]*?)<\/style>/g)) {

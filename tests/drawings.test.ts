@@ -127,8 +127,8 @@ describe('drawings in the report', () => {
   const result = runCheck(p.spec, p.entries, rulesData);
   const md = markdownOf(result);
   let html = '';
-  beforeAll(async () => {
-    html = htmlOf(result, await drawReportPlots(result));
+  beforeAll(() => {
+    html = htmlOf(result, drawReportPlots(result));
   });
 
   it('report.md links each drawing file written beside it, the side elevation right after the cautions', () => {

@@ -65,7 +65,7 @@ describe.skipIf(!browser)('the HTML report in headless Chromium', () => {
   beforeAll(async () => {
     // The check as the command runs it, the search for decisive inputs included (several seconds).
     const result = demoResult('demo-two-crew', true);
-    const plots = await drawReportPlots(result);
+    const plots = drawReportPlots(result);
     const doc = reportDocument(result);
     html = renderHtml(doc, plots);
     // The report a reviewer prints: everything before the appendix, laid out as in the whole report.
@@ -96,8 +96,8 @@ describe.skipIf(!browser)('the HTML report in headless Chromium', () => {
     // As many figures laid out as the file holds.
     expect(laid).toHaveLength(html.match(/<svg[\s>]/g)!.length);
     expect(laid.length).toBeGreaterThanOrEqual(4); // the three drawings of the build and the wheel setting-out at least
-    // The plots drawn by vega: load per horse, the turn over speed, three per ride case.
-    expect(laid.filter((f) => /\bmarks\b/.test(f.cls))).toHaveLength(2 + 3 * 5); // five ride cases
+    // The plots: load per horse, the turn over speed, three per ride case.
+    expect(laid.filter((f) => /\bchart\b/.test(f.cls))).toHaveLength(2 + 3 * 5); // five ride cases
     for (const f of laid) {
       expect(f.width, f.cls).toBeGreaterThan(0);
       expect(f.height, f.cls).toBeGreaterThan(0);

@@ -25,7 +25,7 @@ describe('plots in the report', () => {
   beforeAll(async () => {
     dir = await mkdtemp(join(tmpdir(), 'axletree-plots-'));
     written = await writeOutputs(result, dir, join(dir, 'spec.yaml'));
-    html = htmlOf(result, await drawReportPlots(result));
+    html = htmlOf(result, drawReportPlots(result));
   });
   afterAll(async () => {
     await rm(dir, { recursive: true, force: true });
@@ -49,7 +49,7 @@ describe('plots in the report', () => {
       expect(written).toContain(file);
       const svg = await readFile(file, 'utf8');
       expect(svg.startsWith('<svg ')).toBe(true);
-      // vega escapes its text as XML; the labels here hold none of & < >.
+      // Text is escaped as XML; the labels here hold none of & < >.
       for (const label of [...plot.lines, ...plot.rules].map((x) => x.label)) expect(svg).toContain(`>${label}</text>`);
     }
   });

@@ -6,7 +6,6 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { OPTIONAL_FILES, OUTPUT_FILES, writeOutputs } from '../src/node/write-outputs.ts';
 import type { PdfPrinter } from '../src/node/pdf-printer.ts';
-import { drawHere } from '../src/render/report-plots.ts';
 import { MANIFEST } from '../src/node/write-file-set.ts';
 import { sampleResult } from './fixtures/sample-result.ts';
 
@@ -46,7 +45,7 @@ describe('writeOutputs', () => {
       },
       close: () => Promise.resolve(),
     };
-    await writeOutputs(result, dir, join(dir, 'spec.yaml'), drawHere, { teach: true, printer });
+    await writeOutputs(result, dir, join(dir, 'spec.yaml'), { teach: true, printer });
     const names = await readdir(dir);
     for (const f of [OUTPUT_FILES.summary, ...Object.values(OPTIONAL_FILES)]) expect(names, f).toContain(f);
     const report = await readFile(join(dir, OUTPUT_FILES.html), 'utf8');
@@ -59,7 +58,7 @@ describe('writeOutputs', () => {
 
   it('writes nothing when printing fails: the outputs are one set', async () => {
     const printer: PdfPrinter = { print: () => Promise.reject(new Error('the browser went away')), close: () => Promise.resolve() };
-    await expect(writeOutputs(sampleResult(), dir, join(dir, 'spec.yaml'), drawHere, { printer })).rejects.toThrow(/went away/);
+    await expect(writeOutputs(sampleResult(), dir, join(dir, 'spec.yaml'), { printer })).rejects.toThrow(/went away/);
     expect(await readdir(dir)).toEqual([]);
   });
 

@@ -3,11 +3,9 @@ import { readSpec } from '../../src/node/read-spec.ts';
 import { OutputIsInputError } from '../../src/node/atomic-write.ts';
 import { resultJson, writeOutputs } from '../../src/node/write-outputs.ts';
 import { pdfPrinter, type PdfPrinter } from '../../src/node/pdf-printer.ts';
-import { startPlotThread } from '../../src/node/plot-thread.ts';
 import { checkLoadingSolver } from '../../src/node/solver-on-demand.ts';
 import { prepareSpec, type Prepared } from '../../src/core/spec/prepare.ts';
 import type { RulesData } from '../../src/core/data/rules-data.ts';
-import type { PlotDrawer } from '../../src/render/report-plots.ts';
 import type { Console } from '../console.ts';
 import { EXIT, exitOfVerdict } from '../exit-codes.ts';
 import { formatIssues } from '../format-issues.ts';
@@ -48,16 +46,10 @@ export async function checkCommand(file: string, opts: CheckOptions, con: Consol
     con.err(formatIssues(file, prepared.issues, read.locate));
     return EXIT.badInput;
   }
-  // Started now, the plot thread loads its library while the check runs.
-  const plots = startPlotThread();
-  try {
-    return await checkAndWrite(file, input, read.raw, prepared, data, opts, con, plots.draw);
-  } finally {
-    await plots.close();
-  }
+  return checkAndWrite(file, input, read.raw, prepared, data, opts, con);
 }
 
-async function checkAndWrite(file: string, input: string, raw: unknown, prepared: Extract<Prepared, { ok: true }>, data: RulesData, opts: CheckOptions, con: Console, draw: PlotDrawer): Promise<number> {
+async function checkAndWrite(file: string, input: string, raw: unknown, prepared: Extract<Prepared, { ok: true }>, data: RulesData, opts: CheckOptions, con: Console): Promise<number> {
   // The LP solver is loaded only where the stock plan needs it.
   const result = await checkLoadingSolver(prepared.spec, prepared.entries, data, { decisive: opts.decisive });
   result.input = raw;
@@ -65,7 +57,7 @@ async function checkAndWrite(file: string, input: string, raw: unknown, prepared
   let written: string[];
   const printer = await printerFor(opts, con);
   try {
-    written = await writeOutputs(result, dir, input, draw, { teach: opts.teach, printer });
+    written = await writeOutputs(result, dir, input, { teach: opts.teach, printer });
   } catch (e) {
     if (e instanceof OutputIsInputError) {
       con.err(`axletree: ${e.message}; choose another --out directory.\n`);

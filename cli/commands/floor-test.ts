@@ -45,7 +45,7 @@ export async function floorTestCommand(file: string, opts: FloorTestOptions, con
   const dir = resolve(con.cwd, opts.out ?? join('axletree-out', name));
   const files: [string, string][] = [
     [FLOOR_TEST_FILES.report, floorTestMarkdown(basename(file), estimate, FLOOR_TEST_FILES.plot, read.ignored)],
-    [FLOOR_TEST_FILES.plot, `${await floorTestPlotSvg(read.record, estimate)}\n`],
+    [FLOOR_TEST_FILES.plot, `${floorTestPlotSvg(read.record, estimate)}\n`],
   ];
   const written = await writeOrRefuse(() => writeFileSet(dir, files, input), con);
   if (written === null) return EXIT.badInput;

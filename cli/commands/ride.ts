@@ -39,7 +39,7 @@ export async function rideCommand(file: string, opts: RideOptions, con: Console)
   const rideIn = new ModelGraph(MODELS, { spec: prepared.spec, data, ride: true }).get('rideInput');
   const cases = opts.case ? [opts.case as RideCase] : [...RIDE_CASES];
   const results = cases.map((c) => rideCaseOf(rideIn, c));
-  const plots = new Map(await Promise.all(results.map(async (r) => [r.case, await ridePlotFiles(r.case, r.title, r.series)] as const)));
+  const plots = new Map(results.map((r) => [r.case, ridePlotFiles(r.case, r.title, r.series)] as const));
   const report = rideMarkdown({
     specName: prepared.spec.name,
     cases: results,

@@ -15,8 +15,8 @@ export function serveWorkbench(page: string, port: number): Promise<RunningServe
     const path = new URL(req.url ?? '/', 'http://localhost').pathname;
     if ((req.method === 'GET' || req.method === 'HEAD') && (path === '/' || path === '/index.html')) {
       // Nothing on the page is fetched later, and nothing is sent back: the page may not call out.
-      // (The plots' library compiles its expressions with Function: hence unsafe-eval.)
-      res.writeHead(200, { 'content-type': 'text/html; charset=utf-8', 'content-length': body.length, 'cache-control': 'no-store', 'content-security-policy': "default-src 'none'; script-src 'unsafe-inline' 'unsafe-eval' blob:; worker-src blob:; style-src 'unsafe-inline'; img-src data: blob:; connect-src 'none'" });
+      // Nothing on it compiles code from text either: no eval.
+      res.writeHead(200, { 'content-type': 'text/html; charset=utf-8', 'content-length': body.length, 'cache-control': 'no-store', 'content-security-policy': "default-src 'none'; script-src 'unsafe-inline' blob:; worker-src blob:; style-src 'unsafe-inline'; img-src data: blob:; connect-src 'none'" });
       res.end(req.method === 'HEAD' ? undefined : body);
       return;
     }

@@ -8,7 +8,7 @@ import { renderHtml } from '../render/html/render-html.ts';
 import { renderMarkdown } from '../render/markdown/render-markdown.ts';
 import { renderWorkbook } from '../render/workbook.ts';
 import { SETTING_OUT_SVG_FILE, settingOutSvg } from '../render/report-figures.ts';
-import { drawHere, drawReportPlots, type PlotDrawer } from '../render/report-plots.ts';
+import { drawReportPlots } from '../render/report-plots.ts';
 import { drawingOutputs } from '../render/report-drawings.ts';
 
 export const OUTPUT_FILES = {
@@ -41,12 +41,11 @@ export function resultJson(result: CheckResult): string {
 }
 
 /** Render everything first (the PDFs included), then write each file atomically; returns the paths written. */
-export async function writeOutputs(result: CheckResult, dir: string, inputPath: string, draw: PlotDrawer = drawHere, options: OutputOptions = {}): Promise<string[]> {
-  // The plots first: drawn on another thread, they are made while this one builds the report model and the workbook.
-  const drawing = drawReportPlots(result, draw);
+export async function writeOutputs(result: CheckResult, dir: string, inputPath: string, options: OutputOptions = {}): Promise<string[]> {
   // One report model for all three outputs, so the workbook, report.md and report.html cannot disagree.
   const doc = reportDocument(result);
-  const [plots, workbook] = await Promise.all([drawing, renderWorkbook(result, doc)]);
+  const plots = drawReportPlots(result);
+  const workbook = await renderWorkbook(result, doc);
   const html = renderHtml(doc, plots);
   const summary = renderHtml(summaryDocument(result), plots);
   const printed: [string, Uint8Array][] = options.printer

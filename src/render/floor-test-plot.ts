@@ -6,7 +6,7 @@ import { plotSvg } from './plots/plot-svg.ts';
 import type { PlotData } from '../core/plots/plot-data.ts';
 import { formatNumber, formatQuantity } from '../core/format/number-format.ts';
 
-export async function floorTestPlotSvg(record: DropRecord, e: FloorTestEstimate): Promise<string> {
+export function floorTestPlotSvg(record: DropRecord, e: FloorTestEstimate): string {
   return plotSvg(floorTestPlot(record, e));
 }
 

@@ -75,6 +75,6 @@ export function ridePlotList(c: RideCase, title: string, series: RideSeries): [s
 }
 
 /** Every plot the series can fill, with its file name, drawn to SVG. */
-export async function ridePlotFiles(c: RideCase, title: string, series: RideSeries): Promise<[string, string][]> {
-  return Promise.all(ridePlotList(c, title, series).map(async ([file, plot]): Promise<[string, string]> => [file, `${await plotSvg(plot)}\n`]));
+export function ridePlotFiles(c: RideCase, title: string, series: RideSeries): [string, string][] {
+  return ridePlotList(c, title, series).map(([file, plot]) => [file, `${plotSvg(plot)}\n`]);
 }

@@ -34,9 +34,9 @@ let lastFull: CheckResult | undefined;
 
 const yieldToMessages = () => new Promise<void>((r) => setTimeout(r, 0));
 
-async function pictures(result: CheckResult): Promise<{ drawings: Picture[]; plots: Picture[] }> {
+function pictures(result: CheckResult): { drawings: Picture[]; plots: Picture[] } {
   const drawings = drawingsOf(result).map((d) => ({ id: d.id, title: d.title, svg: d.svg }));
-  const plots = await Promise.all((result.plots ?? []).filter((p) => LIVE_PLOTS.includes(p.id)).map(async (p) => ({ id: p.id, title: p.title, svg: await plotSvg(p) })));
+  const plots = (result.plots ?? []).filter((p) => LIVE_PLOTS.includes(p.id)).map((p) => ({ id: p.id, title: p.title, svg: plotSvg(p) }));
   return { drawings, plots };
 }
 
@@ -59,14 +59,14 @@ async function checkLatest(): Promise<void> {
       post({ type: 'result', id: job.id, stage: 'statics', result: viewOf(statics), ms });
       await yieldToMessages();
       if (pending) continue;
-      post({ type: 'pictures', id: job.id, stage: 'statics', ...(await pictures(statics)) });
+      post({ type: 'pictures', id: job.id, stage: 'statics', ...pictures(statics) });
       await yieldToMessages();
       if (pending) continue;
       const t1 = clock();
       const full = fullChecker.check(prepared.spec, prepared.entries, { ride: true });
       lastFull = full;
       post({ type: 'result', id: job.id, stage: 'full', result: viewOf(full), ms: clock() - t1 });
-      post({ type: 'pictures', id: job.id, stage: 'full', ...(await pictures(full)) });
+      post({ type: 'pictures', id: job.id, stage: 'full', ...pictures(full) });
       await yieldToMessages();
     }
   } catch (e) {
@@ -94,7 +94,7 @@ async function answer(m: ToWorker): Promise<void> {
   const result = { ...lastFull, input: lastValid?.raw };
   const doc = reportDocument(result);
   if (m.kind === 'report') {
-    const plots = await drawReportPlots(result);
+    const plots = drawReportPlots(result);
     return post({ type: 'file', id: m.id, name: 'report.html', mime: 'text/html', data: renderHtml(doc, plots) });
   }
   const bytes = await renderWorkbook(result, doc);

@@ -29,7 +29,7 @@ describe('axletree floor-test on the demo record', () => {
     expect(md).toMatch(/!\[Record and fitted curve\]\(floor-test\.svg\)/);
     expect(md).toMatch(/Columns not used: sample/);
     const svg = await readFile(join(out, 'floor-test.svg'), 'utf8');
-    expect(svg).toMatch(/^<svg[\s\S]*class="marks"[\s\S]*<path[\s\S]*<\/svg>\n$/);
+    expect(svg).toMatch(/^<svg[\s\S]*class="chart"[\s\S]*<path[\s\S]*<\/svg>\n$/);
   });
 
   it('defaults to axletree-out/<csv name>/ and never writes over the record', async () => {

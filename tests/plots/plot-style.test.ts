@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { plotSpec } from '../../src/render/plots/plot-spec.ts';
+import { plotSvg } from '../../src/render/plots/plot-svg.ts';
 import { RULE_DASH, SERIES_COLOURS, SERIES_DASHES } from '../../src/render/plots/series-style.ts';
 import { floorTestPlot } from '../../src/render/floor-test-plot.ts';
 import { estimateFloorTest } from '../../src/core/floor-test/estimate-floor-test.ts';
@@ -48,8 +48,8 @@ describe('series style', () => {
 
   it('puts colour and dash on each line of a chart, one per label', () => {
     const plot: PlotData = { id: 'x', title: 't', caption: 'c', xLabel: 'x (s)', yLabel: 'y (N)', rules: [], lines: [0, 1, 2, 3].map((i) => ({ label: `s${i}`, x: [0, 1], y: [i, i + 1] })) };
-    const enc = (plotSpec(plot) as unknown as { layer: { encoding: { color: { scale: { range: string[] } }; strokeDash: { scale: { range: number[][] } } } }[] }).layer[0].encoding;
-    expect(enc.color.scale.range).toEqual(SERIES_COLOURS.slice(0, 4));
-    expect(new Set(enc.strokeDash.scale.range.map((d) => d.join(' '))).size).toBe(4);
+    const drawn = [...plotSvg(plot).matchAll(/<path class="line"[^>]*>/g)].map((m) => ({ colour: /stroke="([^"]+)"/.exec(m[0])![1], dash: /stroke-dasharray="([^"]+)"/.exec(m[0])?.[1] ?? 'solid' }));
+    expect(drawn.map((d) => d.colour)).toEqual(SERIES_COLOURS.slice(0, 4));
+    expect(new Set(drawn.map((d) => d.dash)).size).toBe(4);
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ridePlot, RIDE_PLOTS } from '../../src/render/ride-plots.ts';
-import { yScale } from '../../src/render/plots/plot-spec.ts';
+import { yDomain } from '../../src/render/plots/plot-domains.ts';
 import { RIDE_CASES } from '../../src/core/ride/ride-types.ts';
 import { demoRide } from '../fixtures/sample-ride.ts';
 
@@ -28,7 +28,7 @@ describe.each(RIDE_CASES.map((c) => [c]))('ride plots of %s', (c) => {
 
   it('keeps every drawn value inside the y axis', () => {
     for (const p of plots) {
-      const [lo, hi] = yScale(p).domain;
+      const [lo, hi] = yDomain(p);
       for (const l of p.lines) for (const v of l.y) expect(v >= lo && v <= hi, `${p.id} ${l.label} ${v}`).toBe(true);
     }
   });
@@ -41,6 +41,6 @@ describe('the drop test plot', () => {
     expect(heights.lines[0].x[0]).toBe(0);
     const top = Math.max(...heights.lines.flatMap((l) => l.y));
     expect(top).toBe(Math.max(...r.series.channels.filter((c) => c.unit === 'mm').flatMap((c) => c.values)));
-    expect(yScale(heights).domain[1]).toBeGreaterThan(top);
+    expect(yDomain(heights)[1]).toBeGreaterThan(top);
   });
 });

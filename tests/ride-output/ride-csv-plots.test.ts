@@ -27,9 +27,9 @@ describe('rideCsv', () => {
 });
 
 describe('ride plots', () => {
-  it('heights, floor forces and wheel and yoke forces, each with its channels', async () => {
+  it('heights, floor forces and wheel and yoke forces, each with its channels', () => {
     const r = demoRide().results['stone-one-wheel'];
-    const files = await ridePlotFiles(r.case, r.title, r.series);
+    const files = ridePlotFiles(r.case, r.title, r.series);
     expect(files.map(([n]) => n)).toEqual(['ride-stone-one-wheel-heights.svg', 'ride-stone-one-wheel-floor-forces.svg', 'ride-stone-one-wheel-support-forces.svg']);
     expect(ridePlotNames(r.case, r.series)).toEqual(files.map(([n]) => n));
     const [, heights] = files[0];

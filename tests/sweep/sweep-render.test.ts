@@ -3,9 +3,9 @@ import { sweepResult, type SweepDefinition } from '../../src/core/sweep/sweep-re
 import type { PointOutcome } from '../../src/core/sweep/point-outcome.ts';
 import { sweepPoints } from '../../src/core/sweep/sweep-points.ts';
 import type { SweepAxis } from '../../src/core/sweep/sweep-axis.ts';
-import { sweepPlotSpec } from '../../src/render/sweep/sweep-plot.ts';
+import { sweepPlot } from '../../src/render/sweep/sweep-plot.ts';
+import { HEAT_MARKS, heatColour } from '../../src/render/plots/heat-map-svg.ts';
 import { sweepFiles } from '../../src/render/sweep/sweep-files.ts';
-import { steadySvgIds } from '../../src/render/plots/steady-svg-ids.ts';
 
 // A made-up sweep (no check run): the load is 100 + a - b, and a point fails where a > 6.25; the outputs drawn from it.
 const axes: SweepAxis[] = [
@@ -39,16 +39,24 @@ describe('the sweep\'s outputs', () => {
   });
 
   it('draw a line plot over one value and a heat map over two, the design point marked', () => {
-    const line = sweepPlotSpec(result(1))!;
-    const text = JSON.stringify(line.spec);
-    expect(text).toMatch(/design point, 3\smm/);
-    expect(text).toMatch(/envelope edge, 6.2\smm/);
-    expect(text).toContain('"y":103');
-    expect(text).toContain('fails (points)');
-    const heat = JSON.stringify(sweepPlotSpec(result(2))!.spec);
-    expect(heat).toContain('"type":"rect"');
-    expect(heat).toContain('"design point"');
-    expect(heat).toContain('"fails"');
+    const line = sweepPlot(result(1))!.svg;
+    expect(line).toMatch(/>design point, 3\smm</);
+    expect(line).toMatch(/>envelope edge, 6.2\smm</);
+    expect(line).toContain('>fails (points)<');
+    // One dot per point (11), and each in the key.
+    expect(line.match(/<circle /g)!.length).toBe(11 + 2);
+    const heat = sweepPlot(result(2))!.svg;
+    const cells = /<g class="cells">([\s\S]*?)<\/g>/.exec(heat)![1];
+    expect(cells.match(/<rect /g)).toHaveLength(33);
+    // The load runs from 96 (a = 0, b = 4) to 110 (a = 10, b = 0): the pale end and the full end of the scale.
+    expect(cells).toContain(`fill="${heatColour(0)}"`);
+    expect(cells).toContain(`fill="${heatColour(1)}"`);
+    // The failing points (a = 7 to 10, three values of b each) marked, each with the fail colour; the design point ringed.
+    expect(heat.split(`fill="${HEAT_MARKS.fail.colour}"`).length - 1).toBe(12 + 1);
+    expect(heat).toMatch(/fill="none" stroke="#000000" stroke-width="2"/);
+    expect(heat).toContain('>fails<');
+    expect(heat).toContain('>design point<');
+    expect(heat).not.toMatch(/NaN|Infinity/);
   });
 
   it('write the envelope, the robust ranges and the cautions in the report', () => {
@@ -61,9 +69,5 @@ describe('the sweep\'s outputs', () => {
     expect(md).toContain('Statics only');
     expect(files.get('sweep.html')).toContain('<svg');
     expect(files.get('sweep.csv')!.split('\n')[1]).toBe('point,a_mm (mm),b_mm (mm),verdict,worst utilisation,worst rule,worst subject,load (N),reason');
-  });
-
-  it('number the plot\'s gradients afresh in each file', () => {
-    expect(steadySvgIds('<a fill="url(#gradient_7)"/><linearGradient id="gradient_7"/><b id="gradient_9"/>')).toBe('<a fill="url(#gradient_0)"/><linearGradient id="gradient_0"/><b id="gradient_1"/>');
   });
 });

@@ -32,6 +32,7 @@ describe('axletree serve', () => {
     const page = await fetch(s.url!);
     expect(page.status).toBe(200);
     expect(page.headers.get('content-security-policy')).toContain("connect-src 'none'");
+    expect(page.headers.get('content-security-policy')).not.toContain('unsafe-eval');
     const html = await page.text();
     const slot = /<script id="axletree-initial" type="application\/json">(.*?)<\/script>/s.exec(html)![1];
     const given = JSON.parse(slot) as { name: string; text: string };

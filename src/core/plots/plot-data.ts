@@ -1,6 +1,6 @@
 // A plot as data: lines over a shared x axis, reference lines (limits,
 // thresholds, positions) and marked points. The core computes these; the edge
-// turns them into a vega-lite chart and SVG. result.json carries them, so any
+// draws them as SVG (src/render/plots). result.json carries them, so any
 // other program can draw the same figures.
 
 export type LineStyle = 'solid' | 'dashed' | 'dots';

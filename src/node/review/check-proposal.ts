@@ -3,7 +3,6 @@ import { runCheck } from '../../core/pipeline/run-check.ts';
 import { checkedRow, uncheckedRow } from '../../core/review/review-row.ts';
 import { prepareSpec } from '../../core/spec/prepare.ts';
 import type { LpSolver } from '../../core/stock/cutting-types.ts';
-import { drawHere } from '../../render/report-plots.ts';
 import { OutputIsInputError } from '../atomic-write.ts';
 import { OutputError } from '../output-error.ts';
 import type { PdfPrinter } from '../pdf-printer.ts';
@@ -30,7 +29,7 @@ export async function checkProposal(job: ProposalJob, s: ProposalSettings, t: Pr
   const result = runCheck(spec, entries, t.data, { lp: t.lp, decisive: s.workLimit !== null, decisiveWorkLimit: s.workLimit ?? undefined });
   result.input = job.raw;
   try {
-    await writeOutputs(result, job.dir, job.input, drawHere, { teach: s.teach, printer: t.printer });
+    await writeOutputs(result, job.dir, job.input, { teach: s.teach, printer: t.printer });
   } catch (e) {
     if (e instanceof OutputIsInputError || e instanceof OutputError) return { row: uncheckedRow(job.file, job.name, 'refused', e.message) };
     throw e;

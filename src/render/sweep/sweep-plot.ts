@@ -1,10 +1,9 @@
-import type { TopLevelSpec } from 'vega-lite';
 import type { PlotData, PlotLine, PlotRule } from '../../core/plots/plot-data.ts';
 import type { PointOutcome } from '../../core/sweep/point-outcome.ts';
 import type { SweepResult } from '../../core/sweep/sweep-result.ts';
 import { formatQuantity } from '../../core/format/number-format.ts';
-import { heatMapSpec, type HeatCell, type HeatMark } from '../plots/heat-map-spec.ts';
-import { plotSpec } from '../plots/plot-spec.ts';
+import { heatMapSvg, type HeatCell, type HeatMark } from '../plots/heat-map-svg.ts';
+import { plotSvg } from '../plots/plot-svg.ts';
 
 // The sweep's one picture: over one varied value, a line of the first chosen
 // figure with the points of each verdict marked, the design point and the
@@ -78,13 +77,13 @@ function heatPoints(r: SweepResult): PointOutcome[] {
   return r.points.filter((p) => p.values[2] === held);
 }
 
-/** The chart of the sweep, or null where there is nothing to draw. */
-export function sweepPlotSpec(r: SweepResult): { spec: TopLevelSpec; caption: string } | null {
+/** The picture of the sweep as SVG text, or null where there is nothing to draw. */
+export function sweepPlot(r: SweepResult): { svg: string; caption: string } | null {
   if (r.points.length === 0) return null;
   const q = plotted(r);
   if (r.varied.length === 1) {
     const plot = linePlot(r, q);
-    return plot.lines[0].x.length ? { spec: plotSpec(plot), caption: plot.caption } : null;
+    return plot.lines[0].x.length ? { svg: plotSvg(plot), caption: plot.caption } : null;
   }
   const pts = heatPoints(r);
   const marks: HeatMark[] = pts.flatMap((p) => (p.verdict in KIND ? [{ x: p.values[0], y: p.values[1], kind: KIND[p.verdict as keyof typeof KIND] }] : []));
@@ -95,5 +94,5 @@ export function sweepPlotSpec(r: SweepResult): { spec: TopLevelSpec; caption: st
     third ? ` ${third.path} is held at ${formatQuantity(pts[0]?.values[2] ?? third.design_value, third.unit)}, its ${r.mode.kind === 'grid' ? 'grid value nearest the design point' : 'sampled values all shown together'}.` : '',
   ].join('');
   const map = { title: sweepPlotTitle(r), xLabel: axisLabel(a), yLabel: axisLabel(b), valueLabel: q.label, cells: cells(r, pts, q), scatter: r.mode.kind === 'samples', marks, design: { x: a.design_value, y: b.design_value } };
-  return { spec: heatMapSpec(map), caption };
+  return { svg: heatMapSvg(map), caption };
 }
