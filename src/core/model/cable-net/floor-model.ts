@@ -16,7 +16,6 @@ import { declinedFloor, type FloorHead } from './floor-declined.ts';
 import { SkylineCholesky } from './skyline.ts';
 import { coupledPairs, nodeOrder } from './node-order.ts';
 import { RestMemo } from './floor-rest.ts';
-import type { CableNet } from './net.ts';
 import { FloorFrame, type FrameState } from '../floor-frame/frame-model.ts';
 import { ARC_STEP_DEG, frameOfFloor, type FrameBasis } from '../floor-frame/frame-of-floor.ts';
 import type { FloorFrameResult } from '../floor-frame/frame-result.ts';
@@ -138,8 +137,8 @@ const START_FRACTION = 1e-3;
 
 function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead, crew: Loaded[], sol: CoupledSolution, rest: CoupledSolution, F: Float64Array, workspace: Required<CoupledWorkspace>, frame: FloorFrameResult): FloorModel {
   const s = spec.floor_straps;
-  const moved: FloorNet = { ...floor, net: withPlanLengths(floor.net, sol.flats) };
-  const T = tensions(moved.net, sol.sag);
+  // Tensions at the plan lengths the anchors' movement left.
+  const T = tensions(floor.net, sol.sag, sol.flats);
   let worst = 0;
   T.forEach((t, i) => (t > T[worst] ? (worst = i) : 0));
   const maxTension_N = T.length ? T[worst] : 0;
@@ -155,20 +154,15 @@ function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead
     maxStress_MPa: maxTension_N / (s.width_mm * s.thickness_mm),
     crew: crewResults(floor, sol.sag, crew, coupledCompliance(floor.net, sol, F, workspace.matrix, workspace.coupling)),
     rails: strapPulls(floor, sol.pulls),
-    reactionSum_N: reactionSum(moved.net, sol.sag, T),
+    reactionSum_N: reactionSum(floor.net, sol.sag, T, sol.flats),
     nodes: floor.net.nodes.length,
     segments: floor.net.segments.length,
     clearances: partClearances(spec, floor, sol.sag),
-    straps: strapTensions(moved.net, T),
+    straps: strapTensions(floor.net, T),
     history: sol.history,
     frame,
     ...(stopped ? { stopped } : {}),
   };
-}
-
-/** The segments' plan lengths after the anchors moved. */
-function withPlanLengths(net: CableNet, flats: ArrayLike<number>): CableNet {
-  return { ...net, segments: net.segments.map((seg, i) => ({ ...seg, flat: flats[i] })) };
 }
 
 /** The frame's result for one state, given its state under that state's pulls; the pretension alone solved once. */
