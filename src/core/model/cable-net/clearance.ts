@@ -2,6 +2,8 @@ import type { CheckedSpecification } from '../../spec/spec.types.ts';
 import { layout } from '../layout.ts';
 import { axleBar } from '../spec-sections.ts';
 import type { FloorNet } from './floor-net.ts';
+import type { NodeWeight } from './foot-patch.ts';
+import type { CableNet } from './net.ts';
 import { pointWeights, weightedSum } from './point-sag.ts';
 
 // What lies under the straps: the pole's run under the floor and the axle
@@ -42,14 +44,34 @@ function samples(floor: FloorNet, lo: number, hi: number, axis: 'x' | 'y'): numb
   return [...new Set([lo, (lo + hi) / 2, hi, ...inside])];
 }
 
+interface Sample {
+  x: number;
+  y: number;
+  weights: NodeWeight[];
+}
+
+/** The sample points of each footprint with their nodal weights, per net: they read no sag, so every state of a net shares them. */
+const sampleCache = new WeakMap<CableNet, Map<string, Sample[]>>();
+
+function footprintSamples(floor: FloorNet, part: UnderFloorPart): Sample[] {
+  let byFootprint = sampleCache.get(floor.net);
+  if (!byFootprint) sampleCache.set(floor.net, (byFootprint = new Map<string, Sample[]>()));
+  const key = `${part.x[0]},${part.x[1]},${part.y[0]},${part.y[1]}`;
+  let list = byFootprint.get(key);
+  if (!list) {
+    list = [];
+    for (const x of samples(floor, part.x[0], part.x[1], 'x')) for (const y of samples(floor, part.y[0], part.y[1], 'y')) list.push({ x, y, weights: pointWeights(floor.net, floor.outline, x, y) });
+    byFootprint.set(key, list);
+  }
+  return list;
+}
+
 export function partClearances(spec: CheckedSpecification, floor: FloorNet, sag: ArrayLike<number>): PartClearance[] {
   return underFloorParts(spec).map((p) => {
     let best = { sag_mm: 0, at: { x: (p.x[0] + p.x[1]) / 2, y: (p.y[0] + p.y[1]) / 2 } };
-    for (const x of samples(floor, p.x[0], p.x[1], 'x')) {
-      for (const y of samples(floor, p.y[0], p.y[1], 'y')) {
-        const s = weightedSum(pointWeights(floor.net, floor.outline, x, y), sag);
-        if (s > best.sag_mm) best = { sag_mm: s, at: { x, y } };
-      }
+    for (const { x, y, weights } of footprintSamples(floor, p)) {
+      const s = weightedSum(weights, sag);
+      if (s > best.sag_mm) best = { sag_mm: s, at: { x, y } };
     }
     return { ...p, ...best };
   });

@@ -101,12 +101,15 @@ export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLi
   const coupling = workspace.coupling ?? couplingPreconditioner();
   const segs = net.segments;
   const st = scratchState();
+  // The forces and mean pulls are summed afresh into the same storage at every state (a state keeps neither).
+  const force = new Float64Array(n);
+  const H = new Float64Array(m);
   const state = (x: Float64Array): CoupledState => {
     const lambda = x.subarray(n);
     const e = mulF(F, lambda, m);
     const flats = planLengths(net, e, spans);
-    const force = new Float64Array(n);
-    const H = new Float64Array(m);
+    force.fill(0);
+    H.fill(0);
     let energy = 0;
     // One pass over the segments, filling one scratch state: forces, energy and mean pulls together.
     for (let i = 0; i < segs.length; i++) {

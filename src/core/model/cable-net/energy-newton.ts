@@ -19,6 +19,7 @@ export interface EnergyState {
 }
 
 export interface EnergyProblem<S extends EnergyState> {
+  /** The state at x; it must not keep x (its storage is filled again with later trial points). */
   state(x: Float64Array): S;
   /** The Newton step from x and the potential's slope along it, or why there is none. */
   direction(x: Float64Array, s: S): { step: Float64Array; slope: number } | string;
@@ -38,6 +39,7 @@ const MAX_BACKTRACKS = 60;
 
 export function minimise<S extends EnergyState>(problem: EnergyProblem<S>, start: Float64Array, settings: SolveSettings): Minimum<S> {
   let x = start;
+  let spare: Float64Array = new Float64Array(x.length);
   let cur = problem.state(x);
   const history = [cur.worst];
   let iterations = 0;
@@ -51,9 +53,9 @@ export function minimise<S extends EnergyState>(problem: EnergyProblem<S>, start
     const { step, slope } = dir;
     let alpha = 1;
     let trial: S | undefined;
-    let next = x;
+    // The trial point fills one spare vector, backtrack after backtrack (a state keeps no reference to its point).
+    const next = spare;
     for (let b = 0; b < MAX_BACKTRACKS; b++) {
-      next = new Float64Array(x.length);
       for (let i = 0; i < x.length; i++) next[i] = x[i] + alpha * step[i];
       trial = problem.state(next);
       // Near equilibrium the energy change falls to rounding level; allow for it.
@@ -68,6 +70,8 @@ export function minimise<S extends EnergyState>(problem: EnergyProblem<S>, start
       stopped = 'the line search found no step that lowers the energy';
       break;
     }
+    // The point left behind is the next spare, unless it is the caller's start (left as given).
+    spare = x === start ? new Float64Array(x.length) : x;
     x = next;
     cur = trial;
     history.push(cur.worst);

@@ -15,7 +15,7 @@ import { couplingPreconditioner } from './coupled-tangent.ts';
 import { declinedFloor, type FloorHead } from './floor-declined.ts';
 import { SkylineCholesky } from './skyline.ts';
 import { coupledPairs, nodeOrder } from './node-order.ts';
-import type { CableNet } from './net.ts';
+import { RestMemo } from './floor-rest.ts';
 import { FloorFrame, type FrameState } from '../floor-frame/frame-model.ts';
 import { ARC_STEP_DEG, frameOfFloor, type FrameBasis } from '../floor-frame/frame-of-floor.ts';
 import type { FloorFrameResult } from '../floor-frame/frame-result.ts';
@@ -66,14 +66,15 @@ export function floorModel(spec: CheckedSpecification, data: RulesData, factor: 
  * weights are not read). Built once per check for the standing floor and the
  * four loaded states, and kept by a sweep or a workbench edit that moves only
  * the crew. Nothing in it changes once built (the frame's factor is made in
- * its constructor); each solve makes its own matrix and workspace.
+ * its constructor) but the kept pretension-alone solve (floor-rest.ts), which
+ * reads no crew either; each solve makes its own matrix and workspace.
  */
 export interface FloorSetup {
   /** The net's real node count, and the most the solver takes (rules/parameters/floor.yaml). */
   count: number;
   maxNodes: number;
   /** Absent where the net has more nodes than that: the floor is declined, not solved. */
-  built?: { floor: FloorNet; basis: FrameBasis; frame: FloorFrame; F: Float64Array; pairs: [number, number][]; order: Int32Array; anchors: 'coupled' | 'fixed' };
+  built?: { floor: FloorNet; basis: FrameBasis; frame: FloorFrame; F: Float64Array; pairs: [number, number][]; order: Int32Array; anchors: 'coupled' | 'fixed'; rest: RestMemo };
 }
 
 export function floorSetup(spec: CheckedSpecification, data: RulesData, options: FloorOptions = {}): FloorSetup {
@@ -87,7 +88,7 @@ export function floorSetup(spec: CheckedSpecification, data: RulesData, options:
   const basis = frameOfFloor(spec, data, floor, arcStepDeg);
   const frame = new FloorFrame(basis.input);
   const F = anchors === 'fixed' ? new Float64Array(floor.net.straps.length ** 2) : frame.flexibility();
-  return { count, maxNodes, built: { floor, basis, frame, F, pairs: coupledPairs(floor.net), order: nodeOrder(floor.net), anchors } };
+  return { count, maxNodes, built: { floor, basis, frame, F, pairs: coupledPairs(floor.net), order: nodeOrder(floor.net), anchors, rest: new RestMemo() } };
 }
 
 /**
@@ -109,12 +110,13 @@ export function floorModels(spec: CheckedSpecification, data: RulesData, factors
   const { floor, basis, frame, F, pairs, order, anchors } = made.built;
   const { maxIterations } = heads[0].settings;
   const K = new SkylineCholesky(floor.net.nodes.length, pairs, order);
-  // Every solve of this net shares the matrix and the strap system's preconditioner (each state starts near the last).
-  const workspace = { matrix: K, coupling: couplingPreconditioner() };
-  // The pretension alone, to the tightest tolerance asked: the same net and frame with no one aboard.
+  // The pretension alone, to the tightest tolerance asked: the same net and frame with no one aboard (kept by the setup).
   const tightest = Math.min(...heads.map((h) => h.settings.tolerance_N));
-  const rest = solveCoupled(floor.net, new Float64Array(floor.net.nodes.length), F, { tolerance_N: tightest, maxIterations }, undefined, workspace);
-  const restFrame = frameResult(basis, frame, anchors, rest);
+  const kept = made.built.rest.solve({ net: floor.net, F, frame }, tightest, maxIterations, K);
+  const rest = kept.sol;
+  // Every solve of this net shares the matrix and the strap system's preconditioner (each state starts near the last).
+  const workspace = { matrix: K, coupling: { ...couplingPreconditioner(), factor: kept.factor } };
+  const restFrame = frameResult(basis, frame, anchors, rest, kept.frame);
   const out = new Array<FloorModel>(factors.length);
   let below: CoupledSolution | undefined;
   for (const i of [...factors.keys()].sort((p, q) => heads[p].head.appliedLoad_N - heads[q].head.appliedLoad_N)) {
@@ -135,8 +137,8 @@ const START_FRACTION = 1e-3;
 
 function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead, crew: Loaded[], sol: CoupledSolution, rest: CoupledSolution, F: Float64Array, workspace: Required<CoupledWorkspace>, frame: FloorFrameResult): FloorModel {
   const s = spec.floor_straps;
-  const moved: FloorNet = { ...floor, net: withPlanLengths(floor.net, sol.flats) };
-  const T = tensions(moved.net, sol.sag);
+  // Tensions at the plan lengths the anchors' movement left.
+  const T = tensions(floor.net, sol.sag, sol.flats);
   let worst = 0;
   T.forEach((t, i) => (t > T[worst] ? (worst = i) : 0));
   const maxTension_N = T.length ? T[worst] : 0;
@@ -152,25 +154,19 @@ function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead
     maxStress_MPa: maxTension_N / (s.width_mm * s.thickness_mm),
     crew: crewResults(floor, sol.sag, crew, coupledCompliance(floor.net, sol, F, workspace.matrix, workspace.coupling)),
     rails: strapPulls(floor, sol.pulls),
-    reactionSum_N: reactionSum(moved.net, sol.sag, T),
+    reactionSum_N: reactionSum(floor.net, sol.sag, T, sol.flats),
     nodes: floor.net.nodes.length,
     segments: floor.net.segments.length,
     clearances: partClearances(spec, floor, sol.sag),
-    straps: strapTensions(moved.net, T),
+    straps: strapTensions(floor.net, T),
     history: sol.history,
     frame,
     ...(stopped ? { stopped } : {}),
   };
 }
 
-/** The segments' plan lengths after the anchors moved. */
-function withPlanLengths(net: CableNet, flats: ArrayLike<number>): CableNet {
-  return { ...net, segments: net.segments.map((seg, i) => ({ ...seg, flat: flats[i] })) };
-}
-
 /** The frame's result for one state, given its state under that state's pulls; the pretension alone solved once. */
-function frameResult(basis: FrameBasis, frame: FloorFrame, anchors: 'coupled' | 'fixed', rest: CoupledSolution): (state: FrameState) => FloorFrameResult {
-  const restState = frame.solve(rest.pulls);
+function frameResult(basis: FrameBasis, frame: FloorFrame, anchors: 'coupled' | 'fixed', rest: CoupledSolution, restState: FrameState): (state: FrameState) => FloorFrameResult {
   const pretension = { rails: restState.rails, minPull_N: Math.min(...rest.pulls), maxPull_N: Math.max(...rest.pulls), maxAnchorMove_mm: anchors === 'fixed' ? 0 : restState.maxAnchorMove_mm };
   return (state) => ({
     anchors,

@@ -4,7 +4,7 @@ import type { FloorNet } from './floor-net.ts';
 import type { CableNet, Family } from './net.ts';
 import type { Rail } from './outline.ts';
 import { pointWeights, weightedSum } from './point-sag.ts';
-import { segmentState } from './segment.ts';
+import { scratchState, segmentState } from './segment.ts';
 
 // What a solved net means for the floor: tensions, sag and stiffness under
 // each person, the straps' pull on the rails and the frame's reactions.
@@ -18,8 +18,10 @@ export interface Loaded {
   weights: NodeWeight[];
 }
 
-export function tensions(net: CableNet, sag: ArrayLike<number>): Float64Array {
-  return Float64Array.from(net.segments, (seg) => segmentState(seg, at(sag, seg.a), at(sag, seg.b)).tension);
+/** Each segment's tension at the sags; `flats` the segments' plan lengths where the anchors moved (their own where omitted). */
+export function tensions(net: CableNet, sag: ArrayLike<number>, flats?: ArrayLike<number>): Float64Array {
+  const st = scratchState();
+  return Float64Array.from(net.segments, (seg, i) => segmentState(seg, at(sag, seg.a), at(sag, seg.b), flats ? flats[i] : seg.flat, st).tension);
 }
 
 /** One strap's place in plan and the largest tension along it, for the floor drawing. */
@@ -98,12 +100,12 @@ export function strapPulls(floor: FloorNet, pulls: ArrayLike<number>): RailPull[
   return [...out.values()];
 }
 
-/** Sum of the vertical forces the frame gives the strap ends, N. */
-export function reactionSum(net: CableNet, sag: ArrayLike<number>, T: ArrayLike<number>): number {
+/** Sum of the vertical forces the frame gives the strap ends, N; `flats` as for `tensions`. */
+export function reactionSum(net: CableNet, sag: ArrayLike<number>, T: ArrayLike<number>, flats?: ArrayLike<number>): number {
   let sum = 0;
   net.segments.forEach((seg, i) => {
     if (seg.a >= 0 && seg.b >= 0) return;
-    const st = segmentState(seg, at(sag, seg.a), at(sag, seg.b));
+    const st = segmentState(seg, at(sag, seg.a), at(sag, seg.b), flats ? flats[i] : seg.flat);
     // The free end's sag over the length: +drop when b is the fixed end, -drop when a is.
     sum += (T[i] * (seg.b < 0 ? st.drop : -st.drop)) / st.length;
   });

@@ -139,8 +139,11 @@ export class FloorFrame {
       f.fill(0);
       for (const a of straps[t]) f[this.#anchorDof[a]] += anchors[a].inward;
       for (const h of this.#held) f[h] = 0;
-      // The frame's matrix keeps the loop's own numbering (no reordering): solve in place.
-      this.#K.forward(f);
+      // The frame's matrix keeps the loop's own numbering (no reordering): solve in place, the forward sweep from the
+      // first loaded row (the rows above it stay zero).
+      let from = f.length;
+      for (const a of straps[t]) if (f[this.#anchorDof[a]] !== 0) from = Math.min(from, this.#anchorDof[a]);
+      this.#K.forward(f, from);
       this.#K.backward(f);
       const d = f;
       for (let s = 0; s < m; s++) {
