@@ -88,15 +88,24 @@ export function floorDampingOf(i: RideInput): { value: number; source: string } 
   return { value: l.value, source: `ride.supports.floor_damping_ratio, rules/parameters/ride.yaml: ${l.source}` };
 }
 
-/** The wheel's path over each bump, tabulated once per ride input: its cases over the same ground and the tuner's runs share it. */
-const envelopes = new WeakMap<RideInput, Map<string, Envelope>>();
+/**
+ * The wheel's path over each bump, kept by the values it depends on (the
+ * bump's height and length, the wheel's radius): a check's cases over the
+ * same ground, the tuner's runs, and the re-runs of a decisive-input search,
+ * a sweep or a workbench edit that leave those alone all share one. Tabulating
+ * it costs about a millisecond; the table is a pure function of the three
+ * values, so sharing it changes nothing. The oldest go first past the limit.
+ */
+const envelopes = new Map<string, Envelope>();
+const ENVELOPES_KEPT = 32;
 
-function envelopeOf(i: RideInput, bump: Bump, r: number): Envelope {
-  let byBump = envelopes.get(i);
-  if (!byBump) envelopes.set(i, (byBump = new Map<string, Envelope>()));
+function envelopeOf(bump: Bump, r: number): Envelope {
   const key = `${bump.height} ${bump.length} ${r}`;
-  let env = byBump.get(key);
-  if (!env) byBump.set(key, (env = wheelEnvelope(bump, r)));
+  let env = envelopes.get(key);
+  if (!env) {
+    envelopes.set(key, (env = wheelEnvelope(bump, r)));
+    if (envelopes.size > ENVELOPES_KEPT) envelopes.delete(envelopes.keys().next().value!);
+  }
   return env;
 }
 
@@ -193,7 +202,7 @@ export function buildRide(i: RideInput, which: RideCase, o: RideOptions = {}): B
     const profile = over === 'rough-ground' ? roughGround(spec, data) : stone(spec);
     sources.push(...profile.height.sources, ...profile.length.sources);
     const bump = { height: o.bumpHeight ?? profile.height.value, length: o.bumpLength ?? profile.length.value };
-    const env = envelopeOf(i, bump, r);
+    const env = envelopeOf(bump, r);
     const lead = 0.05 - env.start; // the wheel starts 50 mm short of where it first touches
     const struck = underBothWheels(which) ? [true, true] : [true, false];
     road = (w, t, out) => {
