@@ -75,6 +75,11 @@ describe('plot SVG', () => {
     expect(svg).not.toMatch(/NaN|Infinity/);
     const gappy: PlotData = { ...sample, lines: [{ label: 'gaps', x: [0, 1, 2, 3], y: [1, NaN, Infinity, 2] }] };
     expect(plotSvg(gappy)).not.toMatch(/NaN|Infinity/);
+    // A reference line without a value is left out, key and all; an empty plot and a flat line still draw.
+    const unset: PlotData = { ...sample, rules: [{ label: 'unset', axis: 'y', value: NaN, kind: 'hard' }, { label: 'far', axis: 'x', value: Infinity, kind: 'position' }] };
+    expect(plotSvg(unset)).not.toMatch(/NaN|Infinity|unset|far/);
+    expect(plotSvg({ ...sample, lines: [], rules: [] })).not.toMatch(/NaN|Infinity/);
+    expect(plotSvg({ ...sample, lines: [{ label: 'flat', x: [0, 1], y: [5, 5] }], rules: [] })).toMatch(/<path class="line" d="M[\d.]+,([\d.]+)L[\d.]+,\1"/);
   });
 });
 
@@ -94,6 +99,8 @@ describe('axis ticks (Heckbert, "Nice numbers for graph labels", Graphics Gems 1
     expect(niceDomain([3, 97], 8)).toEqual([0, 100]);
     expect(tickText(-0.0000001, 1)).toBe('0.0');
     expect(tickText(12500, 0)).toBe('12\u2009500');
+    // Past six decimals the power of ten is written out.
+    expect(tickText(2e-10, 10)).toBe('2.00e\u221210');
   });
 });
 

@@ -51,8 +51,12 @@ export function ticksWithin(domain: Domain, count: number): Ticks {
   return { values, decimals: Math.max(0, -Math.floor(Math.log10(step) + 1e-9)) };
 }
 
+/** Past this many decimals a tick is written with its power of ten. */
+const MOST_DECIMALS = 6;
+
 /** A tick's text: the step's decimals, a thin space between thousands, and no "-0". */
 export function tickText(v: number, decimals: number): string {
+  if (decimals > MOST_DECIMALS) return v === 0 ? '0' : v.toExponential(2).replace('e-', 'e\u2212');
   const text = v.toFixed(decimals);
   const [whole, frac] = (Number(text) === 0 ? (0).toFixed(decimals) : text).split('.');
   const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, '\u2009');

@@ -26,7 +26,9 @@ export function plotStyles(plot: PlotData): { label: string; colour: string; das
 }
 
 /** The plot as a stand-alone SVG file's text, ready to go inline in the report. */
-export function plotSvg(plot: PlotData, size = { width: PLOT_WIDTH, height: PLOT_HEIGHT }): string {
+export function plotSvg(given: PlotData, size = { width: PLOT_WIDTH, height: PLOT_HEIGHT }): string {
+  // A reference line with no value has no place on the axis: it is left out (no NaN reaches the file).
+  const plot = { ...given, rules: given.rules.filter((r) => Number.isFinite(r.value)) };
   const styles = plotStyles(plot);
   const legend: LegendEntry[] = styles.map((s) => ({
     label: s.label,
