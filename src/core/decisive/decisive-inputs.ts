@@ -8,6 +8,7 @@ import type { ModelId } from '../pipeline/model-values.ts';
 import { MODELS } from '../pipeline/models.ts';
 import { ReadTracer, type InputKey } from '../pipeline/read-tracer.ts';
 import { runRules } from '../pipeline/run-rules.ts';
+import { trialWeight } from '../pipeline/trial-weight.ts';
 import { crossChecks } from '../spec/cross-checks.ts';
 import type { SpecEntry } from '../spec/spec-entry.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
@@ -24,13 +25,10 @@ export const KEEP_PER_FINDING = 5;
 export const SCREEN = 0.1;
 /**
  * The work the whole search may do, in units of one re-run that does not
- * reach the ride model (one that does counts RIDE_WEIGHT): a work limit, not
- * a clock, so the answer does not depend on the machine or its load.
+ * reach the ride model (trial-weight.ts): a work limit, not a clock, so the
+ * answer does not depend on the machine or its load.
  */
 export const WORK_LIMIT = 1000;
-export const RIDE_WEIGHT = 10;
-/** A re-run that reaches the floor-damping tuner (many ride runs) counts this much. */
-export const TUNER_WEIGHT = 40;
 
 export interface DecisiveArgs {
   spec: CheckedSpecification;
@@ -92,7 +90,7 @@ export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; sear
     if (!key.startsWith('spec:') || crossChecks(changed.spec, changed.data).length === 0) {
       if (!staleOf.has(key)) staleOf.set(key, tracer.staleModels(new Set([key])));
       const stale = staleOf.get(key)!;
-      work += stale.has('floorDampingNeeded') ? TUNER_WEIGHT : stale.has('ride') ? RIDE_WEIGHT : 1;
+      work += trialWeight(stale);
       const seed = new Map([...a.computed].filter(([m]) => !stale.has(m) && !carriers.has(m)));
       const graph = new ModelGraph(MODELS, { ...a.inputs, ...changed }, { seed });
       const readers = rules.filter((r) => readsOf.get(r.id)!.has(key));

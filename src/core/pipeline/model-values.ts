@@ -40,6 +40,12 @@ export interface ModelValues {
   rideInput: RideInput;
   /** The ride model's cases (rough ground and the stone, each under both wheels and one; the drop test); null where it is not run (no crew, or a statics-only run). */
   ride: Record<RideCase, RideResult> | null;
+  /** The ride model's cases over routine rough ground (both wheels, one wheel); null where it is not run. */
+  rideRough: Partial<Record<RideCase, RideResult>> | null;
+  /** The ride model's cases over the stone (both wheels, one wheel); null where it is not run. */
+  rideStone: Partial<Record<RideCase, RideResult>> | null;
+  /** The ride model's drop test; null where it is not run. */
+  rideDrop: Partial<Record<RideCase, RideResult>> | null;
   /** The least floor damping ratio that meets the ride rules (the tuner); null where the ride model is not run. */
   floorDampingNeeded: DampingNeeded | null;
   /** Routine rough ground's dynamic factors (operation.rough_ground), from the ride model or, provisional, the data's routine_factor_bound. */

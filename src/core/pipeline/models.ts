@@ -11,8 +11,10 @@ import { turnModel } from '../model/turn.ts';
 import { floorDampingNeeded } from '../ride/damping-tuner.ts';
 import { groundFactors } from '../ride/dynamic-factors.ts';
 import { param } from '../data/param.ts';
-import { rideCases } from '../ride/ride-model.ts';
-import { defineModel, withInputs, type ModelDef } from './define-model.ts';
+import { someRideCases } from '../ride/ride-model.ts';
+import type { RideInput } from '../ride/ride-build.ts';
+import { RIDE_CASES, ROUTINE_CASES, STONE_CASES, type RideCase, type RideResult } from '../ride/ride-types.ts';
+import { defineModel, withInputs, type ModelDef, type ModelInputs } from './define-model.ts';
 import { COMBINATION_PARAMS } from '../model/combination-factors.ts';
 import { designFloorFactor } from '../model/cable-net/design-floor-factor.ts';
 import { ROLLING_PARAMS } from '../model/rolling-resistance.ts';
@@ -107,11 +109,28 @@ export const rideInputDef = defineModel({
   compute: ({ mass, staticCase, floorStatic, wheelStiffness }, { spec, data }) => ({ spec, data, mass, staticCase, floorStatic, wheelStiffness }),
 });
 
+/**
+ * The ride model in three parts, each run only where something reads it: the
+ * cases over rough ground (the routine factors read these alone), over the
+ * stone (the stone's factors), and the drop test. A re-run that reaches only
+ * the routine factors (a decisive trial, a sweep point) runs two cases, not five.
+ */
+const rideGroup = (cases: readonly RideCase[]) => ({ rideInput }: { readonly rideInput: RideInput }, { spec, ride }: ModelInputs) => (ride && spec.crew.length > 0 ? someRideCases(rideInput, cases) : null);
+
+export const rideRoughDef = defineModel({ id: 'rideRough', needs: ['rideInput'], params: RIDE, compute: rideGroup(ROUTINE_CASES) });
+export const rideStoneDef = defineModel({ id: 'rideStone', needs: ['rideInput'], params: RIDE, compute: rideGroup(STONE_CASES) });
+export const rideDropDef = defineModel({ id: 'rideDrop', needs: ['rideInput'], params: RIDE, compute: rideGroup(['drop']) });
+
+/** Every case of the ride model, in the order of RIDE_CASES. */
 export const rideDef = defineModel({
   id: 'ride',
-  needs: ['rideInput'],
-  params: RIDE,
-  compute: ({ rideInput }, { spec, ride }) => (ride && spec.crew.length > 0 ? rideCases(rideInput) : null),
+  needs: ['rideRough', 'rideStone', 'rideDrop'],
+  params: [],
+  compute: ({ rideRough, rideStone, rideDrop }) => {
+    if (!rideRough || !rideStone || !rideDrop) return null;
+    const all = { ...rideRough, ...rideStone, ...rideDrop };
+    return Object.fromEntries(RIDE_CASES.map((c) => [c, all[c]!])) as Record<RideCase, RideResult>;
+  },
 });
 
 export const floorDampingNeededDef = defineModel({
@@ -124,17 +143,17 @@ export const floorDampingNeededDef = defineModel({
 /** The routine rough ground's dynamic factors: a variable action in the fundamental combinations. */
 export const bumpFactorsDef = defineModel({
   id: 'bumpFactors',
-  needs: ['ride'],
+  needs: ['rideRough'],
   params: ['load-cases.routine_factor_bound'],
-  compute: ({ ride }, { data }) => groundFactors(ride, 'rough-ground', param(data, 'load-cases', 'routine_factor_bound')),
+  compute: ({ rideRough }, { data }) => groundFactors(rideRough, 'rough-ground', param(data, 'load-cases', 'routine_factor_bound')),
 });
 
 /** The stone strike's dynamic factors: an accidental action. */
 export const stoneFactorsDef = defineModel({
   id: 'stoneFactors',
-  needs: ['ride'],
+  needs: ['rideStone'],
   params: ['load-cases.stone_factor_bound'],
-  compute: ({ ride }, { data }) => groundFactors(ride, 'stone', param(data, 'load-cases', 'stone_factor_bound')),
+  compute: ({ rideStone }, { data }) => groundFactors(rideStone, 'stone', param(data, 'load-cases', 'stone_factor_bound')),
 });
 
 /**
@@ -264,7 +283,7 @@ export const draughtDef = defineModel({
 
 /** Every model, in no particular order: the graph finds the order from their needs. */
 export const MODELS: readonly ModelDef[] = [
-  massDef, loadCasesDef, staticCaseDef, turnDef, floorSetupDef, floorStaticDef, wheelStiffnessDef, rideInputDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorLoadedDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, wheelRingScanDef, cuttingDef, lashingDemandsDef,
+  massDef, loadCasesDef, staticCaseDef, turnDef, floorSetupDef, floorStaticDef, wheelStiffnessDef, rideInputDef, rideRoughDef, rideStoneDef, rideDropDef, rideDef, floorDampingNeededDef, bumpFactorsDef, stoneFactorsDef, floorLoadedDef, floorBumpDef, floorStoneDef, floorDesignDef, floorDesignRoughDef, memberCasesDef, wheelRingScanDef, cuttingDef, lashingDemandsDef,
   figuresDef, loadsDef, sceneDef, plotsDef,
   horseDef, draughtDef,
 ];

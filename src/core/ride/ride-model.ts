@@ -23,5 +23,10 @@ export function rideCaseOf(i: RideInput, which: RideCase, o: RideOptions = {}): 
 }
 
 export function rideCases(i: RideInput, o: RideOptions = {}): Record<RideCase, RideResult> {
-  return Object.fromEntries(RIDE_CASES.map((c) => [c, rideCaseOf(i, c, o)])) as Record<RideCase, RideResult>;
+  return someRideCases(i, RIDE_CASES, o) as Record<RideCase, RideResult>;
+}
+
+/** The named cases only, in the order given. */
+export function someRideCases(i: RideInput, cases: readonly RideCase[], o: RideOptions = {}): Partial<Record<RideCase, RideResult>> {
+  return Object.fromEntries(cases.map((c) => [c, rideCaseOf(i, c, o)]));
 }

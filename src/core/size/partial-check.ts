@@ -10,6 +10,7 @@ import { ReadTracer, type InputKey } from '../pipeline/read-tracer.ts';
 import { runRules } from '../pipeline/run-rules.ts';
 import type { CheckedSpecification } from '../spec/spec.types.ts';
 import { changedInputs } from './changed-inputs.ts';
+import { trialWeight } from '../pipeline/trial-weight.ts';
 
 // The whole check of a changed build at the cost of what the change reaches:
 // one traced run of every rule and output records who read what; a trial
@@ -34,8 +35,6 @@ export interface PartialCheckArgs {
   inputs: Omit<ModelInputs, 'spec' | 'data'>;
 }
 
-/** A trial's cost in units of one re-run that does not reach the ride model (the decisive search's measure). */
-export const TRIAL_WEIGHT = { plain: 1, ride: 10, tuner: 40 } as const;
 
 export class PartialCheck {
   readonly base: TrialResult;
@@ -86,7 +85,7 @@ export class PartialCheck {
     if (!this.#staleOf.has(id)) this.#staleOf.set(id, this.#tracer.staleModels(keys));
     const stale = this.#staleOf.get(id)!;
     this.trials++;
-    this.work += stale.has('floorDampingNeeded') ? TRIAL_WEIGHT.tuner : stale.has('ride') ? TRIAL_WEIGHT.ride : TRIAL_WEIGHT.plain;
+    this.work += trialWeight(stale);
     const seed = new Map([...this.#computed].filter(([m]) => !stale.has(m)));
     return { graph: new ModelGraph(MODELS, { ...this.#args.inputs, spec, data: this.#args.data }, { seed }), keys };
   }
