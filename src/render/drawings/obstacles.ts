@@ -56,16 +56,21 @@ function segmentCrossesRect(p: Pt, q: Pt, x0: number, y0: number, x1: number, y1
   if (Math.max(p[0], q[0]) < x0 || Math.min(p[0], q[0]) > x1 || Math.max(p[1], q[1]) < y0 || Math.min(p[1], q[1]) > y1) return false;
   const dx = q[0] - p[0];
   const dy = q[1] - p[1];
-  let lo = 0;
-  let hi = 1;
-  const clip = (den: number, num: number): boolean => {
-    if (den === 0) return num >= 0;
-    const t = num / den;
-    if (den < 0) lo = Math.max(lo, t);
-    else hi = Math.min(hi, t);
-    return lo <= hi;
-  };
-  return clip(-dx, p[0] - x0) && clip(dx, x1 - p[0]) && clip(-dy, p[1] - y0) && clip(dy, y1 - p[1]);
+  range[0] = 0;
+  range[1] = 1;
+  return clipEdge(-dx, p[0] - x0) && clipEdge(dx, x1 - p[0]) && clipEdge(-dy, p[1] - y0) && clipEdge(dy, y1 - p[1]);
+}
+
+/** Liang-Barsky's parameter range [lo, hi] of the segment still inside, kept here so a test allocates nothing (no closure). */
+const range = new Float64Array(2);
+
+/** Narrows the range by one edge; false once nothing of the segment is left inside. */
+function clipEdge(den: number, num: number): boolean {
+  if (den === 0) return num >= 0;
+  const t = num / den;
+  if (den < 0) range[0] = Math.max(range[0], t);
+  else range[1] = Math.min(range[1], t);
+  return range[0] <= range[1];
 }
 
 /** An arc of radius r about c from angle a0 to a1 (radians, SVG's y down), as segments. */
