@@ -4,7 +4,8 @@ import type { PointOutcome } from '../../src/core/sweep/point-outcome.ts';
 import { sweepPoints } from '../../src/core/sweep/sweep-points.ts';
 import type { SweepAxis } from '../../src/core/sweep/sweep-axis.ts';
 import { sweepPlot } from '../../src/render/sweep/sweep-plot.ts';
-import { HEAT_MARKS, heatColour } from '../../src/render/plots/heat-map-svg.ts';
+import { readFileSync } from 'node:fs';
+import { HEAT_MARKS, heatColour, NO_VALUE } from '../../src/render/plots/heat-map-svg.ts';
 import { sweepFiles } from '../../src/render/sweep/sweep-files.ts';
 
 // A made-up sweep (no check run): the load is 100 + a - b, and a point fails where a > 6.25; the outputs drawn from it.
@@ -69,5 +70,14 @@ describe('the sweep\'s outputs', () => {
     expect(md).toContain('Statics only');
     expect(files.get('sweep.html')).toContain('<svg');
     expect(files.get('sweep.csv')!.split('\n')[1]).toBe('point,a_mm (mm),b_mm (mm),verdict,worst utilisation,worst rule,worst subject,load (N),reason');
+  });
+});
+
+describe('the heat map\'s colours', () => {
+  it('are those docs/style.md names: pale blue-grey to the series blue, grey for no value', () => {
+    const style = readFileSync(new URL('../../docs/style.md', import.meta.url), 'utf8');
+    for (const c of [heatColour(0), heatColour(1), NO_VALUE]) expect(style.toLowerCase()).toContain(`\`${c.toLowerCase()}\``);
+    // Halfway is halfway in each channel (straight through sRGB).
+    expect(heatColour(0.5)).toBe('#79b4d6');
   });
 });
