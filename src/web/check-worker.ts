@@ -82,8 +82,9 @@ async function answer(m: ToWorker): Promise<void> {
     return checkLatest();
   }
   if (m.type === 'decisive') {
-    if (!lastValid) return post({ type: 'fault', id: m.id, message: 'no valid build to search yet' });
-    const r = runCheck(lastValid.spec, lastValid.entries, data, { decisive: true });
+    const p = prepareSpec(m.raw, data);
+    if (!p.ok) return post({ type: 'fault', id: m.id, message: `the build has ${p.issues.length} problem${p.issues.length === 1 ? '' : 's'} to mend before its decisive inputs can be searched` });
+    const r = runCheck(p.spec, p.entries, data, { decisive: true });
     return post({ type: 'decisive', id: m.id, inputs: r.decisive_inputs ?? [], search: r.decisive_search! });
   }
   if (m.type === 'open-workbook') {

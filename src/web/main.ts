@@ -52,10 +52,20 @@ const currentText = () => (edited ? doc.toString() : sourceText);
 const keep = () => localStorage.setItem(STORE, JSON.stringify({ name: fileName, from: origin, text: currentText() } satisfies Kept));
 
 // --- the worker ------------------------------------------------------------------
-const worker = new Worker(URL.createObjectURL(new Blob([workerSource], { type: 'text/javascript' })));
+const workerUrl = URL.createObjectURL(new Blob([workerSource], { type: 'text/javascript' }));
+const worker = new Worker(workerUrl);
 let nextId = 1;
 let latestCheck = 0;
 const ask = (m: ToWorker) => worker.postMessage(m);
+/** The decisive-input search in a worker of its own, started when first asked: its seconds of re-runs never hold an edit's check. */
+let searcher: Worker | undefined;
+const askSearcher = (m: ToWorker) => {
+  if (!searcher) {
+    searcher = new Worker(workerUrl);
+    searcher.onmessage = fromWorker;
+  }
+  searcher.postMessage(m);
+};
 
 let shown: Shown | null = null;
 let baseline: ResultView | null = null;
@@ -133,7 +143,7 @@ function drawResult(): void {
   resultHost.setAttribute('aria-busy', String(shown.stage === 'statics'));
 }
 
-worker.onmessage = (e: MessageEvent<FromWorker>) => {
+function fromWorker(e: MessageEvent<FromWorker>): void {
   const m = e.data;
   if (m.type === 'result') {
     if (m.id < latestCheck) return;
@@ -173,7 +183,8 @@ worker.onmessage = (e: MessageEvent<FromWorker>) => {
     decisiveBusy = false;
     status.textContent = `The worker could not do that: ${m.message}`;
   }
-};
+}
+worker.onmessage = fromWorker;
 
 // --- files -------------------------------------------------------------------------
 function download(name: string, mime: string, data: string | Uint8Array): void {
@@ -242,7 +253,7 @@ const toolbar = el(
   button('Find decisive inputs', 'find-decisive', () => {
     decisiveBusy = true;
     drawResult();
-    ask({ type: 'decisive', id: nextId++ });
+    askSearcher({ type: 'decisive', id: nextId++, raw: spec });
   }),
   button('Print the summary', 'print', () => window.print()),
   button('Start again from the demo', 'reset', () => load(demoText, 'demo-two-crew.yaml')),

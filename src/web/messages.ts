@@ -5,8 +5,8 @@ import type { InputIssue } from '../core/spec/input-issue.ts';
 
 export type ToWorker =
   | { type: 'check'; id: number; raw: unknown }
-  /** The decisive inputs of the last valid spec: many re-runs, so only when asked. */
-  | { type: 'decisive'; id: number }
+  /** The decisive inputs of this build: many re-runs, so only when asked (and in a worker of their own). */
+  | { type: 'decisive'; id: number; raw: unknown }
   /** The report (HTML) or the result workbook of the last full check, to download. */
   | { type: 'file'; id: number; kind: 'report' | 'workbook' }
   /** A fill-in workbook opened on the page, read here (exceljs is large). */

@@ -188,4 +188,17 @@ describe.skipIf(!browser)('the workbench in headless Chromium', () => {
       await page.emulateMedia({ media: 'screen' });
     }
   }, 30_000);
+
+  it('searches for decisive inputs beside the checks: an edit made while it searches is checked at once, and the search ends with its table', async () => {
+    await page.locator('#find-decisive').click();
+    await page.locator('#decisive [role="status"]').waitFor({ timeout: 10_000 });
+    const checked = await page.locator('body').getAttribute('data-checked');
+    const axle = await page.locator('[id="f-axle.x_mm"]').inputValue();
+    await page.locator('[id="f-axle.x_mm"]').fill(String(Number(axle) + 10));
+    await page.waitForFunction((old) => document.body.dataset.checked !== old, checked, { timeout: 30_000 });
+    // The edit's verdict arrived while the search (seconds of re-runs, in its own worker) was still running.
+    expect(await page.locator('#decisive [role="status"]').count()).toBe(1);
+    await page.locator('#decisive table').waitFor({ timeout: 120_000 });
+    expect(await page.locator('#decisive tbody tr').count()).toBeGreaterThan(0);
+  }, 180_000);
 });
