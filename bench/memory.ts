@@ -1,6 +1,8 @@
 // Peak memory of whole commands: the resident set at its highest over the
 // process's life, beside bare node's.
-// Target: `axletree check <demo> --json` under 150 MiB.
+// Target: `axletree check <demo> --json` under 150 MiB, as a user runs it
+// (with the decisive-input search, the default) and without the search (as
+// a batch with --no-decisive, or a quick look, runs it).
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -23,10 +25,16 @@ export function benchMemory(): number {
   const cwd = mkdtempSync(join(tmpdir(), 'axletree-memory-'));
   try {
     const node = peakMiB(['-e', '0'], cwd);
-    const check = Math.max(...[0, 1, 2].map(() => peakMiB([join(ROOT, 'bin', 'axletree.mjs'), 'check', join(ROOT, 'specs', 'demo-two-crew.yaml'), '--json', '--no-decisive'], cwd)));
-    const ok = check < MEMORY_TARGET_MIB;
-    console.log(`peak memory, whole processes: node -e 0 ${node.toFixed(0)} MiB; axletree check specs/demo-two-crew.yaml --json --no-decisive ${check.toFixed(0)} MiB (worst of 3, ${(check / node).toFixed(1)}x node)  target < ${MEMORY_TARGET_MIB} MiB ${verdict(ok)}`);
-    return ok ? 0 : 1;
+    console.log(`peak memory, whole processes, worst of 3: node -e 0 ${node.toFixed(0)} MiB`);
+    let missed = 0;
+    for (const extra of [[], ['--no-decisive']]) {
+      const args = ['check', join(ROOT, 'specs', 'demo-two-crew.yaml'), '--json', ...extra];
+      const peak = Math.max(...[0, 1, 2].map(() => peakMiB([join(ROOT, 'bin', 'axletree.mjs'), ...args], cwd)));
+      const ok = peak < MEMORY_TARGET_MIB;
+      if (!ok) missed++;
+      console.log(`  axletree ${['check specs/demo-two-crew.yaml --json', ...extra].join(' ').padEnd(50)} ${peak.toFixed(0).padStart(4)} MiB (${(peak / node).toFixed(1)}x node)  target < ${MEMORY_TARGET_MIB} MiB ${verdict(ok)}`);
+    }
+    return missed;
   } finally {
     rmSync(cwd, { recursive: true, force: true });
   }
