@@ -37,28 +37,6 @@ function geometry(e: BeamElement) {
   return { L, c: dx / L, s: dy / L };
 }
 
-/** The element's stiffness in its own axes (6 × 6, row-major). */
-function localStiffness(EA: number, EI: number, L: number): number[][] {
-  const a = EA / L;
-  const b = (12 * EI) / L ** 3;
-  const c = (6 * EI) / L ** 2;
-  const d = (4 * EI) / L;
-  const h = (2 * EI) / L;
-  return [
-    [a, 0, 0, -a, 0, 0],
-    [0, b, c, 0, -b, c],
-    [0, c, d, 0, -c, h],
-    [-a, 0, 0, a, 0, 0],
-    [0, -b, -c, 0, b, -c],
-    [0, c, h, 0, -c, d],
-  ];
-}
-
-/** Global end displacements to the element's own axes. */
-function toLocal(u: ArrayLike<number>, c: number, s: number): number[] {
-  return [c * u[0] + s * u[1], -s * u[0] + c * u[1], u[2], c * u[3] + s * u[4], -s * u[3] + c * u[4], u[5]];
-}
-
 /** The element's stiffness in global axes (6 × 6): Tᵀ·k·T written out, T the rotation by the element's direction (c, s). */
 export function globalStiffness(e: BeamElement): number[][] {
   const { L, c, s } = geometry(e);
@@ -81,14 +59,36 @@ export function globalStiffness(e: BeamElement): number[][] {
   ];
 }
 
-/** The element's internal forces from its end displacements in global axes [u1, v1, θ1, u2, v2, θ2]. */
-export function endForces(e: BeamElement, u: ArrayLike<number>): EndForces {
+/**
+ * The element's internal forces from its end displacements in global axes
+ * [u1, v1, θ1, u2, v2, θ2], read as u[dofs[at + k]] (the identity where no
+ * numbering is given). The rows of the local stiffness k·u_local it needs,
+ * written out term by term in the order of the 6 × 6 product, zeros included,
+ * so the sums are the product's to the last bit; a ring solve takes this for
+ * every element, so nothing is allocated but the answer.
+ */
+export function endForces(e: BeamElement, u: ArrayLike<number>, dofs?: ArrayLike<number>, at = 0): EndForces {
   const { L, c, s } = geometry(e);
-  const k = localStiffness(e.EA, e.EI, L);
-  const ul = toLocal(u, c, s);
-  const f = k.map((row) => row.reduce((acc, v, j) => acc + v * ul[j], 0));
+  const a = e.EA / L;
+  const b = (12 * e.EI) / L ** 3;
+  const cc = (6 * e.EI) / L ** 2;
+  const d = (4 * e.EI) / L;
+  const h = (2 * e.EI) / L;
+  const g = (k: number) => u[dofs ? dofs[at + k] : k];
+  // Displacements in the element's own axes.
+  const u0 = c * g(0) + s * g(1);
+  const u1 = -s * g(0) + c * g(1);
+  const u2 = g(2);
+  const u3 = c * g(3) + s * g(4);
+  const u4 = -s * g(3) + c * g(4);
+  const u5 = g(5);
+  // Rows 1, 2, 3 and 5 of k: [0, b, c, 0, −b, c], [0, c, d, 0, −c, h], [−a, 0, 0, a, 0, 0], [0, c, h, 0, −c, d].
+  const f1 = 0 + 0 * u0 + b * u1 + cc * u2 + 0 * u3 + -b * u4 + cc * u5;
+  const f2 = 0 + 0 * u0 + cc * u1 + d * u2 + 0 * u3 + -cc * u4 + h * u5;
+  const f3 = 0 + -a * u0 + 0 * u1 + 0 * u2 + a * u3 + 0 * u4 + 0 * u5;
+  const f5 = 0 + 0 * u0 + cc * u1 + h * u2 + 0 * u3 + -cc * u4 + d * u5;
   // f holds the forces the nodes put on the element. Tension pulls the end
   // node's force along +x; the end moment f[5] is sagging (tension on the -y,
   // right-hand side) and the start moment f[2] hogging.
-  return { N: f[3], V: f[1], M1: -f[2], M2: f[5] };
+  return { N: f3, V: f1, M1: -f2, M2: f5 };
 }

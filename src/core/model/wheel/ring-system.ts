@@ -135,8 +135,7 @@ export class RingSystem {
     const n = nodes.length;
     const dofs = this.#dofs;
     const forces = this.#elements.map((e, i): RingElementForces => {
-      const ue = Array.from(dofs.subarray(6 * i, 6 * i + 6), (d) => u[d]);
-      const r = endForces(e, ue);
+      const r = endForces(e, u, dofs, 6 * i);
       // Walking counter-clockwise, an element's right-hand side is the ring's outer face.
       return { N: r.N, V: r.V, M1: -r.M1, M2: -r.M2 };
     });

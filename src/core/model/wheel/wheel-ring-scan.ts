@@ -1,5 +1,5 @@
 import { nodeAt, sameAngle, wrapAngle } from './ring-mesh.ts';
-import { solveWheelRing, type WheelRingResult } from './wheel-ring.ts';
+import { HeldRingCache, solveWheelRing, type WheelRingResult } from './wheel-ring.ts';
 import type { WheelRingSpec } from './wheel-ring-spec.ts';
 
 // The wheel rolls, so every point of the rim comes to the ground: the ring is
@@ -11,7 +11,8 @@ import type { WheelRingSpec } from './wheel-ring-spec.ts';
 // With spokes that can only push and no pre-compression, the ring's answer is
 // proportional to the ground load (which spokes go slack does not depend on
 // its size), so it is solved once for a unit load and scaled; with a tyre's
-// pre-compression each load is solved on its own.
+// pre-compression each load is solved on its own (on the same mesh, tyre state
+// and factors, kept per position).
 
 export interface LoadPosition {
   /** The contact's angle in the wheel's frame, rad. */
@@ -51,14 +52,18 @@ function scaled(r: WheelRingResult, f: number): WheelRingResult {
   };
 }
 
-function solveAt(ws: WheelRingSpec, P: number, at: number, around: readonly number[]): WheelRingResult {
+function solveAt(ws: WheelRingSpec, P: number, at: number, around: readonly number[], kept?: HeldRingCache): WheelRingResult {
   const joints = ws.joints.angles.map((j) => wrapAngle(j - at));
-  return solveWheelRing(ws.ring, {
-    P,
-    spokeOffset: wrapAngle(-at),
-    hinges: ws.hinged ? joints : [],
-    nodesAt: [...joints, ...joints.flatMap((j) => around.map((d) => wrapAngle(j + d)))],
-  });
+  return solveWheelRing(
+    ws.ring,
+    {
+      P,
+      spokeOffset: wrapAngle(-at),
+      hinges: ws.hinged ? joints : [],
+      nodesAt: [...joints, ...joints.flatMap((j) => around.map((d) => wrapAngle(j + d)))],
+    },
+    kept,
+  );
 }
 
 /**
@@ -72,7 +77,9 @@ export function scanWheelRing(ws: WheelRingSpec, loads: readonly number[], aroun
     const unit = where.map((p) => ({ ...p, result: solveAt(ws, 1, p.at, around) }));
     return loads.map((P) => unit.map((p) => ({ ...p, result: scaled(p.result, P) })));
   }
-  return loads.map((P) => where.map((p) => ({ ...p, result: solveAt(ws, P, p.at, around) })));
+  // Each position's mesh, tyre state, ring and factors are kept for the loads after the first.
+  const kept = where.map(() => new HeldRingCache());
+  return loads.map((P) => where.map((p, i) => ({ ...p, result: solveAt(ws, P, p.at, around, kept[i]) })));
 }
 
 /** The node of a result at an angle of the wheel's frame. */

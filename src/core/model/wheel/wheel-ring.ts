@@ -1,5 +1,6 @@
 import { nodeAt, ringNodes, wrapAngle } from './ring-mesh.ts';
 import { RingNotHeld, solveRingFrame, type RingLoad, type RingSolution, type RingSpring } from './ring-frame.ts';
+import type { BandCholesky } from './band-cholesky.ts';
 import { RingSystem } from './ring-system.ts';
 import { searchSlackSpokes } from './slack-spokes.ts';
 
@@ -128,9 +129,9 @@ function tyreState(ring: WheelRing, nodes: readonly number[], spokeNodes: readon
  * hinged so close together that a length of rim between two spokes is a
  * mechanism) gives no numbers, only the reason, in `unsettled`.
  */
-export function solveWheelRing(ring: WheelRing, load: WheelLoad): WheelRingResult {
+export function solveWheelRing(ring: WheelRing, load: WheelLoad, kept?: HeldRingCache): WheelRingResult {
   try {
-    return solveHeldRing(ring, load);
+    return solveHeldRing(ring, load, kept);
   } catch (e) {
     if (!(e instanceof RingNotHeld)) throw e;
     const hinged = (load.hinges ?? []).length;
@@ -178,18 +179,55 @@ export function groundLoads(ring: WheelRing, P: number, contact: number, spokeNo
   return [{ node: contact, radial: -P, tangential: 0 }, ...released];
 }
 
-function solveHeldRing(ring: WheelRing, load: WheelLoad): WheelRingResult {
-  const span = (TWO_PI * ring.radius) / ring.spokes;
+/**
+ * The ring for one contact position, whatever the ground load's size: its
+ * mesh, the tyre's state, the assembled ring and a factor for each set of
+ * bearing spokes met. A scan that solves several loads at one position keeps
+ * it (HeldRingCache); every number is computed as a fresh solve computes it.
+ */
+interface HeldRing {
+  angles: number[];
+  nodes: number[];
+  spokeNodes: number[];
+  tyre: RingSolution | null;
+  system: RingSystem;
+  factorFor: (active: readonly boolean[]) => BandCholesky;
+}
+
+function heldRing(ring: WheelRing, load: WheelLoad): HeldRing {
   if ((load.hinges ?? []).length > 0 && ring.precompression > 0) throw new Error('a pre-compressed tyre ties the felloe joints: the ring has no hinges');
   const { angles, hingeAngles, nodes } = wheelMesh(ring, load);
   const spokeNodes = angles.map((a) => nodeAt(nodes, a));
   const hinges = hingeAngles.map((a) => nodeAt(nodes, a));
   const tyre = tyreState(ring, nodes, spokeNodes);
-  const n = nodes.length;
   const system = wheelSystem(ring, nodes, spokeNodes, hinges);
+  const factors = new Map<string, BandCholesky>();
+  return {
+    angles, nodes, spokeNodes, tyre, system,
+    factorFor: (active) => {
+      const key = active.map((a) => (a ? '1' : '0')).join('');
+      let K = factors.get(key);
+      if (!K) factors.set(key, (K = system.factorWith(bearingSprings(ring, spokeNodes, active))));
+      return K;
+    },
+  };
+}
+
+/** The ring of one contact position kept while loads of several sizes are solved at it (wheel-ring-scan.ts). */
+export class HeldRingCache {
+  #held: HeldRing | undefined;
+  get(ring: WheelRing, load: WheelLoad): HeldRing {
+    return (this.#held ??= heldRing(ring, load));
+  }
+}
+
+function solveHeldRing(ring: WheelRing, load: WheelLoad, kept?: HeldRingCache): WheelRingResult {
+  const span = (TWO_PI * ring.radius) / ring.spokes;
+  const { angles, nodes, spokeNodes, tyre, system, factorFor } = kept ? kept.get(ring, load) : heldRing(ring, load);
+  const n = nodes.length;
   const end = searchSlackSpokes({
     nodes, spokeNodes, k: ring.spokeStiffness, C0: ring.precompression, P: load.P, limit: 4 * ring.spokes,
-    solve: (active) => system.factorWith(bearingSprings(ring, spokeNodes, active)).solve(system.loadVector(groundLoads(ring, load.P, 0, spokeNodes, active))),
+    solve: (active) => factorFor(active).solve(system.loadVector(groundLoads(ring, load.P, 0, spokeNodes, active))),
   });
   const { active, would, u } = end;
   const sol = system.solution(u, bearingSprings(ring, spokeNodes, active));
