@@ -74,14 +74,15 @@ export function endForces(e: BeamElement, u: ArrayLike<number>, dofs?: ArrayLike
   const cc = (6 * e.EI) / L ** 2;
   const d = (4 * e.EI) / L;
   const h = (2 * e.EI) / L;
-  const g = (k: number) => u[dofs ? dofs[at + k] : k];
+  const g0 = u[dofs ? dofs[at] : 0], g1 = u[dofs ? dofs[at + 1] : 1], g2 = u[dofs ? dofs[at + 2] : 2];
+  const g3 = u[dofs ? dofs[at + 3] : 3], g4 = u[dofs ? dofs[at + 4] : 4], g5 = u[dofs ? dofs[at + 5] : 5];
   // Displacements in the element's own axes.
-  const u0 = c * g(0) + s * g(1);
-  const u1 = -s * g(0) + c * g(1);
-  const u2 = g(2);
-  const u3 = c * g(3) + s * g(4);
-  const u4 = -s * g(3) + c * g(4);
-  const u5 = g(5);
+  const u0 = c * g0 + s * g1;
+  const u1 = -s * g0 + c * g1;
+  const u2 = g2;
+  const u3 = c * g3 + s * g4;
+  const u4 = -s * g3 + c * g4;
+  const u5 = g5;
   // Rows 1, 2, 3 and 5 of k: [0, b, c, 0, −b, c], [0, c, d, 0, −c, h], [−a, 0, 0, a, 0, 0], [0, c, h, 0, −c, d].
   const f1 = 0 + 0 * u0 + b * u1 + cc * u2 + 0 * u3 + -b * u4 + cc * u5;
   const f2 = 0 + 0 * u0 + cc * u1 + d * u2 + 0 * u3 + -cc * u4 + h * u5;

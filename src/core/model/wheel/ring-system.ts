@@ -31,7 +31,13 @@ function numbering(n: number, hinges: readonly number[]) {
   const dofs = new Int32Array(6 * n);
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
-    dofs.set([3 * i, 3 * i + 1, 3 * i + 2, 3 * j, 3 * j + 1, endRotation[j]], 6 * i);
+    const o = 6 * i;
+    dofs[o] = 3 * i;
+    dofs[o + 1] = 3 * i + 1;
+    dofs[o + 2] = 3 * i + 2;
+    dofs[o + 3] = 3 * j;
+    dofs[o + 4] = 3 * j + 1;
+    dofs[o + 5] = endRotation[j];
   }
   return { size, place, dofs };
 }

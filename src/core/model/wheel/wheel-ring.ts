@@ -231,9 +231,9 @@ function solveHeldRing(ring: WheelRing, load: WheelLoad, kept?: HeldRingCache): 
   });
   const { active, would, u } = end;
   const sol = system.solution(u, bearingSprings(ring, spokeNodes, active));
-  const el = (j: number, which: 'N' | 'V') => (s: RingSolution | null) => (s ? s.elements[j][which] : 0);
-  const elN = (j: number) => el(j, 'N')(sol) + el(j, 'N')(tyre);
-  const elV = (j: number) => el(j, 'V')(sol) + el(j, 'V')(tyre);
+  // Each element's axial and shear force, the tyre's state added where there is one.
+  const elN = (j: number) => sol.elements[j].N + (tyre ? tyre.elements[j].N : 0);
+  const elV = (j: number) => sol.elements[j].V + (tyre ? tyre.elements[j].V : 0);
   const moment = sol.moment.map((m, j) => m + (tyre ? tyre.moment[j] : 0));
   const hoop = nodes.map((_, j) => (elN((j - 1 + n) % n) + elN(j)) / 2);
   const shear = nodes.map((_, j) => Math.max(Math.abs(elV((j - 1 + n) % n)), Math.abs(elV(j))));
