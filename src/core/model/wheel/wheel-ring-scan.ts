@@ -67,6 +67,33 @@ function solveAt(ws: WheelRingSpec, P: number, at: number, around: readonly numb
 }
 
 /**
+ * What the last few wheels' scans kept, by the values they read (the ring,
+ * its joints, whether they are hinged, the extra nodes): a check re-run with
+ * a changed load, crew or frame (a decisive-input trial, a sweep point, a
+ * workbench edit) leaves the wheel alone and takes what was computed for it.
+ * Without pre-compression that is the unit-load scan itself (kept results
+ * are never changed: each load scales a copy); with it, each position's ring
+ * and factors (about a megabyte a wheel, so fewer are kept), on which each
+ * load is solved afresh. The most recently used are kept.
+ */
+const unitScans = new Map<string, LoadPosition[]>();
+const heldScans = new Map<string, HeldRingCache[]>();
+const UNIT_SCANS_KEPT = 16;
+const HELD_SCANS_KEPT = 4;
+
+function kept<T>(memo: Map<string, T>, most: number, ws: WheelRingSpec, around: readonly number[], make: () => T): T {
+  // Numbers as their own text, so NaN and Infinity keep keys of their own.
+  const key = JSON.stringify([ws.ring, ws.joints.angles, ws.joints.representatives, ws.hinged, around], (_, v: unknown) => (typeof v === 'number' ? String(v) : v));
+  let got = memo.get(key);
+  if (got === undefined) got = make();
+  // Last used last: the first is the one to let go.
+  memo.delete(key);
+  memo.set(key, got);
+  if (memo.size > most) memo.delete(memo.keys().next().value!);
+  return got;
+}
+
+/**
  * The ring at every contact position, for each ground load in `loads` (N).
  * `around`: angles either side of each joint (rad, signed) that must be nodes,
  * e.g. the ends of the length over which a joint weakens the felloe.
@@ -74,12 +101,12 @@ function solveAt(ws: WheelRingSpec, P: number, at: number, around: readonly numb
 export function scanWheelRing(ws: WheelRingSpec, loads: readonly number[], around: readonly number[] = []): LoadPosition[][] {
   const where = positions(ws);
   if (ws.ring.precompression === 0) {
-    const unit = where.map((p) => ({ ...p, result: solveAt(ws, 1, p.at, around) }));
+    const unit = kept(unitScans, UNIT_SCANS_KEPT, ws, around, () => where.map((p) => ({ ...p, result: solveAt(ws, 1, p.at, around) })));
     return loads.map((P) => unit.map((p) => ({ ...p, result: scaled(p.result, P) })));
   }
   // Each position's mesh, tyre state, ring and factors are kept for the loads after the first.
-  const kept = where.map(() => new HeldRingCache());
-  return loads.map((P) => where.map((p, i) => ({ ...p, result: solveAt(ws, P, p.at, around, kept[i]) })));
+  const held = kept(heldScans, HELD_SCANS_KEPT, ws, around, () => where.map(() => new HeldRingCache()));
+  return loads.map((P) => where.map((p, i) => ({ ...p, result: solveAt(ws, P, p.at, around, held[i]) })));
 }
 
 /** The node of a result at an angle of the wheel's frame. */
