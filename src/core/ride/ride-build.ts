@@ -99,6 +99,11 @@ export function floorDampingOf(i: RideInput): { value: number; source: string } 
 const envelopes = new Map<string, Envelope>();
 const ENVELOPES_KEPT = 32;
 
+/** Lets the kept envelopes go (pipeline/kept-values.ts). */
+export function forgetKeptEnvelopes(): void {
+  envelopes.clear();
+}
+
 function envelopeOf(bump: Bump, r: number): Envelope {
   const key = `${bump.height} ${bump.length} ${r}`;
   let env = envelopes.get(key);

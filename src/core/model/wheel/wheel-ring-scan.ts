@@ -81,6 +81,12 @@ const heldScans = new Map<string, HeldRingCache[]>();
 const UNIT_SCANS_KEPT = 16;
 const HELD_SCANS_KEPT = 4;
 
+/** Lets every kept scan go (pipeline/kept-values.ts). */
+export function forgetKeptScans(): void {
+  unitScans.clear();
+  heldScans.clear();
+}
+
 function kept<T>(memo: Map<string, T>, most: number, ws: WheelRingSpec, around: readonly number[], make: () => T): T {
   // Numbers as their own text, so NaN and Infinity keep keys of their own.
   const key = JSON.stringify([ws.ring, ws.joints.angles, ws.joints.representatives, ws.hinged, around], (_, v: unknown) => (typeof v === 'number' ? String(v) : v));
