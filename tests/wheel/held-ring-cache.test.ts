@@ -5,6 +5,8 @@
 // assembly and factor every round), every number must be the same to the
 // last bit: the kept ring computes nothing differently, it only computes it
 // once. (The model itself is checked in tests/wheel/wheel-ring.test.ts.)
+// The pre-compressions (200 and 800 N a spoke) and the load multiples are
+// test inputs of our own, chosen so spokes go slack; no figure of the trade.
 import { describe, expect, it } from 'vitest';
 import { Analysis } from '../support/analysis.ts';
 import { prepared, readDemo, rulesData } from '../support/fixtures.ts';

@@ -2,7 +2,9 @@
 // later scan of an equal wheel (another object, as a re-run check builds it)
 // with other loads takes what was computed, and gives what a fresh solve at
 // each position gives, bit for bit; a wheel that differs in any value gets a
-// scan of its own.
+// scan of its own. The pre-compression (300 N a spoke), the doubled felloe
+// stiffness and the load multiples are test inputs of our own, not figures of
+// the trade; the model itself is checked in tests/wheel/wheel-ring.test.ts.
 import { describe, expect, it } from 'vitest';
 import { Analysis } from '../support/analysis.ts';
 import { prepared, readDemo, rulesData } from '../support/fixtures.ts';
