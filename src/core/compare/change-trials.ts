@@ -80,7 +80,8 @@ export class BaselineTrials {
     const keys = new Set([...this.#all].filter((k) => changes.some((c) => touches(k, c.path))));
     const stale = this.#tracer.staleModels(keys);
     const seed = new Map([...this.#computed].filter(([m]) => !stale.has(m)));
-    const graph = new ModelGraph(MODELS, { ...this.inputs, spec, data: this.data }, { seed });
+    // A trial's ride is judged, never drawn: its cases keep no time series.
+    const graph = new ModelGraph(MODELS, { ...this.inputs, spec, data: this.data, rideSeries: false }, { seed });
     return {
       findings: new Map(runRules(this.rules, spec, this.data, graph).map((f) => [findingKey(f), f])),
       figures: splitFigures(graph.get('figures')).figures,

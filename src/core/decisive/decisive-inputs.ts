@@ -92,7 +92,8 @@ export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; sear
       const stale = staleOf.get(key)!;
       work += trialWeight(stale);
       const seed = new Map([...a.computed].filter(([m]) => !stale.has(m) && !carriers.has(m)));
-      const graph = new ModelGraph(MODELS, { ...a.inputs, ...changed }, { seed });
+      // No output draws a trial's ride: its cases keep no time series.
+      const graph = new ModelGraph(MODELS, { ...a.inputs, ...changed, rideSeries: false }, { seed });
       const readers = rules.filter((r) => readsOf.get(r.id)!.has(key));
       out = new Map(runRules(readers, changed.spec, changed.data, graph).map((f) => [findingKey(f), f]));
     }

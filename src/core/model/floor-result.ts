@@ -9,7 +9,7 @@ export interface CrewOnFloor {
   sag_mm: number;
   /** Load over sag, N/mm. */
   secantStiffness_N_per_mm: number;
-  /** d(load)/d(sag) at this load, N/mm. */
+  /** d(load)/d(sag) at this load, N/mm; NaN where the state was solved without it (a check's loaded states: only the standing floor's is read). */
   tangentStiffness_N_per_mm: number;
   /** 'patch' where the centre of the foot patch is over the frame and the sag is the load-weighted mean under the patch instead. */
   sagRead?: 'patch';

@@ -11,6 +11,8 @@ export interface ModelInputs {
   lp?: LpSolver;
   /** False for a statics-only run: the ride model is not started and the bump factors are the data's bound. */
   ride: boolean;
+  /** False where no output will draw the ride's time series (a decisive trial): the ride cases keep none. */
+  rideSeries?: boolean;
 }
 
 /** The models a function names, with the specification and the data: what an output reads. */

@@ -115,7 +115,10 @@ export const rideInputDef = defineModel({
  * stone (the stone's factors), and the drop test. A re-run that reaches only
  * the routine factors (a decisive trial, a sweep point) runs two cases, not five.
  */
-const rideGroup = (cases: readonly RideCase[]) => ({ rideInput }: { readonly rideInput: RideInput }, { spec, ride }: ModelInputs) => (ride && spec.crew.length > 0 ? someRideCases(rideInput, cases) : null);
+const rideGroup =
+  (cases: readonly RideCase[]) =>
+  ({ rideInput }: { readonly rideInput: RideInput }, { spec, ride, rideSeries }: ModelInputs) =>
+    ride && spec.crew.length > 0 ? someRideCases(rideInput, cases, rideSeries === false ? { series: false } : {}) : null;
 
 export const rideRoughDef = defineModel({ id: 'rideRough', needs: ['rideInput'], params: RIDE, compute: rideGroup(ROUTINE_CASES) });
 export const rideStoneDef = defineModel({ id: 'rideStone', needs: ['rideInput'], params: RIDE, compute: rideGroup(STONE_CASES) });
@@ -166,7 +169,9 @@ export const floorLoadedDef = defineModel({
   needs: ['bumpFactors', 'stoneFactors', 'floorSetup'],
   params: [...FLOOR, ...COMBINATION_PARAMS],
   compute: ({ bumpFactors, stoneFactors, floorSetup }, { spec, data }) => {
-    const [bump, stone, design, designRough] = floorModels(spec, data, [bumpFactors.crew, stoneFactors.crew, designFloorFactor(data, null), designFloorFactor(data, bumpFactors.crew)], {}, floorSetup);
+    // Nothing reads a loaded state's tangent under the crew (the ride model's spring is the standing floor's): not computed.
+    const factors = [bumpFactors.crew, stoneFactors.crew, designFloorFactor(data, null), designFloorFactor(data, bumpFactors.crew)];
+    const [bump, stone, design, designRough] = floorModels(spec, data, factors, { crewTangent: false }, floorSetup);
     return { bump, stone, design, designRough };
   },
 });

@@ -43,6 +43,8 @@ export interface RideOptions {
   tolerance?: number;
   /** Ends the run early (the tuner's short runs). */
   enough?: Enough;
+  /** False: the time series is not kept (nobody will draw it: a decisive trial); the peaks read the same points. */
+  series?: boolean;
 }
 
 export interface BuiltRide {

@@ -15,6 +15,7 @@ export function runSettings(i: RideInput, which: RideCase, o: RideOptions = {}):
     title: rideTitle(which),
     ...(o.tolerance !== undefined ? { tolerance: o.tolerance } : {}),
     ...(o.enough ? { enough: o.enough } : {}),
+    ...(o.series === false ? { series: false } : {}),
   };
 }
 

@@ -22,6 +22,8 @@ export interface RunSettings {
   maxSteps?: number;
   /** Ends the run early once it returns true, given each crew member's turning points so far and the first wheel contact (a short run for the tuner). */
   enough?: Enough;
+  /** False: the samples are read for the peaks as always, but no time series is kept (its result's series is empty). */
+  series?: boolean;
   title: string;
 }
 
@@ -134,8 +136,10 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
     yokeMax.add(t, forces.yoke);
     yokeLow.add(t, -forces.yoke);
   };
+  const keep = s.series !== false;
   const sample = (t: number, y: ArrayLike<number>) => {
     record(t, y);
+    if (!keep) return;
     t_s.push(t);
     // Plain loops: a sample is taken every few steps.
     for (let i = 0; i < n; i++) {
@@ -214,7 +218,7 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
     decayCycles: anyNever ? null : Math.max(...decays.map((d) => d.cycles!)),
     method: `Dormand-Prince 5(4) with its dense output, adaptive step (relative tolerance ${tolerance}, absolute ${tolerance * 1e-3} m and m/s; ${stats.steps} steps accepted, ${stats.rejected} rejected or cut back, ${stats.evaluations} evaluations), every contact opening and closing located on the dense output to 1 ns and the step ended there (${stats.events} events); series and peaks read from the dense output${shortRun}`,
     steps: stats.steps,
-    series: { t_s, channels: [...crewCh.flat(), ...wheelCh.flat(), yokeCh] },
+    series: keep ? { t_s, channels: [...crewCh.flat(), ...wheelCh.flat(), yokeCh] } : { t_s: [], channels: [] },
     floorDamping: b.floorDamping,
     working: b.working,
     sources: b.sources,

@@ -87,7 +87,8 @@ export class PartialCheck {
     this.trials++;
     this.work += trialWeight(stale);
     const seed = new Map([...this.#computed].filter(([m]) => !stale.has(m)));
-    return { graph: new ModelGraph(MODELS, { ...this.#args.inputs, spec, data: this.#args.data }, { seed }), keys };
+    // A trial's ride is judged, never drawn: its cases keep no time series.
+    return { graph: new ModelGraph(MODELS, { ...this.#args.inputs, spec, data: this.#args.data, rideSeries: false }, { seed }), keys };
   }
 }
 

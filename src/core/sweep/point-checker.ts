@@ -150,7 +150,8 @@ export function pointChecker(raw: unknown, data: RulesData, paths: readonly KeyP
       else toKeep.set(id, key);
     }
     const pointTracer = new ReadTracer();
-    const g = new ModelGraph(MODELS, inputs(spec), { seed, tracer: pointTracer });
+    // A point's ride is judged and summed up, never drawn: its cases keep no time series.
+    const g = new ModelGraph(MODELS, { ...inputs(spec), rideSeries: false }, { seed, tracer: pointTracer });
     const results = RULES.map((rule, i): RuleResult => {
       const list = read[modelKeys.size + i];
       const key = reuseKey(list, spec);

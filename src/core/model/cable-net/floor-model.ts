@@ -33,6 +33,11 @@ export interface FloorOptions {
   refine?: number;
   anchors?: 'coupled' | 'fixed';
   arcStepDeg?: number;
+  /**
+   * False: each crew member's tangent stiffness is left unknown (NaN), saving a coupled solve per person and state.
+   * Only the standing floor's is read (the ride model's spring, floor.stiffness), so the check's loaded states skip it.
+   */
+  crewTangent?: boolean;
 }
 
 /** The solver's tolerance, step limit and node limit from rules/parameters/floor.yaml, for this applied load. */
@@ -127,7 +132,7 @@ export function floorModels(spec: CheckedSpecification, data: RulesData, factors
     const start = below ?? { sag: solveNet(floor.net, loads, { tolerance_N: START_FRACTION * Math.max(head.appliedLoad_N, 1), maxIterations }, undefined, K).sag, pulls: rest.pulls };
     const sol = solveCoupled(floor.net, loads, F, settings, start, workspace);
     if (sol.converged) below = sol;
-    out[i] = floorState(spec, floor, head, crew, sol, rest, F, workspace, restFrame(frame.solve(sol.pulls)));
+    out[i] = floorState(spec, floor, head, crew, sol, rest, F, workspace, restFrame(frame.solve(sol.pulls)), options.crewTangent ?? true);
   }
   return out;
 }
@@ -135,7 +140,7 @@ export function floorModels(spec: CheckedSpecification, data: RulesData, factors
 /** The rigid-anchor start is solved to this fraction of the load: a start, not a result. */
 const START_FRACTION = 1e-3;
 
-function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead, crew: Loaded[], sol: CoupledSolution, rest: CoupledSolution, F: Float64Array, workspace: Required<CoupledWorkspace>, frame: FloorFrameResult): FloorModel {
+function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead, crew: Loaded[], sol: CoupledSolution, rest: CoupledSolution, F: Float64Array, workspace: Required<CoupledWorkspace>, frame: FloorFrameResult, crewTangent: boolean): FloorModel {
   const s = spec.floor_straps;
   // Tensions at the plan lengths the anchors' movement left.
   const T = tensions(floor.net, sol.sag, sol.flats);
@@ -152,7 +157,7 @@ function floorState(spec: CheckedSpecification, floor: FloorNet, head: FloorHead
     maxTension_N,
     maxTensionAt: T.length ? describeSegment(floor.net, worst) : 'no straps',
     maxStress_MPa: maxTension_N / (s.width_mm * s.thickness_mm),
-    crew: crewResults(floor, sol.sag, crew, coupledCompliance(floor.net, sol, F, workspace.matrix, workspace.coupling)),
+    crew: crewResults(floor, sol.sag, crew, crewTangent ? coupledCompliance(floor.net, sol, F, workspace.matrix, workspace.coupling) : null),
     rails: strapPulls(floor, sol.pulls),
     reactionSum_N: reactionSum(floor.net, sol.sag, T, sol.flats),
     nodes: floor.net.nodes.length,
