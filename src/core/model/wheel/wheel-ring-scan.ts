@@ -1,6 +1,7 @@
 import { nodeAt, sameAngle, wrapAngle } from './ring-mesh.ts';
 import { HeldRingCache, solveWheelRing, type WheelRingResult } from './wheel-ring.ts';
 import type { WheelRingSpec } from './wheel-ring-spec.ts';
+import { keptByRing, ringMemo } from './kept-by-ring.ts';
 
 // The wheel rolls, so every point of the rim comes to the ground: the ring is
 // solved with the contact midway between two spokes, under a spoke, and at
@@ -67,37 +68,14 @@ function solveAt(ws: WheelRingSpec, P: number, at: number, around: readonly numb
 }
 
 /**
- * What the last few wheels' scans kept, by the values they read (the ring,
- * its joints, whether they are hinged, the extra nodes): a check re-run with
- * a changed load, crew or frame (a decisive-input trial, a sweep point, a
- * workbench edit) leaves the wheel alone and takes what was computed for it.
- * Without pre-compression that is the unit-load scan itself (kept results
- * are never changed: each load scales a copy); with it, each position's ring
- * and factors (about a megabyte a wheel, so fewer are kept), on which each
- * load is solved afresh. The most recently used are kept.
+ * What the last few wheels' scans kept, by the values they read (kept-by-ring.ts,
+ * with the extra nodes): without pre-compression the unit-load scan itself
+ * (kept results are never changed: each load scales a copy); with it, each
+ * position's ring and factors (about a megabyte a wheel, so fewer are kept),
+ * on which each load is solved afresh.
  */
-const unitScans = new Map<string, LoadPosition[]>();
-const heldScans = new Map<string, HeldRingCache[]>();
-const UNIT_SCANS_KEPT = 16;
-const HELD_SCANS_KEPT = 4;
-
-/** Lets every kept scan go (pipeline/kept-values.ts). */
-export function forgetKeptScans(): void {
-  unitScans.clear();
-  heldScans.clear();
-}
-
-function kept<T>(memo: Map<string, T>, most: number, ws: WheelRingSpec, around: readonly number[], make: () => T): T {
-  // Numbers as their own text, so NaN and Infinity keep keys of their own.
-  const key = JSON.stringify([ws.ring, ws.joints.angles, ws.joints.representatives, ws.hinged, around], (_, v: unknown) => (typeof v === 'number' ? String(v) : v));
-  let got = memo.get(key);
-  if (got === undefined) got = make();
-  // Last used last: the first is the one to let go.
-  memo.delete(key);
-  memo.set(key, got);
-  if (memo.size > most) memo.delete(memo.keys().next().value!);
-  return got;
-}
+const unitScans = ringMemo<LoadPosition[]>(16);
+const heldScans = ringMemo<HeldRingCache[]>(4);
 
 /**
  * The ring at every contact position, for each ground load in `loads` (N).
@@ -107,11 +85,11 @@ function kept<T>(memo: Map<string, T>, most: number, ws: WheelRingSpec, around: 
 export function scanWheelRing(ws: WheelRingSpec, loads: readonly number[], around: readonly number[] = []): LoadPosition[][] {
   const where = positions(ws);
   if (ws.ring.precompression === 0) {
-    const unit = kept(unitScans, UNIT_SCANS_KEPT, ws, around, () => where.map((p) => ({ ...p, result: solveAt(ws, 1, p.at, around) })));
+    const unit = keptByRing(unitScans, ws, around, () => where.map((p) => ({ ...p, result: solveAt(ws, 1, p.at, around) })));
     return loads.map((P) => unit.map((p) => ({ ...p, result: scaled(p.result, P) })));
   }
   // Each position's mesh, tyre state, ring and factors are kept for the loads after the first.
-  const held = kept(heldScans, HELD_SCANS_KEPT, ws, around, () => where.map(() => new HeldRingCache()));
+  const held = keptByRing(heldScans, ws, around, () => where.map(() => new HeldRingCache()));
   return loads.map((P) => where.map((p, i) => ({ ...p, result: solveAt(ws, P, p.at, around, held[i]) })));
 }
 

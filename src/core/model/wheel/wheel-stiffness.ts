@@ -1,6 +1,7 @@
 import { formatNumber as fmt } from '../../format/number-format.ts';
 import { RimGiveScan } from './rim-give.ts';
 import type { WheelRingSpec } from './wheel-ring-spec.ts';
+import { keptByRing, ringMemo } from './kept-by-ring.ts';
 
 // The wheel's own radial stiffness from its ring frame (design basis,
 // section 8): the felloe bending between the spokes and the spokes' axial
@@ -10,6 +11,14 @@ import type { WheelRingSpec } from './wheel-ring-spec.ts';
 // than a spoke span, so the wheel rolls over it through every position: the
 // compliance averaged over the rim stands for it. A short stone, or the drop,
 // may meet the rim anywhere: the stiffest position, the safe side.
+//
+// With spokes that can only push and no pre-compression the ring's give is
+// proportional to the ground load (which spokes go slack does not depend on
+// its size), so its stiffness does not depend on the load: it is found for a
+// unit load and kept by the ring it was found for (kept-by-ring.ts), so a
+// re-run that changes only the load (a crew member's weight or place, the
+// axle's position) takes it again. With a tyre's pre-compression it is found
+// at the load itself.
 
 /** Positions sampled across each spoke span. */
 const PER_SPAN = 8;
@@ -24,8 +33,16 @@ export interface WheelStiffness {
   working: string;
 }
 
+/** Stiffnesses of the last few wheels without pre-compression (found at a unit load), by their rings. */
+const unitStiffness = ringMemo<WheelStiffness>(16);
+
 /** `P` the ground load on the wheel, N (the standing one): with a tyre's pre-compression the ring's give depends on it. */
 export function wheelStiffness(ws: WheelRingSpec, P: number): WheelStiffness {
+  return ws.ring.precompression === 0 ? keptByRing(unitStiffness, ws, null, () => stiffnessAt(ws, 1)) : stiffnessAt(ws, P);
+}
+
+/** The stiffness from the rim's give under the ground load P, N, at every position scanned. */
+function stiffnessAt(ws: WheelRingSpec, P: number): WheelStiffness {
   const n = ws.ring.spokes;
   const count = ws.hinged || ws.ring.precompression > 0 ? n * PER_SPAN : PER_SPAN;
   const compliances: number[] = [];
