@@ -2,7 +2,7 @@ import { G } from '../units/units.ts';
 import type { BuiltRide } from './ride-build.ts';
 import { decayCycles, TurningPoints, type Enough } from './decay.ts';
 import { integrate, type DenseOutput } from './integrate.ts';
-import { PeakTracker } from './peak-tracker.ts';
+import { PeakSet } from './peak-set.ts';
 import { anyWheelPushes, contactMode, crewShut, derivative, newForces, stateSize, wheelShut } from './ride-system.ts';
 import type { RideChannel, RideResult, RideCase } from './ride-types.ts';
 import { staticEquilibrium } from './static-equilibrium.ts';
@@ -108,11 +108,13 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
   const wheelCount = sys.wheels.length;
 
   const crewStatic = sys.crew.map((_, i) => rest.y[3 + i]);
-  const peaks = () => sys.crew.map(() => new PeakTracker());
-  const crewRise = peaks(), crewLift = peaks(), crewPeak = peaks();
+  // The peaks recorded together, one quantity each: every crew member's rise, lift and floor force, every wheel's
+  // ground force, and the yoke force up and down.
+  const RISE = 0, LIFT = n, FLOOR = 2 * n, WHEEL = 3 * n, YOKE = 3 * n + wheelCount, YOKE_LOW = YOKE + 1;
+  const peaks = new PeakSet(YOKE_LOW + 1);
+  const seen = peaks.value, peak = peaks.max;
   const crewAir = sys.crew.map(() => 0);
-  const wheelAir = sys.wheels.map(() => 0), wheelPeak = sys.wheels.map(() => new PeakTracker());
-  const yokeMax = new PeakTracker(), yokeLow = new PeakTracker();
+  const wheelAir = sys.wheels.map(() => 0);
   let firstContact = b.drop > 0 ? NaN : b.inputEnd;
   const turning = sys.crew.map((_, i) => new TurningPoints(crewStatic[i], 3 + i, N + 3 + i));
   const turningPoints = turning.map((tp) => tp.points);
@@ -128,13 +130,14 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
     derivative(sys, t, y, dyScratch, forces);
     for (let i = 0; i < n; i++) {
       const c = sys.crew[i];
-      crewRise[i].add(t, y[3 + i] - crewStatic[i]);
-      crewLift[i].add(t, y[3 + i] - (y[0] + (c.x - sys.body.x) * y[1] + (c.y - sys.body.y) * y[2]));
-      crewPeak[i].add(t, forces.crew[i]);
+      seen[RISE + i] = y[3 + i] - crewStatic[i];
+      seen[LIFT + i] = y[3 + i] - (y[0] + (c.x - sys.body.x) * y[1] + (c.y - sys.body.y) * y[2]);
+      seen[FLOOR + i] = forces.crew[i];
     }
-    for (let i = 0; i < wheelCount; i++) wheelPeak[i].add(t, forces.wheel[i]);
-    yokeMax.add(t, forces.yoke);
-    yokeLow.add(t, -forces.yoke);
+    for (let i = 0; i < wheelCount; i++) seen[WHEEL + i] = forces.wheel[i];
+    seen[YOKE] = forces.yoke;
+    seen[YOKE_LOW] = -forces.yoke;
+    peaks.add(t);
   };
   const keep = s.series !== false;
   const sample = (t: number, y: ArrayLike<number>) => {
@@ -196,7 +199,7 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
   );
 
   if (stats.stopped) return notRun(b, which, s.title, stats.stopped);
-  const rises = crewRise.map((p, i) => Math.max(0, p.max, ...turningPoints[i].map((q) => q.z)));
+  const rises = sys.crew.map((_, i) => Math.max(0, peak[RISE + i], ...turningPoints[i].map((q) => q.z)));
   const decays = turning.map((tp) => decayCycles(tp.points, s.decayFraction, Number.isNaN(firstContact) ? Infinity : firstContact));
   const anyNever = decays.some((d) => d.cycles === null);
   const shortRun = stats.t < s.duration - 1e-9 ? `, ended at ${stats.t.toFixed(3)} s once the decay was decided` : '';
@@ -207,13 +210,13 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
       role: c.role,
       rise_mm: rises[i] * 1e3,
       airborne_ms: crewAir[i] * 1e3,
-      floor_dlf: crewPeak[i].max / (c.m * G),
-      lift_mm: Math.max(0, crewLift[i].max) * 1e3,
+      floor_dlf: peak[FLOOR + i] / (c.m * G),
+      lift_mm: Math.max(0, peak[LIFT + i]) * 1e3,
       decay_cycles: decays[i].cycles,
     })),
-    wheels: sys.wheels.map((w, i) => ({ wheel: w.side, airborne_ms: wheelAir[i] * 1e3, dlf: wheelPeak[i].max / rest.forces.wheel[i] })),
-    yokeForceMin_N: -yokeLow.max,
-    yokeForceMax_N: yokeMax.max,
+    wheels: sys.wheels.map((w, i) => ({ wheel: w.side, airborne_ms: wheelAir[i] * 1e3, dlf: peak[WHEEL + i] / rest.forces.wheel[i] })),
+    yokeForceMin_N: -peak[YOKE_LOW],
+    yokeForceMax_N: peak[YOKE],
     yokeForceStatic_N: rest.forces.yoke,
     decayCycles: anyNever ? null : Math.max(...decays.map((d) => d.cycles!)),
     method: `Dormand-Prince 5(4) with its dense output, adaptive step (relative tolerance ${tolerance}, absolute ${tolerance * 1e-3} m and m/s; ${stats.steps} steps accepted, ${stats.rejected} rejected or cut back, ${stats.evaluations} evaluations), every contact opening and closing located on the dense output to 1 ns and the step ended there (${stats.events} events); series and peaks read from the dense output${shortRun}`,
