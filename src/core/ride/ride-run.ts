@@ -22,7 +22,7 @@ export interface RunSettings {
   maxSteps?: number;
   /** Ends the run early once it returns true, given each crew member's turning points so far and the first wheel contact (a short run for the tuner). */
   enough?: Enough;
-  /** False: the samples are read for the peaks as always, but no time series is kept (its result's series is empty). */
+  /** False: no time series is kept and no sample taken (the result's series is empty); the peaks never read the samples. */
   series?: boolean;
   title: string;
 }
@@ -56,10 +56,11 @@ export const MAX_RIDE_STEPS = 200_000;
 
 /**
  * Points at which each accepted step is read for the peaks: two inside, on
- * the dense output, and its end. With the parabola through a peak's
- * neighbours (peak-tracker.ts) this keeps the peak wheel force of the
- * demonstration builds' drop and stone strikes within 0.04 % of odex at
- * 1e-10 at every tolerance from 1e-4 down; the end alone left 0.1-1 %.
+ * the dense output, and its end (the plots' samples are not read for them).
+ * With the parabola through a peak's neighbours (peak-set.ts) this keeps the
+ * peak wheel force of the demonstration builds' drop and stone strikes within
+ * 0.04 % of odex at 1e-10 at every tolerance from 1e-4 down (bench/ride.ts
+ * reads them so); the end alone left 0.1-1 %.
  */
 const INNER = 3;
 
@@ -125,7 +126,10 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
   const wheelCh = sys.wheels.map((w) => [ch(`${w.side} wheel centre height`, 'mm'), ch(`${w.side} wheel ground force`, 'N')]);
   const yokeCh = ch('yoke force', 'N');
   const wheelRest = sys.wheels.map((w) => rest.y[0] + (sys.axleX - sys.body.x) * rest.y[1] + (w.y - sys.body.y) * rest.y[2]);
-  /** The peaks' record at one point: step ends and dense samples, in time order. */
+  /**
+   * The peaks' record at one point: the start, then INNER points of every step in time order. The plots' samples are
+   * not read for the peaks, so the peaks are the same at any sample interval and with no series at all.
+   */
   const record = (t: number, y: ArrayLike<number>) => {
     derivative(sys, t, y, dyScratch, forces);
     for (let i = 0; i < n; i++) {
@@ -140,9 +144,9 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
     peaks.add(t);
   };
   const keep = s.series !== false;
+  /** The series at one sample (taken only where a series is kept). */
   const sample = (t: number, y: ArrayLike<number>) => {
-    record(t, y);
-    if (!keep) return;
+    derivative(sys, t, y, dyScratch, forces);
     t_s.push(t);
     // Plain loops: a sample is taken every few steps.
     for (let i = 0; i < n; i++) {
@@ -155,7 +159,8 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
     }
     yokeCh.values.push(forces.yoke);
   };
-  sample(0, y0);
+  record(0, y0);
+  if (keep) sample(0, y0);
   let nextSample = s.sampleInterval;
   const v0 = new Float64Array(n);
   for (let i = 0; i < n; i++) v0[i] = y0[N + 3 + i];
@@ -178,13 +183,13 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
         for (let i = 0; i < wheelCount; i++) if (!wheelShut(mode, i)) wheelAir[i] += dt;
         for (let i = 0; i < n; i++) if (!crewShut(sys, mode, i)) crewAir[i] += dt;
         if (Number.isNaN(firstContact) && anyWheelPushes(sys, mode)) firstContact = t0;
-        // The series and the peaks read the dense output between the step's ends (a peak is refined by a parabola through its neighbours: peak-tracker.ts).
+        // The series and the peaks read the dense output between the step's ends, each at its own points: the plots' samples
+        // every sample interval, the peaks at INNER points a step (refined by a parabola through a peak's neighbours: peak-set.ts).
         for (let j = 1; j <= INNER; j++) {
           const tj = t0 + (dt * j) / INNER;
-          while (nextSample <= tj + 1e-12) {
+          for (; keep && nextSample <= tj + 1e-12; nextSample += s.sampleInterval) {
             dense.at(Math.min(nextSample, t1), probe);
             sample(nextSample, probe);
-            nextSample += s.sampleInterval;
           }
           if (j < INNER) dense.at(tj, probe);
           record(tj, j < INNER ? probe : y);
@@ -219,7 +224,7 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
     yokeForceMax_N: peak[YOKE],
     yokeForceStatic_N: rest.forces.yoke,
     decayCycles: anyNever ? null : Math.max(...decays.map((d) => d.cycles!)),
-    method: `Dormand-Prince 5(4) with its dense output, adaptive step (relative tolerance ${tolerance}, absolute ${tolerance * 1e-3} m and m/s; ${stats.steps} steps accepted, ${stats.rejected} rejected or cut back, ${stats.evaluations} evaluations), every contact opening and closing located on the dense output to 1 ns and the step ended there (${stats.events} events); series and peaks read from the dense output${shortRun}`,
+    method: `Dormand-Prince 5(4) with its dense output, adaptive step (relative tolerance ${tolerance}, absolute ${tolerance * 1e-3} m and m/s; ${stats.steps} steps accepted, ${stats.rejected} rejected or cut back, ${stats.evaluations} evaluations), every contact opening and closing located on the dense output to 1 ns and the step ended there (${stats.events} events); peaks read on the dense output at ${INNER} points a step and refined by a parabola, the series sampled on it${shortRun}`,
     steps: stats.steps,
     series: keep ? { t_s, channels: [...crewCh.flat(), ...wheelCh.flat(), yokeCh] } : { t_s: [], channels: [] },
     floorDamping: b.floorDamping,
