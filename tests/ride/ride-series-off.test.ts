@@ -1,12 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { Analysis, rideInput } from '../support/analysis.ts';
-import { rideCaseOf } from '../../src/core/ride/ride-model.ts';
+import { rideCaseOf, runSettings } from '../../src/core/ride/ride-model.ts';
+import { buildRide } from '../../src/core/ride/ride-build.ts';
+import { runRide } from '../../src/core/ride/ride-run.ts';
 import { prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 // A ride case whose time series nobody draws (a decisive trial, a sweep
 // point) keeps none, and must judge the build exactly as one that keeps it:
-// the peaks read the same sample points either way. Compared with the run
-// that keeps the series, bit for bit.
+// the peaks are read at the steps' own points, never at the plots' samples.
+// Compared with the run that keeps the series, and with series sampled four
+// times as finely, bit for bit.
 
 describe('a ride case without its time series', () => {
   it('gives every measure the full run gives, to the last bit, and an empty series', () => {
@@ -21,6 +24,19 @@ describe('a ride case without its time series', () => {
         const { series: _bare, ...bareMeasures } = bare;
         expect(bareMeasures, `${name} ${which}`).toStrictEqual(fullMeasures);
       }
+    }
+  });
+
+  it('gives the same measures at any sample interval of the plots', () => {
+    const input = rideInput(new Analysis(prepared(readDemo('demo-two-crew')), rulesData));
+    for (const which of ['rough-one-wheel', 'stone-ridge'] as const) {
+      const settings = runSettings(input, which);
+      const coarse = runRide(buildRide(input, which), which, settings);
+      const fine = runRide(buildRide(input, which), which, { ...settings, sampleInterval: settings.sampleInterval / 4 });
+      expect(fine.series.t_s.length).toBeGreaterThan(3 * coarse.series.t_s.length);
+      const { series: _c, ...c } = coarse;
+      const { series: _f, ...f } = fine;
+      expect(f, which).toStrictEqual(c);
     }
   });
 });
