@@ -44,6 +44,10 @@ export interface DecisiveArgs {
 
 const findingKey = (f: { rule: string; subject: string }) => `${f.rule}|${f.subject}`;
 
+/** What the search reads of a trial's finding; kept for every trial, so the rest (its working, its text) is let go at once. */
+type TrialFinding = Pick<Finding, 'severity' | 'utilisation' | 'value'> & { params: { advisory?: unknown; hard?: unknown } };
+const trialFinding = (f: Finding): TrialFinding => ({ severity: f.severity, utilisation: f.utilisation, value: f.value, params: { advisory: f.params.advisory, hard: f.params.hard } });
+
 /**
  * Which builder's guesses and remembered data values each decisive finding
  * hangs on, and how far each may move before the finding changes severity.
@@ -78,7 +82,7 @@ export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; sear
 
   let reruns = 0;
   let work = 0;
-  const memo = new Map<string, Map<string, Finding> | null>();
+  const memo = new Map<string, Map<string, TrialFinding> | null>();
   const staleOf = new Map<InputKey, Set<string>>();
   /** Every chosen finding that reads the input, re-checked with the input at v; null where the input would be refused. */
   const trial = (key: InputKey, v: number) => {
@@ -86,7 +90,7 @@ export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; sear
     if (memo.has(id)) return memo.get(id)!;
     reruns++;
     const changed = withInput(key, v, a.spec, a.data);
-    let out: Map<string, Finding> | null = null;
+    let out: Map<string, TrialFinding> | null = null;
     if (!key.startsWith('spec:') || crossChecks(changed.spec, changed.data).length === 0) {
       if (!staleOf.has(key)) staleOf.set(key, tracer.staleModels(new Set([key])));
       const stale = staleOf.get(key)!;
@@ -95,7 +99,7 @@ export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; sear
       // No output draws a trial's ride: its cases keep no time series.
       const graph = new ModelGraph(MODELS, { ...a.inputs, ...changed, rideSeries: false }, { seed });
       const readers = rules.filter((r) => readsOf.get(r.id)!.has(key));
-      out = new Map(runRules(readers, changed.spec, changed.data, graph).map((f) => [findingKey(f), f]));
+      out = new Map(runRules(readers, changed.spec, changed.data, graph).map((f) => [findingKey(f), trialFinding(f)]));
     }
     memo.set(id, out);
     return out;
@@ -174,7 +178,7 @@ function guideOf(f: Finding): Level | null {
 }
 
 /** The finding's value over the guiding level, less one. */
-function gapOf(f: Finding, level: Level | null): number | null {
+function gapOf(f: Pick<TrialFinding, 'value' | 'params'>, level: Level | null): number | null {
   const L = level === null ? undefined : f.params[level];
   return f.value === null || typeof L !== 'number' || L === 0 ? null : f.value / L - 1;
 }
