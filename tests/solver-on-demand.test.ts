@@ -5,6 +5,8 @@ import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { loadLpSolver } from '../src/node/load-lp-solver.ts';
 import { checkLoadingSolver, solverProbe } from '../src/node/solver-on-demand.ts';
 import { readDemo, rulesData } from './support/fixtures.ts';
+import { defineRule } from '../src/core/pipeline/define-rule.ts';
+import { RULES } from '../src/core/rules/index.ts';
 import { GENERATORS } from './support/bad-generators.ts';
 
 // HiGHS is loaded only where the stock plan needs it, and the result is the
@@ -43,5 +45,24 @@ describe('the LP solver on demand', () => {
     const onDemand = await checkLoadingSolver(p.spec, p.entries, rulesData, { ride: false });
     const direct = runCheck(p.spec, p.entries, rulesData, { lp: await loadLpSolver(), ride: false });
     expect(JSON.stringify(onDemand)).toBe(JSON.stringify(direct));
+  });
+
+  it('runs the check once where the plan needs the solver: the stock plan is tried first, alone', async () => {
+    const p = prepared(parse((await GENERATORS['demo-41-pegs']()) as string));
+    let runs = 0;
+    const counter = defineRule({
+      id: 'test.counter',
+      title: 'counter',
+      checks: 'how many times the rules run',
+      kind: 'note',
+      method: ['design-basis-balance'],
+      needs: ['mass'],
+      limits: {},
+      params: [],
+      messages: { note: { code: 9901, text: 'counted' } },
+      run: () => void runs++,
+    });
+    await checkLoadingSolver(p.spec, p.entries, rulesData, { ride: false, rules: [...RULES, counter] });
+    expect(runs).toBe(1);
   });
 });

@@ -1,5 +1,5 @@
 import type { RulesData } from '../core/data/rules-data.ts';
-import { runCheck, type RunOptions } from '../core/pipeline/run-check.ts';
+import { checkModels, checkWith, type RunOptions } from '../core/pipeline/run-check.ts';
 import type { CheckResult } from '../core/result/check-result.ts';
 import type { SpecEntry } from '../core/spec/spec-entry.ts';
 import type { CheckedSpecification } from '../core/spec/spec.types.ts';
@@ -8,9 +8,11 @@ import { loadLpSolver } from './load-lp-solver.ts';
 
 // A chariot's cut list is planned without the LP solver (an exact small
 // search), so most checks never need HiGHS: loading it costs about 50 ms and
-// 20 MB. The check runs first with a stand-in that notes any call and
-// refuses it; only where the planner reached for the solver is HiGHS loaded
-// and the check run again with it, so the result is the one the solver gives.
+// 20 MB. The stock plan, the only model that calls the solver, is made first
+// with a stand-in that notes any call and refuses it; only where the planner
+// reached for the solver is HiGHS loaded and the check made with it from the
+// start, so the result is the one the solver gives and nothing else (the
+// decisive-input search least of all) runs twice.
 
 /** A stand-in for the solver: every call is noted and refused. */
 export function solverProbe(): { lp: LpSolver; used(): boolean } {
@@ -31,7 +33,8 @@ export function solverProbe(): { lp: LpSolver; used(): boolean } {
 /** The check, with HiGHS loaded only if the stock plan needs it. */
 export async function checkLoadingSolver(spec: CheckedSpecification, entries: SpecEntry[], data: RulesData, options: Omit<RunOptions, 'lp'> = {}): Promise<CheckResult> {
   const probe = solverProbe();
-  const first = runCheck(spec, entries, data, { ...options, lp: probe.lp });
-  if (!probe.used()) return first;
-  return runCheck(spec, entries, data, { ...options, lp: await loadLpSolver() });
+  const tried = checkModels(spec, data, { ...options, lp: probe.lp });
+  tried.get('cutting');
+  if (!probe.used()) return checkWith(tried, spec, entries, data, options);
+  return checkWith(checkModels(spec, data, { ...options, lp: await loadLpSolver() }), spec, entries, data, options);
 }

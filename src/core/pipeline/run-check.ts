@@ -40,8 +40,16 @@ export interface RunOptions {
  * Each model is computed once, when a rule or an output first needs it.
  */
 export function runCheck(spec: CheckedSpecification, entries: SpecEntry[], data: RulesData, options: RunOptions = {}): CheckResult {
-  const inputs = { lp: options.lp, ride: options.ride ?? true };
-  const graph = new ModelGraph(MODELS, { spec, data, ...inputs });
+  return checkWith(checkModels(spec, data, options), spec, entries, data, options);
+}
+
+/** The models of a check, each computed when first read (a caller may read some first: the stock plan, to learn whether it needs the LP solver). */
+export function checkModels(spec: CheckedSpecification, data: RulesData, options: Pick<RunOptions, 'lp' | 'ride'> = {}): ModelGraph {
+  return new ModelGraph(MODELS, { spec, data, lp: options.lp, ride: options.ride ?? true });
+}
+
+/** runCheck on models from checkModels with the same specification, data and options. */
+export function checkWith(graph: ModelGraph, spec: CheckedSpecification, entries: SpecEntry[], data: RulesData, options: RunOptions = {}): CheckResult {
   return checkOnGraph(graph, { spec, entries, data, rules: options.rules ?? RULES, decisive: options.decisive ?? false, decisiveWorkLimit: options.decisiveWorkLimit });
 }
 
