@@ -4,6 +4,7 @@
 
 import type { DampingNeeded } from '../ride/damping-tuner.ts';
 import { RIDE_CASES, type RideCase, type RideResult, type RideSeries } from '../ride/ride-types.ts';
+import { roundSignificant } from '../numeric/round-significant.ts';
 
 /** Samples kept per channel for the report's plots: about one per pixel column of a plot. */
 export const PLOT_SAMPLES = 600;
@@ -48,6 +49,6 @@ export function rideCaseSummary(r: RideResult, samples = PLOT_SAMPLES): RideCase
 /** Every k-th sample, and always the last, so the plot spans the whole run; values to PLOT_DIGITS significant digits. */
 export function strideSeries(s: RideSeries, k: number): RideSeries {
   const keep = s.t_s.map((_, i) => i).filter((i) => i % k === 0 || i === s.t_s.length - 1);
-  const round = (v: number) => Number(v.toPrecision(PLOT_DIGITS));
+  const round = (v: number) => roundSignificant(v, PLOT_DIGITS);
   return { t_s: keep.map((i) => s.t_s[i]), channels: s.channels.map((c) => ({ ...c, values: keep.map((i) => round(c.values[i])) })) };
 }
