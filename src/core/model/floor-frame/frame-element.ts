@@ -39,7 +39,6 @@ function rotation(g: ElementGeometry): { L: number; c: number; s: number } {
   return { L, c: dx / L, s: dy / L };
 }
 
-const toLocal = (c: number, s: number, d: ArrayLike<number>): number[] => [c * d[0] + s * d[1], -s * d[0] + c * d[1], d[2], c * d[3] + s * d[4], -s * d[3] + c * d[4], d[5]];
 
 /** The element's 6 × 6 stiffness in global axes. */
 export function elementStiffness(g: ElementGeometry, sec: Section): number[][] {
@@ -76,12 +75,29 @@ export interface ElementForces {
   length: number;
 }
 
-/** End forces from the element's global end displacements [u1, v1, θ1, u2, v2, θ2]. */
+/**
+ * End forces from the element's global end displacements [u1, v1, θ1, u2, v2, θ2]. Each force is the row of the local
+ * stiffness times the local displacements, written out term by term in the row's order, zeros included, so every sum
+ * is the matrix product's to the last bit; nothing is allocated but the result (it runs for every element of every
+ * floor state).
+ */
 export function elementForces(g: ElementGeometry, sec: Section, d: ArrayLike<number>): ElementForces {
-  const { L, c, s } = rotation(g);
-  const k = local(L, sec);
-  const dl = toLocal(c, s, d);
-  const f = k.map((row) => row.reduce((sum, v, j) => sum + v * dl[j], 0));
+  const dx = g.x2 - g.x1;
+  const dy = g.y2 - g.y1;
+  const L = Math.hypot(dx, dy);
+  const c = dx / L, s = dy / L;
+  // The entries of local(L, sec).
+  const a = sec.EA / L;
+  const b = (12 * sec.EI) / L ** 3;
+  const k = (6 * sec.EI) / L ** 2;
+  const m = (4 * sec.EI) / L;
+  const e = (2 * sec.EI) / L;
+  // toLocal(c, s, d).
+  const l0 = c * d[0] + s * d[1], l1 = -s * d[0] + c * d[1], l2 = d[2], l3 = c * d[3] + s * d[4], l4 = -s * d[3] + c * d[4], l5 = d[5];
+  const f1 = 0 + 0 * l0 + b * l1 + k * l2 + 0 * l3 + -b * l4 + k * l5;
+  const f2 = 0 + 0 * l0 + k * l1 + m * l2 + 0 * l3 + -k * l4 + e * l5;
+  const f3 = 0 + -a * l0 + 0 * l1 + 0 * l2 + a * l3 + 0 * l4 + 0 * l5;
+  const f5 = 0 + 0 * l0 + k * l1 + e * l2 + 0 * l3 + -k * l4 + m * l5;
   // The internal moment is −f₃ at the first end and +f₆ at the second (end moments act on the element).
-  return { N: f[3], M1: -f[2], M2: f[5], V: f[1], length: L };
+  return { N: f3, M1: -f2, M2: f5, V: f1, length: L };
 }

@@ -159,9 +159,13 @@ export class FloorFrame {
   solve(pulls: ArrayLike<number>): FrameState {
     const d = this.#K.solve(this.#loads(pulls));
     const rails = new Map<Rail, RailMoment>();
+    const ends = new Float64Array(6);
     for (const e of this.loop.elements) {
       const g = this.#geometry(e);
-      const ends = [3 * e.a, 3 * e.a + 1, 3 * e.a + 2, 3 * e.b, 3 * e.b + 1, 3 * e.b + 2].map((i) => d[i]);
+      for (let i = 0; i < 3; i++) {
+        ends[i] = d[3 * e.a + i];
+        ends[3 + i] = d[3 * e.b + i];
+      }
       const f = elementForces(g, this.input.section, ends);
       const pick = Math.abs(f.M1) >= Math.abs(f.M2) ? { M: f.M1, x: g.x1, y: g.y1 } : { M: f.M2, x: g.x2, y: g.y2 };
       const cur = rails.get(e.rail);
