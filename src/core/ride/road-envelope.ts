@@ -17,17 +17,37 @@ export function bumpHeight(b: Bump, s: number): number {
   return (b.height / 2) * (1 - Math.cos((2 * Math.PI * s) / b.length));
 }
 
-/** The rigid wheel's lift over the bump with its centre at x (bump from 0 to L), its slope, and where it touches. */
-export function envelopeAt(b: Bump, r: number, x: number): { z: number; slope: number; s: number } {
+/** Samples of the coarse search. */
+const COARSE = 48;
+
+/** The bump's heights at the coarse search's samples between lo and hi, kept while the next point searches the same span. */
+export interface CoarseHeights {
+  lo: number;
+  hi: number;
+  h: Float64Array;
+}
+
+export const coarseHeights = (): CoarseHeights => ({ lo: NaN, hi: NaN, h: new Float64Array(COARSE + 1) });
+
+/**
+ * The rigid wheel's lift over the bump with its centre at x (bump from 0 to L), its slope, and where it touches.
+ * `memo`, for one bump only: the coarse samples' heights, the same wherever the whole bump is within the wheel's reach.
+ */
+export function envelopeAt(b: Bump, r: number, x: number, memo?: CoarseHeights): { z: number; slope: number; s: number } {
   const lo = Math.max(0, x - r), hi = Math.min(b.length, x + r);
   if (hi <= lo) return { z: 0, slope: 0, s: x };
   const lift = (s: number) => bumpHeight(b, s) + Math.sqrt(Math.max(0, r * r - (x - s) ** 2)) - r;
   // Coarse search, then golden section round the best sample.
-  const n = 48;
+  const n = COARSE;
+  if (memo && (memo.lo !== lo || memo.hi !== hi)) {
+    memo.lo = lo;
+    memo.hi = hi;
+    for (let i = 0; i <= n; i++) memo.h[i] = bumpHeight(b, lo + ((hi - lo) * i) / n);
+  }
   let best = lo, bestV = -Infinity;
   for (let i = 0; i <= n; i++) {
     const s = lo + ((hi - lo) * i) / n;
-    const v = lift(s);
+    const v = memo ? memo.h[i] + Math.sqrt(Math.max(0, r * r - (x - s) ** 2)) - r : lift(s);
     if (v > bestV) [best, bestV] = [s, v];
   }
   const step = (hi - lo) / n;
@@ -69,8 +89,9 @@ export function wheelEnvelope(b: Bump, r: number, dx = 0.001): Envelope {
   const n = Math.max(4, Math.ceil((end - start) / dx));
   const h = (end - start) / n;
   const z = new Float64Array(n + 1), slope = new Float64Array(n + 1);
+  const memo = coarseHeights();
   for (let i = 0; i <= n; i++) {
-    const e = envelopeAt(b, r, Math.min(end, Math.max(start, start + i * h)));
+    const e = envelopeAt(b, r, Math.min(end, Math.max(start, start + i * h)), memo);
     z[i] = e.z;
     slope[i] = e.slope;
   }
