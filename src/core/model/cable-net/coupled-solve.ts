@@ -53,9 +53,9 @@ export function planLengths(net: CableNet, e: ArrayLike<number>, spans: ArrayLik
   return flats;
 }
 
-/** Every segment's state at the sags u and plan lengths `flats` (the segments' own where omitted). */
-export function netStates(net: CableNet, u: ArrayLike<number>, flats?: ArrayLike<number>): SegmentState[] {
-  return net.segments.map((seg, i) => segmentState(seg, at(u, seg.a), at(u, seg.b), flats ? flats[i] : seg.flat));
+/** Every segment's state at the sags u and plan lengths `flats` (the segments' own where omitted); `into`: states to fill again. */
+export function netStates(net: CableNet, u: ArrayLike<number>, flats?: ArrayLike<number>, into?: SegmentState[]): SegmentState[] {
+  return net.segments.map((seg, i) => segmentState(seg, at(u, seg.a), at(u, seg.b), flats ? flats[i] : seg.flat, into?.[i]));
 }
 
 interface CoupledState {
@@ -143,12 +143,14 @@ export function solveCoupled(net: CableNet, loads: ArrayLike<number>, F: ArrayLi
       e,
     };
   };
+  // Each step's segment states, filled again at every step: its tangent is used up within the step.
+  const stepStates = segs.map(() => scratchState());
   const problem: EnergyProblem<CoupledState> = {
     state,
     direction: (x, cur) => {
       // Slack segments get only the tiny stand-in, not their pretension's geometric stiffness: the step is then Newton's
       // own and converges quadratically where segments end slack (the line search on the energy keeps it safe).
-      const T = coupledTangent(net, F, spans, netStates(net, x, cur.flats), K, SLACK_TENSION, 0, coupling);
+      const T = coupledTangent(net, F, spans, netStates(net, x, cur.flats, stepStates), K, SLACK_TENSION, 0, coupling);
       if (!T) return 'the tangent stiffness is not positive definite';
       const d = T.solve(cur.residual, cur.pullGap, STEP_ACCURACY);
       if (!d) return 'the coupled step could not be solved';

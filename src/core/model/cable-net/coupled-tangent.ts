@@ -116,9 +116,10 @@ export function coupledTangent(
   const place = K.order;
   const c: Coupling = { row: new Int32Array(2 * segs.length), strap: new Int32Array(2 * segs.length), value: new Float64Array(2 * segs.length), Kee: new Float64Array(m) };
   let coupled = false;
+  const curv = { ff: 0, fd: 0 };
   for (let i = 0; i < segs.length; i++) {
     const seg = segs[i];
-    const curv = planCurvatures(seg, states[i]);
+    planCurvatures(seg, states[i], curv);
     const df = -seg.flat / spans[seg.strap]; // d(plan length)/d(e_s)
     c.Kee[seg.strap] += curv.ff * df * df;
     c.strap[2 * i] = c.strap[2 * i + 1] = seg.strap;

@@ -67,12 +67,19 @@ export function tangentStiffness(seg: Segment, st: SegmentState, floorTension = 
 /**
  * The segment energy's second derivatives in its plan length f and its drop d
  * (U a function of l = hypot(f, d)): T/l (1 − n nᵀ) + (EA/l_0) n nᵀ with
- * n = (f, d)/l; zero for a slack segment.
+ * n = (f, d)/l; zero for a slack segment. `into`: a pair to fill in place of a new one (a loop over every segment
+ * then allocates nothing).
  */
-export function planCurvatures(seg: Segment, st: SegmentState): { ff: number; fd: number } {
-  if (st.tension <= 0) return { ff: 0, fd: 0 };
+export function planCurvatures(seg: Segment, st: SegmentState, into: { ff: number; fd: number } = { ff: 0, fd: 0 }): { ff: number; fd: number } {
+  if (st.tension <= 0) {
+    into.ff = 0;
+    into.fd = 0;
+    return into;
+  }
   const s = st.flat / st.length;
   const c = st.drop / st.length;
   const g = st.tension / st.length;
-  return { ff: g * (1 - s * s) + (seg.EA / seg.rest) * s * s, fd: (seg.EA / seg.rest - g) * s * c };
+  into.ff = g * (1 - s * s) + (seg.EA / seg.rest) * s * s;
+  into.fd = (seg.EA / seg.rest - g) * s * c;
+  return into;
 }
