@@ -68,4 +68,21 @@ describe('message templates', () => {
   it('refuses a template whose param is missing', () => {
     expect(() => renderTemplate('{a:N} and {b}', { a: 1 })).toThrow(/needs the param "b"/);
   });
+
+  it('never leaves a zero after the point, a bare point or a negative zero, and reads back within its figures', () => {
+    let seed = 11;
+    const r = () => (seed = (Math.imul(seed, 48271) % 2147483647) >>> 0) / 2147483647;
+    for (let i = 0; i < 20_000; i++) {
+      const v = (r() - 0.5) * 10 ** Math.floor(r() * 12 - 5);
+      for (const unit of ['', 'mm', 'N', 'count']) {
+        const t = formatNumber(v, unit);
+        const mantissa = t.split('e')[0];
+        expect(mantissa.includes('.') && /0$/.test(mantissa), t).toBe(false);
+        expect(/\.$/.test(mantissa) || t === '-0', t).toBe(false);
+        // Three significant figures (whole counts, and lengths from 10 mm, to the unit).
+        const back = Number(t);
+        expect(Math.abs(back - v), `${v} ${unit} -> ${t}`).toBeLessThanOrEqual(Math.max(Math.abs(v) * 5e-3, unit === 'count' || unit === 'mm' ? 0.5 : 0));
+      }
+    }
+  });
 });

@@ -15,7 +15,14 @@ const LENGTH = new Set(['mm']);
 
 function trimZero(text: string): string {
   // Trailing zeros after the point say nothing here (the figures are an upper bound), and "-0" reads as a real negative.
-  const t = text.includes('.') ? text.replace(/\.?0+$/, '') : text;
+  // By hand, not by a pattern: every number of every message passes here.
+  let end = text.length;
+  if (text.includes('.')) {
+    while (end > 0 && text.charCodeAt(end - 1) === 48) end--;
+    // As /\.?0+$/ has it: the point goes only with the zeros after it.
+    if (end < text.length && end > 0 && text.charCodeAt(end - 1) === 46) end--;
+  }
+  const t = end === text.length ? text : text.slice(0, end);
   return t === '-0' ? '0' : t;
 }
 
@@ -30,7 +37,8 @@ export function formatNumber(value: number | null | undefined, unit = '', sig = 
     const [m, e] = value.toExponential(sig - 1).split('e');
     return `${trimZero(m)}e${Number(e)}`;
   }
-  if (LENGTH.has(unit) && a >= 10) return trimZero(roundSig(value, 4).toFixed(0));
+  // Whole millimetres, rounded once (rounding to four figures first put 77.498 at 77.50 and then at 78); four figures from 10 m.
+  if (LENGTH.has(unit) && a >= 10) return trimZero((a >= 10000 ? roundSig(value, 4) : value).toFixed(0));
   if (a >= 1000) return trimZero(roundSig(value, Math.max(sig, 4)).toFixed(0));
   const decimals = Math.max(0, sig - 1 - Math.floor(Math.log10(a)));
   return trimZero(value.toFixed(Math.min(decimals, LENGTH.has(unit) ? 1 : 6)));
