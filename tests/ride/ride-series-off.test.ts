@@ -3,6 +3,7 @@ import { Analysis, rideInput } from '../support/analysis.ts';
 import { rideCaseOf, runSettings } from '../../src/core/ride/ride-model.ts';
 import { buildRide } from '../../src/core/ride/ride-build.ts';
 import { runRide } from '../../src/core/ride/ride-run.ts';
+import { PLOT_SAMPLES, rideCaseSummary } from '../../src/core/result/ride-summary.ts';
 import { prepared, readDemo, rulesData } from '../support/fixtures.ts';
 
 // A ride case whose time series nobody draws (a decisive trial, a sweep
@@ -37,6 +38,19 @@ describe('a ride case without its time series', () => {
       const { series: _c, ...c } = coarse;
       const { series: _f, ...f } = fine;
       expect(f, which).toStrictEqual(c);
+    }
+  });
+
+  it("takes only a plot's samples where only a plot is drawn: the same summary as the full series thinned, bit for bit", () => {
+    for (const name of ['demo-two-crew', 'teaching-flawed']) {
+      const input = rideInput(new Analysis(prepared(readDemo(name)), rulesData));
+      for (const which of ['rough-ridge', 'stone-one-wheel', 'drop'] as const) {
+        const full = rideCaseOf(input, which);
+        const plot = rideCaseOf(input, which, { plotPoints: PLOT_SAMPLES });
+        expect(plot.series.stride, `${name} ${which}`).toBeGreaterThan(1);
+        expect(plot.series.t_s.length).toBeLessThan(full.series.t_s.length / 2);
+        expect(rideCaseSummary(plot), `${name} ${which}`).toStrictEqual(rideCaseSummary(full));
+      }
     }
   });
 });

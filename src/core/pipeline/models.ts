@@ -12,6 +12,7 @@ import { floorDampingNeeded } from '../ride/damping-tuner.ts';
 import { groundFactors } from '../ride/dynamic-factors.ts';
 import { param } from '../data/param.ts';
 import { someRideCases } from '../ride/ride-model.ts';
+import { PLOT_SAMPLES } from '../result/ride-summary.ts';
 import type { RideInput } from '../ride/ride-build.ts';
 import { RIDE_CASES, ROUTINE_CASES, STONE_CASES, type RideCase, type RideResult } from '../ride/ride-types.ts';
 import { defineModel, withInputs, type ModelDef, type ModelInputs } from './define-model.ts';
@@ -118,7 +119,8 @@ export const rideInputDef = defineModel({
 const rideGroup =
   (cases: readonly RideCase[]) =>
   ({ rideInput }: { readonly rideInput: RideInput }, { spec, ride, rideSeries }: ModelInputs) =>
-    ride && spec.crew.length > 0 ? someRideCases(rideInput, cases, rideSeries === false ? { series: false } : {}) : null;
+    // The check's result draws each series at PLOT_SAMPLES points: only those samples are taken.
+    ride && spec.crew.length > 0 ? someRideCases(rideInput, cases, rideSeries === false ? { series: false } : { plotPoints: PLOT_SAMPLES }) : null;
 
 export const rideRoughDef = defineModel({ id: 'rideRough', needs: ['rideInput'], params: RIDE, compute: rideGroup(ROUTINE_CASES) });
 export const rideStoneDef = defineModel({ id: 'rideStone', needs: ['rideInput'], params: RIDE, compute: rideGroup(STONE_CASES) });

@@ -45,6 +45,8 @@ export interface RideOptions {
   enough?: Enough;
   /** False: the time series is not kept (nobody will draw it: a decisive trial); the peaks read the same points. */
   series?: boolean;
+  /** Keep only the samples a plot of about this many points draws (RunSettings.plotPoints). */
+  plotPoints?: number;
 }
 
 export interface BuiltRide {

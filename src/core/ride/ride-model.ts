@@ -16,6 +16,7 @@ export function runSettings(i: RideInput, which: RideCase, o: RideOptions = {}):
     ...(o.tolerance !== undefined ? { tolerance: o.tolerance } : {}),
     ...(o.enough ? { enough: o.enough } : {}),
     ...(o.series === false ? { series: false } : {}),
+    ...(o.plotPoints ? { plotPoints: o.plotPoints } : {}),
   };
 }
 

@@ -24,6 +24,11 @@ export interface RunSettings {
   enough?: Enough;
   /** False: no time series is kept and no sample taken (the result's series is empty); the peaks never read the samples. */
   series?: boolean;
+  /**
+   * Keep only the samples a plot of about this many points draws: every k-th and the last, k = ceil(samples / points)
+   * (the series says its stride). The others are not taken at all. Absent: every sample.
+   */
+  plotPoints?: number;
   title: string;
 }
 
@@ -160,6 +165,11 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
     yokeCh.values.push(forces.yoke);
   };
   record(0, y0);
+  // The samples a run to its end takes, counted as the run steps to them, and the stride a plot of them keeps.
+  let planned = 1;
+  for (let t = s.sampleInterval; t <= s.duration + 1e-12; t += s.sampleInterval) planned++;
+  const stride = s.plotPoints ? Math.max(1, Math.ceil(planned / s.plotPoints)) : 1;
+  let taken = 0;
   if (keep) sample(0, y0);
   let nextSample = s.sampleInterval;
   const v0 = new Float64Array(n);
@@ -188,6 +198,7 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
         for (let j = 1; j <= INNER; j++) {
           const tj = t0 + (dt * j) / INNER;
           for (; keep && nextSample <= tj + 1e-12; nextSample += s.sampleInterval) {
+            if (++taken % stride !== 0 && taken !== planned - 1) continue;
             dense.at(Math.min(nextSample, t1), probe);
             sample(nextSample, probe);
           }
@@ -204,6 +215,8 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
   );
 
   if (stats.stopped) return notRun(b, which, s.title, stats.stopped);
+  // A run that ended before its last planned sample (an early end) cannot say which sample was last: run it with all.
+  if (stride > 1 && taken !== planned - 1) return runRide(b, which, { ...s, plotPoints: undefined });
   const rises = sys.crew.map((_, i) => Math.max(0, peak[RISE + i], ...turningPoints[i].map((q) => q.z)));
   const decays = turning.map((tp) => decayCycles(tp.points, s.decayFraction, Number.isNaN(firstContact) ? Infinity : firstContact));
   const anyNever = decays.some((d) => d.cycles === null);
@@ -226,7 +239,7 @@ export function runRide(b: BuiltRide, which: RideCase, s: RunSettings): RideResu
     decayCycles: anyNever ? null : Math.max(...decays.map((d) => d.cycles!)),
     method: `Dormand-Prince 5(4) with its dense output, adaptive step (relative tolerance ${tolerance}, absolute ${tolerance * 1e-3} m and m/s; ${stats.steps} steps accepted, ${stats.rejected} rejected or cut back, ${stats.evaluations} evaluations), every contact opening and closing located on the dense output to 1 ns and the step ended there (${stats.events} events); peaks read on the dense output at ${INNER} points a step and refined by a parabola, the series sampled on it${shortRun}`,
     steps: stats.steps,
-    series: keep ? { t_s, channels: [...crewCh.flat(), ...wheelCh.flat(), yokeCh] } : { t_s: [], channels: [] },
+    series: keep ? { t_s, channels: [...crewCh.flat(), ...wheelCh.flat(), yokeCh], ...(stride > 1 ? { stride } : {}) } : { t_s: [], channels: [] },
     floorDamping: b.floorDamping,
     working: b.working,
     sources: b.sources,

@@ -40,6 +40,8 @@ export interface RideChannel {
 export interface RideSeries {
   t_s: number[];
   channels: RideChannel[];
+  /** Where only every stride-th sample of the run was kept (and the last), for a plot: the stride; absent where every one was. */
+  stride?: number;
 }
 
 export interface CrewRide {
