@@ -43,7 +43,7 @@ export function rideSummary(ride: Record<RideCase, RideResult>, needed: DampingN
 export function rideCaseSummary(r: RideResult, samples = PLOT_SAMPLES): RideCaseSummary {
   const { series, ...rest } = r;
   // A run that kept only a plot's samples (RunSettings.plotPoints, at PLOT_SAMPLES) has taken the stride already.
-  if (series.stride) return { ...rest, plot: strideSeries({ t_s: series.t_s, channels: series.channels }, 1), plot_stride: series.stride };
+  if (series.stride) return { ...rest, plot: strideSeries(series, 1), plot_stride: series.stride };
   const stride = Math.max(1, Math.ceil(series.t_s.length / samples));
   return { ...rest, plot: strideSeries(series, stride), plot_stride: stride };
 }

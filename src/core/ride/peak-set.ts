@@ -1,5 +1,6 @@
 // The largest value of each of several quantities recorded together at
-// points in time order (step ends, dense samples, events). A local maximum
+// points in time order (the ride's start, then points inside and at the end
+// of every step). A local maximum
 // among three points is refined by the parabola through them: the peak of a
 // smooth hump between samples spaced Δ apart is then found to O(Δ³) instead of
 // O(Δ²), so a peak that falls between the ends of a long step is not cut off.

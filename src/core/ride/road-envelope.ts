@@ -36,7 +36,9 @@ export const coarseHeights = (): CoarseHeights => ({ lo: NaN, hi: NaN, h: new Fl
 export function envelopeAt(b: Bump, r: number, x: number, memo?: CoarseHeights): { z: number; slope: number; s: number } {
   const lo = Math.max(0, x - r), hi = Math.min(b.length, x + r);
   if (hi <= lo) return { z: 0, slope: 0, s: x };
-  const lift = (s: number) => bumpHeight(b, s) + Math.sqrt(Math.max(0, r * r - (x - s) ** 2)) - r;
+  // The wheel's lowest point over s, standing on the bump's height h there.
+  const over = (h: number, s: number) => h + Math.sqrt(Math.max(0, r * r - (x - s) ** 2)) - r;
+  const lift = (s: number) => over(bumpHeight(b, s), s);
   // Coarse search, then golden section round the best sample.
   const n = COARSE;
   if (memo && (memo.lo !== lo || memo.hi !== hi)) {
@@ -47,7 +49,7 @@ export function envelopeAt(b: Bump, r: number, x: number, memo?: CoarseHeights):
   let best = lo, bestV = -Infinity;
   for (let i = 0; i <= n; i++) {
     const s = lo + ((hi - lo) * i) / n;
-    const v = memo ? memo.h[i] + Math.sqrt(Math.max(0, r * r - (x - s) ** 2)) - r : lift(s);
+    const v = memo ? over(memo.h[i], s) : lift(s);
     if (v > bestV) [best, bestV] = [s, v];
   }
   const step = (hi - lo) / n;

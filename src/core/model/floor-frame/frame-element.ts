@@ -15,12 +15,13 @@ export interface Section {
   EI: number;
 }
 
+/** The distinct entries of the local stiffness: EA/L, 12EI/L³, 6EI/L², 4EI/L, 2EI/L. */
+function localTerms(L: number, s: Section): { a: number; b: number; c: number; d: number; e: number } {
+  return { a: s.EA / L, b: (12 * s.EI) / L ** 3, c: (6 * s.EI) / L ** 2, d: (4 * s.EI) / L, e: (2 * s.EI) / L };
+}
+
 function local(L: number, s: Section): number[][] {
-  const a = s.EA / L;
-  const b = (12 * s.EI) / L ** 3;
-  const c = (6 * s.EI) / L ** 2;
-  const d = (4 * s.EI) / L;
-  const e = (2 * s.EI) / L;
+  const { a, b, c, d, e } = localTerms(L, s);
   return [
     [a, 0, 0, -a, 0, 0],
     [0, b, c, 0, -b, c],
@@ -38,7 +39,6 @@ function rotation(g: ElementGeometry): { L: number; c: number; s: number } {
   const L = Math.hypot(dx, dy);
   return { L, c: dx / L, s: dy / L };
 }
-
 
 /** The element's 6 × 6 stiffness in global axes. */
 export function elementStiffness(g: ElementGeometry, sec: Section): number[][] {
@@ -82,17 +82,9 @@ export interface ElementForces {
  * floor state).
  */
 export function elementForces(g: ElementGeometry, sec: Section, d: ArrayLike<number>): ElementForces {
-  const dx = g.x2 - g.x1;
-  const dy = g.y2 - g.y1;
-  const L = Math.hypot(dx, dy);
-  const c = dx / L, s = dy / L;
-  // The entries of local(L, sec).
-  const a = sec.EA / L;
-  const b = (12 * sec.EI) / L ** 3;
-  const k = (6 * sec.EI) / L ** 2;
-  const m = (4 * sec.EI) / L;
-  const e = (2 * sec.EI) / L;
-  // toLocal(c, s, d).
+  const { L, c, s } = rotation(g);
+  const { a, b, c: k, d: m, e } = localTerms(L, sec);
+  // The end displacements in the element's axes.
   const l0 = c * d[0] + s * d[1], l1 = -s * d[0] + c * d[1], l2 = d[2], l3 = c * d[3] + s * d[4], l4 = -s * d[3] + c * d[4], l5 = d[5];
   const f1 = 0 + 0 * l0 + b * l1 + k * l2 + 0 * l3 + -b * l4 + k * l5;
   const f2 = 0 + 0 * l0 + k * l1 + m * l2 + 0 * l3 + -k * l4 + e * l5;
