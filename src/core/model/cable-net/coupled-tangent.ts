@@ -88,12 +88,16 @@ function schurSystem(c: Coupling, K: SkylineCholesky, F: ArrayLike<number>, m: n
       S[s * m + t] = S[t * m + s] = (s === t ? c.Kee[s] : 0) - v;
     }
   }
+  // A = S·F + I a row at a time, each entry's terms added in the same order as a dot product would; a zero of S
+  // (every off-diagonal one where nothing couples the net, as under the pretension alone) adds nothing and is skipped.
   const A = new Float64Array(m * m);
   for (let s = 0; s < m; s++) {
-    for (let t = 0; t < m; t++) {
-      let v = s === t ? 1 : 0;
-      for (let k = 0; k < m; k++) v += S[s * m + k] * F[k * m + t];
-      A[s * m + t] = v;
+    const row = s * m;
+    A[row + s] = 1;
+    for (let k = 0; k < m; k++) {
+      const v = S[row + k];
+      if (v === 0) continue;
+      for (let t = 0, f = k * m; t < m; t++) A[row + t] += v * F[f + t];
     }
   }
   return A;

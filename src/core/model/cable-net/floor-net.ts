@@ -42,13 +42,14 @@ export function floorLines(spec: CheckedSpecification, data: RulesData, refine =
   const ssX = strapPositions(floor.depth_mm, s.pitch_mm);
   const woven = s.weave === 'two-way';
   const key = (i: number, j: number) => (woven ? `${i},${j}` : undefined);
-  const common = { EA, pretension: s.pretension_N, refine };
+  // Written out in each line rather than spread in: a spread followed by more properties is slow to build in V8.
+  const pretension = s.pretension_N;
   const lines: StrapLine[] = [];
   if (s.weave !== 'side-to-side') {
     fbY.forEach((y, j) => {
       const end = outline.frontAt(y);
       const stations = ssX.flatMap((x, i) => (outline.inside(x, y) ? [{ s: x, key: key(i, j) }] : []));
-      lines.push({ ...common, family: 'front-to-back', number: j + 1, of: fbY.length, cross: y, start: 0, end, rails: ['rear', 'front'], stations });
+      lines.push({ family: 'front-to-back', number: j + 1, of: fbY.length, cross: y, start: 0, end, rails: ['rear', 'front'], stations, EA, pretension, refine });
     });
   }
   if (s.weave !== 'front-to-back') {
@@ -56,7 +57,7 @@ export function floorLines(spec: CheckedSpecification, data: RulesData, refine =
       const h = outline.halfWidthAt(x);
       const stations = fbY.flatMap((y, j) => (outline.inside(x, y) ? [{ s: y, key: key(i, j) }] : []));
       // An end on a rounded front corner still pulls sideways: it counts with the side rail it pulls towards.
-      lines.push({ ...common, family: 'side-to-side', number: i + 1, of: ssX.length, cross: x, start: -h, end: h, rails: ['right', 'left'], stations });
+      lines.push({ family: 'side-to-side', number: i + 1, of: ssX.length, cross: x, start: -h, end: h, rails: ['right', 'left'], stations, EA, pretension, refine });
     });
   }
   return { lines, outline, EA, pretension: s.pretension_N, pitch: s.pitch_mm, fbY, ssX };
