@@ -13,9 +13,9 @@ import { fileURLToPath } from 'node:url';
 import { performance } from 'node:perf_hooks';
 import { BATCH_WORK_LIMIT } from '../src/core/review/batch-work-limit.ts';
 import { median, verdict } from './median.ts';
+import { binArgs } from './bin-command.ts';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
-const BIN = join(ROOT, 'bin', 'axletree.mjs');
 export const BATCH_TARGET_MS = 10_000;
 const RUNS = 3;
 
@@ -52,7 +52,7 @@ export function benchBatch(): number {
   const cwd = mkdtempSync(join(tmpdir(), 'axletree-batch-'));
   try {
     const specs = batchSpecs();
-    const args = [BIN, 'check', ...specs, '--out', 'review'];
+    const args = [...binArgs(), 'check', ...specs, '--out', 'review'];
     const first = timeOnce(args, cwd);
     const bundled = existsSync(join(ROOT, 'dist', 'axletree.mjs')) && !first.err.includes('dist/');
     const node = median(Array.from({ length: 5 }, () => timeOnce(['-e', '0'], cwd).ms));

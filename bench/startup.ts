@@ -11,9 +11,12 @@ import { join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { performance } from 'node:perf_hooks';
 import { median } from './median.ts';
+import { binArgs } from './bin-command.ts';
+
+// Each axletree case runs as the bin's first line starts it (its Node options, bin-command.ts).
+const BIN_ARGS = binArgs();
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
-const BIN = join(ROOT, 'bin', 'axletree.mjs');
 const DEMO = join(ROOT, 'specs', 'demo-two-crew.yaml');
 const VALIDATION = join(ROOT, 'specs', 'validation');
 
@@ -27,15 +30,15 @@ interface Case {
 
 const CASES: Case[] = [
   { label: 'node -e 0', args: ['-e', '0'], runs: 9 },
-  { label: 'axletree --version', args: [BIN, '--version'], runs: 9, target: 300 },
+  { label: 'axletree --version', args: [...BIN_ARGS, '--version'], runs: 9, target: 300 },
   ...['demo-two-crew.yaml', 'demo-rear-axle.yaml'].map((f) => checkCase(join(ROOT, 'specs', f), 5, 1500)),
   ...readdirSync(VALIDATION).filter((f) => f.endsWith('.yaml')).map((f) => checkCase(join(VALIDATION, f), 3)),
   // The decisive-input search is part of a default check; its target is the same 1.5 s (not met until the core is faster).
-  { label: 'axletree check specs/demo-two-crew.yaml --json', args: [BIN, 'check', DEMO, '--json'], runs: 3, target: 1500 },
+  { label: 'axletree check specs/demo-two-crew.yaml --json', args: [...BIN_ARGS, 'check', DEMO, '--json'], runs: 3, target: 1500 },
 ];
 
 function checkCase(spec: string, runs: number, target?: number): Case {
-  return { label: `axletree check ${relative(ROOT, spec)} --json --no-decisive`, args: [BIN, 'check', spec, '--json', '--no-decisive'], runs, target };
+  return { label: `axletree check ${relative(ROOT, spec)} --json --no-decisive`, args: [...BIN_ARGS, 'check', spec, '--json', '--no-decisive'], runs, target };
 }
 
 /** Milliseconds of one whole process; throws if it refused its input or failed. */
@@ -54,7 +57,7 @@ export function benchStartup(): number {
   // The check writes its outputs under the working directory: a scratch one.
   const cwd = mkdtempSync(join(tmpdir(), 'axletree-startup-'));
   try {
-    const first = timeOnce([BIN, '--version'], cwd);
+    const first = timeOnce([...BIN_ARGS, '--version'], cwd);
     const bundled = existsSync(join(ROOT, 'dist', 'axletree.mjs')) && !first.err.includes('dist/');
     console.log(`start-up, whole processes (${bundled ? 'the built bundle, dist/' : 'from the TypeScript source: dist/ is missing or stale, `npm run build` first'}):`);
     const medians = CASES.map((c) => {
