@@ -21,6 +21,12 @@ describe("the bin's first line", () => {
     expect(binArgs()).toEqual(['--max-semi-space-size=8', join(REPO, 'bin', 'axletree.mjs')]);
   });
 
+  it('npm start runs the demo with the same node options', () => {
+    const first = readFileSync(join(REPO, 'bin', 'axletree.mjs'), 'utf8').split('\n', 1)[0];
+    const start = (JSON.parse(readFileSync(join(REPO, 'package.json'), 'utf8')) as { scripts: { start: string } }).scripts.start;
+    expect(start).toBe(['node', ...shebangNodeOptions(first), 'bin/axletree.mjs check specs/demo-two-crew.yaml'].join(' '));
+  });
+
   it('runs as an executable through env (as npx runs it)', () => {
     const r = spawnSync(join(REPO, 'bin', 'axletree.mjs'), ['--version'], { encoding: 'utf8', timeout: 60_000 });
     expect(r.status).toBe(0);
