@@ -116,11 +116,13 @@ export const rideInputDef = defineModel({
  * stone (the stone's factors), and the drop test. A re-run that reaches only
  * the routine factors (a decisive trial, a sweep point) runs two cases, not five.
  */
+// The models are read only where the ride runs (a model's needs are computed on first read): a statics-only run
+// computes neither the ride's input nor the wheel's stiffness, which only the ride reads.
 const rideGroup =
   (cases: readonly RideCase[]) =>
-  ({ rideInput }: { readonly rideInput: RideInput }, { spec, ride, rideSeries }: ModelInputs) =>
+  (models: { readonly rideInput: RideInput }, { spec, ride, rideSeries }: ModelInputs) =>
     // The check's result draws each series at PLOT_SAMPLES points: only those samples are taken.
-    ride && spec.crew.length > 0 ? someRideCases(rideInput, cases, rideSeries === false ? { series: false } : { plotPoints: PLOT_SAMPLES }) : null;
+    ride && spec.crew.length > 0 ? someRideCases(models.rideInput, cases, rideSeries === false ? { series: false } : { plotPoints: PLOT_SAMPLES }) : null;
 
 export const rideRoughDef = defineModel({ id: 'rideRough', needs: ['rideInput'], params: RIDE, compute: rideGroup(ROUTINE_CASES) });
 export const rideStoneDef = defineModel({ id: 'rideStone', needs: ['rideInput'], params: RIDE, compute: rideGroup(STONE_CASES) });
@@ -142,7 +144,7 @@ export const floorDampingNeededDef = defineModel({
   id: 'floorDampingNeeded',
   needs: ['rideInput'],
   params: RIDE,
-  compute: ({ rideInput }, { spec, ride }) => (ride && spec.crew.length > 0 ? floorDampingNeeded(rideInput) : null),
+  compute: (models, { spec, ride }) => (ride && spec.crew.length > 0 ? floorDampingNeeded(models.rideInput) : null),
 });
 
 /** The routine rough ground's dynamic factors: a variable action in the fundamental combinations. */
