@@ -3,6 +3,7 @@ import type { CheckResult } from '../core/result/check-result.ts';
 import { comparedDrawingFile, comparedDrawings } from '../render/compare/compare-drawings.ts';
 import { compareDocument } from '../render/compare/compare-document.ts';
 import { renderCompareWorkbook } from '../render/compare/compare-workbook.ts';
+import { nativeDeflateRaw } from './native-deflate.ts';
 import { renderHtml } from '../render/html/render-html.ts';
 import { renderMarkdown } from '../render/markdown/render-markdown.ts';
 import { join } from 'node:path';
@@ -26,7 +27,7 @@ export async function writeCompare(c: CompareResult, results: readonly CheckResu
   const files: [string, string | Uint8Array][] = [
     [COMPARE_FILES.markdown, renderMarkdown(doc)],
     [COMPARE_FILES.html, renderHtml(doc, new Map())],
-    [COMPARE_FILES.workbook, await renderCompareWorkbook(doc, `${c.tool.name} ${c.tool.version}`)],
+    [COMPARE_FILES.workbook, await renderCompareWorkbook(doc, `${c.tool.name} ${c.tool.version}`, nativeDeflateRaw)],
     [COMPARE_FILES.json, compareJson(c)],
     ...drawn.builds.flatMap((list, i) => list.map((d): [string, string] => [comparedDrawingFile(c.builds[i].label, d.id), `${d.svg.trim()}\n`])),
   ];

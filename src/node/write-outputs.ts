@@ -1,3 +1,4 @@
+import { nativeDeflateRaw } from './native-deflate.ts';
 import type { CheckResult } from '../core/result/check-result.ts';
 import { writeFileSet } from './write-file-set.ts';
 import type { PdfPrinter } from './pdf-printer.ts';
@@ -45,7 +46,7 @@ export async function writeOutputs(result: CheckResult, dir: string, inputPath: 
   // One report model for all three outputs, so the workbook, report.md and report.html cannot disagree.
   const doc = reportDocument(result);
   const plots = drawReportPlots(result);
-  const workbook = await renderWorkbook(result, doc);
+  const workbook = await renderWorkbook(result, doc, nativeDeflateRaw);
   const html = renderHtml(doc, plots);
   const summary = renderHtml(summaryDocument(result), plots);
   const printed: [string, Uint8Array][] = options.printer

@@ -1,4 +1,6 @@
 import type ExcelJS from 'exceljs';
+import { deflateStoredZip, type DeflateRaw } from './zip-deflate.ts';
+import { CENTRAL_ENTRY, LOCAL_ENTRY, endRecordAt } from './zip-records.ts';
 
 // The same input must give the same file, byte for byte, so that a result can
 // be compared, hashed or kept under version control. A workbook carries dates
@@ -9,26 +11,12 @@ import type ExcelJS from 'exceljs';
 /** The moment every workbook we write says it was made. */
 export const STEADY_DATE = new Date('2000-01-01T00:00:00Z');
 
-const CENTRAL_ENTRY = 0x02014b50;
-const LOCAL_ENTRY = 0x04034b50;
-const END_OF_DIRECTORY = 0x06054b50;
-/** The end record is 22 bytes and may be followed by a comment of up to 65535. */
-const END_RECORD_SIZE = 22;
-
 /** A date as the zip format's 16-bit DOS time and date (two-second steps, from 1980). */
 function dosStamp(d: Date): { time: number; date: number } {
   return {
     time: (d.getUTCHours() << 11) | (d.getUTCMinutes() << 5) | Math.floor(d.getUTCSeconds() / 2),
     date: ((d.getUTCFullYear() - 1980) << 9) | ((d.getUTCMonth() + 1) << 5) | d.getUTCDate(),
   };
-}
-
-function endRecordAt(view: DataView): number {
-  const last = view.byteLength - END_RECORD_SIZE;
-  for (let at = last; at >= Math.max(0, last - 0xffff); at--) {
-    if (view.getUint32(at, true) === END_OF_DIRECTORY) return at;
-  }
-  throw new Error('not a zip archive: no end-of-directory record');
 }
 
 /**
@@ -56,9 +44,15 @@ export function steadyZip(bytes: Uint8Array): Uint8Array {
   return out;
 }
 
-/** A workbook's bytes with fixed dates: its properties before writing, its zip entries after. */
-export async function steadyWorkbookBytes(wb: ExcelJS.Workbook): Promise<Uint8Array> {
+/**
+ * A workbook's bytes with fixed dates: its properties before writing, its zip entries after. `deflateRaw`: a
+ * faster raw deflate than the workbook library's own (Node's zlib, given by the caller): the library then only
+ * stores its entries and each is deflated with it (zip-deflate.ts).
+ */
+export async function steadyWorkbookBytes(wb: ExcelJS.Workbook, deflateRaw?: DeflateRaw): Promise<Uint8Array> {
   wb.created = STEADY_DATE;
   wb.modified = STEADY_DATE;
-  return steadyZip(new Uint8Array(await wb.xlsx.writeBuffer()));
+  if (!deflateRaw) return steadyZip(new Uint8Array(await wb.xlsx.writeBuffer()));
+  const stored = new Uint8Array(await wb.xlsx.writeBuffer({ zip: { compression: 'STORE' } }));
+  return steadyZip(deflateStoredZip(stored, deflateRaw));
 }

@@ -16,6 +16,7 @@ import { addSourcesSheet } from './sheets/sources-sheet.ts';
 import { addSpecificationSheets } from './spec-workbook/spec-sheets.ts';
 import { opensOn } from './sheets/opens-on.ts';
 import { steadyWorkbookBytes } from './steady-bytes.ts';
+import type { DeflateRaw } from './zip-deflate.ts';
 
 /**
  * The check result as an .xlsx workbook, returned as bytes; the caller writes
@@ -23,9 +24,9 @@ import { steadyWorkbookBytes } from './steady-bytes.ts';
  * Markdown and HTML reports say; pass the model the reports were made from.
  * It opens on the summary; the findings follow, then the evidence, and the
  * specification's fill-in sheets come last. Every sheet is set up to print.
- * The same result always gives the same bytes.
+ * The same result always gives the same bytes. `deflateRaw`: see steadyWorkbookBytes.
  */
-export async function renderWorkbook(result: CheckResult, doc: ReportDocument = reportDocument(result)): Promise<Uint8Array> {
+export async function renderWorkbook(result: CheckResult, doc: ReportDocument = reportDocument(result), deflateRaw?: DeflateRaw): Promise<Uint8Array> {
   const wb = new ExcelJS.Workbook();
   wb.creator = `${result.tool.name} ${result.tool.version}`;
   wb.title = doc.title;
@@ -42,5 +43,5 @@ export async function renderWorkbook(result: CheckResult, doc: ReportDocument = 
   addSourcesSheet(wb, doc);
   if (result.input !== undefined) addSpecificationSheets(wb, result.input, result.choices);
   opensOn(wb, summary);
-  return steadyWorkbookBytes(wb);
+  return steadyWorkbookBytes(wb, deflateRaw);
 }

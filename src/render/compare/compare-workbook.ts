@@ -5,6 +5,7 @@ import { opensOn } from '../sheets/opens-on.ts';
 import { setPrint } from '../sheets/print-setup.ts';
 import { NARROW_TEXT, tablesSheet } from '../sheets/report-sheet.ts';
 import { steadyWorkbookBytes } from '../steady-bytes.ts';
+import type { DeflateRaw } from '../zip-deflate.ts';
 
 /** Long sentences wrap in a column this wide. */
 const SENTENCE_WIDTH = 90;
@@ -14,7 +15,7 @@ const SENTENCE_WIDTH = 90;
  * the figures side by side, and the findings that differ, each sheet opening
  * with the caution and set up to print. The tables are the document's.
  */
-export async function renderCompareWorkbook(doc: ReportDocument, creator: string): Promise<Uint8Array> {
+export async function renderCompareWorkbook(doc: ReportDocument, creator: string, deflateRaw?: DeflateRaw): Promise<Uint8Array> {
   const wb = new ExcelJS.Workbook();
   wb.creator = creator;
   wb.title = doc.title;
@@ -28,5 +29,5 @@ export async function renderCompareWorkbook(doc: ReportDocument, creator: string
   ], { frozen: true, maxWidth: NARROW_TEXT });
   setPrint(findings.ws);
   opensOn(wb, why.ws);
-  return steadyWorkbookBytes(wb);
+  return steadyWorkbookBytes(wb, deflateRaw);
 }
