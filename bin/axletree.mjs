@@ -16,7 +16,7 @@ setFlagsFromString('--liftoff-only');
 // make it): measured on the demo's check, peak memory 151-159 -> 135-139 MB
 // with CPU time the same within the noise. It is a start-up option, so it
 // holds where the bin is run as a program (npx, an installed axletree);
-// `node bin/axletree.mjs` runs without it.
+// `npm start` passes it too; a bare `node bin/axletree.mjs` runs without it.
 // The old generation grows by a tenth at each full collection rather than by
 // V8's own factor (up to fourfold): the decisive-input search leaves much
 // short-lived garbage, and a heap grown for it stays grown while the outputs
