@@ -97,7 +97,8 @@ export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; sear
       work += trialWeight(stale);
       const seed = new Map([...a.computed].filter(([m]) => !stale.has(m) && !carriers.has(m)));
       // No output draws a trial's ride: its cases keep no time series.
-      const graph = new ModelGraph(MODELS, { ...a.inputs, ...changed, rideSeries: false }, { seed });
+      // Where the trial kept the check's net, its standing floor starts from the check's (the same answer to the solver's tolerance).
+      const graph = new ModelGraph(MODELS, { ...a.inputs, ...changed, rideSeries: false, startFrom: a.computed }, { seed });
       const readers = rules.filter((r) => readsOf.get(r.id)!.has(key));
       out = new Map(runRules(readers, changed.spec, changed.data, graph).map((f) => [findingKey(f), trialFinding(f)]));
     }

@@ -13,6 +13,11 @@ export interface ModelInputs {
   ride: boolean;
   /** False where no output will draw the ride's time series (a decisive trial): the ride cases keep none. */
   rideSeries?: boolean;
+  /**
+   * The values of the check this run varies (a decisive-input trial's base check), for a model whose iterative
+   * solve may start from its own earlier answer: only where that answer is of the same net, and only as a start.
+   */
+  startFrom?: ReadonlyMap<ModelId, unknown>;
 }
 
 /** The models a function names, with the specification and the data: what an output reads. */

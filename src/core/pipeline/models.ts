@@ -1,5 +1,6 @@
 import { cuttingResult } from '../cutlist/cutting-model.ts';
-import { floorModel, floorModels, floorSetup } from '../model/cable-net/floor-model.ts';
+import { floorModel, floorModels, floorSetup, type FloorModel, type FloorSetup } from '../model/cable-net/floor-model.ts';
+import type { FloorStart } from '../model/cable-net/floor-state.ts';
 import { lashingDemands } from '../model/lashing-demand.ts';
 import { loadCases } from '../model/load-cases.ts';
 import { massModel } from '../model/mass-model.ts';
@@ -88,11 +89,23 @@ export const floorSetupDef = defineModel({
   compute: (_, { spec, data }) => floorSetup(spec, data),
 });
 
+/** A solved state usable as a start for this setup's net: as many nodes and straps; undefined otherwise. */
+function sameShape(solution: FloorStart | undefined, setup: FloorSetup): FloorStart | undefined {
+  const net = setup.built?.floor.net;
+  return solution && net && solution.sag.length === net.nodes.length && solution.pulls.length === net.straps.length ? solution : undefined;
+}
+
 export const floorStaticDef = defineModel({
   id: 'floorStatic',
   needs: ['floorSetup'],
   params: FLOOR,
-  compute: ({ floorSetup }, { spec, data }) => floorModel(spec, data, { value: 1, source: 'the crew standing, no dynamic factor' }, {}, floorSetup),
+  compute: ({ floorSetup }, { spec, data, startFrom }) => {
+    // A run that varies a check starts from the check's standing floor where its net has as many nodes and straps
+    // (the same net, or one with other dimensions or straps of another make): a start, not an answer.
+    const start = sameShape((startFrom?.get('floorStatic') as FloorModel | undefined)?.solution, floorSetup);
+
+    return floorModel(spec, data, { value: 1, source: 'the crew standing, no dynamic factor' }, start ? { start } : {}, floorSetup);
+  },
 });
 
 /** The wheel's own radial stiffness from its ring frame, rolling (averaged round the rim) and striking (its stiffest). */

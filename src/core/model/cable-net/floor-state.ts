@@ -28,4 +28,12 @@ export interface FloorModel extends FloorResult {
   history: number[];
   /** The frame under this case's strap pulls; null where the net was not solved. */
   frame: FloorFrameResult | null;
+  /** The solved sags and strap pulls, for a later solve of the same net to start from (absent where it did not converge). */
+  solution?: FloorStart;
+}
+
+/** A solved state of a net: each node's sag, mm, and each strap's pull on the frame, N. */
+export interface FloorStart {
+  sag: Float64Array;
+  pulls: Float64Array;
 }
