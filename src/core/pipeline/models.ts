@@ -179,16 +179,20 @@ export const stoneFactorsDef = defineModel({
 /**
  * The four loaded floor states of the check solved together: the net, its
  * frame and the pretension built and solved once, each state started from the
- * one below it (floorModels). Each of the four models below picks its own.
+ * one below it, the lightest from the standing floor (floorModels). Each of
+ * the four models below picks its own.
  */
 export const floorLoadedDef = defineModel({
   id: 'floorLoaded',
-  needs: ['bumpFactors', 'stoneFactors', 'floorSetup'],
+  needs: ['bumpFactors', 'stoneFactors', 'floorSetup', 'floorStatic'],
   params: [...FLOOR, ...COMBINATION_PARAMS],
-  compute: ({ bumpFactors, stoneFactors, floorSetup }, { spec, data }) => {
+  compute: ({ bumpFactors, stoneFactors, floorSetup, floorStatic }, { spec, data }) => {
     // Nothing reads a loaded state's tangent under the crew (the ride model's spring is the standing floor's): not computed.
     const factors = [bumpFactors.crew, stoneFactors.crew, designFloorFactor(data, null), designFloorFactor(data, bumpFactors.crew)];
-    const [bump, stone, design, designRough] = floorModels(spec, data, factors, { crewTangent: false }, floorSetup);
+    // Every loaded state is heavier than the standing floor of the same net: the lightest starts from it, the rest each
+    // from the one below (floorModels), so no state starts from the sags on rigid anchors.
+    const start = floorStatic.solution;
+    const [bump, stone, design, designRough] = floorModels(spec, data, factors, { crewTangent: false, ...(start ? { start } : {}) }, floorSetup);
     return { bump, stone, design, designRough };
   },
 });
