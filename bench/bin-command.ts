@@ -7,7 +7,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
-export const BIN = join(ROOT, 'bin', 'axletree.mjs');
+const BIN = join(ROOT, 'bin', 'axletree.mjs');
 
 /** The Node options on a script's first line: `#!/usr/bin/env -S node <options>` or `#!/usr/bin/env node`. */
 export function shebangNodeOptions(firstLine: string): string[] {

@@ -1,6 +1,6 @@
-import { nativeDeflateRaw } from './native-deflate.ts';
 import type { CheckResult } from '../core/result/check-result.ts';
 import { writeFileSet } from './write-file-set.ts';
+import { nativeDeflateRaw } from './native-deflate.ts';
 import type { PdfPrinter } from './pdf-printer.ts';
 import { reportDocument } from '../render/model/report-document.ts';
 import { summaryDocument } from '../render/model/summary-document.ts';

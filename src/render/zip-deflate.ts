@@ -55,8 +55,7 @@ export function deflateStoredZip(bytes: Uint8Array, deflateRaw: DeflateRaw): Uin
   for (const e of entries) {
     offsets.push(put);
     out.set(e.local, put);
-    const flags = o.getUint16(put + 6, true) & ~DESCRIPTOR_FLAG;
-    o.setUint16(put + 6, flags, true);
+    o.setUint16(put + 6, o.getUint16(put + 6, true) & ~DESCRIPTOR_FLAG, true);
     o.setUint16(put + 8, DEFLATED, true);
     o.setUint16(put + 4, Math.max(o.getUint16(put + 4, true), DEFLATE_VERSION), true);
     // The CRC and the plain size, from the directory (a local header with a descriptor holds zeros there).

@@ -1,6 +1,5 @@
 import { cuttingResult } from '../cutlist/cutting-model.ts';
-import { floorModel, floorModels, floorSetup, type FloorModel, type FloorSetup } from '../model/cable-net/floor-model.ts';
-import type { FloorStart } from '../model/cable-net/floor-state.ts';
+import { floorModel, floorModels, floorSetup, type FloorModel } from '../model/cable-net/floor-model.ts';
 import { lashingDemands } from '../model/lashing-demand.ts';
 import { loadCases } from '../model/load-cases.ts';
 import { massModel } from '../model/mass-model.ts';
@@ -89,22 +88,14 @@ export const floorSetupDef = defineModel({
   compute: (_, { spec, data }) => floorSetup(spec, data),
 });
 
-/** A solved state usable as a start for this setup's net: as many nodes and straps; undefined otherwise. */
-function sameShape(solution: FloorStart | undefined, setup: FloorSetup): FloorStart | undefined {
-  const net = setup.built?.floor.net;
-  return solution && net && solution.sag.length === net.nodes.length && solution.pulls.length === net.straps.length ? solution : undefined;
-}
-
 export const floorStaticDef = defineModel({
   id: 'floorStatic',
   needs: ['floorSetup'],
   params: FLOOR,
   compute: ({ floorSetup }, { spec, data, startFrom }) => {
-    // A run that varies a check starts from the check's standing floor where its net has as many nodes and straps
-    // (the same net, or one with other dimensions or straps of another make): a start, not an answer.
-    const start = sameShape((startFrom?.get('floorStatic') as FloorModel | undefined)?.solution, floorSetup);
-
-    return floorModel(spec, data, { value: 1, source: 'the crew standing, no dynamic factor' }, start ? { start } : {}, floorSetup);
+    // A run that varies a check starts from the check's standing floor (floorModels takes it where the net fits).
+    const start = (startFrom?.get('floorStatic') as FloorModel | undefined)?.solution;
+    return floorModel(spec, data, { value: 1, source: 'the crew standing, no dynamic factor' }, { start }, floorSetup);
   },
 });
 
@@ -128,9 +119,10 @@ export const rideInputDef = defineModel({
  * cases over rough ground (the routine factors read these alone), over the
  * stone (the stone's factors), and the drop test. A re-run that reaches only
  * the routine factors (a decisive trial, a sweep point) runs two cases, not five.
+ * The ride's input is read only where the ride runs (a model's needs are
+ * computed on first read): a statics-only run computes neither it nor the
+ * wheel's stiffness, which only the ride reads.
  */
-// The models are read only where the ride runs (a model's needs are computed on first read): a statics-only run
-// computes neither the ride's input nor the wheel's stiffness, which only the ride reads.
 const rideGroup =
   (cases: readonly RideCase[]) =>
   (models: { readonly rideInput: RideInput }, { spec, ride, rideSeries }: ModelInputs) =>
@@ -191,8 +183,7 @@ export const floorLoadedDef = defineModel({
     const factors = [bumpFactors.crew, stoneFactors.crew, designFloorFactor(data, null), designFloorFactor(data, bumpFactors.crew)];
     // Every loaded state is heavier than the standing floor of the same net: the lightest starts from it, the rest each
     // from the one below (floorModels), so no state starts from the sags on rigid anchors.
-    const start = floorStatic.solution;
-    const [bump, stone, design, designRough] = floorModels(spec, data, factors, { crewTangent: false, ...(start ? { start } : {}) }, floorSetup);
+    const [bump, stone, design, designRough] = floorModels(spec, data, factors, { crewTangent: false, start: floorStatic.solution }, floorSetup);
     return { bump, stone, design, designRough };
   },
 });

@@ -39,9 +39,10 @@ export interface FloorOptions {
    */
   crewTangent?: boolean;
   /**
-   * A solved state of the same net (the same setup) to start the lightest state from, in place of the sags on rigid
-   * anchors: a decisive-input trial starts from the check's own standing floor. The answer is the same to the
-   * solver's tolerance, reached in fewer steps where the load changed little.
+   * A solved state to start the lightest state from, in place of the sags on rigid anchors: the loaded states start
+   * from the standing floor, a decisive-input trial's standing floor from the check's. Taken only where it has as
+   * many nodes and straps as this net (another make of strap or other dimensions may keep the shape). The answer is
+   * the same to the solver's tolerance, reached in fewer steps where the load changed little.
    */
   start?: FloorStart;
 }
@@ -130,12 +131,14 @@ export function floorModels(spec: CheckedSpecification, data: RulesData, factors
   const restFrame = frameResult(basis, frame, anchors, rest, kept.frame);
   const out = new Array<FloorModel>(factors.length);
   let below: CoupledSolution | undefined;
+  const given = options.start && options.start.sag.length === floor.net.nodes.length && options.start.pulls.length === floor.net.straps.length ? options.start : undefined;
   for (const i of [...factors.keys()].sort((p, q) => heads[p].head.appliedLoad_N - heads[q].head.appliedLoad_N)) {
     const { head, settings } = heads[i];
     const crew = crewLoads(spec, floor, head.factor);
     const loads = nodalLoads(floor, crew);
-    // The lightest state starts from the sags on rigid anchors (a rough, cheap solve) and the pretension's pulls; each heavier one from the state below.
-    const start = below ?? options.start ?? { sag: solveNet(floor.net, loads, { tolerance_N: START_FRACTION * Math.max(head.appliedLoad_N, 1), maxIterations }, undefined, K).sag, pulls: rest.pulls };
+    // The lightest state starts from the state given, where it fits this net, or else from the sags on rigid anchors (a
+    // rough, cheap solve) and the pretension's pulls; each heavier one from the state below.
+    const start = below ?? given ?? { sag: solveNet(floor.net, loads, { tolerance_N: START_FRACTION * Math.max(head.appliedLoad_N, 1), maxIterations }, undefined, K).sag, pulls: rest.pulls };
     const sol = solveCoupled(floor.net, loads, F, settings, start, workspace);
     if (sol.converged) below = sol;
     out[i] = floorState(spec, floor, head, crew, sol, rest, F, workspace, restFrame(frame.solve(sol.pulls)), options.crewTangent ?? true);
