@@ -2,7 +2,11 @@
 // compression only, so one whose force would turn to tension goes slack and
 // the ring is solved again, one change at a time, until no spoke changes.
 // The ring's solve is the caller's (a fresh one, or a factor kept for the set
-// of bearing spokes).
+// of bearing spokes). The search starts with every spoke bearing, or from a
+// set the caller guesses (a neighbouring contact position's): the spokes
+// only push, so the ring's energy has one minimum and the set that settles is
+// the same from any start (bar a spoke whose force is within the tolerance of
+// nil), and so is every number solved with it; a good guess only saves rounds.
 
 /** A spoke force this small against the loads (P + C0) is nil: it neither drops a spoke nor brings one back. */
 const TOLERANCE = 1e-6;
@@ -19,6 +23,8 @@ export interface SpokeSearch {
   limit: number;
   /** The ring's displacements with these spokes bearing (a slack one's C0 taken off the rim). */
   solve(active: readonly boolean[]): Float64Array;
+  /** The bearing spokes to start from; every spoke where omitted. */
+  start?: readonly boolean[];
 }
 
 export interface SpokeSearchEnd {
@@ -61,8 +67,8 @@ function wrongSign(active: readonly boolean[], would: readonly number[]): number
 
 export function searchSlackSpokes(s: SpokeSearch): SpokeSearchEnd {
   const { nodes, spokeNodes } = s;
-  let active = spokeNodes.map(() => true);
-  const seen = new Set<string>([active.map(() => 1).join('')]);
+  let active = s.start ? [...s.start] : spokeNodes.map(() => true);
+  const seen = new Set<string>([active.map((a) => (a ? 1 : 0)).join('')]);
   for (let round = 1; round <= s.limit; round++) {
     const u = s.solve(active);
     // Each spoke's force from its node's inward movement under the ground load (the nave fixed), whether or not it bore this round.
@@ -79,4 +85,19 @@ export function searchSlackSpokes(s: SpokeSearch): SpokeSearchEnd {
     active = next;
   }
   throw new Error('the slack-spoke search needs at least one round');
+}
+
+/**
+ * A guess at the bearing spokes from a solution at a nearby contact position
+ * (`near`: its spokes, at their angles from its contact): each spoke takes the
+ * state of the nearest of them in angle. Spokes that lean the same way from
+ * the contact bear alike, so a step of the contact round the rim mostly keeps
+ * the set.
+ */
+export function nearbyBearing(near: readonly { angle: number; active: boolean }[], angles: readonly number[]): boolean[] {
+  const apart = (a: number, b: number) => {
+    const d = Math.abs(a - b) % (2 * Math.PI);
+    return Math.min(d, 2 * Math.PI - d);
+  };
+  return angles.map((a) => near.reduce((best, s) => (apart(s.angle, a) < apart(best.angle, a) ? s : best)).active);
 }

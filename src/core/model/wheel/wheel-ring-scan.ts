@@ -53,7 +53,7 @@ function scaled(r: WheelRingResult, f: number): WheelRingResult {
   };
 }
 
-function solveAt(ws: WheelRingSpec, P: number, at: number, around: readonly number[], kept?: HeldRingCache): WheelRingResult {
+function solveAt(ws: WheelRingSpec, P: number, at: number, around: readonly number[], kept?: HeldRingCache, near?: WheelRingResult): WheelRingResult {
   const joints = ws.joints.angles.map((j) => wrapAngle(j - at));
   return solveWheelRing(
     ws.ring,
@@ -64,7 +64,28 @@ function solveAt(ws: WheelRingSpec, P: number, at: number, around: readonly numb
       nodesAt: [...joints, ...joints.flatMap((j) => around.map((d) => wrapAngle(j + d)))],
     },
     kept,
+    near,
   );
+}
+
+/**
+ * Each position solved in turn, the slack-spoke search of each started from
+ * bearing spokes that likely settle: those of the same position in `guide`
+ * (the same wheel and load scanned with fewer nodes) where given; else, where
+ * `fromBefore`, those of the position before, if it is one step of the scan
+ * away (a jump to another part of the rim would guess worse than every spoke
+ * bearing). A tyre's pre-compression keeps most spokes bearing, so its scan
+ * starts with every spoke bearing (`fromBefore` false): a neighbour's guess
+ * saves nothing there.
+ */
+function inTurn(ws: WheelRingSpec, where: readonly { at: number; label: string }[], guide: readonly LoadPosition[] | undefined, fromBefore: boolean, solve: (at: number, i: number, near?: WheelRingResult) => WheelRingResult): LoadPosition[] {
+  const step = (2 * Math.PI) / ws.ring.spokes / (2 * STEPS);
+  const out: LoadPosition[] = [];
+  where.forEach((p, i) => {
+    const before = fromBefore && i > 0 && Math.abs(wrapAngle(p.at - where[i - 1].at + Math.PI) - Math.PI) <= 1.001 * step ? out[i - 1].result : undefined;
+    out.push({ ...p, result: solve(p.at, i, guide?.[i]?.result ?? before) });
+  });
+  return out;
 }
 
 /**
@@ -80,17 +101,19 @@ const heldScans = ringMemo<HeldRingCache[]>(4);
 /**
  * The ring at every contact position, for each ground load in `loads` (N).
  * `around`: angles either side of each joint (rad, signed) that must be nodes,
- * e.g. the ends of the length over which a joint weakens the felloe.
+ * e.g. the ends of the length over which a joint weakens the felloe; `guide`:
+ * the same wheel's scan for the same loads without them, whose bearing spokes
+ * start each position's search (the answer is the same without it).
  */
-export function scanWheelRing(ws: WheelRingSpec, loads: readonly number[], around: readonly number[] = []): LoadPosition[][] {
+export function scanWheelRing(ws: WheelRingSpec, loads: readonly number[], around: readonly number[] = [], guide?: readonly LoadPosition[][]): LoadPosition[][] {
   const where = positions(ws);
   if (ws.ring.precompression === 0) {
-    const unit = keptByRing(unitScans, ws, around, () => where.map((p) => ({ ...p, result: solveAt(ws, 1, p.at, around) })));
+    const unit = keptByRing(unitScans, ws, around, () => inTurn(ws, where, guide?.[0], true, (at, _, near) => solveAt(ws, 1, at, around, undefined, near)));
     return loads.map((P) => unit.map((p) => ({ ...p, result: scaled(p.result, P) })));
   }
   // Each position's mesh, tyre state, ring and factors are kept for the loads after the first.
   const held = keptByRing(heldScans, ws, around, () => where.map(() => new HeldRingCache()));
-  return loads.map((P) => where.map((p, i) => ({ ...p, result: solveAt(ws, P, p.at, around, held[i]) })));
+  return loads.map((P, k) => inTurn(ws, where, guide?.[k], false, (at, i, near) => solveAt(ws, P, at, around, held[i], near)));
 }
 
 /** The node of a result at an angle of the wheel's frame. */

@@ -2,7 +2,7 @@ import { nodeAt, ringNodes, wrapAngle } from './ring-mesh.ts';
 import { RingNotHeld, solveRingFrame, type RingLoad, type RingSolution, type RingSpring } from './ring-frame.ts';
 import type { BandCholesky } from './band-cholesky.ts';
 import { RingSystem } from './ring-system.ts';
-import { searchSlackSpokes } from './slack-spokes.ts';
+import { nearbyBearing, searchSlackSpokes, type SpokeSearchEnd } from './slack-spokes.ts';
 
 // The wheel as a ring frame (design basis, section 6): the felloe a closed
 // ring of straight beam elements on its mid-depth radius, the spokes axial
@@ -129,9 +129,9 @@ function tyreState(ring: WheelRing, nodes: readonly number[], spokeNodes: readon
  * hinged so close together that a length of rim between two spokes is a
  * mechanism) gives no numbers, only the reason, in `unsettled`.
  */
-export function solveWheelRing(ring: WheelRing, load: WheelLoad, kept?: HeldRingCache): WheelRingResult {
+export function solveWheelRing(ring: WheelRing, load: WheelLoad, kept?: HeldRingCache, near?: WheelRingResult): WheelRingResult {
   try {
-    return solveHeldRing(ring, load, kept);
+    return solveHeldRing(ring, load, kept, near);
   } catch (e) {
     if (!(e instanceof RingNotHeld)) throw e;
     const hinged = (load.hinges ?? []).length;
@@ -221,14 +221,33 @@ export class HeldRingCache {
   }
 }
 
-function solveHeldRing(ring: WheelRing, load: WheelLoad, kept?: HeldRingCache): WheelRingResult {
+/**
+ * The slack-spoke search, started from the bearing spokes of `near` (a settled solution at a nearby contact) where
+ * given: the same set settles from any start, in fewer rounds from a good one. A guess that does not settle, or
+ * leaves the ring unheld, is dropped and the search runs from every spoke bearing, as without one.
+ */
+function searchFromNear(search: (start?: readonly boolean[]) => SpokeSearchEnd, angles: readonly number[], near?: WheelRingResult): SpokeSearchEnd {
+  if (near && near.unsettled === undefined) {
+    try {
+      const end = search(nearbyBearing(near.spokes, angles));
+      if (end.unsettled === undefined) return end;
+    } catch (e) {
+      if (!(e instanceof RingNotHeld)) throw e;
+    }
+  }
+  return search();
+}
+
+function solveHeldRing(ring: WheelRing, load: WheelLoad, kept?: HeldRingCache, near?: WheelRingResult): WheelRingResult {
   const span = (TWO_PI * ring.radius) / ring.spokes;
   const { angles, nodes, spokeNodes, tyre, system, factorFor } = kept ? kept.get(ring, load) : heldRing(ring, load);
   const n = nodes.length;
-  const end = searchSlackSpokes({
-    nodes, spokeNodes, k: ring.spokeStiffness, C0: ring.precompression, P: load.P, limit: 4 * ring.spokes,
-    solve: (active) => factorFor(active).solve(system.loadVector(groundLoads(ring, load.P, 0, spokeNodes, active))),
-  });
+  const search = (start?: readonly boolean[]) =>
+    searchSlackSpokes({
+      nodes, spokeNodes, k: ring.spokeStiffness, C0: ring.precompression, P: load.P, limit: 4 * ring.spokes, start,
+      solve: (active) => factorFor(active).solve(system.loadVector(groundLoads(ring, load.P, 0, spokeNodes, active))),
+    });
+  const end = searchFromNear(search, angles, near);
   const { active, would, u } = end;
   const sol = system.solution(u, bearingSprings(ring, spokeNodes, active));
   // Each element's axial and shear force, the tyre's state added where there is one.

@@ -17,7 +17,7 @@ function scanWithEnds(ring: ModelValues['wheelRingScan'], loads: readonly number
   let byHalf = withEnds.get(ring);
   if (!byHalf) withEnds.set(ring, (byHalf = new Map<number, LoadPosition[][]>()));
   let scans = byHalf.get(half);
-  if (!scans) byHalf.set(half, (scans = scanWheelRing(ring.ws, loads, [-half, half])));
+  if (!scans) byHalf.set(half, (scans = scanWheelRing(ring.ws, loads, [-half, half], ring.scans)));
   return scans;
 }
 
