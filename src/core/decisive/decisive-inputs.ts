@@ -56,7 +56,7 @@ const trialFinding = (f: Finding): TrialFinding => ({ severity: f.severity, util
  */
 export function decisiveInputs(a: DecisiveArgs): { inputs: DecisiveInput[]; search: DecisiveSearch } {
   const workLimit = a.workLimit ?? WORK_LIMIT;
-  const chosen = decisiveFindings(a.findings);
+  const chosen = decisiveFindings(a.findings, a.rules);
   const ruleIds = new Set(chosen.map((f) => f.rule));
   const rules = a.rules.filter((r) => ruleIds.has(r.id));
 

@@ -78,6 +78,11 @@ export interface RuleSpec<N extends ModelId, L extends string, P extends string,
   kind: 'check' | 'note';
   /** The most severe finding a check can give, where that is not fail. */
   worst?: 'advice' | 'warning';
+  /**
+   * True for a check of the model's own arithmetic (a solver's convergence), not of the build: its utilisation is
+   * no margin of the build's, so it is never among the findings whose decisive inputs are searched.
+   */
+  ofTheModel?: true;
   /** The sources of the rule's method (a section of the design basis, a standard). */
   method: readonly string[];
   needs: readonly N[];
@@ -94,6 +99,7 @@ export interface Rule {
   checks: string;
   kind: 'check' | 'note';
   worst?: 'advice' | 'warning';
+  ofTheModel?: true;
   method: readonly string[];
   needs: readonly ModelId[];
   limits: Readonly<Record<string, LimitSpec>>;

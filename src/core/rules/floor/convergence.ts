@@ -11,6 +11,7 @@ export const floorConvergence = defineRule({
   title: 'Floor model convergence',
   checks: 'Whether the cable-net model of the floor reached equilibrium in every state it is solved in (standing, rough ground and the stone as loaded, and the design states of the fundamental combination), within the tolerance and the number of Newton steps allowed.',
   kind: 'check',
+  ofTheModel: true,
   method: ['design-basis-floor'],
   needs: ['floorStatic', 'floorBump', 'floorStone', 'floorDesign', 'floorDesignRough', 'bumpFactors', 'stoneFactors'],
   limits: { residual: RESIDUAL },
