@@ -1,6 +1,6 @@
 import type { Rail } from '../cable-net/outline.ts';
 import { SkylineCholesky } from '../cable-net/skyline.ts';
-import { elementForces, elementStiffness, type ElementGeometry, type Section } from './frame-element.ts';
+import { elementForces, elementStiffness, type ElementForces, type ElementGeometry, type Section } from './frame-element.ts';
 import { frameLoop, type FrameLoop, type LoopMark, type LoopShape } from './frame-loop.ts';
 
 // The floor frame bending in its own plane under the straps' pulls: a closed
@@ -42,7 +42,10 @@ export interface RailMoment {
   M_Nmm: number;
   /** Where it is, on the rail's centre line, mm. */
   at: { x: number; y: number };
-  /** Axial force at that point, N (tension positive). */
+  /**
+   * Axial force at that point, N (tension positive): where two of the rail's elements meet there (a strap's anchor
+   * puts a step in the force), the more compressive, the safe side for the check of bending with compression.
+   */
   N_N: number;
 }
 
@@ -155,28 +158,49 @@ export class FloorFrame {
     return F;
   }
 
-  /** The frame under the straps' pulls: shortenings, rail moments and strut forces. */
-  solve(pulls: ArrayLike<number>): FrameState {
-    const d = this.#K.solve(this.#loads(pulls));
-    const rails = new Map<Rail, RailMoment>();
+  /** The loop's displacements under the straps' pulls. */
+  #displacements(pulls: ArrayLike<number>): Float64Array {
+    return this.#K.solve(this.#loads(pulls));
+  }
+
+  /** Each loop element's end forces under the straps' pulls, element by element. */
+  elementForces(pulls: ArrayLike<number>, d = this.#displacements(pulls)): ElementForces[] {
     const ends = new Float64Array(6);
-    for (const e of this.loop.elements) {
-      const g = this.#geometry(e);
+    return this.loop.elements.map((e) => {
       for (let i = 0; i < 3; i++) {
         ends[i] = d[3 * e.a + i];
         ends[3 + i] = d[3 * e.b + i];
       }
-      const f = elementForces(g, this.input.section, ends);
-      const pick = Math.abs(f.M1) >= Math.abs(f.M2) ? { M: f.M1, x: g.x1, y: g.y1 } : { M: f.M2, x: g.x2, y: g.y2 };
+      return elementForces(this.#geometry(e), this.input.section, ends);
+    });
+  }
+
+  /** The frame under the straps' pulls: shortenings, rail moments and strut forces. */
+  solve(pulls: ArrayLike<number>): FrameState {
+    const d = this.#displacements(pulls);
+    const rails = new Map<Rail, RailMoment & { node: number }>();
+    const { elements } = this.loop;
+    const forces = this.elementForces(pulls, d);
+    elements.forEach((e, k) => {
+      const g = this.#geometry(e);
+      const f = forces[k];
+      const pick = Math.abs(f.M1) >= Math.abs(f.M2) ? { M: f.M1, x: g.x1, y: g.y1, node: e.a } : { M: f.M2, x: g.x2, y: g.y2, node: e.b };
       const cur = rails.get(e.rail);
-      if (!cur || Math.abs(pick.M) > cur.M_Nmm) rails.set(e.rail, { rail: e.rail, M_Nmm: Math.abs(pick.M), at: { x: pick.x, y: pick.y }, N_N: f.N });
-    }
+      if (!cur || Math.abs(pick.M) > cur.M_Nmm) rails.set(e.rail, { rail: e.rail, M_Nmm: Math.abs(pick.M), at: { x: pick.x, y: pick.y }, N_N: f.N, node: pick.node });
+    });
+    // The moment is the same either side of a node (no moment is applied there), so which element's end was taken
+    // is a matter of rounding; the axial force steps at a strap's anchor, so it is taken from both of the rail's
+    // elements there (not from another rail's, met at a corner: its force runs the other way).
+    for (const r of rails.values()) elements.forEach((e, k) => (e.rail === r.rail && (e.a === r.node || e.b === r.node) ? (r.N_N = Math.min(r.N_N, forces[k].N)) : 0));
     let maxMove = 0;
     for (const a of this.#anchorDof.keys()) maxMove = Math.max(maxMove, this.input.anchors[a].inward * d[this.#anchorDof[a]]);
     return {
       shortening: this.#shortening(d),
       maxAnchorMove_mm: maxMove,
-      rails: RAILS.filter((r) => rails.has(r)).map((r) => rails.get(r)!),
+      rails: RAILS.filter((r) => rails.has(r)).map((r) => {
+        const { node: _, ...moment } = rails.get(r)!;
+        return moment;
+      }),
       struts: this.input.struts.map((s, i) => ({ part: s.part, force_N: s.stiffness_N_per_mm * (d[this.#strutDofs[i][0]] - d[this.#strutDofs[i][1]]), stiffness_N_per_mm: s.stiffness_N_per_mm })),
     };
   }
