@@ -36,4 +36,6 @@ export interface FloorModel extends FloorResult {
 export interface FloorStart {
   sag: Float64Array;
   pulls: Float64Array;
+  /** The crew's load it carries, N, where known: a heavier state may then start on the line through it and the next. */
+  appliedLoad_N?: number;
 }
