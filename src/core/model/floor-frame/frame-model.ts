@@ -178,7 +178,9 @@ export class FloorFrame {
   /** The frame under the straps' pulls: shortenings, rail moments and strut forces. */
   solve(pulls: ArrayLike<number>): FrameState {
     const d = this.#displacements(pulls);
-    const rails = new Map<Rail, RailMoment & { node: number }>();
+    const rails = new Map<Rail, RailMoment>();
+    /** The node of each rail's largest moment. */
+    const peakNode = new Map<Rail, number>();
     const { elements } = this.loop;
     const forces = this.elementForces(pulls, d);
     elements.forEach((e, k) => {
@@ -186,21 +188,25 @@ export class FloorFrame {
       const f = forces[k];
       const pick = Math.abs(f.M1) >= Math.abs(f.M2) ? { M: f.M1, x: g.x1, y: g.y1, node: e.a } : { M: f.M2, x: g.x2, y: g.y2, node: e.b };
       const cur = rails.get(e.rail);
-      if (!cur || Math.abs(pick.M) > cur.M_Nmm) rails.set(e.rail, { rail: e.rail, M_Nmm: Math.abs(pick.M), at: { x: pick.x, y: pick.y }, N_N: f.N, node: pick.node });
+      if (!cur || Math.abs(pick.M) > cur.M_Nmm) {
+        rails.set(e.rail, { rail: e.rail, M_Nmm: Math.abs(pick.M), at: { x: pick.x, y: pick.y }, N_N: f.N });
+        peakNode.set(e.rail, pick.node);
+      }
     });
     // The moment is the same either side of a node (no moment is applied there), so which element's end was taken
     // is a matter of rounding; the axial force steps at a strap's anchor, so it is taken from both of the rail's
     // elements there (not from another rail's, met at a corner: its force runs the other way).
-    for (const r of rails.values()) elements.forEach((e, k) => (e.rail === r.rail && (e.a === r.node || e.b === r.node) ? (r.N_N = Math.min(r.N_N, forces[k].N)) : 0));
+    elements.forEach((e, k) => {
+      const r = rails.get(e.rail);
+      const node = peakNode.get(e.rail);
+      if (r && (e.a === node || e.b === node)) r.N_N = Math.min(r.N_N, forces[k].N);
+    });
     let maxMove = 0;
     for (const a of this.#anchorDof.keys()) maxMove = Math.max(maxMove, this.input.anchors[a].inward * d[this.#anchorDof[a]]);
     return {
       shortening: this.#shortening(d),
       maxAnchorMove_mm: maxMove,
-      rails: RAILS.filter((r) => rails.has(r)).map((r) => {
-        const { node: _, ...moment } = rails.get(r)!;
-        return moment;
-      }),
+      rails: RAILS.filter((r) => rails.has(r)).map((r) => rails.get(r)!),
       struts: this.input.struts.map((s, i) => ({ part: s.part, force_N: s.stiffness_N_per_mm * (d[this.#strutDofs[i][0]] - d[this.#strutDofs[i][1]]), stiffness_N_per_mm: s.stiffness_N_per_mm })),
     };
   }

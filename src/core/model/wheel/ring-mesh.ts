@@ -11,6 +11,11 @@ export function wrapAngle(a: number): number {
   return w < 0 ? w + TWO_PI : w;
 }
 
+/** How far apart two angles are round the ring, the shorter way: 0 to π. */
+export function angleApart(a: number, b: number): number {
+  return Math.abs(wrapAngle(a - b + Math.PI) - Math.PI);
+}
+
 /** Angles closer than this are one node (radians; far below any element). */
 const SAME = 1e-9;
 

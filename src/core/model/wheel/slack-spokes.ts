@@ -8,6 +8,8 @@
 // the same from any start (bar a spoke whose force is within the tolerance of
 // nil), and so is every number solved with it; a good guess only saves rounds.
 
+import { angleApart } from './ring-mesh.ts';
+
 /** A spoke force this small against the loads (P + C0) is nil: it neither drops a spoke nor brings one back. */
 const TOLERANCE = 1e-6;
 
@@ -95,9 +97,5 @@ export function searchSlackSpokes(s: SpokeSearch): SpokeSearchEnd {
  * the set.
  */
 export function nearbyBearing(near: readonly { angle: number; active: boolean }[], angles: readonly number[]): boolean[] {
-  const apart = (a: number, b: number) => {
-    const d = Math.abs(a - b) % (2 * Math.PI);
-    return Math.min(d, 2 * Math.PI - d);
-  };
-  return angles.map((a) => near.reduce((best, s) => (apart(s.angle, a) < apart(best.angle, a) ? s : best)).active);
+  return angles.map((a) => near.reduce((best, s) => (angleApart(s.angle, a) < angleApart(best.angle, a) ? s : best)).active);
 }

@@ -1,4 +1,4 @@
-import { nodeAt, sameAngle, wrapAngle } from './ring-mesh.ts';
+import { angleApart, nodeAt, sameAngle, wrapAngle } from './ring-mesh.ts';
 import { HeldRingCache, solveWheelRing, type WheelRingResult } from './wheel-ring.ts';
 import type { WheelRingSpec } from './wheel-ring-spec.ts';
 import { keptByRing, ringMemo } from './kept-by-ring.ts';
@@ -82,7 +82,7 @@ function inTurn(ws: WheelRingSpec, where: readonly { at: number; label: string }
   const step = (2 * Math.PI) / ws.ring.spokes / (2 * STEPS);
   const out: LoadPosition[] = [];
   where.forEach((p, i) => {
-    const before = fromBefore && i > 0 && Math.abs(wrapAngle(p.at - where[i - 1].at + Math.PI) - Math.PI) <= 1.001 * step ? out[i - 1].result : undefined;
+    const before = fromBefore && i > 0 && angleApart(p.at, where[i - 1].at) <= 1.001 * step ? out[i - 1].result : undefined;
     out.push({ ...p, result: solve(p.at, i, guide?.[i]?.result ?? before) });
   });
   return out;
@@ -123,5 +123,5 @@ export function nodeAtWheelAngle(p: LoadPosition, angle: number): number {
 
 /** Distance along the rim between a node of a result and an angle of the wheel's frame, rad (0 to π). */
 export function angleFrom(p: LoadPosition, node: number, angle: number): number {
-  return Math.abs(wrapAngle(p.result.nodes[node] + p.at - angle + Math.PI) - Math.PI);
+  return angleApart(p.result.nodes[node] + p.at, angle);
 }
