@@ -19,10 +19,13 @@ import { median, medianMs, verdict } from './median.ts';
 export const WORKBENCH_TARGET_MS = 100;
 const DEMO = new URL('../specs/demo-two-crew.yaml', import.meta.url);
 
-/** Milliseconds from setting the field to the page showing the new statics verdict, for each value. */
+/**
+ * For each value, milliseconds from setting the field to the page showing the new statics verdict, and to the
+ * whole answer drawn (the findings and figures follow the verdict in the page's next task).
+ */
 function editTimes(field: string, values: number[]) {
   return async (page: import('playwright-core').Page) => {
-    const out: number[] = [];
+    const out: { verdict: number; whole: number }[] = [];
     for (const v of values) {
       out.push(
         await page.evaluate(
@@ -41,7 +44,22 @@ function editTimes(field: string, values: number[]) {
               });
               o.observe(document.body, { attributes: true });
             });
-            const ms = performance.now() - t0;
+            const verdict = performance.now() - t0;
+            // The whole answer of this check drawn (its statics, or its full answer where that came first).
+            await new Promise<void>((done) => {
+              const o = new MutationObserver(() => {
+                if ((document.body.dataset.drawn ?? '').startsWith(`${document.body.dataset.checked}-`)) {
+                  o.disconnect();
+                  done();
+                }
+              });
+              o.observe(document.body, { attributes: true });
+              if ((document.body.dataset.drawn ?? '').startsWith(`${document.body.dataset.checked}-`)) {
+                o.disconnect();
+                done();
+              }
+            });
+            const whole = performance.now() - t0;
             // Let the ride cases finish before the next edit, as a person pausing would.
             // (No named functions in here: the page runs this text as it stands.)
             await new Promise<void>((done) => {
@@ -52,8 +70,13 @@ function editTimes(field: string, values: number[]) {
                 }
               });
               o.observe(document.body, { attributes: true });
+              // They may have come while the answer was drawn.
+              if (document.body.dataset.stage === 'full' && document.body.dataset.pictures === `${document.body.dataset.checked}-full`) {
+                o.disconnect();
+                done();
+              }
             });
-            return ms;
+            return { verdict, whole };
           },
           [field, v] as const,
         ),
@@ -62,7 +85,6 @@ function editTimes(field: string, values: number[]) {
     return out;
   };
 }
-
 
 export async function benchWorkbench(data: RulesData): Promise<number> {
   const page = await readWorkbenchPage();
@@ -83,13 +105,16 @@ export async function benchWorkbench(data: RulesData): Promise<number> {
     await tab.locator('#verdict[data-stage="full"]').waitFor({ timeout: 60_000 });
     // The first edits warm the page's compiler; they are not counted.
     await editTimes('f-team.horse_mass_kg', [410, 400, 410])(tab);
-    const horse = median(await editTimes('f-team.horse_mass_kg', [400, 420, 440, 460, 440, 420, 400, 380, 400])(tab));
-    const axle = median(await editTimes('f-axle.x_mm', [200, 220, 240, 260, 240, 220, 200, 180, 200])(tab));
+    const horse = await editTimes('f-team.horse_mass_kg', [400, 420, 440, 460, 440, 420, 400, 380, 400])(tab);
+    const axle = await editTimes('f-axle.x_mm', [200, 220, 240, 260, 240, 220, 200, 180, 200])(tab);
     console.log(`workbench (chromium, specs/demo-two-crew.yaml): statics check in this process (runCheck, nothing reused) ${reference.toFixed(0)} ms`);
-    for (const [label, ms] of [['an edit the floor does not read (horse mass)', horse], ['an edit the floor reads (axle position)', axle]] as const) {
+    for (const [label, times] of [['an edit the floor does not read (horse mass)', horse], ['an edit the floor reads (axle position)', axle]] as const) {
+      const ms = median(times.map((t) => t.verdict));
+      const whole = median(times.map((t) => t.whole));
       const ok = ms < WORKBENCH_TARGET_MS;
       missed += ok ? 0 : 1;
       console.log(`  edit to statics verdict on the page, ${label}: median ${ms.toFixed(0)} ms (${(ms / reference).toFixed(1)}x the in-process check)  target < ${WORKBENCH_TARGET_MS} ms ${verdict(ok)}`);
+      console.log(`    to the whole answer drawn (the findings and figures follow the verdict): median ${whole.toFixed(0)} ms`);
     }
   } finally {
     await context.close();

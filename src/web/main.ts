@@ -19,8 +19,6 @@ import { decisiveView, figuresView, findingsView, legendView, picturesView, verd
 import { putAt } from './spec-path.ts';
 
 const STORE = 'axletree.workbench.build';
-// The worker drops a change overtaken by a newer one, so a short wait is enough to gather a burst of keys.
-const DEBOUNCE_MS = 15;
 const sections = formSections();
 
 // --- the build being edited --------------------------------------------------
@@ -68,22 +66,23 @@ const askSearcher = (m: ToWorker) => {
 };
 
 let shown: Shown | null = null;
+/** The check whose answer is shown. */
+let shownId = 0;
 let baseline: ResultView | null = null;
 /** The drawings and plots, parsed once when they arrive and moved from draw to draw. */
 let picturesNode: HTMLElement = picturesView([], []);
 let issues: InputIssue[] = [];
 let decisive: DecisiveInput[] | null = null;
 let decisiveBusy = false;
-let timer: ReturnType<typeof setTimeout> | undefined;
 /** When the last edit was made, for the time to the verdict shown on the page. */
 let editedAt = 0;
 
+// Sent at once, with no wait to gather a burst of keys: the worker takes the newest change each time it is free and
+// drops those it overtook, so a burst costs at most the one check already running (and keys typed by hand come
+// further apart than any short wait would gather).
 function check(): void {
-  clearTimeout(timer);
-  timer = setTimeout(() => {
-    latestCheck = nextId++;
-    ask({ type: 'check', id: latestCheck, raw: structuredClone(spec) });
-  }, DEBOUNCE_MS);
+  latestCheck = nextId++;
+  ask({ type: 'check', id: latestCheck, raw: structuredClone(spec) });
 }
 
 // --- the page ---------------------------------------------------------------------
@@ -122,9 +121,26 @@ function changed(): void {
   check();
 }
 
+const staleText = () => (issues.length ? `The form has ${issues.length} problem${issues.length === 1 ? '' : 's'} (marked at the fields); the answer below is for the last valid build.` : null);
+
+/**
+ * A new answer's verdict in place of the one shown, at once; the findings, figures and the rest follow in the
+ * next task (drawResult), marked busy meanwhile: building them takes a page some tens of milliseconds.
+ */
+function drawVerdict(): void {
+  const old = resultHost.querySelector('#verdict');
+  if (!shown || !old) return drawResult();
+  old.replaceWith(verdictView(shown, staleText()));
+  resultHost.setAttribute('aria-busy', 'true');
+  const drawn = shown;
+  setTimeout(() => {
+    if (shown === drawn) drawResult();
+  }, 0);
+}
+
 function drawResult(): void {
   if (!shown) return;
-  const stale = issues.length ? `The form has ${issues.length} problem${issues.length === 1 ? '' : 's'} (marked at the fields); the answer below is for the last valid build.` : null;
+  const stale = staleText();
   const plan = crewPlan(spec, (path, v) => {
     edit(path, v);
     const input = document.getElementById(`f-${path.join('.')}`) as HTMLInputElement | null;
@@ -141,6 +157,8 @@ function drawResult(): void {
     el('section', { id: 'cautions' }, el('h2', { text: 'Cautions' }), el('ul', {}, ...CAUTIONS.map((c) => el('li', { text: c })))),
   );
   resultHost.setAttribute('aria-busy', String(shown.stage === 'statics'));
+  // The whole answer drawn, the findings included (the bench times it beside the verdict).
+  document.body.dataset.drawn = `${shownId}-${shown.stage}`;
 }
 
 function fromWorker(e: MessageEvent<FromWorker>): void {
@@ -151,7 +169,8 @@ function fromWorker(e: MessageEvent<FromWorker>): void {
     const form = formHost.querySelector('form');
     if (form) showIssues(form, issues);
     shown = { result: m.result, stage: m.stage, ms: m.ms };
-    drawResult();
+    shownId = m.id;
+    drawVerdict();
     if (editedAt) status.textContent = `Verdict ${m.stage === 'statics' ? '(statics)' : '(with the ride)'} ${Math.round(performance.now() - editedAt)} ms after the last edit.`;
     document.body.dataset.stage = m.stage;
     document.body.dataset.checked = String(m.id);

@@ -1,7 +1,8 @@
 // The workbench in headless Chromium, served by `axletree serve` and opened
 // from disk: the verdict equals the command line's; moving the axle moves the
 // horse load and the verdict; a value out of range is marked at its field
-// while the last result stays; a YAML file opened and saved comes back
+// while the last result stays; an edit's verdict shows before the rest of its
+// answer, which follows marked busy; a YAML file opened and saved comes back
 // unchanged; a reload finds the build still there. Skipped, saying why, only
 // where no browser is installed (.ci/run installs Debian's chromium).
 import { mkdtempSync, readFileSync } from 'node:fs';
@@ -35,6 +36,13 @@ function cliVerdict(raw: unknown): { verdict: string; yoke: number } {
   const r = runCheck(p.spec, p.entries, rulesData);
   return { verdict: r.verdict, yoke: r.figures.yoke_load.value };
 }
+
+/**
+ * Waits for a newer check's whole answer with the ride drawn: its verdict comes first, then the findings, figures and
+ * the rest in the page's next task (data-drawn names the check they belong to).
+ */
+const wholeAnswer = (page: Page, old: string | null) =>
+  page.waitForFunction((o) => document.body.dataset.checked !== o && document.body.dataset.stage === 'full' && document.body.dataset.drawn === `${document.body.dataset.checked}-full`, old, { timeout: 60_000 });
 
 const figureText = async (page: Page, name: string) => (await page.locator(`#figures tr[data-figure="${name}"] td`).first().textContent()) ?? '';
 
@@ -73,11 +81,34 @@ describe.skipIf(!browser)('the workbench in headless Chromium', () => {
     const cli = cliVerdict(raw);
     const checked = await page.locator('body').getAttribute('data-checked');
     await page.locator('[id="f-axle.x_mm"]').fill('0');
-    await page.waitForFunction((old) => document.body.dataset.checked !== old && document.body.dataset.stage === 'full', checked, { timeout: 60_000 });
+    await wholeAnswer(page, checked);
     expect(await page.locator('#verdict').getAttribute('data-verdict')).toBe(cli.verdict);
     const after = await figureText(page, 'yoke_load');
     expect(after).not.toBe(before);
     expect(Number(after.replace(/[^\d.-]/g, ''))).toBeCloseTo(cli.yoke, -1);
+  }, 60_000);
+
+  it("shows an edit's verdict at once and the rest of its answer after it, marked busy until then", async () => {
+    const checked = await page.locator('body').getAttribute('data-checked');
+    // Recorded by the page itself at each change of the body's marks: which check the verdict and the findings belong to.
+    await page.evaluate(() => {
+      const marks: string[] = [];
+      (window as unknown as { marks: string[] }).marks = marks;
+      new MutationObserver(() => marks.push(`${document.body.dataset.checked}|${document.body.dataset.drawn}|${document.getElementById('result-host')?.getAttribute('aria-busy')}`)).observe(document.body, { attributes: true });
+    });
+    const x = await page.locator('[id="f-axle.x_mm"]').inputValue();
+    await page.locator('[id="f-axle.x_mm"]').fill(String(Number(x) + 20));
+    await wholeAnswer(page, checked);
+    const marks = await page.evaluate(() => (window as unknown as { marks: string[] }).marks);
+    const id = await page.locator('body').getAttribute('data-checked');
+    // The new verdict was on the page before its findings were drawn, and the page said it was still busy then.
+    expect(marks.some((m) => m.startsWith(`${id}|`) && !m.startsWith(`${id}|${id}-`) && m.endsWith('|true'))).toBe(true);
+    // In the end the findings drawn are this check's, with the ride, and the page is no longer busy.
+    expect(await page.locator('body').getAttribute('data-drawn')).toBe(`${id}-full`);
+    expect(await page.locator('#result-host').getAttribute('aria-busy')).toBe('false');
+    expect(await page.locator('#findings tbody tr').count()).toBeGreaterThan(10);
+    await page.locator('[id="f-axle.x_mm"]').fill(x);
+    await wholeAnswer(page, id);
   }, 60_000);
 
   it('marks a value out of range at its field and keeps the last result on screen', async () => {
@@ -137,7 +168,7 @@ describe.skipIf(!browser)('the workbench in headless Chromium', () => {
     await page.locator('.crew-plan .person[data-index="0"]').focus();
     await page.keyboard.press('ArrowUp');
     expect(await page.locator('[id="f-crew.0.x_mm"]').inputValue()).toBe(String(x + 10));
-    await page.waitForFunction((old) => document.body.dataset.checked !== old && document.body.dataset.stage === 'full', checked, { timeout: 60_000 });
+    await wholeAnswer(page, checked);
     // The figures table now has a baseline and a change column; the crew moved forward, so the yoke load changed.
     expect(await page.locator('#figures thead th').count()).toBe(4);
     const change = await page.locator('#figures tr[data-figure="yoke_load"] td').nth(2).textContent();
