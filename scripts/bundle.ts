@@ -36,6 +36,16 @@ function ownUrl(outdir: string): Plugin {
   };
 }
 
+/** `exceljs` resolved to the part of it the command uses (scripts/exceljs-workbook.mjs says why). */
+function workbookOnly(): Plugin {
+  return {
+    name: 'exceljs-workbook-only',
+    setup(b) {
+      b.onResolve({ filter: /^exceljs$/ }, () => ({ path: join(ROOT, 'scripts', 'exceljs-workbook.mjs') }));
+    },
+  };
+}
+
 export interface Bundle {
   /** The project's own files it was made from, from the repository root. */
   inputs: string[];
@@ -65,7 +75,7 @@ export async function bundle(outdir: string): Promise<Bundle | undefined> {
     banner: { js: "import { createRequire as __axletreeRequire } from 'node:module'; const require = __axletreeRequire(import.meta.url);" },
     // Node runs the bundle from its real path: where outdir is reached through a
     // symbolic link (a linked node_modules), the sources are found from there.
-    plugins: [ownUrl(join(realpathSync(dirname(outdir)), basename(outdir)))],
+    plugins: [workbookOnly(), ownUrl(join(realpathSync(dirname(outdir)), basename(outdir)))],
     metafile: true,
     logLevel: 'warning',
   });

@@ -1,10 +1,11 @@
 // The command bundled as `npm run build` bundles it, run as a process: from a
 // directory of its own, so the dist/ other tests may be running is left alone.
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { bundle } from '../../scripts/bundle.ts';
+import { run } from '../../cli/run.ts';
 import { hasChromium } from '../../src/node/headless-chromium.ts';
 import { freshDir, REPO } from '../support/run-cli.ts';
 import pkg from '../../package.json' with { type: 'json' };
@@ -50,6 +51,22 @@ describe('the built command', () => {
     expect(result).toMatchObject({ complete: true });
     expect(result.points.map((p) => p.values[0])).toEqual([380, 430, 480]);
   });
+
+  it('reads and writes workbooks with only the Workbook of the workbook library bundled: the same bytes as the sources write', async () => {
+    const spec = join(REPO, 'specs', 'demo-rear-axle.yaml');
+    expect(runBuilt('new', 'book.xlsx', '--from', spec)).toMatchObject({ status: 0 });
+    const built = runBuilt('check', 'book.xlsx', '--no-decisive', '--out', 'built');
+    expect(built.stderr).not.toMatch(/Error|undefined/);
+    expect([0, 1]).toContain(built.status);
+    // The same commands through the sources, with the whole library.
+    const here = await freshDir('axletree-bundle-source-');
+    const quiet = { out: () => undefined, err: () => undefined, cwd: here };
+    expect(await run(['new', 'book.xlsx', '--from', spec], quiet)).toBe(0);
+    expect(readFileSync(join(here, 'book.xlsx'))).toEqual(readFileSync(join(work, 'book.xlsx')));
+    expect([0, 1]).toContain(await run(['check', 'book.xlsx', '--no-decisive', '--out', 'source'], quiet));
+    expect(readFileSync(join(work, 'built', 'result.xlsx'))).toEqual(readFileSync(join(here, 'source', 'result.xlsx')));
+    rmSync(here, { recursive: true, force: true });
+  }, 120_000);
 
   it.skipIf(!hasChromium())('prints the report to PDF with the browser driver left out of the bundle', () => {
     const spec = join(REPO, 'specs', 'demo-two-crew.yaml');
