@@ -5,15 +5,13 @@
 // Target: under 10 s on this two-core machine. Printed beside bare node's
 // start, run in the same loop, as a ratio. Each run is timed after one untimed
 // run that warms the file cache and tsx's cache.
-import { spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { performance } from 'node:perf_hooks';
 import { BATCH_WORK_LIMIT } from '../src/core/review/batch-work-limit.ts';
 import { median, verdict } from './median.ts';
-import { binArgs } from './bin-command.ts';
+import { binArgs, ranBundle, timeProcess } from './bin-command.ts';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 export const BATCH_TARGET_MS = 10_000;
@@ -29,34 +27,16 @@ export function batchSpecs(): string[] {
   );
 }
 
-/** GNU time, where installed: the process's CPU seconds (every thread), which a loaded machine stretches less than the clock. */
-const GNU_TIME = '/usr/bin/time';
-const CPU_LINE = /^axletree-cpu (\S+) (\S+)$/m;
-
-function timeOnce(args: string[], cwd: string): { ms: number; cpuMs: number | null; err: string } {
-  const timed = existsSync(GNU_TIME);
-  const t0 = performance.now();
-  const r = timed
-    ? spawnSync(GNU_TIME, ['-f', 'axletree-cpu %U %S', process.execPath, ...args], { cwd, encoding: 'utf8', maxBuffer: 64 * 2 ** 20 })
-    : spawnSync(process.execPath, args, { cwd, encoding: 'utf8', maxBuffer: 64 * 2 ** 20 });
-  const ms = performance.now() - t0;
-  // 0 and 1 are verdicts; anything else means the run did not do its work.
-  if (r.error || r.status === null || r.status > 1) throw new Error(`node ${args.join(' ')} exited ${r.status}: ${r.error?.message ?? r.stderr}`);
-  const cpu = CPU_LINE.exec(r.stderr);
-  return { ms, cpuMs: cpu ? (Number(cpu[1]) + Number(cpu[2])) * 1000 : null, err: r.stderr };
-}
-
-
 /** Prints the batch's time against its target; answers the number of targets missed. */
 export function benchBatch(): number {
   const cwd = mkdtempSync(join(tmpdir(), 'axletree-batch-'));
   try {
     const specs = batchSpecs();
     const args = [...binArgs(), 'check', ...specs, '--out', 'review'];
-    const first = timeOnce(args, cwd);
-    const bundled = existsSync(join(ROOT, 'dist', 'axletree.mjs')) && !first.err.includes('dist/');
-    const node = median(Array.from({ length: 5 }, () => timeOnce(['-e', '0'], cwd).ms));
-    const runs = Array.from({ length: RUNS }, () => timeOnce(args, cwd));
+    const first = timeProcess(args, cwd);
+    const bundled = ranBundle(first.err);
+    const node = median(Array.from({ length: 5 }, () => timeProcess(['-e', '0'], cwd).ms));
+    const runs = Array.from({ length: RUNS }, () => timeProcess(args, cwd));
     const ms = median(runs.map((r) => r.ms));
     const cpus = runs.flatMap((r) => (r.cpuMs === null ? [] : [r.cpuMs]));
     const ok = ms < BATCH_TARGET_MS;

@@ -1,7 +1,8 @@
-// The sweep's benchmark: whole sweeps of specs/demo-two-crew.yaml run as the
-// command runs them (worker threads started, the points, the envelope's
-// edges, the outputs rendered), timed by the clock and by the CPU time of the
-// process (all its threads): the machine is shared, so the CPU time over the
+// The sweep's benchmark: whole sweeps of specs/demo-two-crew.yaml, each
+// `axletree sweep` run as one process as a user runs it (the bundle's worker
+// threads started, the points, the envelope's edges, the outputs written),
+// timed by the clock and by the CPU time of the process (all its threads,
+// read at its exit, cpu-at-exit.mjs): the machine is shared, so the CPU time over the
 // threads is the time the sweep takes on two idle cores, and the clock is
 // printed beside it. Targets: a statics-only sweep of 10,000 variants in
 // under 10 s on two threads; with the ride model, at least 30 variants a
@@ -13,7 +14,10 @@
 // point between the two, the threads warm, for the points it lacks, gives
 // the 10,000). Returns the count of missed targets.
 import { performance } from 'node:perf_hooks';
-import { readFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parse } from 'yaml';
 import { defaultRulesDir, loadRulesData } from '../src/node/load-rules-data.ts';
@@ -21,14 +25,11 @@ import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { parseVaries } from '../src/core/sweep/sweep-axis.ts';
 import { sweepPoints } from '../src/core/sweep/sweep-points.ts';
 import { valueAtKey } from '../src/core/sweep/spec-diff.ts';
-import type { SweepDefinition } from '../src/core/sweep/sweep-result.ts';
-import { startPool } from '../src/node/sweep/sweep-pool.ts';
-import { runPoints } from '../src/node/sweep/run-sweep.ts';
-import { finishSweep } from '../src/node/sweep/sweep-session.ts';
-import { renderSweep } from '../src/node/sweep/write-sweep.ts';
+import { binArgs, ranBundle } from './bin-command.ts';
 import { verdict } from './median.ts';
 
 const DEMO = fileURLToPath(new URL('../specs/demo-two-crew.yaml', import.meta.url));
+const CPU_AT_EXIT = fileURLToPath(new URL('./cpu-at-exit.mjs', import.meta.url));
 const THREADS = 2;
 const STATICS_TARGET_S = 10;
 const STATICS_POINTS = 10_000;
@@ -40,58 +41,58 @@ interface Timed {
   cpuS: number;
 }
 
-const quiet = { step: () => undefined, finish: () => undefined };
-
-/** One whole sweep, as `axletree sweep` runs it, without writing the files. */
-async function timeSweep(varies: string[], ride: boolean): Promise<Timed> {
-  const data = loadRulesData(defaultRulesDir());
-  const raw: unknown = parse(readFileSync(DEMO, 'utf8'));
-  const p = prepareSpec(raw, data);
+/** The points of a grid sweep over `varies` (the count the command checks). */
+function gridPoints(varies: string[]): number {
+  const p = prepareSpec(parse(readFileSync(DEMO, 'utf8')), loadRulesData(defaultRulesDir()));
   if (!p.ok) throw new Error('the demo does not validate');
   const axes = parseVaries(varies, p.spec);
   if (!axes.ok) throw new Error(axes.message);
   const design = axes.value.map((a) => valueAtKey(p.spec, a.steps) as number);
-  const mode = { kind: 'grid' as const };
-  const points = sweepPoints({ axes: axes.value, mode, design });
-  const figures = ['yoke_load_per_horse'];
-  const cpu0 = process.cpuUsage();
-  const t0 = performance.now();
-  const pool = await startPool({ raw, rulesDir: defaultRulesDir(), paths: axes.value.map((a) => a.steps), ride, figures }, THREADS);
-  if (!pool.ok) throw new Error(pool.reason);
+  return sweepPoints({ axes: axes.value, mode: { kind: 'grid' }, design }).length;
+}
+
+/** One whole sweep as a user runs it: `axletree sweep` as one process (its outputs written to a scratch folder). */
+function timeSweep(varies: string[], ride: boolean): Timed {
+  const cwd = mkdtempSync(join(tmpdir(), 'axletree-sweep-bench-'));
   try {
-    const def: SweepDefinition = { spec_name: p.spec.name, spec_file: 'demo-two-crew.yaml', statics: !ride, mode, axes: axes.value, design, figures: [{ name: figures[0], unit: 'N' }], total: points.length };
-    const run = await runPoints(pool.lanes, points);
-    const { result } = await finishSweep(pool.lanes, def, run.outcomes, { progress: () => quiet });
-    renderSweep(result);
+    const args = ['--import', CPU_AT_EXIT, ...binArgs(), 'sweep', DEMO, ...varies.flatMap((v) => ['--vary', v]), ...(ride ? [] : ['--statics']), '--jobs', String(THREADS), '--out', 'sweep'];
+    const t0 = performance.now();
+    const r = spawnSync(process.execPath, args, { cwd, encoding: 'utf8', maxBuffer: 64 * 2 ** 20 });
+    const wallS = (performance.now() - t0) / 1000;
+    // 0 and 1 are verdicts; anything else means the run did not do its work.
+    if (r.error || r.status === null || r.status > 1) throw new Error(`axletree sweep ${varies.join(' ')} exited ${r.status}: ${r.error?.message ?? r.stderr}`);
+    const cpu = /^cpu-us (\d+)$/m.exec(r.stderr);
+    if (!cpu) throw new Error('the sweep did not report its CPU time');
+    return { points: gridPoints(varies), wallS, cpuS: Number(cpu[1]) / 1e6 };
   } finally {
-    await pool.close();
+    rmSync(cwd, { recursive: true, force: true });
   }
-  const cpu = process.cpuUsage(cpu0);
-  return { points: points.length, wallS: (performance.now() - t0) / 1000, cpuS: (cpu.user + cpu.system) / 1e6 };
 }
 
 const line = (label: string, t: Timed, extra: string) => console.log(`  ${label}: ${t.points} points, ${t.wallS.toFixed(1)} s by the clock, ${t.cpuS.toFixed(1)} s CPU; ${extra}`);
 
-export async function benchSweep(): Promise<number> {
+export function benchSweep(): number {
   let missed = 0;
-  console.log(`sweep (specs/demo-two-crew.yaml, ${THREADS} worker threads; CPU time over ${THREADS} is the time on ${THREADS} idle cores):`);
+  const bundled = ranBundle(spawnSync(process.execPath, [...binArgs(), '--version'], { encoding: 'utf8' }).stderr);
+  const how = bundled ? 'the built bundle, dist/' : 'from the TypeScript source: dist/ is missing or stale, `npm run build` first';
+  console.log(`sweep (specs/demo-two-crew.yaml; axletree sweep as one whole process, ${how}; ${THREADS} worker threads; its CPU time over ${THREADS} is the time on ${THREADS} idle cores):`);
 
-  const reuse = await timeSweep(['axle.x_mm=150..350:100', 'team.horse_mass_kg=300..600:100'], false);
+  const reuse = timeSweep(['axle.x_mm=150..350:100', 'team.horse_mass_kg=300..600:100'], false);
   const reuseS = reuse.cpuS / THREADS;
   line('statics, axle position x horse mass, 100 x 100', reuse, `${reuseS.toFixed(1)} s on ${THREADS} cores (target under ${STATICS_TARGET_S} s) ${verdict(reuseS < STATICS_TARGET_S)}`);
   missed += reuseS < STATICS_TARGET_S ? 0 : 1;
 
   // What a sweep costs whatever its size (the threads started and their modules loaded, the design point traced), measured
   // as a sweep of one point; a large sweep's time is that once and each point's own cost over and over.
-  const fixed = { statics: await timeSweep(['axle.x_mm=200..200:1', 'crew[0].x_mm=260..260:1'], false), ride: await timeSweep(['axle.x_mm=200..200:1', 'crew[0].x_mm=260..260:1'], true) };
+  const fixed = { statics: timeSweep(['axle.x_mm=200..200:1', 'crew[0].x_mm=260..260:1'], false), ride: timeSweep(['axle.x_mm=200..200:1', 'crew[0].x_mm=260..260:1'], true) };
   const perPoint = (t: Timed, ride: boolean) => Math.max(0, t.cpuS - fixed[ride ? 'ride' : 'statics'].cpuS) / (t.points - 1);
   console.log(`  a sweep of one point (threads started, design point traced): ${fixed.statics.cpuS.toFixed(1)} s CPU statics only, ${fixed.ride.cpuS.toFixed(1)} s with the ride model`);
 
   // Past the one-point sweep, a point's cost still holds each thread's warm-up (its first points run cold), which a
   // large sweep spreads thinner: the sweep of 10,000 is reckoned from two sizes, the larger one's time and the cost of
   // each point between them (the threads warm) for the points it lacks.
-  const moved = await timeSweep(['axle.x_mm=150..350:10', 'crew[0].x_mm=200..450:10'], false);
-  const larger = await timeSweep(['axle.x_mm=150..350:20', 'crew[0].x_mm=200..450:20'], false);
+  const moved = timeSweep(['axle.x_mm=150..350:10', 'crew[0].x_mm=200..450:10'], false);
+  const larger = timeSweep(['axle.x_mm=150..350:20', 'crew[0].x_mm=200..450:20'], false);
   const warm = Math.max(0, larger.cpuS - moved.cpuS) / (larger.points - moved.points);
   const movedS = (larger.cpuS + warm * (STATICS_POINTS - larger.points)) / THREADS;
   line('statics, axle position x crew position, 10 x 10 (every point re-solves the floor)', moved, `${(perPoint(moved, false) * 1000).toFixed(0)} ms CPU a point past the one-point sweep`);
@@ -106,7 +107,7 @@ export async function benchSweep(): Promise<number> {
     ['axle position x horse mass, 10 x 40', ['axle.x_mm=150..350:10', 'team.horse_mass_kg=300..600:40']],
     ['axle position x crew position, 6 x 6 (every point re-solves the floor and the ride)', ['axle.x_mm=150..350:6', 'crew[0].x_mm=200..450:6']],
   ] as const) {
-    const t = await timeSweep([...varies], true);
+    const t = timeSweep([...varies], true);
     const perCore = 1 / perPoint(t, true);
     line(`with the ride model, ${label}`, t, `${(t.points / t.cpuS).toFixed(1)} variants a second per core for the whole run, ${perCore.toFixed(1)} past the one-point sweep (target at least ${RIDE_TARGET_PER_CORE}) ${verdict(perCore >= RIDE_TARGET_PER_CORE)}`);
     missed += perCore >= RIDE_TARGET_PER_CORE ? 0 : 1;
@@ -115,6 +116,6 @@ export async function benchSweep(): Promise<number> {
 }
 
 if (process.argv[1] === fileURLToPath(import.meta.url)) {
-  const missed = await benchSweep();
+  const missed = benchSweep();
   console.log(`${missed ? `${missed} sweep target${missed > 1 ? 's' : ''} MISSED` : 'every sweep target met'}`);
 }

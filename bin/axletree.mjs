@@ -21,7 +21,9 @@ setFlagsFromString('--liftoff-only');
 // V8's own factor (up to fourfold): the decisive-input search leaves much
 // short-lived garbage, and a heap grown for it stays grown while the outputs
 // are built (measured on the demo's check: peak memory 163-170 -> 151-156 MB,
-// CPU time the same within the noise, about 3.9 s either way).
+// CPU time the same within the noise, about 3.9 s either way). A command
+// that runs many checks (batch, sweep, size) sets V8's own growth back when
+// its long part starts (cli/main.ts): there the extra collections cost CPU.
 setFlagsFromString('--heap-growing-percent=10');
 // Half V8's budget (920) of bytecode inlined into one optimised function: the
 // optimising compiler does less work on the check's large functions and the
