@@ -28,7 +28,7 @@ const GNU_TIME = '/usr/bin/time';
 const CPU_LINE = /^axletree-cpu (\S+) (\S+)$/m;
 
 /** One whole process of `node <args>`: its time by the clock, its CPU time (null without GNU time) and its stderr. */
-export function timeProcess(args: string[], cwd: string): { ms: number; cpuMs: number | null; err: string; out: string } {
+export function timeProcess(args: string[], cwd: string): { ms: number; cpuMs: number | null; err: string } {
   const timed = existsSync(GNU_TIME);
   const t0 = performance.now();
   const r = timed
@@ -38,7 +38,7 @@ export function timeProcess(args: string[], cwd: string): { ms: number; cpuMs: n
   // 0 and 1 are verdicts; anything else means the run did not do its work.
   if (r.error || r.status === null || r.status > 1) throw new Error(`node ${args.join(' ')} exited ${r.status}: ${r.error?.message ?? r.stderr}`);
   const cpu = CPU_LINE.exec(r.stderr);
-  return { ms, cpuMs: cpu ? (Number(cpu[1]) + Number(cpu[2])) * 1000 : null, err: r.stderr, out: r.stdout };
+  return { ms, cpuMs: cpu ? (Number(cpu[1]) + Number(cpu[2])) * 1000 : null, err: r.stderr };
 }
 
 /** Whether a run of the bin ran the built bundle (dist/), not the sources (the bin says so on stderr when dist/ is stale). */

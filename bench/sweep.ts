@@ -13,8 +13,6 @@
 // (timed on two smaller grids: the larger one's time, plus the cost of each
 // point between the two, the threads warm, for the points it lacks, gives
 // the 10,000). Returns the count of missed targets.
-import { performance } from 'node:perf_hooks';
-import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -25,7 +23,7 @@ import { prepareSpec } from '../src/core/spec/prepare.ts';
 import { parseVaries } from '../src/core/sweep/sweep-axis.ts';
 import { sweepPoints } from '../src/core/sweep/sweep-points.ts';
 import { valueAtKey } from '../src/core/sweep/spec-diff.ts';
-import { binArgs, ranBundle } from './bin-command.ts';
+import { binArgs, ranBundle, timeProcess } from './bin-command.ts';
 import { verdict } from './median.ts';
 
 const DEMO = fileURLToPath(new URL('../specs/demo-two-crew.yaml', import.meta.url));
@@ -56,14 +54,11 @@ function timeSweep(varies: string[], ride: boolean): Timed {
   const cwd = mkdtempSync(join(tmpdir(), 'axletree-sweep-bench-'));
   try {
     const args = ['--import', CPU_AT_EXIT, ...binArgs(), 'sweep', DEMO, ...varies.flatMap((v) => ['--vary', v]), ...(ride ? [] : ['--statics']), '--jobs', String(THREADS), '--out', 'sweep'];
-    const t0 = performance.now();
-    const r = spawnSync(process.execPath, args, { cwd, encoding: 'utf8', maxBuffer: 64 * 2 ** 20 });
-    const wallS = (performance.now() - t0) / 1000;
-    // 0 and 1 are verdicts; anything else means the run did not do its work.
-    if (r.error || r.status === null || r.status > 1) throw new Error(`axletree sweep ${varies.join(' ')} exited ${r.status}: ${r.error?.message ?? r.stderr}`);
-    const cpu = /^cpu-us (\d+)$/m.exec(r.stderr);
+    const r = timeProcess(args, cwd);
+    // Read at the process's exit on any system (GNU time, where timeProcess finds it, gives the same).
+    const cpu = /^cpu-us (\d+)$/m.exec(r.err);
     if (!cpu) throw new Error('the sweep did not report its CPU time');
-    return { points: gridPoints(varies), wallS, cpuS: Number(cpu[1]) / 1e6 };
+    return { points: gridPoints(varies), wallS: r.ms / 1000, cpuS: Number(cpu[1]) / 1e6 };
   } finally {
     rmSync(cwd, { recursive: true, force: true });
   }
@@ -73,7 +68,7 @@ const line = (label: string, t: Timed, extra: string) => console.log(`  ${label}
 
 export function benchSweep(): number {
   let missed = 0;
-  const bundled = ranBundle(spawnSync(process.execPath, [...binArgs(), '--version'], { encoding: 'utf8' }).stderr);
+  const bundled = ranBundle(timeProcess([...binArgs(), '--version'], process.cwd()).err);
   const how = bundled ? 'the built bundle, dist/' : 'from the TypeScript source: dist/ is missing or stale, `npm run build` first';
   console.log(`sweep (specs/demo-two-crew.yaml; axletree sweep as one whole process, ${how}; ${THREADS} worker threads; its CPU time over ${THREADS} is the time on ${THREADS} idle cores):`);
 
